@@ -1,0 +1,205 @@
+import { isMap, isScalar, isSeq, type Document, type LineCounter, type Node } from 'yaml';
+import { parseQuantity, QuantityError, type Quantity, type Tolerance } from '../units/quantity.ts';
+import { type QuantityKind, KIND_EXAMPLES } from '../units/unit-table.ts';
+import { formatPath, type CaseErrorCode, type CaseProblem, type SourcePosition } from './case-error.ts';
+import { didYouMean } from './did-you-mean.ts';
+
+export type Path = readonly (string | number)[];
+
+interface FieldOptions {
+  required?: boolean;
+}
+
+/**
+ * Typed access to a parsed YAML case document that remembers where each value stands, so every
+ * problem is reported with its line, column and field path. Problems are collected, not thrown:
+ * the parser reports all of a file's mistakes at once.
+ */
+export class CaseReader {
+  readonly problems: CaseProblem[] = [];
+  /** The ± bands of every quantity read, by field path. */
+  readonly tolerances: Record<string, Tolerance> = {};
+
+  constructor(
+    private readonly doc: Document,
+    private readonly lines: LineCounter,
+  ) {}
+
+  /** The node at `path`, or undefined when absent or null. */
+  node(path: Path): Node | undefined {
+    const n = path.length === 0 ? (this.doc.contents as Node | null) : (this.doc.getIn(path, true) as Node | undefined);
+    if (n == null) return undefined;
+    if (isScalar(n) && n.value == null) return undefined;
+    return n;
+  }
+
+  has(path: Path): boolean {
+    return this.node(path) !== undefined;
+  }
+
+  /** Source position of the value at `path`, or of its nearest present ancestor. */
+  position(path: Path): SourcePosition | undefined {
+    for (let n = path.length; n >= 0; n--) {
+      const node = n === 0 ? (this.doc.contents as Node | null) : (this.doc.getIn(path.slice(0, n), true) as Node | undefined);
+      if (node?.range) return this.at(node.range[0]);
+    }
+    return undefined;
+  }
+
+  private at(offset: number): SourcePosition {
+    const { line, col } = this.lines.linePos(offset);
+    return { line, column: col };
+  }
+
+  fail(code: CaseErrorCode, path: Path, message: string, position = this.position(path)): void {
+    this.problems.push({ code, path: formatPath(path), message, position });
+  }
+
+  private missing(path: Path, example: string): void {
+    this.fail('E_MISSING', path, `is required; give ${example}`);
+  }
+
+  /**
+   * A mapping with only the `keys` given; unknown keys are reported with a did-you-mean.
+   * Returns whether a mapping is there.
+   */
+  map(path: Path, keys: readonly string[], opts: FieldOptions & { example?: string } = {}): boolean {
+    const n = this.node(path);
+    if (n === undefined) {
+      if (opts.required) this.missing(path, opts.example ?? `a mapping with ${keys.slice(0, 3).join(', ')}`);
+      return false;
+    }
+    if (!isMap(n)) {
+      this.fail('E_TYPE', path, `should be a mapping of ${keys.slice(0, 4).join(', ')}…, not ${describe(n)}`);
+      return false;
+    }
+    for (const pair of n.items) {
+      const key = isScalar(pair.key) ? String(pair.key.value) : String(pair.key);
+      if (keys.includes(key)) continue;
+      const guess = didYouMean(key, keys);
+      const hint = guess ? `did you mean "${guess}"?` : `known keys here: ${keys.join(', ')}`;
+      const pos = isScalar(pair.key) && pair.key.range ? this.at(pair.key.range[0]) : this.position(path);
+      this.fail('E_UNKNOWN_KEY', [...path, key], `unknown key; ${hint}`, pos);
+    }
+    return true;
+  }
+
+  /** Keys of the mapping at `path` (for maps keyed by name, such as `materials`). */
+  keys(path: Path): string[] {
+    const n = this.node(path);
+    if (!n || !isMap(n)) return [];
+    return n.items.map((p) => (isScalar(p.key) ? String(p.key.value) : String(p.key)));
+  }
+
+  /** Length of the list at `path`; 0 (with a problem if required) when absent or not a list. */
+  list(path: Path, opts: FieldOptions & { example?: string } = {}): number {
+    const n = this.node(path);
+    if (n === undefined) {
+      if (opts.required) this.missing(path, opts.example ?? 'a list');
+      return 0;
+    }
+    if (!isSeq(n)) {
+      this.fail('E_TYPE', path, `should be a list (items starting with "- "), not ${describe(n)}`);
+      return 0;
+    }
+    return n.items.length;
+  }
+
+  /** A scalar as text; numbers and dates are taken as their text. */
+  string(path: Path, opts: FieldOptions & { example?: string; allowed?: readonly string[] } = {}): string | undefined {
+    const n = this.node(path);
+    if (n === undefined) {
+      if (opts.required) this.missing(path, opts.example ?? 'a text');
+      return undefined;
+    }
+    if (!isScalar(n)) {
+      this.fail('E_TYPE', path, `should be a single value, not ${describe(n)}`);
+      return undefined;
+    }
+    const text = String(n.value);
+    if (opts.allowed && !opts.allowed.includes(text)) {
+      const guess = didYouMean(text, opts.allowed);
+      this.fail('E_RANGE', path, `"${text}" is not one of ${opts.allowed.join(', ')}${guess ? `; did you mean "${guess}"?` : ''}`);
+      return undefined;
+    }
+    return text;
+  }
+
+  /** A plain number (counts, ratios, factors). */
+  number(path: Path, opts: FieldOptions & { example: string; positive?: boolean; min?: number; integer?: boolean }): number | undefined {
+    const n = this.node(path);
+    if (n === undefined) {
+      if (opts.required) this.missing(path, opts.example);
+      return undefined;
+    }
+    const v = isScalar(n) ? n.value : undefined;
+    if (typeof v !== 'number' || !Number.isFinite(v)) {
+      this.fail('E_TYPE', path, `${isScalar(n) ? `"${String(v)}"` : describe(n)} is not a plain number; give ${opts.example}`);
+      return undefined;
+    }
+    if (opts.integer && !Number.isInteger(v)) {
+      this.fail('E_RANGE', path, `${v} is not a whole number; give ${opts.example}`);
+      return undefined;
+    }
+    if ((opts.positive && v <= 0) || (opts.min !== undefined && v < opts.min)) {
+      this.fail('E_RANGE', path, `${v} is out of range; give ${opts.example}`);
+      return undefined;
+    }
+    return v;
+  }
+
+  boolean(path: Path, opts: FieldOptions = {}): boolean | undefined {
+    const n = this.node(path);
+    if (n === undefined) {
+      if (opts.required) this.missing(path, 'true or false');
+      return undefined;
+    }
+    if (!isScalar(n) || typeof n.value !== 'boolean') {
+      this.fail('E_TYPE', path, 'should be true or false');
+      return undefined;
+    }
+    return n.value;
+  }
+
+  /** A quantity with its unit, converted to SI. `positive` rejects zero and negatives; `nonNegative` only negatives. */
+  quantity(
+    path: Path,
+    kind: QuantityKind,
+    opts: FieldOptions & { positive?: boolean; nonNegative?: boolean; example?: string } = {},
+  ): Quantity | undefined {
+    const n = this.node(path);
+    const example = opts.example ?? KIND_EXAMPLES[kind];
+    if (n === undefined) {
+      if (opts.required) this.missing(path, example);
+      return undefined;
+    }
+    if (!isScalar(n) || (typeof n.value !== 'string' && typeof n.value !== 'number')) {
+      this.fail('E_TYPE', path, `should be a value with its unit, not ${describe(n)}; give ${example}`);
+      return undefined;
+    }
+    let q: Quantity;
+    try {
+      q = parseQuantity(n.value as string | number, kind);
+    } catch (e) {
+      if (e instanceof QuantityError) {
+        this.fail('E_UNIT', path, e.message);
+        return undefined;
+      }
+      throw e;
+    }
+    if (!Number.isFinite(q.value) || (opts.positive && q.value <= 0) || (opts.nonNegative && q.value < 0)) {
+      const need = opts.positive ? 'greater than zero' : 'zero or more';
+      this.fail('E_RANGE', path, `"${String(n.value)}" must be ${need}; give ${example}`);
+      return undefined;
+    }
+    if (q.tolerance) this.tolerances[formatPath(path)] = q.tolerance;
+    return q;
+  }
+}
+
+function describe(n: Node): string {
+  if (isMap(n)) return 'a mapping';
+  if (isSeq(n)) return 'a list';
+  if (isScalar(n)) return `"${String(n.value)}"`;
+  return 'this value';
+}

@@ -1,0 +1,90 @@
+import type { Material } from '../materials/material.ts';
+import type { Tolerance } from '../units/quantity.ts';
+
+/**
+ * The checked case: everything the engine needs, in SI, with every name resolved. It is the only
+ * input the engine accepts; nothing downstream re-reads units or re-checks names.
+ *
+ * Positions along the shaft are measured from the shaft's start (its first segment's free end), m.
+ */
+export interface Case {
+  meta: CaseMeta;
+  /** Units the summary and report show; the JSON is always SI. */
+  units: 'metric' | 'us';
+  /** Shaft speed at the moment of the stop, rad/s. */
+  speed: number;
+  stop: Stop;
+  /** Every material the case uses, by key (library and case-local). */
+  materials: Record<string, Material>;
+  shaft: { segments: Segment[] };
+  stations: Station[];
+  analysis: Analysis;
+  /** The ± bands stated in the case, by field path (`speed`, `shaft.segments[0].diameter`). */
+  tolerances: Record<string, Tolerance>;
+}
+
+export interface CaseMeta {
+  id: string;
+  title?: string;
+  /** ISO date or date-time, as written. */
+  occurred?: string;
+  machine?: string;
+  site?: string;
+  ticket?: string;
+  investigator?: string;
+  notes?: string;
+}
+
+export interface Stop {
+  /** Name of the station that stopped. */
+  at: string;
+  /** Time the stop takes, s; 0 is instantaneous. */
+  duration: number;
+}
+
+export interface Segment {
+  /** Index in `shaft.segments` of the case file. */
+  index: number;
+  label?: string;
+  /** Start and end positions, m. */
+  start: number;
+  end: number;
+  /** Outer diameter, m. */
+  diameter: number;
+  /** Bore diameter, m; 0 for a solid segment. */
+  bore: number;
+  /** Material key into `Case.materials`. */
+  material: string;
+  /** Torsional stress-concentration factor at the segment's critical section (1 = none). */
+  kt: number;
+}
+
+export interface Station {
+  name: string;
+  /** Position, m. */
+  at: number;
+  parts: Part[];
+}
+
+export type PartShape = 'disc' | 'inertia' | 'mass';
+
+export interface Part {
+  name: string;
+  shape: PartShape;
+  /** Polar mass moment of inertia of one part about its own axis, kg·m². */
+  inertia: number;
+  /** How many identical parts. */
+  count: number;
+  /** The part's speed over the shaft's speed (belt or gear ratio); 1 for a part on the shaft. */
+  speedRatio: number;
+  /** The shape's dimensions as given, SI, for the report. */
+  dimensions: Record<string, number>;
+  /** Material key, where the part's density came from a material. */
+  material?: string;
+}
+
+export type YieldCriterion = 'distortion-energy' | 'max-shear';
+
+export interface Analysis {
+  criterion: YieldCriterion;
+}

@@ -1,0 +1,94 @@
+import { LineCounter, parseDocument } from 'yaml';
+import type { Material } from '../materials/material.ts';
+import { CaseError, type CaseProblem } from './case-error.ts';
+import { CaseReader } from './case-reader.ts';
+import type { Analysis, Case, CaseMeta, YieldCriterion } from './case.ts';
+import { readCaseMaterials } from './read-materials.ts';
+import { readShaft } from './read-shaft.ts';
+import { readStations } from './read-stations.ts';
+
+/** The top-level keys of a case file. */
+export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis'] as const;
+const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'investigator', 'notes'];
+const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
+
+/**
+ * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
+ * `CaseError` listing every problem with its line, column and field path. No I/O: `file` is only
+ * the name used in messages.
+ */
+export function parseCase(text: string, file = 'case.yaml'): Case {
+  const lines = new LineCounter();
+  const doc = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: true });
+  if (doc.errors.length > 0) {
+    const problems: CaseProblem[] = doc.errors.map((e) => {
+      const pos = e.linePos?.[0];
+      return {
+        code: 'E_YAML',
+        path: '',
+        message: `not valid YAML: ${e.message.split('\n')[0]} (check the indentation and that each "key: value" has its colon and a space)`,
+        position: pos ? { line: pos.line, column: pos.col } : undefined,
+      };
+    });
+    throw new CaseError(file, problems);
+  }
+  const r = new CaseReader(doc, lines);
+  if (!r.map([], CASE_KEYS, { required: true, example: 'a case file with case, speed, stop, shaft and stations' })) {
+    throw new CaseError(file, r.problems);
+  }
+
+  const meta = readMeta(r);
+  const units = (r.string(['units'], { allowed: ['metric', 'us'] }) ?? 'metric') as Case['units'];
+  const speed = r.quantity(['speed'], 'angular_speed', { required: true, positive: true });
+  r.map(['stop'], ['at', 'duration'], { required: true, example: 'a mapping with at: the name of the station that stopped' });
+  const stopAt = r.string(['stop', 'at'], { required: true, example: 'the name of the station that stopped' });
+  const duration = r.quantity(['stop', 'duration'], 'time', { nonNegative: true });
+
+  const caseMaterials = readCaseMaterials(r);
+  const used: Record<string, Material> = {};
+  const shaft = readShaft(r, caseMaterials, used);
+  const stations = readStations(r, shaft.length, caseMaterials, used);
+  const analysis = readAnalysis(r);
+
+  if (stopAt !== undefined && stations.length > 0 && !stations.some((s) => s.name === stopAt)) {
+    r.fail('E_REFERENCE', ['stop', 'at'], `no station is named "${stopAt}"; give one of ${stations.map((s) => `"${s.name}"`).join(', ')}`);
+  }
+  if (r.problems.length === 0 && stopAt !== undefined) {
+    const loaded = stations.filter((s) => s.name !== stopAt && s.parts.length > 0);
+    if (loaded.length === 0) {
+      r.fail('E_MODEL', ['stations'], 'no station other than the one that stopped carries parts, so nothing drives the shaft; add the rotating parts (rotor, pulley, flywheel) to their stations');
+    }
+  }
+  if (r.problems.length > 0) throw new CaseError(file, r.problems);
+
+  return {
+    meta,
+    units,
+    speed: speed!.value,
+    stop: { at: stopAt!, duration: duration?.value ?? 0 },
+    materials: { ...used },
+    shaft: { segments: shaft.segments },
+    stations,
+    analysis,
+    tolerances: { ...r.tolerances },
+  };
+}
+
+function readMeta(r: CaseReader): CaseMeta {
+  r.map(['case'], META_KEYS, { required: true, example: 'a mapping with at least id: "INC-0042"' });
+  const meta: CaseMeta = { id: r.string(['case', 'id'], { required: true, example: 'an incident id such as "INC-2026-014"' }) ?? '' };
+  for (const key of META_KEYS.slice(1) as (keyof CaseMeta)[]) {
+    const v = r.string(['case', key]);
+    if (v !== undefined) meta[key] = v;
+  }
+  if (meta.occurred !== undefined && !/^\d{4}-\d{2}-\d{2}([T ][0-9:.]+(Z|[+-]\d{2}:?\d{2})?)?$/.test(meta.occurred)) {
+    r.fail('E_TYPE', ['case', 'occurred'], `"${meta.occurred}" is not an ISO date; give a date such as "2026-03-14" or "2026-03-14T06:40"`);
+  }
+  return meta;
+}
+
+function readAnalysis(r: CaseReader): Analysis {
+  r.map(['analysis'], ['criterion']);
+  const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
+  return { criterion };
+}

@@ -1,0 +1,85 @@
+import { findMaterial, MATERIAL_LIBRARY } from '../materials/library.ts';
+import { MATERIAL_FIELDS, type Material, type MaterialField } from '../materials/material.ts';
+import type { QuantityKind } from '../units/unit-table.ts';
+import type { CaseReader } from './case-reader.ts';
+import { didYouMean } from './did-you-mean.ts';
+
+const FIELD_KINDS: Record<MaterialField, QuantityKind> = {
+  shear_modulus: 'stress',
+  elastic_modulus: 'stress',
+  density: 'density',
+  yield_strength: 'stress',
+  tensile_strength: 'stress',
+  elongation: 'fraction',
+  reduction_of_area: 'fraction',
+};
+
+const MATERIAL_KEYS = ['name', ...Object.keys(MATERIAL_FIELDS), 'strength_basis', 'source'];
+
+/** Case-local materials from `materials:`, keyed by name; they shadow library entries of the same key. */
+export function readCaseMaterials(r: CaseReader): Record<string, Material> {
+  const out: Record<string, Material> = {};
+  if (!r.map(['materials'], [...r.keys(['materials'])])) return out;
+  for (const key of r.keys(['materials'])) {
+    const path = ['materials', key];
+    if (!r.map(path, MATERIAL_KEYS, { required: true })) continue;
+    const m: Material = { key, name: r.string([...path, 'name']) ?? key, source: r.string([...path, 'source']) ?? 'given in the case file' };
+    for (const [field, prop] of Object.entries(MATERIAL_FIELDS) as [MaterialField, keyof Material][]) {
+      const q = r.quantity([...path, field], FIELD_KINDS[field], { positive: true });
+      if (q) (m as unknown as Record<string, number>)[prop] = q.value;
+    }
+    const basis = r.string([...path, 'strength_basis'], { allowed: ['minimum', 'typical'] });
+    if (basis) m.strengthBasis = basis as Material['strengthBasis'];
+    out[key] = m;
+  }
+  return out;
+}
+
+/**
+ * Resolves a material name used at `path` against the case's own materials, then the library;
+ * checks it has every property its use needs. Reports and returns undefined when it cannot.
+ */
+export function resolveMaterial(
+  r: CaseReader,
+  path: (string | number)[],
+  key: string,
+  caseMaterials: Record<string, Material>,
+  needs: readonly MaterialField[],
+  used: Record<string, Material>,
+): Material | undefined {
+  const m = caseMaterials[key] ?? findMaterial(key);
+  if (!m) {
+    const known = [...Object.keys(caseMaterials), ...MATERIAL_LIBRARY.map((x) => x.key)];
+    const guess = didYouMean(key, known);
+    r.fail(
+      'E_REFERENCE',
+      path,
+      `unknown material "${key}"; ${guess ? `did you mean "${guess}"? ` : ''}give a key from \`shaftcase materials\` (such as "aisi-1045-cd") or one defined under materials:`,
+    );
+    return undefined;
+  }
+  const missing = needs.filter((f) => m[MATERIAL_FIELDS[f]] === undefined);
+  if (missing.length > 0) {
+    r.fail(
+      'E_MATERIAL',
+      path,
+      `material "${key}" has no ${missing.join(' or ')}, which this use needs; add it under materials.${key}, e.g. ${missing.map(exampleOf).join(', ')}`,
+    );
+    return undefined;
+  }
+  used[key] = m;
+  return m;
+}
+
+function exampleOf(field: MaterialField): string {
+  const examples: Record<MaterialField, string> = {
+    shear_modulus: 'shear_modulus: "79.3 GPa"',
+    elastic_modulus: 'elastic_modulus: "207 GPa"',
+    density: 'density: "7850 kg/m^3"',
+    yield_strength: 'yield_strength: "530 MPa"',
+    tensile_strength: 'tensile_strength: "630 MPa"',
+    elongation: 'elongation: "12 %"',
+    reduction_of_area: 'reduction_of_area: "35 %"',
+  };
+  return examples[field];
+}

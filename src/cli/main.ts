@@ -1,0 +1,50 @@
+import { Command, CommanderError } from 'commander';
+import { CaseError } from '../case/case-error.ts';
+import { checkCommand } from './commands/check.ts';
+import { materialsCommand } from './commands/materials.ts';
+import { version } from './version.ts';
+
+/** Output channel of a command, so tests can run commands without a terminal. */
+export interface Io {
+  out: (text: string) => void;
+  err: (text: string) => void;
+}
+
+const stdio: Io = { out: (t) => process.stdout.write(t), err: (t) => process.stderr.write(t) };
+
+/**
+ * The one place that prints and decides the exit status: 0 done, 2 the user's mistake (a bad case
+ * file or bad arguments), 1 a bug, shown with its stack so it can be reported.
+ */
+export async function runMain(argv: string[], io: Io = stdio): Promise<number> {
+  const program = new Command('shaftcase')
+    .description('Investigate a sudden stop of a rotating machine: impact torque, stress and twist from a case file.')
+    .version(version())
+    .exitOverride()
+    .configureOutput({ writeOut: io.out, writeErr: io.err });
+
+  program
+    .command('check')
+    .description('check a case file and print the impact torque, stress, twist and verdict')
+    .argument('<case>', 'a case .yaml file or a case folder')
+    .option('--json', 'print one JSON object, SI units')
+    .action((file: string, opts: { json?: boolean }) => checkCommand(file, opts, io));
+
+  program
+    .command('materials')
+    .description('list the built-in materials and their sources')
+    .option('--json', 'print the list as JSON, SI units')
+    .action((opts: { json?: boolean }) => materialsCommand(opts, io));
+
+  try {
+    await program.parseAsync(argv, { from: 'user' });
+    return 0;
+  } catch (e) {
+    if (e instanceof CaseError) {
+      io.err(`${e.message}\n${e.problems.length} problem${e.problems.length === 1 ? '' : 's'} in ${e.file}; nothing was written.\n`);
+      return 2;
+    }
+    if (e instanceof CommanderError) return e.exitCode === 0 ? 0 : 2;
+    throw e;
+  }
+}

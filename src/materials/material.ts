@@ -1,0 +1,38 @@
+/** A material's properties, SI. Optional fields are those some uses do not need. */
+export interface Material {
+  /** Key used in case files, e.g. `aisi-1045-cd`. */
+  key: string;
+  /** Name in the trade's words, e.g. "AISI 1045 steel, cold drawn". */
+  name: string;
+  /** Shear modulus G, Pa. Shaft segments need it. */
+  shearModulus?: number;
+  /** Young's modulus E, Pa. */
+  elasticModulus?: number;
+  /** Density, kg/m³. Parts given by shape need it; the shaft's own inertia uses it. */
+  density?: number;
+  /** Tensile yield strength S_y, Pa. Shaft segments need it. */
+  yieldStrength?: number;
+  /** Ultimate tensile strength S_ut, Pa. */
+  tensileStrength?: number;
+  /** Elongation at break, fraction (0.12 = 12 %). */
+  elongation?: number;
+  /** Reduction of area at break, fraction. */
+  reductionOfArea?: number;
+  /** Whether the strengths are published minima or typical (mean) values. */
+  strengthBasis?: 'minimum' | 'typical';
+  /** Where each value comes from, with "from memory" where it is recalled rather than read. */
+  source: string;
+}
+
+/** The properties a use of a material needs, by the field name a case file uses. */
+export const MATERIAL_FIELDS = {
+  shear_modulus: 'shearModulus',
+  elastic_modulus: 'elasticModulus',
+  density: 'density',
+  yield_strength: 'yieldStrength',
+  tensile_strength: 'tensileStrength',
+  elongation: 'elongation',
+  reduction_of_area: 'reductionOfArea',
+} as const satisfies Record<string, keyof Material>;
+
+export type MaterialField = keyof typeof MATERIAL_FIELDS;

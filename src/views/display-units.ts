@@ -1,0 +1,61 @@
+import type { Case } from '../case/case.ts';
+
+/** How a quantity is shown: the unit's label and its size in SI. */
+interface DisplayUnit {
+  label: string;
+  factor: number;
+}
+
+const INCH = 0.0254;
+const LBF = 0.45359237 * 9.80665;
+
+/** Display units by the case's `units:`; factors as in src/units/unit-table.ts (NIST SP 811). */
+const DISPLAY: Record<Case['units'], Record<'length' | 'torque' | 'stress' | 'energy' | 'inertia' | 'speed' | 'angle', DisplayUnit>> = {
+  metric: {
+    length: { label: 'mm', factor: 1e-3 },
+    torque: { label: 'N·m', factor: 1 },
+    stress: { label: 'MPa', factor: 1e6 },
+    energy: { label: 'J', factor: 1 },
+    inertia: { label: 'kg·m²', factor: 1 },
+    speed: { label: 'rpm', factor: (2 * Math.PI) / 60 },
+    angle: { label: '°', factor: Math.PI / 180 },
+  },
+  us: {
+    length: { label: 'in', factor: INCH },
+    torque: { label: 'lbf·ft', factor: LBF * 12 * INCH },
+    stress: { label: 'ksi', factor: (1e3 * LBF) / INCH ** 2 },
+    energy: { label: 'ft·lbf', factor: LBF * 12 * INCH },
+    inertia: { label: 'lb·ft²', factor: 0.45359237 * (12 * INCH) ** 2 },
+    speed: { label: 'rpm', factor: (2 * Math.PI) / 60 },
+    angle: { label: '°', factor: Math.PI / 180 },
+  },
+};
+
+export type DisplayKind = keyof (typeof DISPLAY)['metric'];
+
+/** Rounds to `digits` significant figures, without exponent notation for everyday sizes. */
+export function sig(value: number, digits = 3): string {
+  if (!Number.isFinite(value)) return String(value);
+  if (value === 0) return '0';
+  const rounded = Number(value.toPrecision(digits));
+  const abs = Math.abs(rounded);
+  if (abs >= 1e-4 && abs < 1e9) return String(rounded);
+  return rounded.toExponential(digits - 1);
+}
+
+/** `value` (SI) shown in the case's units, three significant figures: "81.5 MPa". */
+export function show(value: number, kind: DisplayKind, units: Case['units'], digits = 3): string {
+  const u = DISPLAY[units][kind];
+  const sep = u.label === '°' ? '' : ' ';
+  return `${sig(value / u.factor, digits)}${sep}${u.label}`;
+}
+
+/** The unit label for a kind in the case's units. */
+export function unitLabel(kind: DisplayKind, units: Case['units']): string {
+  return DISPLAY[units][kind].label;
+}
+
+/** `value` (SI) as a number in the case's display unit. */
+export function inDisplay(value: number, kind: DisplayKind, units: Case['units']): number {
+  return value / DISPLAY[units][kind].factor;
+}

@@ -1,0 +1,26 @@
+import type { Material } from '../materials/material.ts';
+import { sig } from './display-units.ts';
+
+/** The material library as a text table: key, name, G, Sy, Sut, density, basis; sources below. */
+export function renderMaterials(list: readonly Material[]): string {
+  const mpa = (v?: number) => (v === undefined ? '—' : sig(v / 1e6));
+  const rows = [
+    ['key', 'material', 'G GPa', 'Sy MPa', 'Sut MPa', 'kg/m³', 'basis'],
+    ...list.map((m) => [
+      m.key,
+      m.name,
+      m.shearModulus === undefined ? '—' : sig(m.shearModulus / 1e9),
+      mpa(m.yieldStrength),
+      mpa(m.tensileStrength),
+      m.density === undefined ? '—' : sig(m.density, 4),
+      m.strengthBasis ?? '—',
+    ]),
+  ];
+  const widths = rows[0].map((_, i) => Math.max(...rows.map((r) => r[i].length)));
+  const lines = rows.map((r) => r.map((c, i) => c.padEnd(widths[i])).join('  ').trimEnd());
+  lines.splice(1, 0, widths.map((w) => '-'.repeat(w)).join('  '));
+  lines.push('', 'Sources:');
+  for (const m of list) lines.push(`  ${m.key}: ${m.source}`);
+  lines.push('', 'Strengths marked "minimum" are published minima: a real bar is usually stronger.');
+  return lines.join('\n') + '\n';
+}

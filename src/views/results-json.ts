@@ -1,0 +1,62 @@
+import type { PieceResult, SideResult } from '../physics/energy-method.ts';
+import type { Results } from '../results/results.ts';
+
+/** The machine-readable result, SI, keys carrying their units. These names are a contract: keep them stable. */
+export function resultsToJson(r: Results): Record<string, unknown> {
+  return {
+    case_id: r.case.meta.id,
+    speed_rad_s: r.speed,
+    kinetic_energy_J: r.kineticEnergy,
+    max_shear_stress_Pa: r.maxShearStress,
+    shear_yield_Pa: r.governing.piece.shearYield,
+    yield_ratio: r.yieldRatio,
+    verdict: r.verdict,
+    governing: { side: r.governing.side.side, from_m: r.governing.piece.piece.start, to_m: r.governing.piece.piece.end },
+    warnings: r.warnings,
+    cautions: r.cautions,
+    sides: r.sides.map(sideJson),
+  };
+}
+
+function sideJson(s: SideResult): Record<string, unknown> {
+  return {
+    side: s.side,
+    stations: s.stations,
+    kinetic_energy_J: s.kineticEnergy,
+    shaft_kinetic_energy_J: s.shaftKineticEnergy ?? null,
+    compliance_rad_per_Nm: s.compliance,
+    peak_torque_Nm: s.peakTorque,
+    twist_rad: s.twist,
+    max_shear_stress_Pa: Math.max(...s.pieces.map((p) => p.shearStress)),
+    parts: s.parts.map((p) => ({
+      station: p.station,
+      name: p.part.name,
+      shape: p.part.shape,
+      inertia_kg_m2: p.part.inertia,
+      count: p.part.count,
+      speed_ratio: p.part.speedRatio,
+      reflected_inertia_kg_m2: p.reflectedInertia,
+      kinetic_energy_J: p.kineticEnergy,
+    })),
+    segments: s.pieces.map(pieceJson),
+  };
+}
+
+function pieceJson(p: PieceResult): Record<string, unknown> {
+  const seg = p.piece.segment;
+  return {
+    from_m: p.piece.start,
+    to_m: p.piece.end,
+    segment: seg.index,
+    label: seg.label ?? null,
+    diameter_m: seg.diameter,
+    bore_m: seg.bore,
+    material: seg.material,
+    kt: seg.kt,
+    torque_Nm: p.torque,
+    shear_stress_Pa: p.shearStress,
+    shear_yield_Pa: p.shearYield,
+    twist_rad: p.twist,
+    yield_ratio: p.yieldRatio,
+  };
+}

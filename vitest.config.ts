@@ -1,0 +1,11 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  test: {
+    include: ['test/**/*.test.ts'],
+    // Report and browser tests spawn the built CLI and Chromium; give them room on a 2-core machine.
+    testTimeout: 60_000,
+    hookTimeout: 60_000,
+    env: { TZ: 'UTC' },
+  },
+});
