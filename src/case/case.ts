@@ -19,6 +19,8 @@ export interface Case {
   shaft: { segments: Segment[] };
   stations: Station[];
   analysis: Analysis;
+  /** What was seen afterwards; empty lists when the case records nothing. */
+  observed: Observed;
   /** The ± bands stated in the case, by field path (`speed`, `shaft.segments[0].diameter`). */
   tolerances: Record<string, Tolerance>;
 }
@@ -87,4 +89,44 @@ export type YieldCriterion = 'distortion-energy' | 'max-shear';
 
 export interface Analysis {
   criterion: YieldCriterion;
+}
+
+/** What the investigator saw after the incident (`observed:` in the case file). */
+export interface Observed {
+  /** Permanent angular offsets measured between two stations. */
+  permanentTwist: TwistMeasurement[];
+  fracture?: FractureObservation;
+  /** Free text about the key (sheared, rolled, intact). */
+  key?: string;
+  /** Free text about hubs (slipped, cracked). */
+  hub?: string;
+  /** Anything else seen. */
+  other?: string;
+  /** General notes. */
+  notes?: string;
+  photos: Photo[];
+}
+
+export interface TwistMeasurement {
+  /** The two station names the offset was measured between. */
+  between: [string, string];
+  /** Measured permanent offset, rad (non-negative). */
+  angle: number;
+  /** How it was measured, free text. */
+  method?: string;
+}
+
+export type FractureType = 'none' | 'transverse' | 'helical' | 'fatigue' | 'unknown';
+
+export interface FractureObservation {
+  type: FractureType;
+  /** Station name, or a position in m, where it broke. */
+  at?: string | number;
+  notes?: string;
+}
+
+export interface Photo {
+  /** Path relative to the case folder; checked to stay inside it. */
+  path: string;
+  caption?: string;
 }

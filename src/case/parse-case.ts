@@ -5,10 +5,11 @@ import { CaseReader } from './case-reader.ts';
 import type { Analysis, Case, CaseMeta, YieldCriterion } from './case.ts';
 import { readCaseMaterials } from './read-materials.ts';
 import { readShaft } from './read-shaft.ts';
+import { readObserved } from './read-observed.ts';
 import { readStations } from './read-stations.ts';
 
 /** The top-level keys of a case file. */
-export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis'] as const;
+export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis', 'observed'] as const;
 const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'investigator', 'notes'];
 const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
 
@@ -49,6 +50,7 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const shaft = readShaft(r, caseMaterials, used);
   const stations = readStations(r, shaft.length, caseMaterials, used);
   const analysis = readAnalysis(r);
+  const observed = readObserved(r, stations);
 
   if (stopAt !== undefined && stations.length > 0 && !stations.some((s) => s.name === stopAt)) {
     r.fail('E_REFERENCE', ['stop', 'at'], `no station is named "${stopAt}"; give one of ${stations.map((s) => `"${s.name}"`).join(', ')}`);
@@ -70,6 +72,7 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
     shaft: { segments: shaft.segments },
     stations,
     analysis,
+    observed,
     tolerances: { ...r.tolerances },
   };
 }
