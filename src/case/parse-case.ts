@@ -23,12 +23,12 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const doc = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: true });
   if (doc.errors.length > 0) {
     const problems: CaseProblem[] = doc.errors.map((e) => {
-      const pos = e.linePos?.[0];
+      const pos = lines.linePos(e.pos[0]);
       return {
         code: 'E_YAML',
         path: '',
         message: `not valid YAML: ${e.message.split('\n')[0]} (check the indentation and that each "key: value" has its colon and a space)`,
-        position: pos ? { line: pos.line, column: pos.col } : undefined,
+        position: { line: pos.line, column: pos.col },
       };
     });
     throw new CaseError(file, problems);

@@ -1,0 +1,120 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { CaseError } from '../../src/case/case-error.ts';
+import { parseCase } from '../../src/case/parse-case.ts';
+
+const base = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 'utf8');
+
+/** The problems parseCase reports for `text`, as the CLI prints them. */
+function problems(text: string): string[] {
+  try {
+    parseCase(text, 'case.yaml');
+  } catch (e) {
+    if (e instanceof CaseError) return e.message.split('\n');
+    throw e;
+  }
+  throw new Error('expected a CaseError');
+}
+
+/** Line number (1-based) of the first line of `text` containing `needle`. */
+function lineOf(text: string, needle: string): number {
+  return text.split('\n').findIndex((l) => l.includes(needle)) + 1;
+}
+
+describe('parseCase reports each mistake with file:line:column, the field path and an example', () => {
+  it('accepts the fixture', () => {
+    expect(parseCase(base).stations).toHaveLength(2);
+  });
+
+  it('YAML syntax', () => {
+    const text = base.replace('  id: T-1', '  id: [T-1');
+    expect(problems(text)[0]).toMatch(/^case\.yaml:\d+:\d+: not valid YAML/);
+  });
+
+  it('an unknown key, with a did-you-mean', () => {
+    const text = base.replace('      diameter: 60 mm', '      diametre: 60 mm');
+    const line = lineOf(text, 'diametre');
+    const msgs = problems(text);
+    expect(msgs).toContainEqual(expect.stringMatching(new RegExp(`^case\\.yaml:${line}:7 shaft\\.segments\\[0\\]\\.diametre: unknown key; did you mean "diameter"\\?`)));
+  });
+
+  it('a missing unit', () => {
+    const text = base.replace('diameter: 60 mm', 'diameter: 60');
+    const line = lineOf(text, 'diameter: 60');
+    expect(problems(text)).toContainEqual(
+      `case.yaml:${line}:17 shaft.segments[0].diameter: "60" has no unit; give a length such as "40 mm" or "1.5 in"`,
+    );
+  });
+
+  it('a unit of the wrong kind', () => {
+    const text = base.replace('length: 1200 mm', 'length: 1200 MPa');
+    expect(problems(text).join('\n')).toMatch(new RegExp(`case\\.yaml:${lineOf(text, '1200 MPa')}:\\d+ shaft\\.segments\\[0\\]\\.length: "1200 MPa" is stress, not length`));
+  });
+
+  it('a zero or negative length', () => {
+    const zero = base.replace('length: 1200 mm', 'length: 0 mm');
+    expect(problems(zero).join('\n')).toMatch(new RegExp(`:${lineOf(zero, 'length: 0 mm')}:\\d+ shaft\\.segments\\[0\\]\\.length: "0 mm" must be greater than zero`));
+    const neg = base.replace('diameter: 60 mm', 'diameter: -60 mm');
+    expect(problems(neg).join('\n')).toMatch(/shaft\.segments\[0\]\.diameter: "-60 mm" must be greater than zero/);
+  });
+
+  it('a bore not smaller than its diameter', () => {
+    const text = base.replace('      diameter: 60 mm', '      diameter: 60 mm\n      bore: 60 mm');
+    expect(problems(text).join('\n')).toMatch(new RegExp(`:${lineOf(text, 'bore: 60 mm')}:\\d+ shaft\\.segments\\[0\\]\\.bore: the bore must be smaller than the diameter`));
+  });
+
+  it('a station off the shaft', () => {
+    const text = base.replace('at: 1200 mm', 'at: 1500 mm');
+    expect(problems(text).join('\n')).toMatch(new RegExp(`:${lineOf(text, 'at: 1500 mm')}:\\d+ stations\\[1\\]\\.at: lies off the shaft, which is 1200 mm long`));
+  });
+
+  it('an unknown station name at the stop', () => {
+    const text = base.replace('  at: jam', '  at: jamm');
+    expect(problems(text).join('\n')).toMatch(new RegExp(`:${lineOf(text, 'at: jamm')}:\\d+ stop\\.at: no station is named "jamm"; give one of "jam", "flywheel"`));
+  });
+
+  it('an unknown material, with a did-you-mean', () => {
+    const text = base.replace('material: aisi-1045-cd', 'material: aisi-1045-dc');
+    expect(problems(text).join('\n')).toMatch(/shaft\.material: unknown material "aisi-1045-dc"; did you mean "aisi-1045-cd"\?/);
+  });
+
+  it('a case material without the property its use needs', () => {
+    const text = base
+      .replace('material: aisi-1045-cd', 'material: mystery')
+      .replace('units: metric', 'units: metric\nmaterials:\n  mystery:\n    shear_modulus: 80 GPa');
+    expect(problems(text).join('\n')).toMatch(/shaft\.material: material "mystery" has no yield_strength, which this use needs; add it under materials\.mystery, e\.g\. yield_strength: "530 MPa"/);
+  });
+
+  it('a wrong type', () => {
+    const text = base.replace('  segments:\n', '  segments: two\n').replace(/    - length[\s\S]*?diameter: 60 mm\n/, '');
+    expect(problems(text).join('\n')).toMatch(/shaft\.segments: should be a list/);
+  });
+
+  it('a missing required field', () => {
+    const text = base.replace('  id: T-1', '  title: no id');
+    expect(problems(text).join('\n')).toMatch(/case\.id: is required; give an incident id such as "INC-2026-014"/);
+  });
+
+  it('a disc with neither material nor density', () => {
+    const text = base.replace(/      - shape: mass[\s\S]*$/, '      - shape: disc\n        diameter: 400 mm\n        thickness: 50 mm\n');
+    expect(problems(text).join('\n')).toMatch(/stations\[1\]\.parts\[0\]\.material: a disc needs material/);
+  });
+
+  it('nothing turning is a modelling error', () => {
+    const text = base.replace(/    parts:[\s\S]*$/, '');
+    expect(problems(text).join('\n')).toMatch(/stations: no station other than the one that stopped carries parts/);
+  });
+
+  it('reports every mistake at once', () => {
+    const text = base.replace('diameter: 60 mm', 'diameter: 60').replace('speed: 200 rpm', 'speed: 200').replace('  at: jam', '  at: nowhere');
+    const msgs = problems(text);
+    expect(msgs.length).toBeGreaterThanOrEqual(3);
+    expect(msgs.some((m) => m.includes('speed:'))).toBe(true);
+    expect(msgs.some((m) => m.includes('shaft.segments[0].diameter'))).toBe(true);
+  });
+
+  it('photo paths outside the case folder are refused', () => {
+    const text = base + 'observed:\n  photos:\n    - path: ../../etc/passwd\n';
+    expect(problems(text).join('\n')).toMatch(/observed\.photos\[0\]\.path: "\.\.\/\.\.\/etc\/passwd" points outside the case folder/);
+  });
+});
