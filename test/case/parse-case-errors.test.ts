@@ -32,40 +32,40 @@ describe('parseCase reports each mistake with file:line:column, the field path a
   });
 
   it('an unknown key, with a did-you-mean', () => {
-    const text = base.replace('      diameter: 60 mm', '      diametre: 60 mm');
+    const text = base.replace('      diameter: 50 mm', '      diametre: 60 mm');
     const line = lineOf(text, 'diametre');
     const msgs = problems(text);
     expect(msgs).toContainEqual(expect.stringMatching(new RegExp(`^case\\.yaml:${line}:7 shaft\\.segments\\[0\\]\\.diametre: unknown key; did you mean "diameter"\\?`)));
   });
 
   it('a missing unit', () => {
-    const text = base.replace('diameter: 60 mm', 'diameter: 60');
-    const line = lineOf(text, 'diameter: 60');
+    const text = base.replace('diameter: 50 mm', 'diameter: 50');
+    const line = lineOf(text, 'diameter: 50');
     expect(problems(text)).toContainEqual(
-      `case.yaml:${line}:17 shaft.segments[0].diameter: "60" has no unit; give a length such as "40 mm" or "1.5 in"`,
+      `case.yaml:${line}:17 shaft.segments[0].diameter: "50" has no unit; give a length such as "40 mm" or "1.5 in"`,
     );
   });
 
   it('a unit of the wrong kind', () => {
-    const text = base.replace('length: 1200 mm', 'length: 1200 MPa');
-    expect(problems(text).join('\n')).toMatch(new RegExp(`case\\.yaml:${lineOf(text, '1200 MPa')}:\\d+ shaft\\.segments\\[0\\]\\.length: "1200 MPa" is stress, not length`));
+    const text = base.replace('length: 800 mm', 'length: 800 MPa');
+    expect(problems(text).join('\n')).toMatch(new RegExp(`case\\.yaml:${lineOf(text, '800 MPa')}:\\d+ shaft\\.segments\\[0\\]\\.length: "800 MPa" is stress, not length`));
   });
 
   it('a zero or negative length', () => {
-    const zero = base.replace('length: 1200 mm', 'length: 0 mm');
+    const zero = base.replace('length: 800 mm', 'length: 0 mm');
     expect(problems(zero).join('\n')).toMatch(new RegExp(`:${lineOf(zero, 'length: 0 mm')}:\\d+ shaft\\.segments\\[0\\]\\.length: "0 mm" must be greater than zero`));
-    const neg = base.replace('diameter: 60 mm', 'diameter: -60 mm');
-    expect(problems(neg).join('\n')).toMatch(/shaft\.segments\[0\]\.diameter: "-60 mm" must be greater than zero/);
+    const neg = base.replace('diameter: 50 mm', 'diameter: -50 mm');
+    expect(problems(neg).join('\n')).toMatch(/shaft\.segments\[0\]\.diameter: "-50 mm" must be greater than zero/);
   });
 
   it('a bore not smaller than its diameter', () => {
-    const text = base.replace('      diameter: 60 mm', '      diameter: 60 mm\n      bore: 60 mm');
-    expect(problems(text).join('\n')).toMatch(new RegExp(`:${lineOf(text, 'bore: 60 mm')}:\\d+ shaft\\.segments\\[0\\]\\.bore: the bore must be smaller than the diameter`));
+    const text = base.replace('      diameter: 50 mm', '      diameter: 50 mm\n      bore: 50 mm');
+    expect(problems(text).join('\n')).toMatch(new RegExp(`:${lineOf(text, 'bore: 50 mm')}:\\d+ shaft\\.segments\\[0\\]\\.bore: the bore must be smaller than the diameter`));
   });
 
   it('a station off the shaft', () => {
-    const text = base.replace('at: 1200 mm', 'at: 1500 mm');
-    expect(problems(text).join('\n')).toMatch(new RegExp(`:${lineOf(text, 'at: 1500 mm')}:\\d+ stations\\[1\\]\\.at: lies off the shaft, which is 1200 mm long`));
+    const text = base.replace('at: 800 mm', 'at: 900 mm');
+    expect(problems(text).join('\n')).toMatch(new RegExp(`:${lineOf(text, 'at: 900 mm')}:\\d+ stations\\[1\\]\\.at: lies off the shaft, which is 800 mm long`));
   });
 
   it('an unknown station name at the stop', () => {
@@ -86,7 +86,7 @@ describe('parseCase reports each mistake with file:line:column, the field path a
   });
 
   it('a wrong type', () => {
-    const text = base.replace('  segments:\n', '  segments: two\n').replace(/    - length[\s\S]*?diameter: 60 mm\n/, '');
+    const text = base.replace('  segments:\n', '  segments: two\n').replace(/    - length[\s\S]*?diameter: 50 mm\n/, '');
     expect(problems(text).join('\n')).toMatch(/shaft\.segments: should be a list/);
   });
 
@@ -106,7 +106,7 @@ describe('parseCase reports each mistake with file:line:column, the field path a
   });
 
   it('reports every mistake at once', () => {
-    const text = base.replace('diameter: 60 mm', 'diameter: 60').replace('speed: 200 rpm', 'speed: 200').replace('  at: jam', '  at: nowhere');
+    const text = base.replace('diameter: 50 mm', 'diameter: 50').replace('speed: 150 rpm', 'speed: 150').replace('  at: jam', '  at: nowhere');
     const msgs = problems(text);
     expect(msgs.length).toBeGreaterThanOrEqual(3);
     expect(msgs.some((m) => m.includes('speed:'))).toBe(true);
