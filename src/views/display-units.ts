@@ -46,6 +46,10 @@ export function sig(value: number, digits = 3): string {
 /** `value` (SI) shown in the case's units, three significant figures: "81.5 MPa". */
 export function show(value: number, kind: DisplayKind, units: Case['units'], digits = 3): string {
   const u = DISPLAY[units][kind];
+  // Large metric torques and energies read better with the kilo prefix: 73.5 kN·m, not 73500 N·m.
+  if (units === 'metric' && (kind === 'torque' || kind === 'energy') && Math.abs(value) >= 1e4) {
+    return `${sig(value / 1e3, digits)} k${u.label}`;
+  }
   const sep = u.label === '°' ? '' : ' ';
   return `${sig(value / u.factor, digits)}${sep}${u.label}`;
 }
