@@ -89,6 +89,17 @@ export type YieldCriterion = 'distortion-energy' | 'max-shear';
 
 export interface Analysis {
   criterion: YieldCriterion;
+  /** Monte Carlo settings; the uncertainty run happens when the case states a tolerance or a strength scatter. */
+  uncertainty: {
+    /** Whether the case asks for it (any ± tolerance, or analysis.strength_scatter given). */
+    wanted: boolean;
+    /** Number of samples (default 10 000). */
+    samples: number;
+    /** Seed of the generator (default 1), recorded with the results. */
+    seed: number;
+    /** Coefficient of variation of material strengths, fraction (default 0.07). */
+    strengthScatter: number;
+  };
 }
 
 /** What the investigator saw after the incident (`observed:` in the case file). */

@@ -49,8 +49,8 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const used: Record<string, Material> = {};
   const shaft = readShaft(r, caseMaterials, used);
   const stations = readStations(r, shaft.length, caseMaterials, used);
-  const analysis = readAnalysis(r);
   const observed = readObserved(r, stations);
+  const analysis = readAnalysis(r);
 
   if (stopAt !== undefined && stations.length > 0 && !stations.some((s) => s.name === stopAt)) {
     r.fail('E_REFERENCE', ['stop', 'at'], `no station is named "${stopAt}"; give one of ${stations.map((s) => `"${s.name}"`).join(', ')}`);
@@ -90,8 +90,15 @@ function readMeta(r: CaseReader): CaseMeta {
   return meta;
 }
 
+/** Default coefficient of variation of strengths: a stated assumption (see README, "How sure"). */
+export const DEFAULT_STRENGTH_SCATTER = 0.07;
+
 function readAnalysis(r: CaseReader): Analysis {
-  r.map(['analysis'], ['criterion']);
+  r.map(['analysis'], ['criterion', 'samples', 'seed', 'strength_scatter']);
   const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
-  return { criterion };
+  const samples = r.number(['analysis', 'samples'], { example: 'a whole number such as 10000', integer: true, min: 1 }) ?? 10_000;
+  const seed = r.number(['analysis', 'seed'], { example: 'a whole number such as 42', integer: true, min: 0 }) ?? 1;
+  const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, example: 'a coefficient of variation such as "7 %"' });
+  const wanted = scatter !== undefined || Object.keys(r.tolerances).length > 0;
+  return { criterion, uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER } };
 }

@@ -1,4 +1,4 @@
-import { Command, CommanderError } from 'commander';
+import { Command, CommanderError, InvalidArgumentError } from 'commander';
 import { CaseError } from '../case/case-error.ts';
 import { checkCommand } from './commands/check.ts';
 import { materialsCommand } from './commands/materials.ts';
@@ -8,6 +8,12 @@ import { version } from './version.ts';
 export interface Io {
   out: (text: string) => void;
   err: (text: string) => void;
+}
+
+/** Parses a whole-number option; commander reports the error and exits 2. */
+function wholeNumber(value: string): number {
+  if (!/^\d+$/.test(value)) throw new InvalidArgumentError(`"${value}" is not a whole number; give one such as 10000`);
+  return Number(value);
 }
 
 const stdio: Io = { out: (t) => process.stdout.write(t), err: (t) => process.stderr.write(t) };
@@ -28,7 +34,9 @@ export async function runMain(argv: string[], io: Io = stdio): Promise<number> {
     .description('check a case file and print the impact torque, stress, twist and verdict')
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--json', 'print one JSON object, SI units')
-    .action((file: string, opts: { json?: boolean }) => checkCommand(file, opts, io));
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
+    .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
+    .action((file: string, opts: { json?: boolean; samples?: number; seed?: number }) => checkCommand(file, opts, io));
 
   program
     .command('materials')

@@ -24,3 +24,13 @@ export function reflectedInertia(inertia: number, speedRatio: number): number {
 export function kineticEnergy(inertia: number, speed: number): number {
   return 0.5 * inertia * speed ** 2;
 }
+
+/**
+ * A part's own inertia from its shape's dimensions (SI), as the case file gives them: a disc from
+ * diameter, thickness, bore and density; a mass from mass and radius of gyration; an inertia as given.
+ */
+export function partInertia(shape: 'disc' | 'inertia' | 'mass', dims: Readonly<Record<string, number>>): number {
+  if (shape === 'disc') return discInertia(dims.density, dims.thickness, dims.diameter, dims.bore ?? 0);
+  if (shape === 'mass') return massInertia(dims.mass, dims.radius_of_gyration);
+  return dims.inertia;
+}

@@ -1,5 +1,6 @@
 import type { Case } from '../case/case.ts';
 import type { PieceResult, SideResult } from '../physics/energy-method.ts';
+import type { Uncertainty } from '../uncertainty/uncertainty.ts';
 
 export type Verdict = 'elastic' | 'yielded';
 
@@ -25,4 +26,6 @@ export interface Results {
   /** Warnings about the model's fit to the case, in plain words. */
   warnings: string[];
   cautions: readonly string[];
+  /** How sure the finding is; present when the case states tolerances. */
+  uncertainty?: Uncertainty;
 }

@@ -1,5 +1,6 @@
 import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { Results } from '../results/results.ts';
+import type { Uncertainty } from '../uncertainty/uncertainty.ts';
 
 /** The machine-readable result, SI, keys carrying their units. These names are a contract: keep them stable. */
 export function resultsToJson(r: Results): Record<string, unknown> {
@@ -15,6 +16,7 @@ export function resultsToJson(r: Results): Record<string, unknown> {
     warnings: r.warnings,
     cautions: r.cautions,
     sides: r.sides.map(sideJson),
+    ...(r.uncertainty ? { uncertainty: uncertaintyJson(r.uncertainty) } : {}),
   };
 }
 
@@ -58,5 +60,23 @@ function pieceJson(p: PieceResult): Record<string, unknown> {
     shear_yield_Pa: p.shearYield,
     twist_rad: p.twist,
     yield_ratio: p.yieldRatio,
+  };
+}
+
+function uncertaintyJson(u: Uncertainty): Record<string, unknown> {
+  return {
+    samples: u.samples,
+    seed: u.seed,
+    strength_scatter: u.strengthScatter,
+    inputs: u.inputs.map((i) => ({ input: i.path, mean: i.mean, sd: i.sd })),
+    not_varied: u.notVaried,
+    yield_probability: u.yieldProbability,
+    percentiles: {
+      yield_ratio: u.percentiles.yieldRatio,
+      max_shear_stress_Pa: u.percentiles.maxShearStress,
+      peak_torque_Nm: u.percentiles.peakTorque,
+      permanent_twist_rad: u.percentiles.permanentTwist ?? null,
+    },
+    sensitivity: u.sensitivity.map((s) => ({ input: s.input, low: s.low, high: s.high })),
   };
 }

@@ -1,6 +1,7 @@
 import type { PieceResult } from '../physics/energy-method.ts';
 import type { Results, Verdict } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
+import { renderUncertaintyLines } from './uncertainty-summary.ts';
 
 /** The verdict in plain words, one sentence. */
 export function verdictSentence(r: Results): string {
@@ -40,6 +41,8 @@ export function renderSummary(r: Results): string {
     out.push(`  most stressed    ${describePiece(worst, u)}${worst.piece.segment.kt !== 1 ? `, kt ${worst.piece.segment.kt}` : ''}`);
     out.push(`  stress           ${show(worst.shearStress, 'stress', u)} against shear yield ${show(worst.shearYield, 'stress', u)} (ratio ${sig(worst.yieldRatio)})`);
   }
+  const sure = renderUncertaintyLines(r);
+  if (sure.length > 0) out.push('', ...sure);
   out.push('');
   out.push(`Verdict (elastic energy method): ${verdictSentence(r)}`);
   if (r.warnings.length > 0) {

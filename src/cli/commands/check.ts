@@ -1,11 +1,11 @@
 import { loadCase } from '../../io/load-case.ts';
-import { analyseCase } from '../../results/analyse-case.ts';
+import { investigate } from '../../results/investigate.ts';
 import { resultsToJson } from '../../views/results-json.ts';
 import { renderSummary } from '../../views/summary.ts';
 import type { Io } from '../main.ts';
 
-export function checkCommand(path: string, opts: { json?: boolean }, io: Io): void {
+export function checkCommand(path: string, opts: { json?: boolean; samples?: number; seed?: number }, io: Io): void {
   const loaded = loadCase(path);
-  const results = analyseCase(loaded.case);
+  const results = investigate(loaded.case, { samples: opts.samples, seed: opts.seed });
   io.out(opts.json ? JSON.stringify(resultsToJson(results), null, 2) + '\n' : renderSummary(results));
 }

@@ -1,0 +1,120 @@
+import type { Case } from '../case/case.ts';
+import { partInertia } from '../physics/inertia.ts';
+import type { Tolerance } from '../units/quantity.ts';
+
+/**
+ * How an uncertain input is drawn. A stated ± band is two standard deviations of a normal
+ * distribution (the band covers about 95 % of what a careful measurement would read); a handbook
+ * minimum strength is the 5th percentile of a normal with the stated coefficient of variation, so
+ * the real bar is probably stronger; a typical strength is the mean.
+ */
+export type Spread = { kind: 'normal'; mean: number; sd: number };
+
+/** One input the Monte Carlo varies: where it is in the case file, its spread, and how to set it. */
+export interface UncertainInput {
+  /** Field path as in the case file (`speed`, `shaft.segments[1].diameter`, `materials.aisi-1045-cd.yield_strength`). */
+  path: string;
+  /** The value the single run uses, SI. */
+  nominal: number;
+  spread: Spread;
+  /** A new case with this input set to `value`; the input case is not changed. */
+  apply: (c: Case, value: number) => Case;
+}
+
+/** z of the 5th percentile of the standard normal. */
+const Z95 = 1.6448536269514722;
+
+/** Half the ± band, as an SI standard deviation: band = 2σ. */
+export function sdOfTolerance(t: Tolerance, nominal: number): number {
+  return (t.kind === 'relative' ? t.fraction * Math.abs(nominal) : t.value) / 2;
+}
+
+/** Spread of a material strength by its basis, with coefficient of variation `cov`. */
+export function strengthSpread(value: number, basis: 'minimum' | 'typical', cov: number): Spread {
+  if (basis === 'typical') return { kind: 'normal', mean: value, sd: cov * value };
+  const mean = value / (1 - Z95 * cov);
+  return { kind: 'normal', mean, sd: cov * mean };
+}
+
+const SEGMENT = /^shaft\.segments\[(\d+)\]\.(diameter|bore)$/;
+const PART = /^stations\[(\d+)\]\.parts\[(\d+)\]\.(diameter|thickness|bore|density|mass|radius_of_gyration|inertia)$/;
+const MATERIAL = /^materials\.(.+)\.(shear_modulus|yield_strength|tensile_strength|density)$/;
+const MATERIAL_PROPS = { shear_modulus: 'shearModulus', yield_strength: 'yieldStrength', tensile_strength: 'tensileStrength', density: 'density' } as const;
+
+/** The setter for a field path, or undefined when the Monte Carlo does not vary that field. */
+function setterFor(c: Case, path: string): { nominal: number; apply: UncertainInput['apply'] } | undefined {
+  if (path === 'speed') return { nominal: c.speed, apply: (k, v) => ({ ...k, speed: v }) };
+  let m = SEGMENT.exec(path);
+  if (m) {
+    const index = Number(m[1]);
+    const field = m[2] as 'diameter' | 'bore';
+    const seg = c.shaft.segments.find((s) => s.index === index);
+    if (!seg) return undefined;
+    return {
+      nominal: seg[field],
+      apply: (k, v) => ({ ...k, shaft: { segments: k.shaft.segments.map((s) => (s.index === index ? { ...s, [field]: v } : s)) } }),
+    };
+  }
+  m = PART.exec(path);
+  if (m) {
+    const [si, pi, field] = [Number(m[1]), Number(m[2]), m[3]];
+    const part = c.stations[si]?.parts[pi];
+    if (!part || part.dimensions[field] === undefined) return undefined;
+    return {
+      nominal: part.dimensions[field],
+      apply: (k, v) => ({
+        ...k,
+        stations: k.stations.map((s, i) =>
+          i !== si
+            ? s
+            : {
+                ...s,
+                parts: s.parts.map((p, j) => {
+                  if (j !== pi) return p;
+                  const dimensions = { ...p.dimensions, [field]: v };
+                  return { ...p, dimensions, inertia: partInertia(p.shape, dimensions) };
+                }),
+              },
+        ),
+      }),
+    };
+  }
+  m = MATERIAL.exec(path);
+  if (m) {
+    const [key, field] = [m[1], m[2] as keyof typeof MATERIAL_PROPS];
+    const prop = MATERIAL_PROPS[field];
+    const mat = c.materials[key];
+    if (!mat || mat[prop] === undefined) return undefined;
+    return { nominal: mat[prop]!, apply: (k, v) => ({ ...k, materials: { ...k.materials, [key]: { ...k.materials[key], [prop]: v } } }) };
+  }
+  return undefined;
+}
+
+/**
+ * The inputs a Monte Carlo varies: every field with a stated tolerance that it knows how to set,
+ * and the yield strength of every shaft material by its strength basis (unless `strengthScatter`
+ * is 0); a case material that states no basis is taken as typical (a certificate value). Tolerances on fields it cannot vary (lengths, positions) are returned in `notVaried`.
+ */
+export function uncertainInputs(c: Case, strengthScatter: number): { inputs: UncertainInput[]; notVaried: string[] } {
+  const inputs: UncertainInput[] = [];
+  const notVaried: string[] = [];
+  for (const [path, tol] of Object.entries(c.tolerances)) {
+    const s = setterFor(c, path);
+    if (!s) {
+      notVaried.push(path);
+      continue;
+    }
+    inputs.push({ path, ...s, spread: { kind: 'normal', mean: s.nominal, sd: sdOfTolerance(tol, s.nominal) } });
+  }
+  if (strengthScatter > 0) {
+    const shaftMaterials = new Set(c.shaft.segments.map((s) => s.material));
+    for (const key of shaftMaterials) {
+      const path = `materials.${key}.yield_strength`;
+      if (inputs.some((i) => i.path === path)) continue;
+      const mat = c.materials[key];
+      const s = setterFor(c, path)!;
+      inputs.push({ path, ...s, spread: strengthSpread(mat.yieldStrength!, mat.strengthBasis ?? 'typical', strengthScatter) });
+    }
+  }
+  return { inputs, notVaried };
+}

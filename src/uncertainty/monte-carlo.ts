@@ -1,0 +1,54 @@
+import type { Case } from '../case/case.ts';
+import type { UncertainInput } from './inputs.ts';
+import { normalSource, seededRandom } from './random.ts';
+
+/** The numbers a Monte Carlo sample keeps from one run of the engine. */
+export interface Metrics {
+  yieldRatio: number;
+  maxShearStress: number;
+  peakTorque: number;
+  /** Largest permanent twist over the sides, rad; 0 when elastic. Undefined when the engine gives none. */
+  permanentTwist?: number;
+}
+
+/** One run of the engine on a case: the same function the single run uses. */
+export type Engine = (c: Case) => Metrics;
+
+/** The sampled metrics, one array per metric, one entry per sample. */
+export interface Samples {
+  yieldRatio: Float64Array;
+  maxShearStress: Float64Array;
+  peakTorque: Float64Array;
+  permanentTwist: Float64Array | undefined;
+}
+
+/**
+ * Draws every input from its spread, runs the engine, keeps the metrics. Reproducible: the same
+ * seed gives the same numbers. A draw that would make a size or strength non-positive is held at
+ * 1 % of its nominal (the spreads are narrow, so this is a guard, not a model).
+ */
+export function monteCarlo(c: Case, inputs: readonly UncertainInput[], engine: Engine, samples: number, seed: number): Samples {
+  const z = normalSource(seededRandom(seed));
+  const out: Samples = {
+    yieldRatio: new Float64Array(samples),
+    maxShearStress: new Float64Array(samples),
+    peakTorque: new Float64Array(samples),
+    permanentTwist: undefined,
+  };
+  for (let i = 0; i < samples; i++) {
+    let k = c;
+    for (const input of inputs) {
+      const v = input.spread.mean + input.spread.sd * z();
+      k = input.apply(k, Math.max(v, 0.01 * input.nominal));
+    }
+    const m = engine(k);
+    out.yieldRatio[i] = m.yieldRatio;
+    out.maxShearStress[i] = m.maxShearStress;
+    out.peakTorque[i] = m.peakTorque;
+    if (m.permanentTwist !== undefined) {
+      out.permanentTwist ??= new Float64Array(samples);
+      out.permanentTwist[i] = m.permanentTwist;
+    }
+  }
+  return out;
+}

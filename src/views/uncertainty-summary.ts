@@ -1,0 +1,44 @@
+import type { Results } from '../results/results.ts';
+import { show, sig } from './display-units.ts';
+
+/** Plain name of an input from its field path: "speed", "diameter of segment 2". */
+export function inputName(path: string): string {
+  let m = /^shaft\.segments\[(\d+)\]\.(\w+)$/.exec(path);
+  if (m) return `${m[2]} of shaft segment ${Number(m[1]) + 1}`;
+  m = /^materials\.(.+)\.(\w+)$/.exec(path);
+  if (m) return `${m[2].replace(/_/g, ' ')} of ${m[1]}`;
+  m = /^stations\[(\d+)\]\.parts\[(\d+)\]\.(\w+)$/.exec(path);
+  if (m) return `${m[3].replace(/_/g, ' ')} of part ${Number(m[2]) + 1} at station ${Number(m[1]) + 1}`;
+  return path.replace(/_/g, ' ');
+}
+
+/** The one-line finding: which input to measure better first. */
+export function sensitivityFinding(r: Results): string | undefined {
+  const top = r.uncertainty?.sensitivity[0];
+  if (!top) return undefined;
+  return `${inputName(top.input)} moves the yield ratio most (from ${sig(top.low)} to ${sig(top.high)} across its band): measure it better first.`;
+}
+
+/** Lines for `check`: ranges beside the single values, the chance of yield and the ranking. */
+export function renderUncertaintyLines(r: Results): string[] {
+  const u = r.uncertainty;
+  if (!u) return [];
+  const units = r.case.units;
+  const [y5, y50, y95] = u.percentiles.yieldRatio;
+  const [s5, , s95] = u.percentiles.maxShearStress;
+  const [t5, , t95] = u.percentiles.peakTorque;
+  const out = [
+    `How sure (${u.samples} samples, seed ${u.seed}):`,
+    `  yield ratio      ${sig(y50)} (5–95 %: ${sig(y5)} to ${sig(y95)}); single run ${sig(r.yieldRatio)}`,
+    `  peak stress      ${show(s5, 'stress', units)} to ${show(s95, 'stress', units)}`,
+    `  peak torque      ${show(t5, 'torque', units)} to ${show(t95, 'torque', units)}`,
+    `  chance of yield  ${sig(100 * u.yieldProbability, 3)} %`,
+  ];
+  if (u.sensitivity.length > 0) {
+    out.push('  inputs by effect on the yield ratio:');
+    for (const s of u.sensitivity) out.push(`    ${inputName(s.input).padEnd(36)} ${sig(s.low)} to ${sig(s.high)}`);
+    out.push(`  ${sensitivityFinding(r)}`);
+  }
+  if (u.notVaried.length > 0) out.push(`  not varied (the Monte Carlo does not move these): ${u.notVaried.join(', ')}`);
+  return out;
+}
