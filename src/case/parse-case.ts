@@ -2,7 +2,7 @@ import { LineCounter, parseDocument } from 'yaml';
 import type { Material } from '../materials/material.ts';
 import { CaseError, type CaseProblem } from './case-error.ts';
 import { CaseReader } from './case-reader.ts';
-import type { Analysis, Case, CaseMeta, YieldCriterion } from './case.ts';
+import type { Analysis, Case, CaseMeta, Hardening, YieldCriterion } from './case.ts';
 import { readCaseMaterials } from './read-materials.ts';
 import { readShaft } from './read-shaft.ts';
 import { readObserved } from './read-observed.ts';
@@ -12,6 +12,7 @@ import { readStations } from './read-stations.ts';
 export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis', 'observed'] as const;
 const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'investigator', 'notes'];
 const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
+const HARDENING: Hardening[] = ['none', 'linear'];
 
 /**
  * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
@@ -91,7 +92,8 @@ function readMeta(r: CaseReader): CaseMeta {
 }
 
 function readAnalysis(r: CaseReader): Analysis {
-  r.map(['analysis'], ['criterion']);
+  r.map(['analysis'], ['criterion', 'hardening']);
   const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
-  return { criterion };
+  const hardening = (r.string(['analysis', 'hardening'], { allowed: HARDENING }) ?? 'none') as Hardening;
+  return { criterion, hardening };
 }
