@@ -83,10 +83,12 @@ export class PlasticBalance {
   }
 
   /**
-   * Energy the side can absorb before its first piece breaks, J (Infinity when none can: a
-   * stronger piece is shielded once the weakest becomes fully plastic), and that piece's index.
+   * Where the side first breaks as its energy grows: the energy it can absorb before then, J
+   * (Infinity when no piece can break: a stronger piece is shielded once the weakest is fully
+   * plastic, or no fracture limit is known), the piece that breaks, and the weakest piece's twist
+   * rate at that moment.
    */
-  fractureLimit(): { energy: number; piece: number | undefined } {
+  fractureLimit(): { energy: number; piece: number | undefined; twistRate: number } {
     const tpWeak = this.torqueLimit();
     let best = { phi: Infinity, piece: undefined as number | undefined };
     this.pieces.forEach((p, i) => {
@@ -99,7 +101,7 @@ export class PlasticBalance {
       }
       if (phi < best.phi) best = { phi, piece: i };
     });
-    return { energy: Number.isFinite(best.phi) ? this.stateAt(best.phi).energy : Infinity, piece: best.piece };
+    return { energy: Number.isFinite(best.phi) ? this.stateAt(best.phi).energy : Infinity, piece: best.piece, twistRate: best.phi };
   }
 
   /** Energy at which the first of the pieces `among` (indices) starts to yield, J; Infinity if none ever does. */

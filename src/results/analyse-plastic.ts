@@ -49,9 +49,16 @@ export function analysePlastic(c: Case, model: { sides: Side[] }, elastic: reado
   };
 }
 
+/**
+ * A side's state at the end of the stop. When the side has more energy than it can absorb before
+ * its first piece breaks, the state is the one at the break: the shaft twists no further, and the
+ * rest of the energy is not taken by the shaft.
+ */
 function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResult {
-  const state = b.balance.stateForEnergy(energy);
   const limit = b.balance.fractureLimit();
+  const breaks = energy >= limit.energy;
+  const state = breaks ? b.balance.stateAt(limit.twistRate) : b.balance.stateForEnergy(energy);
+  if (breaks) state.pieces[limit.piece!] = { ...state.pieces[limit.piece!], fractured: true };
   const pieces = side.pieces.map((piece, i): PlasticPieceResult => {
     const bp = b.balance.pieces[i];
     const yieldTwist = yieldTwistRate(bp.law) * bp.length;
@@ -67,7 +74,7 @@ function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResu
       state: state.pieces[i],
     };
   });
-  const fractured = energy >= limit.energy || pieces.some((p) => p.state.fractured);
+  const fractured = breaks || pieces.some((p) => p.state.fractured);
   return {
     side: side.side,
     energy,

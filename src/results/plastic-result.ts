@@ -26,13 +26,13 @@ export interface PlasticPieceResult extends PieceMaterialFacts {
 
 export interface PlasticSideResult {
   side: SideName;
-  /** Energy the side's shaft absorbs (the side's kinetic energy), J. */
+  /** The side's kinetic energy at the stop, J. */
   energy: number;
-  /** Peak torque, capped by plasticity, N·m. */
+  /** Peak torque, capped by plasticity, N·m. Where fracture is predicted, all these are at the break. */
   peakTorque: number;
   /** Peak twist of the side's run, rad. */
   totalTwist: number;
-  /** Twist left in the side's run after unloading, rad. */
+  /** Twist left in the side's run after unloading (at the break: in the pieces as they spring back), rad. */
   permanentTwist: number;
   /** Highest outer-fibre shear strain in the run, rad. */
   maxShearStrain: number;

@@ -39,6 +39,8 @@ export interface TwistFinding {
   speedRange: [number | undefined, number | undefined];
   /** Kinetic energy at `speedForMeasured` of the sides loading the stations, J. */
   energyForMeasured: number | undefined;
+  /** Highest speed at the stop that leaves no permanent twist between the stations, rad/s; Infinity when their pieces never yield (a weaker piece elsewhere shields them). */
+  yieldOnsetSpeed: number;
   /** At `speedForMeasured` the model predicts fracture (the twist is past the fracture estimate). */
   beyondFracture: boolean;
   finding: TwistFindingCode;
@@ -72,7 +74,7 @@ export function readTwistBack(c: Case, sides: readonly Side[], balances: readonl
     const base = { measurement: m, angleTolerance: tol, recordedSpeed: c.speed, band };
     if (involved.length === 0) {
       const finding: TwistFindingCode = m.angle - tol <= 0 ? 'consistent' : 'no_loaded_shaft';
-      return { ...base, predicted: 0, speedForMeasured: undefined, speedRange: [undefined, undefined], energyForMeasured: undefined, beyondFracture: false, finding, meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft, curve: [] };
+      return { ...base, predicted: 0, yieldOnsetSpeed: Infinity, speedForMeasured: undefined, speedRange: [undefined, undefined], energyForMeasured: undefined, beyondFracture: false, finding, meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft, curve: [] };
     }
     const speed = speedForPermanentTwist(involved, m.angle);
     const low = m.angle - tol <= 0 ? 0 : speedForPermanentTwist(involved, m.angle - tol);
@@ -90,6 +92,7 @@ export function readTwistBack(c: Case, sides: readonly Side[], balances: readonl
     return {
       ...base,
       predicted: permanentTwistAtSpeed(involved, c.speed),
+      yieldOnsetSpeed: onset,
       speedForMeasured: speed,
       speedRange: [low, high],
       energyForMeasured: energy,

@@ -59,6 +59,7 @@ export function observedToJson(o: ObservedFindings): Record<string, unknown>[] {
     measured_rad: f.measurement.angle,
     measured_tolerance_rad: f.angleTolerance,
     predicted_rad: f.predicted,
+    yield_onset_speed_rad_s: num(f.yieldOnsetSpeed),
     speed_for_measured_rad_s: num(f.speedForMeasured),
     speed_range_for_measured_rad_s: f.speedRange.map((v) => num(v)),
     energy_for_measured_J: num(f.energyForMeasured),

@@ -6,20 +6,20 @@ import { show, sig } from './display-units.ts';
 type Units = Results['case']['units'];
 
 /** '"sheave seat" 60 mm to 120 mm, Ø55 mm' for a plastic piece, in the case's units. */
-export function describePlasticPiece(p: PlasticPieceResult, u: Units): string {
+export function describePlasticPiece(p: PlasticPieceResult, u: Units, text: (s: string) => string = (s) => s): string {
   const seg = p.piece.segment;
-  const name = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
+  const name = seg.label ? `"${text(seg.label)}"` : `segment ${seg.index + 1}`;
   return `${name} ${show(p.piece.start, 'length', u)} to ${show(p.piece.end, 'length', u)}, Ø${show(seg.diameter, 'length', u)}${seg.bore > 0 ? ` bore ${show(seg.bore, 'length', u)}` : ''}`;
 }
 
-/** The overall verdict in one sentence, from the plastic balance and the elastic method. */
-export function overallVerdictSentence(r: Results): string {
+/** The overall verdict in one sentence, from the plastic balance and the elastic method; `text` escapes user text (labels) for the output format. */
+export function overallVerdictSentence(r: Results, text: (s: string) => string = (s) => s): string {
   const u = r.case.units;
   const p = r.plastic;
   if (r.verdict === 'fracture predicted') {
     const side = p.sides.find((s) => s.verdict === 'fracture predicted')!;
     const first = side.firstToBreak === undefined ? undefined : side.pieces[side.firstToBreak];
-    const what = first ? `${describePlasticPiece(first, u)} reaches its fracture ${first.brittle ? 'stress' : 'strain'}` : 'a piece reaches its fracture limit';
+    const what = first ? `${describePlasticPiece(first, u, text)} reaches its fracture ${first.brittle ? 'stress' : 'strain'}` : 'a piece reaches its fracture limit';
     return `FRACTURE PREDICTED: side ${side.side}, ${what}; the side can absorb ${show(side.fractureEnergy, 'energy', u)} before the first break and has ${show(side.energy, 'energy', u)}.`;
   }
   if (r.verdict === 'yielded' && p.verdict === 'yielded') {
@@ -38,7 +38,8 @@ export function plasticLines(r: Results): string[] {
   const p = r.plastic;
   const out: string[] = ['', `Past yield (energy balance, ${r.case.analysis.hardening === 'linear' ? 'linear strain hardening' : 'elastic–perfectly plastic'}):`];
   for (const s of p.sides) {
-    out.push(`  Side ${s.side}  peak torque ${show(s.peakTorque, 'torque', u)}, twist ${show(s.totalTwist, 'angle', u)}, permanent twist ${show(s.permanentTwist, 'angle', u)}, highest shear strain ${sig(s.maxShearStrain)}`);
+    const at = s.verdict === 'fracture predicted' ? ' at the break' : '';
+    out.push(`  Side ${s.side}  peak torque${at} ${show(s.peakTorque, 'torque', u)}, twist ${show(s.totalTwist, 'angle', u)}, permanent twist ${show(s.permanentTwist, 'angle', u)}, highest shear strain ${sig(s.maxShearStrain)}`);
     for (const piece of s.pieces) {
       if (!piece.yielded && !piece.state.fractured) continue;
       const fs = piece.fractureStrain === undefined ? 'fracture strain unknown' : `fracture at ${sig(piece.fractureStrain)}`;
@@ -80,6 +81,9 @@ export function twistFindingLines(f: TwistFinding, u: Units): string[] {
         ? `    No twist means a stop from at most ${show(f.speedForMeasured, 'speed', u, 4)}; recorded ${bandText(f, u)}.`
         : `    The measured twist needs a stop from ${show(f.speedForMeasured, 'speed', u, 4)} (kinetic energy ${show(f.energyForMeasured!, 'energy', u)}); recorded ${bandText(f, u)}.`,
     );
+  }
+  if (f.curve.length > 0 && !Number.isFinite(f.yieldOnsetSpeed)) {
+    out.push('    The shaft between these stations does not yield at any speed: a weaker piece elsewhere in the run yields first and takes the energy.');
   }
   out.push(`    Finding: ${FINDING_WORDS[f.finding]}. ${f.meaning}`);
   if (f.beyondFracture) out.push('    At that speed the model predicts fracture: the measured twist is past the fracture estimate; check the measurement and the fracture strain.');
