@@ -43,7 +43,7 @@ export function renderSummary(r: Results): string {
   }
   out.push('');
   out.push(`Verdict (elastic energy method): ${verdictSentence(r)}`);
-  if (r.yieldRatio >= 1) {
+  if (r.yieldRatio >= 1 || r.verdict !== r.elasticVerdict) {
     out.push(...plasticLines(r));
     out.push('');
     out.push(`Verdict: ${overallVerdictSentence(r)}`);
