@@ -71,6 +71,8 @@ function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResu
       fractureTwist: bp.fractureTwistRate * bp.length,
       fractureEnergy: Number.isFinite(bp.fractureTwistRate) ? energyPerLength(bp.law, bp.fractureTwistRate) * bp.length : Infinity,
       yielded: state.pieces[i].twist > yieldTwist,
+      surfaceOffset: bp.law.outerRadius * state.pieces[i].permanentTwist,
+      helixAngle: Math.atan((bp.law.outerRadius * state.pieces[i].permanentTwist) / bp.length),
       state: state.pieces[i],
     };
   });

@@ -20,6 +20,13 @@ export interface PlasticPieceResult extends PieceMaterialFacts {
   fractureEnergy: number;
   /** The piece went past yield. */
   yielded: boolean;
+  /**
+   * How the permanent twist shows on the surface: the circumferential offset c·θ_p between the
+   * piece's ends, m, and the helix angle atan(c·θ_p/L) an originally axial line (keyway wall,
+   * grinding mark, paint line) now makes, rad (shared REFERENCE.md 13.6–13.7).
+   */
+  surfaceOffset: number;
+  helixAngle: number;
   /** Peak state: twist, permanent twist, outer-fibre shear strain, energy, fractured. */
   state: PieceState;
 }

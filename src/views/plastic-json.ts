@@ -42,6 +42,8 @@ function pieceJson(p: PlasticPieceResult): Record<string, unknown> {
     plastic_torque_Nm: num(p.plasticTorque),
     twist_rad: p.state.twist,
     permanent_twist_rad: p.state.permanentTwist,
+    permanent_surface_offset_m: p.surfaceOffset,
+    permanent_helix_angle_rad: p.helixAngle,
     max_shear_strain: p.state.maxShearStrain,
     fracture_strain: num(p.fractureStrain),
     fracture_strain_basis: p.fractureStrainBasis,

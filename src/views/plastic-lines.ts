@@ -43,7 +43,7 @@ export function plasticLines(r: Results): string[] {
     for (const piece of s.pieces) {
       if (!piece.yielded && !piece.state.fractured) continue;
       const fs = piece.fractureStrain === undefined ? 'fracture strain unknown' : `fracture at ${sig(piece.fractureStrain)}`;
-      out.push(`    ${describePlasticPiece(piece, u)}: permanent ${show(piece.state.permanentTwist, 'angle', u)}, shear strain ${sig(piece.state.maxShearStrain)} (${fs})${piece.state.fractured ? ' BREAKS' : ''}`);
+      out.push(`    ${describePlasticPiece(piece, u)}: permanent ${show(piece.state.permanentTwist, 'angle', u)} (surface offset ${show(piece.surfaceOffset, 'length', u)}, an axial line now at ${show(piece.helixAngle, 'angle', u)}), shear strain ${sig(piece.state.maxShearStrain)} (${fs})${piece.state.fractured ? ' BREAKS' : ''}`);
     }
     out.push(`    energy before the first break ${Number.isFinite(s.fractureEnergy) ? show(s.fractureEnergy, 'energy', u) : 'none can break'}; the side has ${show(s.energy, 'energy', u)}`);
   }

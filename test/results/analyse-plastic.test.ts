@@ -85,3 +85,13 @@ describe('analyseCase past yield (Results.plastic)', () => {
     for (let i = 1; i < curve.length; i++) expect(curve[i].torque).toBeGreaterThanOrEqual(curve[i - 1].torque);
   });
 });
+
+describe('how the permanent twist shows on the surface', () => {
+  // Shared REFERENCE.md 13.7 (derived): EP5 at 300 rpm, θ_p = 0.041193 rad, c = 20 mm, L = 500 mm:
+  // γ_p = 0.001648 (helix ψ = 0.094°) and an end offset of 0.82 mm.
+  it('gives EP5\'s 0.82 mm surface offset and 0.094° helix angle', () => {
+    const piece = analyseCase(ep5Case()).plastic.sides[0].pieces[0];
+    expect(piece.surfaceOffset * 1000).toBeCloseTo(0.82, 2);
+    expect((piece.helixAngle * 180) / Math.PI).toBeCloseTo(0.094, 3);
+  });
+});
