@@ -87,8 +87,12 @@ export interface Part {
 
 export type YieldCriterion = 'distortion-energy' | 'max-shear';
 
+/** Past yield: elastic–perfectly plastic (`none`, the default) or linear strain hardening from S_y, S_ut and elongation. */
+export type Hardening = 'none' | 'linear';
+
 export interface Analysis {
   criterion: YieldCriterion;
+  hardening: Hardening;
   /** Monte Carlo settings; the uncertainty run happens when the case states a tolerance or a strength scatter. */
   uncertainty: {
     /** Whether the case asks for it (any ± tolerance, or analysis.strength_scatter given). */

@@ -2,7 +2,7 @@ import { LineCounter, parseDocument } from 'yaml';
 import type { Material } from '../materials/material.ts';
 import { CaseError, type CaseProblem } from './case-error.ts';
 import { CaseReader } from './case-reader.ts';
-import type { Analysis, Case, CaseMeta, YieldCriterion } from './case.ts';
+import type { Analysis, Case, CaseMeta, Hardening, YieldCriterion } from './case.ts';
 import { readCaseMaterials } from './read-materials.ts';
 import { readShaft } from './read-shaft.ts';
 import { readObserved } from './read-observed.ts';
@@ -12,6 +12,7 @@ import { readStations } from './read-stations.ts';
 export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis', 'observed'] as const;
 const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'investigator', 'notes'];
 const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
+const HARDENING: Hardening[] = ['none', 'linear'];
 
 /**
  * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
@@ -94,11 +95,12 @@ function readMeta(r: CaseReader): CaseMeta {
 export const DEFAULT_STRENGTH_SCATTER = 0.07;
 
 function readAnalysis(r: CaseReader): Analysis {
-  r.map(['analysis'], ['criterion', 'samples', 'seed', 'strength_scatter']);
+  r.map(['analysis'], ['criterion', 'hardening', 'samples', 'seed', 'strength_scatter']);
   const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
+  const hardening = (r.string(['analysis', 'hardening'], { allowed: HARDENING }) ?? 'none') as Hardening;
   const samples = r.number(['analysis', 'samples'], { example: 'a whole number such as 10000', integer: true, min: 1 }) ?? 10_000;
   const seed = r.number(['analysis', 'seed'], { example: 'a whole number such as 42', integer: true, min: 0 }) ?? 1;
   const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, example: 'a coefficient of variation such as "7 %"' });
   const wanted = scatter !== undefined || Object.keys(r.tolerances).length > 0;
-  return { criterion, uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER } };
+  return { criterion, hardening, uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER } };
 }

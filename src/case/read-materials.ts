@@ -12,6 +12,7 @@ const FIELD_KINDS: Record<MaterialField, QuantityKind> = {
   tensile_strength: 'stress',
   elongation: 'fraction',
   reduction_of_area: 'fraction',
+  fracture_strain: 'fraction',
 };
 
 const MATERIAL_KEYS = ['name', ...Object.keys(MATERIAL_FIELDS), 'strength_basis', 'source'];
@@ -80,6 +81,7 @@ function exampleOf(field: MaterialField): string {
     tensile_strength: 'tensile_strength: "630 MPa"',
     elongation: 'elongation: "12 %"',
     reduction_of_area: 'reduction_of_area: "35 %"',
+    fracture_strain: 'fracture_strain: 0.75',
   };
   return examples[field];
 }

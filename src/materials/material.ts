@@ -18,6 +18,8 @@ export interface Material {
   elongation?: number;
   /** Reduction of area at break, fraction. */
   reductionOfArea?: number;
+  /** Outer-fibre shear strain at which a round bar breaks in torsion, rad (dimensionless); overrides the estimate from reduction of area. */
+  fractureStrain?: number;
   /** Whether the strengths are published minima or typical (mean) values. */
   strengthBasis?: 'minimum' | 'typical';
   /** Where each value comes from, with "from memory" where it is recalled rather than read. */
@@ -33,6 +35,7 @@ export const MATERIAL_FIELDS = {
   tensile_strength: 'tensileStrength',
   elongation: 'elongation',
   reduction_of_area: 'reductionOfArea',
+  fracture_strain: 'fractureStrain',
 } as const satisfies Record<string, keyof Material>;
 
 export type MaterialField = keyof typeof MATERIAL_FIELDS;

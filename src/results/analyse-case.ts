@@ -1,8 +1,11 @@
 import type { Case } from '../case/case.ts';
 import { buildShaftModel } from '../model/shaft-model.ts';
 import { energyMethodSide } from '../physics/energy-method.ts';
+import { analysePlastic } from './analyse-plastic.ts';
 import { CAUTIONS } from './cautions.ts';
-import type { Results } from './results.ts';
+import { readFracture } from './fracture-reading.ts';
+import type { ElasticVerdict, Results, Verdict } from './results.ts';
+import { readTwistBack } from './twist-findings.ts';
 
 /** Share of a side's energy above which the shaft's own kinetic energy is worth a warning. */
 const SHAFT_ENERGY_WARNING = 0.05;
@@ -40,6 +43,15 @@ export function analyseCase(c: Case): Results {
     for (const piece of side.pieces) if (piece.yieldRatio > governing.piece.yieldRatio) governing = { side, piece };
   }
   const maxShearStress = Math.max(...sides.flatMap((s) => s.pieces.map((p) => p.shearStress)));
+  const elasticVerdict: ElasticVerdict = governing.piece.yieldRatio < 1 ? 'elastic' : 'yielded';
+
+  const { plastic, balances, warnings: plasticWarnings } = analysePlastic(c, model, sides);
+  warnings.push(...plasticWarnings);
+  if (elasticVerdict === 'yielded' && plastic.verdict === 'elastic') {
+    warnings.push('The net section stays elastic, but the stress at a stress raiser (kt) passes yield: local yielding there, no measurable permanent twist; the spot matters for fatigue.');
+  }
+  const verdict: Verdict = plastic.verdict === 'elastic' ? elasticVerdict : plastic.verdict;
+  const observedFindings = { twist: readTwistBack(c, model.sides, balances), fracture: readFracture(c, plastic) };
 
   return {
     case: c,
@@ -49,7 +61,10 @@ export function analyseCase(c: Case): Results {
     governing,
     maxShearStress,
     yieldRatio: governing.piece.yieldRatio,
-    verdict: governing.piece.yieldRatio < 1 ? 'elastic' : 'yielded',
+    verdict,
+    elasticVerdict,
+    plastic,
+    observedFindings,
     warnings,
     cautions: CAUTIONS,
   };

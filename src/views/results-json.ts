@@ -1,5 +1,6 @@
 import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { Results } from '../results/results.ts';
+import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
 import type { Uncertainty } from '../uncertainty/uncertainty.ts';
 
 /** The machine-readable result, SI, keys carrying their units. These names are a contract: keep them stable. */
@@ -16,6 +17,10 @@ export function resultsToJson(r: Results): Record<string, unknown> {
     warnings: r.warnings,
     cautions: r.cautions,
     sides: r.sides.map(sideJson),
+    elastic_verdict: r.elasticVerdict,
+    plastic: plasticToJson(r.plastic),
+    observed: observedToJson(r.observedFindings),
+    observed_fracture: observedFractureToJson(r.observedFindings),
     ...(r.uncertainty ? { uncertainty: uncertaintyJson(r.uncertainty) } : {}),
   };
 }

@@ -1,17 +1,18 @@
 import type { PieceResult } from '../physics/energy-method.ts';
-import type { Results, Verdict } from '../results/results.ts';
+import type { ElasticVerdict, Results } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
 import { renderUncertaintyLines } from './uncertainty-summary.ts';
+import { observedLines, overallVerdictSentence, plasticLines } from './plastic-lines.ts';
 
-/** The verdict in plain words, one sentence. */
+/** The elastic energy method's verdict in plain words, one sentence. */
 export function verdictSentence(r: Results): string {
   const where = describePiece(r.governing.piece, r.case.units);
   const ratio = sig(r.yieldRatio, 3);
-  const words: Record<Verdict, string> = {
+  const words: Record<ElasticVerdict, string> = {
     elastic: `ELASTIC: the highest stress is ${ratio} of shear yield (side ${r.governing.side.side}, ${where}); no yield is predicted.`,
     yielded: `YIELDED: the elastic stress reaches ${ratio} × shear yield (side ${r.governing.side.side}, ${where}); the shaft may have taken a permanent twist.`,
   };
-  return words[r.verdict];
+  return words[r.elasticVerdict];
 }
 
 /** "segment 2 "journal", 120–300 mm, Ø50 mm" */
@@ -45,6 +46,12 @@ export function renderSummary(r: Results): string {
   if (sure.length > 0) out.push('', ...sure);
   out.push('');
   out.push(`Verdict (elastic energy method): ${verdictSentence(r)}`);
+  if (r.yieldRatio >= 1 || r.verdict !== r.elasticVerdict) {
+    out.push(...plasticLines(r));
+    out.push('');
+    out.push(`Verdict: ${overallVerdictSentence(r)}`);
+  }
+  out.push(...observedLines(r));
   if (r.warnings.length > 0) {
     out.push('');
     out.push('Warnings:');

@@ -1,0 +1,140 @@
+import { plasticTorque, energyPerLength, residualTwistRate, torqueAtTwistRate, twistRateAtTorque, yieldTorque, type TorsionLaw } from './plastic-torsion.ts';
+import { bracketedRoot, growUntil } from './root-find.ts';
+
+/** One piece of shaft in a side's run, for the energy balance. */
+export interface BalancePiece {
+  /** Length, m. */
+  length: number;
+  law: TorsionLaw;
+  /** Twist per length at which the piece breaks, rad/m (ductile: γ_f/c₂; brittle: the elastic twist rate at its fracture torque); Infinity when unknown. */
+  fractureTwistRate: number;
+}
+
+/** A piece under the side's torque. */
+export interface PieceState {
+  /** Twist per length, rad/m. */
+  twistRate: number;
+  /** Peak twist of the piece, rad. */
+  twist: number;
+  /** Twist left after elastic unloading, rad. */
+  permanentTwist: number;
+  /** Outer-fibre engineering shear strain at the peak, rad. */
+  maxShearStrain: number;
+  /** Strain energy the piece absorbed, J. */
+  energy: number;
+  /** The twist reached the piece's fracture twist rate. */
+  fractured: boolean;
+}
+
+export interface BalanceState {
+  /** Torque carried by every piece (they are in series), N·m. */
+  torque: number;
+  /** Energy absorbed by all pieces, J. */
+  energy: number;
+  pieces: PieceState[];
+}
+
+/**
+ * The energy balance of a side past yield: the pieces are in series, so they carry one torque; the
+ * state is parametrised by the twist rate φ of the weakest piece (lowest fully plastic torque).
+ * Pieces with the same law as it share its twist rate; every other piece takes the twist rate
+ * its own law needs for that torque. The side's energy is monotone in φ, so a bracketed root
+ * finds the state that absorbs a given energy. For one elastic–perfectly plastic solid piece this
+ * is REFERENCE 3.1.9 solved for u (EP5).
+ */
+export class PlasticBalance {
+  readonly weakest: number;
+  private readonly sameAsWeakest: boolean[];
+
+  constructor(readonly pieces: readonly BalancePiece[]) {
+    if (pieces.length === 0) throw new RangeError('PlasticBalance: a side needs at least one piece');
+    let w = 0;
+    pieces.forEach((p, i) => {
+      if (plasticTorque(p.law) < plasticTorque(pieces[w].law)) w = i;
+    });
+    this.weakest = w;
+    this.sameAsWeakest = pieces.map((p) => sameLaw(p.law, pieces[w].law));
+  }
+
+  /** The state when the weakest piece twists at rate φ (rad/m). */
+  stateAt(phi: number): BalanceState {
+    const torque = torqueAtTwistRate(this.pieces[this.weakest].law, phi);
+    const pieces = this.pieces.map((p, i) => pieceState(p, this.sameAsWeakest[i] ? phi : twistRateAtTorque(p.law, torque)));
+    return { torque, energy: pieces.reduce((s, p) => s + p.energy, 0), pieces };
+  }
+
+  /** The weakest piece's twist rate at which the side has absorbed `energy` (J ≥ 0). */
+  twistRateForEnergy(energy: number): number {
+    if (energy <= 0) return 0;
+    const f = (phi: number) => this.stateAt(phi).energy;
+    const w = this.pieces[this.weakest].law;
+    const hi = growUntil(f, energy, Math.max(1e-12, Math.min(w.shearYield, 1e12) / w.shearModulus / w.outerRadius))!;
+    return bracketedRoot((phi) => f(phi) - energy, 0, hi, 1e-14 * hi);
+  }
+
+  /** The state that has absorbed `energy`, J. */
+  stateForEnergy(energy: number): BalanceState {
+    return this.stateAt(this.twistRateForEnergy(energy));
+  }
+
+  /** The weakest piece's twist rate at which the side carries torque T; Infinity if it never does. */
+  twistRateAtTorque(torque: number): number {
+    return twistRateAtTorque(this.pieces[this.weakest].law, torque);
+  }
+
+  /**
+   * Where the side first breaks as its energy grows: the energy it can absorb before then, J
+   * (Infinity when no piece can break: a stronger piece is shielded once the weakest is fully
+   * plastic, or no fracture limit is known), the piece that breaks, and the weakest piece's twist
+   * rate at that moment.
+   */
+  fractureLimit(): { energy: number; piece: number | undefined; twistRate: number } {
+    const tpWeak = this.torqueLimit();
+    let best = { phi: Infinity, piece: undefined as number | undefined };
+    this.pieces.forEach((p, i) => {
+      if (!Number.isFinite(p.fractureTwistRate)) return;
+      let phi: number;
+      if (this.sameAsWeakest[i]) phi = p.fractureTwistRate;
+      else {
+        const t = torqueAtTwistRate(p.law, p.fractureTwistRate);
+        phi = t >= tpWeak ? Infinity : this.twistRateAtTorque(t);
+      }
+      if (phi < best.phi) best = { phi, piece: i };
+    });
+    return { energy: Number.isFinite(best.phi) ? this.stateAt(best.phi).energy : Infinity, piece: best.piece, twistRate: best.phi };
+  }
+
+  /** Energy at which the first of the pieces `among` (indices) starts to yield, J; Infinity if none ever does. */
+  yieldOnsetEnergy(among: readonly number[]): number {
+    const ty = Math.min(...among.map((i) => yieldTorque(this.pieces[i].law)));
+    if (!(ty < this.torqueLimit())) return Infinity;
+    return this.stateAt(this.twistRateAtTorque(ty)).energy;
+  }
+
+  /** The most torque the side can carry, N·m: the weakest piece's fully plastic torque, or Infinity when it hardens. */
+  torqueLimit(): number {
+    const w = this.pieces[this.weakest].law;
+    return w.hardeningModulus === 0 ? plasticTorque(w) : Infinity;
+  }
+}
+
+function pieceState(p: BalancePiece, phi: number): PieceState {
+  return {
+    twistRate: phi,
+    twist: phi * p.length,
+    permanentTwist: residualTwistRate(p.law, phi) * p.length,
+    maxShearStrain: phi * p.law.outerRadius,
+    energy: energyPerLength(p.law, phi) * p.length,
+    fractured: phi >= p.fractureTwistRate,
+  };
+}
+
+function sameLaw(a: TorsionLaw, b: TorsionLaw): boolean {
+  return (
+    a.outerRadius === b.outerRadius &&
+    a.innerRadius === b.innerRadius &&
+    a.shearModulus === b.shearModulus &&
+    a.shearYield === b.shearYield &&
+    a.hardeningModulus === b.hardeningModulus
+  );
+}

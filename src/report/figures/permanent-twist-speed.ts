@@ -1,0 +1,61 @@
+import * as Plot from '@observablehq/plot';
+import type { Results } from '../../results/results.ts';
+import type { TwistFinding } from '../../results/twist-findings.ts';
+import { inDisplay, show, unitLabel } from '../../views/display-units.ts';
+import { plotToSvg, type ReportFigure } from './plot-svg.ts';
+
+/**
+ * For each measured permanent twist: the predicted permanent twist between its stations against
+ * the speed at the stop, with the recorded speed (and its band) and the measured twist marked, so
+ * the back-calculated speed reads off where they cross. Measurements with no loaded shaft between
+ * their stations have no curve and no figure.
+ */
+export function permanentTwistSpeedFigures(r: Results): ReportFigure[] {
+  return r.observedFindings.twist.flatMap((f, i) => (f.curve.length === 0 ? [] : [figure(r, f, i)]));
+}
+
+function figure(r: Results, f: TwistFinding, i: number): ReportFigure {
+  const u = r.case.units;
+  const rpm = (w: number) => inDisplay(w, 'speed', u);
+  const deg = (rad: number) => inDisplay(rad, 'angle', u);
+  const curve = f.curve.map((p) => ({ x: rpm(p.speed), y: deg(p.permanentTwist) }));
+  const measured = deg(f.measurement.angle);
+  const yTop = Math.max(measured, ...curve.map((p) => p.y)) * 1.1 || 1;
+  const marks: Plot.Markish[] = [
+    Plot.rectY([{ x1: rpm(f.band.low), x2: rpm(f.band.high) }], { x1: 'x1', x2: 'x2', y1: 0, y2: yTop, fill: '#f28e2b', fillOpacity: 0.15, ariaDescription: 'recorded speed band' }),
+    Plot.ruleX([rpm(f.recordedSpeed)], { stroke: '#f28e2b', strokeWidth: 1.5, ariaDescription: 'recorded speed' }),
+    Plot.ruleY([measured], { stroke: '#59a14f', strokeWidth: 1.5, strokeDasharray: '5,3', ariaDescription: 'measured twist' }),
+    Plot.ruleY([0]),
+    Plot.line(curve, { x: 'x', y: 'y', stroke: '#4e79a7', strokeWidth: 2, ariaDescription: 'permanent twist against speed' }),
+    Plot.text([{ x: rpm(f.recordedSpeed), y: yTop }], { x: 'x', y: 'y', text: () => `recorded ${show(f.recordedSpeed, 'speed', u, 4)}`, dy: 10, dx: 4, textAnchor: 'start', ariaDescription: 'recorded speed label' }),
+    Plot.text([{ x: 0, y: measured }], { x: 'x', y: 'y', text: () => `measured ${show(f.measurement.angle, 'angle', u)}`, dy: -6, dx: 4, textAnchor: 'start', ariaDescription: 'measured twist label' }),
+  ];
+  if (f.speedForMeasured !== undefined && f.measurement.angle > 0) {
+    const hit = { x: rpm(f.speedForMeasured), y: measured };
+    marks.push(Plot.ruleX([hit.x], { y1: 0, y2: measured, stroke: '#59a14f', strokeDasharray: '2,2', ariaDescription: 'speed for measured twist' }));
+    marks.push(Plot.dot([hit], { x: 'x', y: 'y', fill: '#59a14f', r: 4, ariaDescription: 'speed for measured twist point' }));
+    marks.push(Plot.text([hit], { x: 'x', y: 'y', text: () => show(f.speedForMeasured!, 'speed', u, 4), dy: 14, dx: 4, textAnchor: 'start', ariaDescription: 'speed for measured twist label' }));
+  }
+  const [a, b] = f.measurement.between;
+  const svg = plotToSvg({
+    width: 640,
+    height: 400,
+    marginLeft: 60,
+    marginBottom: 45,
+    x: { label: `speed at the stop (${unitLabel('speed', u)})`, domain: [0, curve[curve.length - 1].x] },
+    y: { label: `permanent twist (${unitLabel('angle', u)})`, domain: [0, yTop] },
+    marks,
+  });
+  const read =
+    f.speedForMeasured === undefined
+      ? 'no speed leaves the measured twist'
+      : f.measurement.angle > 0
+        ? `the measured twist is left by a stop from ${show(f.speedForMeasured, 'speed', u, 4)}`
+        : `no twist means a stop from at most ${show(f.speedForMeasured, 'speed', u, 4)}`;
+  return {
+    name: `permanent-twist-speed-${i + 1}`,
+    title: `Permanent twist between "${a}" and "${b}" against the speed at the stop`,
+    caption: `Predicted permanent twist between the stations for a stop from each speed; the recorded ${show(f.recordedSpeed, 'speed', u, 4)} with its ${f.band.basis === 'default' ? 'default ±10 %' : 'stated'} band, and the measured ${show(f.measurement.angle, 'angle', u)}: ${read}.`,
+    svg,
+  };
+}

@@ -1,0 +1,72 @@
+import type { Case } from '../case/case.ts';
+import type { Side } from '../model/shaft-model.ts';
+import { brittleFractureShear, fractureShearStrain, isBrittle } from '../physics/fracture.ts';
+import { PlasticBalance, type BalancePiece } from '../physics/plastic-balance.ts';
+import type { TorsionLaw } from '../physics/plastic-torsion.ts';
+import { shearYield } from '../physics/shear-strength.ts';
+import { linearHardeningModulus } from '../physics/strain-hardening.ts';
+
+/** What the balance needs to know about a piece beyond its law, for the results and the report. */
+export interface PieceMaterialFacts {
+  /** Material key. */
+  material: string;
+  brittle: boolean;
+  /** Outer-fibre shear strain at fracture, rad; for a brittle piece the elastic strain at its fracture stress. Undefined when unknown. */
+  fractureStrain: number | undefined;
+  /** How the fracture strain was found. */
+  fractureStrainBasis: string;
+  /** Linear hardening slope used, Pa; 0 when perfectly plastic. */
+  hardeningModulus: number;
+}
+
+/** A side of the stop set up for the energy balance past yield. */
+export interface SideBalance {
+  balance: PlasticBalance;
+  facts: PieceMaterialFacts[];
+  /** Inertia felt at shaft speed, kg·m² (½·J·ω² is the side's energy). */
+  inertia: number;
+  /** Plain-sentence notes about the set-up (a missing fracture strain, hardening not possible). */
+  warnings: string[];
+}
+
+/**
+ * Builds each piece's torque–twist law from its segment and material: ductile pieces yield at
+ * the case criterion's shear yield (no K_t: net-section behaviour), with linear hardening when
+ * the case asks for it; brittle pieces stay elastic up to their fracture stress (K_t applied).
+ */
+export function sideBalance(side: Side, c: Case, sideInertia: number): SideBalance {
+  const warnings: string[] = [];
+  const facts: PieceMaterialFacts[] = [];
+  const inputs: BalancePiece[] = side.pieces.map((p) => {
+    const seg = p.segment;
+    const m = c.materials[seg.material];
+    const g = m.shearModulus!;
+    const c2 = seg.diameter / 2;
+    const brittle = isBrittle(m);
+    if (brittle) {
+      const tauF = brittleFractureShear(m, seg.kt);
+      facts.push({
+        material: m.key,
+        brittle,
+        fractureStrain: tauF / g,
+        fractureStrainBasis: `brittle (elongation below 5 %): breaks when K_t·τ reaches the tensile strength, at an elastic outer-fibre strain of S_ut/(K_t·G)`,
+        hardeningModulus: 0,
+      });
+      const law: TorsionLaw = { outerRadius: c2, innerRadius: seg.bore / 2, shearModulus: g, shearYield: Infinity, hardeningModulus: 0 };
+      return { length: p.end - p.start, law, fractureTwistRate: tauF / (g * c2) };
+    }
+    const tauY = shearYield(m.yieldStrength!, c.analysis.criterion);
+    let h = 0;
+    if (c.analysis.hardening === 'linear') {
+      const slope = linearHardeningModulus(m, tauY / m.yieldStrength!);
+      if (slope === undefined) warnings.push(`Material ${m.key} has no tensile strength above its yield or no elongation, so segment ${seg.index + 1} is taken as perfectly plastic.`);
+      else h = slope;
+    }
+    const fs = fractureShearStrain(m);
+    if (!fs) warnings.push(`Material ${m.key} has no reduction of area, elongation or fracture_strain, so no fracture check is made for segment ${seg.index + 1}.`);
+    facts.push({ material: m.key, brittle, fractureStrain: fs?.value, fractureStrainBasis: fs?.basis ?? 'unknown', hardeningModulus: h });
+    const law: TorsionLaw = { outerRadius: c2, innerRadius: seg.bore / 2, shearModulus: g, shearYield: tauY, hardeningModulus: h };
+    return { length: p.end - p.start, law, fractureTwistRate: fs ? fs.value / c2 : Infinity };
+  });
+  return { balance: new PlasticBalance(inputs), facts, inertia: sideInertia, warnings: [...new Set(warnings)] };
+}

@@ -1,0 +1,119 @@
+import type { Case, TwistMeasurement } from '../case/case.ts';
+import type { Side } from '../model/shaft-model.ts';
+import { energyAtSpeed, onsetSpeed, permanentTwistAtSpeed, speedForPermanentTwist, type ReadBackSide } from '../physics/read-back.ts';
+import type { SideBalance } from './side-balance.ts';
+
+/** Band on the recorded speed used when the case states none: ±10 %. */
+export const DEFAULT_SPEED_BAND = 0.1;
+/** Points of the speed → permanent-twist curve kept for the figure. */
+const CURVE_POINTS = 48;
+const EPS = 1e-9;
+
+/**
+ * consistent: the measured twist fits the recorded speed within its band; more / less: it needs a
+ * higher / lower speed than the band allows; no_loaded_shaft: no shaft between the stations
+ * carries torque in the model; unexplained: no speed leaves that much twist there.
+ */
+export type TwistFindingCode = 'consistent' | 'more' | 'less' | 'no_loaded_shaft' | 'unexplained';
+
+/** The band on the recorded speed a finding is judged against, rad/s. */
+export interface SpeedBand {
+  low: number;
+  high: number;
+  /** `case`: the ± stated on `speed` in the case; `default`: DEFAULT_SPEED_BAND, stated as a default. */
+  basis: 'case' | 'default';
+}
+
+/** A measured permanent twist read back to the incident. */
+export interface TwistFinding {
+  measurement: TwistMeasurement;
+  /** ± band stated on the measured angle, rad; 0 when none. */
+  angleTolerance: number;
+  /** Permanent twist between the stations predicted at the recorded speed, rad. */
+  predicted: number;
+  recordedSpeed: number;
+  band: SpeedBand;
+  /** Speed at the stop that leaves exactly the measured twist, rad/s (for a zero twist: the most speed that leaves none). */
+  speedForMeasured: number | undefined;
+  /** Speeds for the measured angle minus and plus its tolerance, rad/s (upper undefined when no speed reaches it). */
+  speedRange: [number | undefined, number | undefined];
+  /** Kinetic energy at `speedForMeasured` of the sides loading the stations, J. */
+  energyForMeasured: number | undefined;
+  /** Highest speed at the stop that leaves no permanent twist between the stations, rad/s; Infinity when their pieces never yield (a weaker piece elsewhere shields them). */
+  yieldOnsetSpeed: number;
+  /** At `speedForMeasured` the model predicts fracture (the twist is past the fracture estimate). */
+  beyondFracture: boolean;
+  finding: TwistFindingCode;
+  /** What the finding usually means, in plain words (no numbers: the views add them in the case's units). */
+  meaning: string;
+  /** The speed → permanent-twist relation between the stations, for the figure. */
+  curve: { speed: number; permanentTwist: number }[];
+}
+
+const MEANINGS: Record<TwistFindingCode, string> = {
+  consistent: 'The measured twist agrees with the recorded speed within the stated band.',
+  more: 'The shaft took more energy than the recorded speed gives: the speed may have been higher than recorded, the drive may have kept pushing through the jam (its torque is not in the energy balance), the shaft may already have been twisted in an earlier event, or the material is weaker than the value used.',
+  less: 'The shaft took less energy than the recorded speed gives: energy was taken elsewhere (belt slip, a torque limiter or shear pin, a hub or key slipping, the jam giving way), or the bar is stronger than the published minimum strength used, as a real bar usually is.',
+  no_loaded_shaft: 'No shaft between these stations carries torque in the model (it lies outside every loaded run), so no permanent twist is predicted there; a measured offset points to slip at a fit, a load path the case does not describe, or an earlier event.',
+  unexplained: 'No speed leaves this much twist between these stations: a weaker piece elsewhere yields first and shields them (or they never yield). Check the measurement, the stations, and for slip at a fit.',
+};
+
+/** Reads every measured permanent twist back to the speed and energy of the stop. */
+export function readTwistBack(c: Case, sides: readonly Side[], balances: readonly SideBalance[]): TwistFinding[] {
+  const band = speedBand(c);
+  return c.observed.permanentTwist.map((m, k) => {
+    const at = m.between.map((name) => c.stations.find((s) => s.name === name)!.at);
+    const [x1, x2] = [Math.min(...at), Math.max(...at)];
+    const rb: ReadBackSide[] = sides.map((side, i) => ({
+      balance: balances[i].balance,
+      inertia: balances[i].inertia,
+      between: side.pieces.flatMap((p, j) => (p.start >= x1 - EPS && p.end <= x2 + EPS ? [j] : [])),
+    }));
+    const involved = rb.filter((s) => s.between.length > 0);
+    const tol = angleTolerance(c, k, m.angle);
+    const base = { measurement: m, angleTolerance: tol, recordedSpeed: c.speed, band };
+    if (involved.length === 0) {
+      const finding: TwistFindingCode = m.angle - tol <= 0 ? 'consistent' : 'no_loaded_shaft';
+      return { ...base, predicted: 0, yieldOnsetSpeed: Infinity, speedForMeasured: undefined, speedRange: [undefined, undefined], energyForMeasured: undefined, beyondFracture: false, finding, meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft, curve: [] };
+    }
+    const speed = speedForPermanentTwist(involved, m.angle);
+    const low = m.angle - tol <= 0 ? 0 : speedForPermanentTwist(involved, m.angle - tol);
+    const high = tol > 0 ? speedForPermanentTwist(involved, m.angle + tol) : speed;
+    const onset = onsetSpeed(involved);
+    let finding: TwistFindingCode;
+    if (speed === undefined && m.angle - tol > 0) finding = 'unexplained';
+    else if (low !== undefined && low > band.high) finding = 'more';
+    else if (high !== undefined && high < band.low) finding = 'less';
+    else finding = 'consistent';
+    const energy = speed === undefined ? undefined : energyAtSpeed(involved, speed);
+    const beyondFracture = speed !== undefined && involved.some((s) => 0.5 * s.inertia * speed ** 2 >= s.balance.fractureLimit().energy);
+    const top = 1.3 * Math.max(c.speed, band.high, Number.isFinite(onset) ? onset : 0, speed ?? 0);
+    const speeds = [...Array.from({ length: CURVE_POINTS + 1 }, (_, i) => (top * i) / CURVE_POINTS), c.speed, ...(speed === undefined ? [] : [speed]), ...(Number.isFinite(onset) && onset < top ? [onset] : [])].sort((a, b) => a - b);
+    return {
+      ...base,
+      predicted: permanentTwistAtSpeed(involved, c.speed),
+      yieldOnsetSpeed: onset,
+      speedForMeasured: speed,
+      speedRange: [low, high],
+      energyForMeasured: energy,
+      beyondFracture,
+      finding,
+      meaning: MEANINGS[finding],
+      curve: speeds.map((w) => ({ speed: w, permanentTwist: permanentTwistAtSpeed(involved, w) })),
+    };
+  });
+}
+
+/** The case's ± on `speed`, or the default ±10 %. */
+export function speedBand(c: Case): SpeedBand {
+  const t = c.tolerances['speed'];
+  if (!t) return { low: c.speed * (1 - DEFAULT_SPEED_BAND), high: c.speed * (1 + DEFAULT_SPEED_BAND), basis: 'default' };
+  const half = t.kind === 'relative' ? t.fraction * c.speed : t.value;
+  return { low: Math.max(0, c.speed - half), high: c.speed + half, basis: 'case' };
+}
+
+function angleTolerance(c: Case, index: number, angle: number): number {
+  const t = c.tolerances[`observed.permanent_twist[${index}].angle`];
+  if (!t) return 0;
+  return t.kind === 'relative' ? t.fraction * angle : t.value;
+}

@@ -1,0 +1,129 @@
+import { describe, expect, it } from 'vitest';
+import { analyseCase } from '../../src/results/analyse-case.ts';
+import { DEFAULT_SPEED_BAND } from '../../src/results/twist-findings.ts';
+import { ep5Case } from '../data/ep5-case.ts';
+
+const rpm = (n: number) => (n * 2 * Math.PI) / 60;
+const between = (deg: number, tol = '') => [`permanent_twist:`, `  - { between: [seized bearing, disc], angle: ${deg} deg${tol} }`];
+
+/**
+ * Independent read-back for EP5's single solid piece (shared REFERENCE.md 3.1.6 and 3.1.9, derived
+ * from Beer & Johnston Sec. 3.9–3.11): θ_p/θ_Y = u − (4/3)(1 − 1/(4u³)) solved for u by bisection,
+ * then U = T_Y·θ_Y·[½ + (4/3)(u − 9/8 + 1/(8u²))] and ω = √(2U/J).
+ */
+function ep5SpeedFor(thetaP: number): number {
+  const tauY = 530e6 / Math.sqrt(3);
+  const c = 0.02;
+  const L = 0.5;
+  const G = 79.3e9;
+  const ty = (Math.PI / 2) * c ** 3 * tauY;
+  const thy = (tauY * L) / (G * c);
+  let lo = 1;
+  let hi = 1e4;
+  for (let i = 0; i < 200; i++) {
+    const u = 0.5 * (lo + hi);
+    if (u - (4 / 3) * (1 - 1 / (4 * u ** 3)) < thetaP / thy) lo = u;
+    else hi = u;
+  }
+  const u = 0.5 * (lo + hi);
+  const U = ty * thy * (0.5 + (4 / 3) * (u - 9 / 8 + 1 / (8 * u * u)));
+  const J = (Math.PI / 32) * 7850 * 0.05 * 0.4 ** 4;
+  return Math.sqrt((2 * U) / J);
+}
+
+describe('reading a measured permanent twist back (Results.observedFindings.twist)', () => {
+  it('finds the speed and energy that leave the measured twist, agreeing with the hand read-back within 0.5 %', () => {
+    const r = analyseCase(ep5Case({ observed: between(3) }));
+    const f = r.observedFindings.twist[0];
+    const expected = ep5SpeedFor((3 * Math.PI) / 180);
+    expect(Math.abs(f.speedForMeasured! / expected - 1)).toBeLessThan(0.005);
+    const J = (Math.PI / 32) * 7850 * 0.05 * 0.4 ** 4;
+    expect(f.energyForMeasured).toBeCloseTo(0.5 * J * f.speedForMeasured! ** 2, 6);
+    expect(Math.abs(f.predicted / 0.041193 - 1)).toBeLessThan(0.005);
+  });
+
+  it('calls a measurement consistent when the speed it needs lies within the default ±10 % band, and says the band is a default', () => {
+    const predictedDeg = (analyseCase(ep5Case({ observed: between(1) })).observedFindings.twist[0].predicted * 180) / Math.PI;
+    const f = analyseCase(ep5Case({ observed: between(predictedDeg * 1.05) })).observedFindings.twist[0];
+    expect(f.finding).toBe('consistent');
+    expect(f.band.basis).toBe('default');
+    expect(DEFAULT_SPEED_BAND).toBe(0.1);
+    expect(f.band.low).toBeCloseTo(rpm(270), 9);
+    expect(f.band.high).toBeCloseTo(rpm(330), 9);
+  });
+
+  it('calls a much larger twist "more than the recorded speed explains"', () => {
+    const f = analyseCase(ep5Case({ observed: between(10) })).observedFindings.twist[0];
+    expect(f.finding).toBe('more');
+    expect(f.speedForMeasured!).toBeGreaterThan(f.band.high);
+    expect(f.meaning).toMatch(/higher than recorded/);
+  });
+
+  it('calls a much smaller twist "less": energy taken elsewhere (belt slip, a limiter, the jam giving way)', () => {
+    const f = analyseCase(ep5Case({ observed: between(0.3) })).observedFindings.twist[0];
+    expect(f.finding).toBe('less');
+    expect(f.meaning).toMatch(/belt slip/);
+    expect(f.meaning).toMatch(/limiter/);
+    expect(f.meaning).toMatch(/jam giving way/);
+  });
+
+  it('uses the case\'s own ± on speed when it states one', () => {
+    const f = analyseCase(ep5Case({ speed: '300 rpm ± 1 %', observed: between(2.6) })).observedFindings.twist[0];
+    expect(f.band.basis).toBe('case');
+    expect(f.band.high).toBeCloseTo(rpm(303), 9);
+  });
+
+  it('widens the judgement by the ± stated on the measured angle', () => {
+    const tight = analyseCase(ep5Case({ observed: between(4) })).observedFindings.twist[0];
+    const loose = analyseCase(ep5Case({ observed: between(4, ' ± 1.5 deg') })).observedFindings.twist[0];
+    expect(tight.finding).toBe('more');
+    expect(loose.finding).toBe('consistent');
+    expect(loose.angleTolerance).toBeCloseTo((1.5 * Math.PI) / 180, 12);
+    expect(loose.speedRange[0]!).toBeLessThan(loose.speedForMeasured!);
+    expect(loose.speedRange[1]!).toBeGreaterThan(loose.speedForMeasured!);
+  });
+
+  it('a zero twist after a stop that should have yielded the shaft reads as less', () => {
+    const f = analyseCase(ep5Case({ observed: between(0) })).observedFindings.twist[0];
+    expect(f.finding).toBe('less');
+    expect(f.speedForMeasured!).toBeCloseTo(f.yieldOnsetSpeed, 9);
+  });
+
+  it('finds no loaded shaft between stations outside the loaded run', () => {
+    const r = analyseCase(
+      ep5Case({
+        segments: ['- { length: 500 mm, diameter: 40 mm }', '- { length: 200 mm, diameter: 40 mm }'],
+        stations: ['- { name: coupling, at: 700 mm }'],
+        observed: ['permanent_twist:', '  - { between: [disc, coupling], angle: 2 deg }'],
+      }),
+    );
+    const f = r.observedFindings.twist[0];
+    expect(f.finding).toBe('no_loaded_shaft');
+    expect(f.predicted).toBe(0);
+    expect(f.curve).toEqual([]);
+  });
+
+  it('finds a twist unexplained where a weaker piece elsewhere shields the measured stretch', () => {
+    const r = analyseCase(
+      ep5Case({
+        segments: ['- { length: 250 mm, diameter: 40 mm }', '- { length: 250 mm, diameter: 60 mm }'],
+        stations: ['- { name: middle, at: 250 mm }'],
+        observed: ['permanent_twist:', '  - { between: [middle, disc], angle: 1 deg }'],
+      }),
+    );
+    const f = r.observedFindings.twist[0];
+    expect(f.finding).toBe('unexplained');
+    expect(f.yieldOnsetSpeed).toBe(Infinity);
+    expect(f.speedForMeasured).toBeUndefined();
+  });
+
+  it('keeps the speed → permanent-twist curve, rising, through the recorded speed and the speed found', () => {
+    const f = analyseCase(ep5Case({ observed: between(3) })).observedFindings.twist[0];
+    const speeds = f.curve.map((p) => p.speed);
+    expect(speeds).toContain(f.recordedSpeed);
+    expect(speeds).toContain(f.speedForMeasured);
+    for (let i = 1; i < f.curve.length; i++) expect(f.curve[i].permanentTwist).toBeGreaterThanOrEqual(f.curve[i - 1].permanentTwist - 1e-15);
+    const hit = f.curve.find((p) => p.speed === f.speedForMeasured)!;
+    expect(hit.permanentTwist).toBeCloseTo((3 * Math.PI) / 180, 9);
+  });
+});
