@@ -53,8 +53,30 @@ export function speedForPermanentTwist(sides: readonly ReadBackSide[], twist: nu
   const onset = onsetSpeed(sides);
   if (!Number.isFinite(onset)) return undefined;
   if (twist <= 0) return onset;
+  const involved = sides.filter((s) => s.between.length > 0);
+  if (involved.length === 1) return oneSideSpeed(involved[0], twist);
   const f = (w: number) => permanentTwistAtSpeed(sides, w);
   const hi = growUntil(f, twist, Math.max(onset, 1e-9), 64);
   if (hi === undefined) return undefined;
   return bracketedRoot((w) => f(w) - twist, onset, hi, 1e-13 * hi);
+}
+
+/**
+ * The same inversion when one side alone loads the stations, in one root find instead of two: the
+ * permanent twist between the stations is monotone in the side's twist-rate parameter, so find the
+ * state that leaves `twist`, then the speed whose energy ½·J·ω² is that state's energy.
+ */
+function oneSideSpeed(s: ReadBackSide, twist: number): number | undefined {
+  const f = (phi: number) => {
+    const state = s.balance.stateAt(phi);
+    let sum = 0;
+    for (const i of s.between) sum += state.pieces[i].permanentTwist;
+    return sum;
+  };
+  const start = Math.sqrt((2 * s.balance.yieldOnsetEnergy(s.between)) / s.inertia);
+  const phi0 = s.balance.twistRateForEnergy(0.5 * s.inertia * start ** 2);
+  const hi = growUntil(f, twist, Math.max(phi0, 1e-12), 64);
+  if (hi === undefined) return undefined;
+  const phi = bracketedRoot((p) => f(p) - twist, phi0, hi, 1e-14 * hi);
+  return Math.sqrt((2 * s.balance.stateAt(phi).energy) / s.inertia);
 }

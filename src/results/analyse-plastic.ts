@@ -55,10 +55,7 @@ export function analysePlastic(c: Case, model: { sides: Side[] }, elastic: reado
  * rest of the energy is not taken by the shaft.
  */
 function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResult {
-  const limit = b.balance.fractureLimit();
-  const breaks = energy >= limit.energy;
-  const state = breaks ? b.balance.stateAt(limit.twistRate) : b.balance.stateForEnergy(energy);
-  if (breaks) state.pieces[limit.piece!] = { ...state.pieces[limit.piece!], fractured: true };
+  const { state, limit, breaks } = sideEndState(b, energy);
   const pieces = side.pieces.map((piece, i): PlasticPieceResult => {
     const bp = b.balance.pieces[i];
     const yieldTwist = yieldTwistRate(bp.law) * bp.length;
@@ -89,6 +86,18 @@ function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResu
     verdict: fractured ? 'fracture predicted' : pieces.some((p) => p.yielded) ? 'yielded' : 'elastic',
     pieces,
   };
+}
+
+/**
+ * The side's state at the end of the stop and its fracture limit: the state that absorbs `energy`,
+ * or, when that is more than the side can take before its first piece breaks, the state at the break.
+ */
+export function sideEndState(b: SideBalance, energy: number) {
+  const limit = b.balance.fractureLimit();
+  const breaks = energy >= limit.energy;
+  const state = breaks ? b.balance.stateAt(limit.twistRate) : b.balance.stateForEnergy(energy);
+  if (breaks) state.pieces[limit.piece!] = { ...state.pieces[limit.piece!], fractured: true };
+  return { state, limit, breaks };
 }
 
 /** The piece with the highest outer-fibre shear strain, with its loading path sampled for the figure. */

@@ -1,6 +1,8 @@
 import type { Case } from '../case/case.ts';
 import type { Metrics } from '../uncertainty/monte-carlo.ts';
+import { sampleMetrics } from '../uncertainty/sample-engine.ts';
 import { runUncertainty } from '../uncertainty/uncertainty.ts';
+import { judgeByInterval } from './twist-findings.ts';
 import { analyseCase } from './analyse-case.ts';
 import type { Results } from './results.ts';
 
@@ -11,12 +13,14 @@ export interface InvestigateOptions {
   seed?: number;
 }
 
-/** The numbers one Monte Carlo sample keeps, from the same engine as the single run. */
+/** The numbers one Monte Carlo sample keeps, read from a full run (the sampling engine must agree with it). */
 export function metricsOf(r: Results): Metrics {
   return {
     yieldRatio: r.yieldRatio,
     maxShearStress: r.maxShearStress,
-    peakTorque: Math.max(...r.sides.map((s) => s.peakTorque)),
+    peakTorque: r.plastic.peakTorque,
+    permanentTwist: Math.max(...r.plastic.sides.map((s) => s.permanentTwist)),
+    speedsForMeasured: r.observedFindings.twist.map((f) => (f.predicted === 0 && f.speedForMeasured === undefined ? undefined : f.speedForMeasured)),
   };
 }
 
@@ -29,6 +33,7 @@ export function investigate(c: Case, opts: InvestigateOptions = {}): Results {
   const u = c.analysis.uncertainty;
   const samples = opts.samples ?? u.samples;
   if (!u.wanted || samples === 0) return results;
-  const uncertainty = runUncertainty(c, (k) => metricsOf(analyseCase(k)), { samples, seed: opts.seed ?? u.seed, strengthScatter: u.strengthScatter });
-  return { ...results, uncertainty };
+  const uncertainty = runUncertainty(c, sampleMetrics, { samples, seed: opts.seed ?? u.seed, strengthScatter: u.strengthScatter });
+  const twist = results.observedFindings.twist.map((f, k) => judgeByInterval(f, uncertainty.observed[k]?.speedInterval ?? null));
+  return { ...results, uncertainty, observedFindings: { ...results.observedFindings, twist } };
 }

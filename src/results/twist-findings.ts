@@ -20,8 +20,12 @@ export type TwistFindingCode = 'consistent' | 'more' | 'less' | 'no_loaded_shaft
 export interface SpeedBand {
   low: number;
   high: number;
-  /** `case`: the ± stated on `speed` in the case; `default`: DEFAULT_SPEED_BAND, stated as a default. */
-  basis: 'case' | 'default';
+  /**
+   * `case`: the ± stated on `speed` in the case; `default`: DEFAULT_SPEED_BAND, stated as a default;
+   * `monte-carlo`: the finding was judged by the interval of speeds that explain the measured twist
+   * over the case's tolerances (see `judgeByInterval`).
+   */
+  basis: 'case' | 'default' | 'monte-carlo';
 }
 
 /** A measured permanent twist read back to the incident. */
@@ -116,4 +120,15 @@ function angleTolerance(c: Case, index: number, angle: number): number {
   const t = c.tolerances[`observed.permanent_twist[${index}].angle`];
   if (!t) return 0;
   return t.kind === 'relative' ? t.fraction * angle : t.value;
+}
+
+/**
+ * Re-judges a finding where the uncertainty run gives the 5–95 % interval of speeds that explain
+ * the measured twist over every stated tolerance: consistent when the recorded speed lies inside
+ * it, `more` when the whole interval lies above the recorded speed, `less` when below.
+ */
+export function judgeByInterval(f: TwistFinding, interval: [number, number] | null): TwistFinding {
+  if (interval === null || f.finding === 'no_loaded_shaft' || f.finding === 'unexplained') return f;
+  const finding: TwistFindingCode = f.recordedSpeed < interval[0] ? 'more' : f.recordedSpeed > interval[1] ? 'less' : 'consistent';
+  return { ...f, finding, meaning: MEANINGS[finding], speedRange: [interval[0], interval[1]], band: { low: f.recordedSpeed, high: f.recordedSpeed, basis: 'monte-carlo' } };
 }

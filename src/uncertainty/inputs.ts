@@ -38,6 +38,7 @@ export function strengthSpread(value: number, basis: 'minimum' | 'typical', cov:
 
 const SEGMENT = /^shaft\.segments\[(\d+)\]\.(diameter|bore)$/;
 const PART = /^stations\[(\d+)\]\.parts\[(\d+)\]\.(diameter|thickness|bore|density|mass|radius_of_gyration|inertia)$/;
+const MEASURED = /^observed\.permanent_twist\[(\d+)\]\.angle$/;
 const MATERIAL = /^materials\.(.+)\.(shear_modulus|yield_strength|tensile_strength|density)$/;
 const MATERIAL_PROPS = { shear_modulus: 'shearModulus', yield_strength: 'yieldStrength', tensile_strength: 'tensileStrength', density: 'density' } as const;
 
@@ -76,6 +77,19 @@ function setterFor(c: Case, path: string): { nominal: number; apply: UncertainIn
                 }),
               },
         ),
+      }),
+    };
+  }
+  m = MEASURED.exec(path);
+  if (m) {
+    const k = Number(m[1]);
+    const t = c.observed.permanentTwist[k];
+    if (!t) return undefined;
+    return {
+      nominal: t.angle,
+      apply: (kase, v) => ({
+        ...kase,
+        observed: { ...kase.observed, permanentTwist: kase.observed.permanentTwist.map((x, i) => (i === k ? { ...x, angle: v } : x)) },
       }),
     };
   }

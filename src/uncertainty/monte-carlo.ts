@@ -9,6 +9,8 @@ export interface Metrics {
   peakTorque: number;
   /** Largest permanent twist over the sides, rad; 0 when elastic. Undefined when the engine gives none. */
   permanentTwist?: number;
+  /** For each measured permanent twist, the speed at the stop that leaves it, rad/s (undefined: none does). */
+  speedsForMeasured?: (number | undefined)[];
 }
 
 /** One run of the engine on a case: the same function the single run uses. */
@@ -20,6 +22,8 @@ export interface Samples {
   maxShearStress: Float64Array;
   peakTorque: Float64Array;
   permanentTwist: Float64Array | undefined;
+  /** Per measured twist, the speeds that explain it, one per sample (NaN where none does). */
+  speedsForMeasured: Float64Array[];
 }
 
 /**
@@ -34,6 +38,7 @@ export function monteCarlo(c: Case, inputs: readonly UncertainInput[], engine: E
     maxShearStress: new Float64Array(samples),
     peakTorque: new Float64Array(samples),
     permanentTwist: undefined,
+    speedsForMeasured: [],
   };
   for (let i = 0; i < samples; i++) {
     let k = c;
@@ -49,6 +54,10 @@ export function monteCarlo(c: Case, inputs: readonly UncertainInput[], engine: E
       out.permanentTwist ??= new Float64Array(samples);
       out.permanentTwist[i] = m.permanentTwist;
     }
+    m.speedsForMeasured?.forEach((w, k) => {
+      out.speedsForMeasured[k] ??= new Float64Array(samples);
+      out.speedsForMeasured[k][i] = w ?? NaN;
+    });
   }
   return out;
 }

@@ -30,6 +30,12 @@ export interface Uncertainty {
   };
   /** Largest effect first. */
   sensitivity: Swing[];
+  /**
+   * For each measured permanent twist: the 5–95 % interval of the speeds at the stop that explain it
+   * (over the samples where some speed does), whether the recorded speed lies inside, and the share
+   * of samples in which no speed explains it.
+   */
+  observed: { between: [string, string]; speedInterval: [number, number] | null; recordedInside: boolean; unexplainedShare: number }[];
   /** Raw yield-ratio samples, for the report's histogram. */
   yieldRatioSamples: Float64Array;
 }
@@ -58,6 +64,17 @@ export function runUncertainty(c: Case, engine: Engine, opts: UncertaintyOptions
       ...(s.permanentTwist ? { permanentTwist: p5p50p95(s.permanentTwist) } : {}),
     },
     sensitivity: sensitivity(c, inputs, engine),
+    observed: c.observed.permanentTwist.map((m, k) => {
+      const all = s.speedsForMeasured[k] ?? new Float64Array(0);
+      const found = all.filter((w) => !Number.isNaN(w));
+      const interval: [number, number] | null = found.length > 0 ? [p5p50p95(found)[0], p5p50p95(found)[2]] : null;
+      return {
+        between: m.between,
+        speedInterval: interval,
+        recordedInside: interval !== null && c.speed >= interval[0] && c.speed <= interval[1],
+        unexplainedShare: all.length > 0 ? 1 - found.length / all.length : 1,
+      };
+    }),
     yieldRatioSamples: s.yieldRatio,
   };
 }

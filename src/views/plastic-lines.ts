@@ -55,6 +55,10 @@ export function plasticLines(r: Results): string[] {
 
 /** The speed band in words: "420 rpm ± 10 % (default band: the case states no tolerance on speed)". */
 export function bandText(f: TwistFinding, u: Units): string {
+  if (f.band.basis === 'monte-carlo') {
+    const [lo, hi] = f.speedRange;
+    return `${show(f.recordedSpeed, 'speed', u, 4)}, judged against the speeds that explain the measured twist over every stated tolerance (5–95 %: ${lo === undefined ? '?' : show(lo, 'speed', u, 4)} to ${hi === undefined ? '?' : show(hi, 'speed', u, 4)})`;
+  }
   const half = (f.band.high - f.band.low) / 2;
   const pct = f.recordedSpeed > 0 ? (100 * half) / f.recordedSpeed : 0;
   const spread = f.band.basis === 'default' ? `± ${sig(pct, 2)} % (default band: the case states no tolerance on speed)` : `± ${show(half, 'speed', u)} (stated in the case)`;

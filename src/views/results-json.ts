@@ -82,6 +82,12 @@ function uncertaintyJson(u: Uncertainty): Record<string, unknown> {
       peak_torque_Nm: u.percentiles.peakTorque,
       permanent_twist_rad: u.percentiles.permanentTwist ?? null,
     },
-    sensitivity: u.sensitivity.map((s) => ({ input: s.input, low: s.low, high: s.high })),
+    sensitivity: u.sensitivity.map((s) => ({
+      input: s.input,
+      low: s.low,
+      high: s.high,
+      ...(s.twistLow !== undefined ? { permanent_twist_low_rad: s.twistLow, permanent_twist_high_rad: s.twistHigh } : {}),
+    })),
+    observed: u.observed.map((o) => ({ between: o.between, speed_interval_rad_s: o.speedInterval, recorded_inside: o.recordedInside, unexplained_share: o.unexplainedShare })),
   };
 }

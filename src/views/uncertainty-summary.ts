@@ -7,6 +7,8 @@ export function inputName(path: string): string {
   if (m) return `${m[2]} of shaft segment ${Number(m[1]) + 1}`;
   m = /^materials\.(.+)\.(\w+)$/.exec(path);
   if (m) return `${m[2].replace(/_/g, ' ')} of ${m[1]}`;
+  m = /^observed\.permanent_twist\[(\d+)\]\.angle$/.exec(path);
+  if (m) return `measured twist ${Number(m[1]) + 1}`;
   m = /^stations\[(\d+)\]\.parts\[(\d+)\]\.(\w+)$/.exec(path);
   if (m) return `${m[3].replace(/_/g, ' ')} of part ${Number(m[2]) + 1} at station ${Number(m[1]) + 1}`;
   return path.replace(/_/g, ' ');
@@ -34,6 +36,16 @@ export function renderUncertaintyLines(r: Results): string[] {
     `  peak torque      ${show(t5, 'torque', units)} to ${show(t95, 'torque', units)}`,
     `  chance of yield  ${sig(100 * u.yieldProbability, 3)} %`,
   ];
+  const pt = u.percentiles.permanentTwist;
+  if (pt && pt[2] > 0) out.splice(4, 0, `  permanent twist  ${show(pt[1], 'angle', units)} (5–95 %: ${show(pt[0], 'angle', units)} to ${show(pt[2], 'angle', units)})`);
+  for (const o of u.observed) {
+    const [a, b] = o.between;
+    out.push(
+      o.speedInterval
+        ? `  twist "${a}"–"${b}" is explained by a stop from ${show(o.speedInterval[0], 'speed', units, 4)} to ${show(o.speedInterval[1], 'speed', units, 4)} (5–95 %); the recorded speed lies ${o.recordedInside ? 'inside' : 'outside'} it`
+        : `  twist "${a}"–"${b}": no speed explains it in any sample`,
+    );
+  }
   if (u.sensitivity.length > 0) {
     out.push('  inputs by effect on the yield ratio:');
     for (const s of u.sensitivity) out.push(`    ${inputName(s.input).padEnd(36)} ${sig(s.low)} to ${sig(s.high)}`);
