@@ -2,7 +2,8 @@ import { LineCounter, parseDocument } from 'yaml';
 import type { Material } from '../materials/material.ts';
 import { CaseError, type CaseProblem } from './case-error.ts';
 import { CaseReader } from './case-reader.ts';
-import type { Analysis, Case, CaseMeta, YieldCriterion } from './case.ts';
+import type { Case, CaseMeta } from './case.ts';
+import { readAnalysis } from './read-analysis.ts';
 import { readCaseMaterials } from './read-materials.ts';
 import { readShaft } from './read-shaft.ts';
 import { readObserved } from './read-observed.ts';
@@ -11,7 +12,6 @@ import { readStations } from './read-stations.ts';
 /** The top-level keys of a case file. */
 export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis', 'observed'] as const;
 const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'investigator', 'notes'];
-const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
 
 /**
  * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
@@ -49,7 +49,7 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const used: Record<string, Material> = {};
   const shaft = readShaft(r, caseMaterials, used);
   const stations = readStations(r, shaft.length, caseMaterials, used);
-  const analysis = readAnalysis(r);
+  const analysis = readAnalysis(r, stations, stopAt);
   const observed = readObserved(r, stations);
 
   if (stopAt !== undefined && stations.length > 0 && !stations.some((s) => s.name === stopAt)) {
@@ -88,10 +88,4 @@ function readMeta(r: CaseReader): CaseMeta {
     r.fail('E_TYPE', ['case', 'occurred'], `"${meta.occurred}" is not an ISO date; give a date such as "2026-03-14" or "2026-03-14T06:40"`);
   }
   return meta;
-}
-
-function readAnalysis(r: CaseReader): Analysis {
-  r.map(['analysis'], ['criterion']);
-  const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
-  return { criterion };
 }
