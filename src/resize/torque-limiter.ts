@@ -34,6 +34,8 @@ export interface LimiterOption {
   sweep: LimiterSlip[];
 }
 
+const SWEEP_POINTS = 60;
+
 /**
  * The torque-limiter option. Place: `analysis.limiter_at`, or else the loaded station farthest
  * from the stop on the governing side (between the drive and the shaft, so the whole run of that
@@ -73,8 +75,10 @@ export function torqueLimiter(c: Case, r: Results, running: RunningTorque | unde
       return inRun ? (p.yieldRatio * slip.peakTorque) / sideResult.peakTorque : p.yieldRatio;
     }),
   );
-  const top = Math.max(sideResult.peakTorque, max, min ?? 0) * 1.15;
-  const sweep = Array.from({ length: 61 }, (_, i) => limiterSlip(r, place, (top * (i + 1)) / 61));
+  // Settings spaced evenly on a log scale, from well below the window to past the unlimited peak.
+  const low = Math.min(max, min ?? max) / 6;
+  const top = Math.max(sideResult.peakTorque, max, min ?? 0) * 1.3;
+  const sweep = Array.from({ length: SWEEP_POINTS + 1 }, (_, i) => limiterSlip(r, place, low * (top / low) ** (i / SWEEP_POINTS)));
   return {
     station,
     side,
