@@ -33,8 +33,7 @@ export function scaleSideSentence(z: ResizeResult): string {
   const sizes = o.segments.map((g, i) => `${segName(g)} Ø${showDiameter(g.diameter, u)} → ${showDiameter(o.diameters[i], u)} (stock ${showDiameter(o.stockDiameters[i], u)})`).join('; ');
   const head = `Scale side ${o.side}: every segment of the side by s = ${sig(o.presentYieldRatio)} × ${sig(z.designFactor)} = ${sig(o.s, 4)}, bores with them (stress falls as 1/s in the energy method): ${sizes}.`;
   const rerun = `Rerun: side ${o.side}'s yield ratio ${sig(sideYieldRatio(o.rerun, o.side), 4)} at the exact sizes, ${sig(sideYieldRatio(o.stockRerun, o.side), 4)} at the stock sizes; peak torque ${show(o.stockRerun.sides.find((s) => s.side === o.side)!.peakTorque, 'torque', u)}.`;
-  const others = o.stockRerun.sides.filter((s) => s.side !== o.side && Math.max(...s.pieces.map((p) => p.yieldRatio)) * z.designFactor > 1);
-  const otherWords = others.map((s) => ` Side ${s.side} is then at a yield ratio of ${sig(Math.max(...s.pieces.map((p) => p.yieldRatio)))}, past the factor: it needs its own remedy.`).join('');
+  const otherWords = otherSidesWords(z, o.stockRerun, o.side);
   if (!o.needed) return `${head} ${rerun} The present shaft already keeps the factor (s ≤ 1): no larger shaft is needed for a repeat of this incident; do not make it smaller on this basis alone.${otherWords}`;
   const verdict = o.practical
     ? `s is within ${sig(o.maxScale)} (analysis.max_scale), so the new diameters may still fit; check them against the bearings and hubs.`
@@ -54,7 +53,7 @@ export function criticalSegmentSentence(z: ResizeResult): string {
     return `${name} already keeps the factor (yield ratio ${sig(o.presentYieldRatio)}); the smallest diameter that would is Ø${showDiameter(o.diameter!, u)}. ${stock} Do not make it smaller on this basis alone.`;
   }
   const warn = sideYieldRatio(o.stockRerun!, o.side) * z.designFactor > 1 + 1e-9 ? ' At the stock size the stiffer segment pushes the side just past the factor: take the next size down and check, or accept the small excess knowingly.' : '';
-  return `Resize ${name} only: the smallest diameter that keeps every segment of side ${o.side} within the factor is Ø${showDiameter(o.diameter!, u)}. ${stock}${warn}`;
+  return `Resize ${name} only: the smallest diameter that keeps every segment of side ${o.side} within the factor is Ø${showDiameter(o.diameter!, u)}. ${stock}${warn}${otherSidesWords(z, o.stockRerun!, o.side)}`;
 }
 
 export function materialsSentence(z: ResizeResult): string {
@@ -108,6 +107,14 @@ export function keySentences(z: ResizeResult, k: KeyFuse): string[] {
   out.push(...k.notes);
   out.push('Caution: a key is a poor and unpredictable fuse. Fit, fretting, wear and the hub\'s grip change the torque it fails at, a sheared key can wedge and keep driving, and the keyway is damaged either way; use a torque limiter to protect the shaft.');
   return out;
+}
+
+/** " Side B is then at a yield ratio of 5.21, past the factor: …" for each other side a change leaves past N. */
+function otherSidesWords(z: ResizeResult, rerun: ResizeResult['results'], side: string): string {
+  return rerun.sides
+    .filter((s) => s.side !== side && sideYieldRatio(rerun, s.side) * z.designFactor > 1 + 1e-9)
+    .map((s) => ` Side ${s.side} is then at a yield ratio of ${sig(sideYieldRatio(rerun, s.side))}, past the factor: it needs its own remedy.`)
+    .join('');
 }
 
 function describeRunPiece(w: ResizeResult['limiter']['weakest'], u: Case['units']): string {
