@@ -2,7 +2,7 @@ import type { ResizeResult } from '../resize/resize-result.ts';
 import { sideOf, sideYieldRatio } from '../resize/side-ratio.ts';
 import type { StiffnessChange } from '../resize/stiffness-change.ts';
 import { show, sig } from './display-units.ts';
-import { runningWords } from './resize-words.ts';
+import { runningWords, segName } from './resize-words.ts';
 import { showDiameter } from './show-diameter.ts';
 
 /** One option as a row of the options table; every cell is text. */
@@ -61,7 +61,7 @@ export function optionRows(z: ResizeResult): OptionRow[] {
   });
 
   const k = z.criticalSegment;
-  const seg = k.segment.label ? `"${k.segment.label}"` : `segment ${k.segment.index + 1}`;
+  const seg = segName(k.segment);
   rows.push(
     k.stockRerun
       ? {

@@ -3,14 +3,7 @@ import { show, sig } from './display-units.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from './resize-rows.ts';
 import { criticalSegmentSentence, factorSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from './resize-words.ts';
 import { verdictSentence } from './summary.ts';
-
-/** Lays out rows of cells as a plain-text table with a rule under the headings. */
-export function textTable(rows: readonly (readonly string[])[]): string[] {
-  const widths = rows[0].map((_, i) => Math.max(...rows.map((r) => r[i].length)));
-  const lines = rows.map((r) => r.map((c, i) => c.padEnd(widths[i])).join('  ').trimEnd());
-  lines.splice(1, 0, widths.map((w) => '-'.repeat(w)).join('  '));
-  return lines;
-}
+import { textTable } from './text-table.ts';
 
 /** The terminal output of `shaftcase resize`: the options table, then each option in words. */
 export function renderResize(z: ResizeResult): string {

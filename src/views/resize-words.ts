@@ -10,7 +10,8 @@ import { describePiece } from './summary.ts';
 // The sentences of the resize output, shared by the terminal table, the JSON's reasons and the
 // report section, so all three say the same thing. Every number comes from the ResizeResult.
 
-const segName = (s: { label?: string; index: number }) => (s.label ? `"${s.label}"` : `segment ${s.index + 1}`);
+/** A segment as the output names it: its label in quotes, or "segment 3". */
+export const segName = (s: { label?: string; index: number }) => (s.label ? `"${s.label}"` : `segment ${s.index + 1}`);
 
 /** "0.667" — the yield ratio a replacement may reach at design factor N. */
 export function allowedRatio(z: ResizeResult): string {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { CaseError } from '../../src/case/case-error.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
+import { lineOf, problems } from '../helpers/case-problems.ts';
 import { caseText, type Layout } from '../helpers/layout.ts';
 
 const layout = (analysis?: string): Layout => ({
@@ -10,17 +10,6 @@ const layout = (analysis?: string): Layout => ({
   stop: 'jam',
   analysis,
 });
-
-function problems(text: string): string {
-  try {
-    parseCase(text, 'case.yaml');
-  } catch (e) {
-    if (e instanceof CaseError) return e.message;
-    throw e;
-  }
-  throw new Error('expected a CaseError');
-}
-const lineOf = (text: string, needle: string) => text.split('\n').findIndex((l) => l.includes(needle)) + 1;
 
 describe('analysis: the factors and the limiter\'s place', () => {
   it('defaults to N = 1.5, a service factor of 1.5 and a largest scale of 1.3', () => {

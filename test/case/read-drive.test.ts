@@ -1,21 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { CaseError } from '../../src/case/case-error.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
+import { lineOf, problems } from '../helpers/case-problems.ts';
 import { caseText } from '../helpers/layout.ts';
 
 const withDrive = (drive: string) =>
   caseText({ rpm: 300, segments: [[500, 50, 0]], stations: [['drive', 0, 1, `    drive: ${drive}`], ['jam', 500, 0]], stop: 'jam' });
-
-function problems(text: string): string {
-  try {
-    parseCase(text, 'case.yaml');
-  } catch (e) {
-    if (e instanceof CaseError) return e.message;
-    throw e;
-  }
-  throw new Error('expected a CaseError');
-}
-const lineOf = (text: string, needle: string) => text.split('\n').findIndex((l) => l.includes(needle)) + 1;
 
 describe('a station\'s drive: power, running_torque, speed_ratio', () => {
   it('reads the power, the running torque and the speed ratio in SI', () => {

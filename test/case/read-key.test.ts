@@ -1,20 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { CaseError } from '../../src/case/case-error.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
+import { lineOf, problems } from '../helpers/case-problems.ts';
 import { caseText } from '../helpers/layout.ts';
 
 const withKey = (key: string) => caseText({ rpm: 300, segments: [[500, 40, 0]], stations: [['hub', 0, 1, `    key: ${key}`], ['jam', 500, 0]], stop: 'jam' });
-
-function problems(text: string): string {
-  try {
-    parseCase(text, 'case.yaml');
-  } catch (e) {
-    if (e instanceof CaseError) return e.message;
-    throw e;
-  }
-  throw new Error('expected a CaseError');
-}
-const lineOf = (text: string, needle: string) => text.split('\n').findIndex((l) => l.includes(needle)) + 1;
 
 describe('a station\'s key: width, height, length, material, hub_depth', () => {
   it('reads the key in SI and takes its material into the case', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { CaseError } from '../../src/case/case-error.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
+import { lineOf, problems } from '../helpers/case-problems.ts';
 
 const text = (rated: string) => `case: { id: W }
 speed: 3000 rpm
@@ -25,14 +25,8 @@ describe('a part\'s rated_speed', () => {
   });
 
   it('a rated speed without a unit is reported with its line', () => {
-    let msg = '';
     const t = text('4400');
-    const line = t.split('\n').findIndex((l) => l.includes('rated_speed')) + 1;
-    try {
-      parseCase(t, 'case.yaml');
-    } catch (e) {
-      if (e instanceof CaseError) msg = e.message;
-    }
-    expect(msg).toMatch(new RegExp(`case\\.yaml:${line}:\\d+ stations\\[1\\]\\.parts\\[0\\]\\.rated_speed: "4400" has no unit`));
+    const line = lineOf(t, 'rated_speed');
+    expect(problems(t)).toMatch(new RegExp(`case\\.yaml:${line}:\\d+ stations\\[1\\]\\.parts\\[0\\]\\.rated_speed: "4400" has no unit`));
   });
 });

@@ -3,6 +3,7 @@ import type { ResizeResult } from '../../resize/resize-result.ts';
 import { sideYieldRatio } from '../../resize/side-ratio.ts';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, sig, unitLabel } from '../../views/display-units.ts';
+import { segName } from '../../views/resize-words.ts';
 import { plotSvg, type Figure } from './plot-svg.ts';
 
 /**
@@ -14,7 +15,7 @@ export function yieldRatioAgainstDiameterFigure(results: Results, resize: Resize
   const u = results.case.units;
   const k = resize.criticalSegment;
   const d = (m: number) => inDisplay(m, 'length', u);
-  const seg = k.segment.label ? `"${k.segment.label}"` : `segment ${k.segment.index + 1}`;
+  const seg = segName(k.segment);
   const sidePoints = k.sweep.map((p) => ({ x: d(p.diameter), y: p.sideYieldRatio }));
   const ownPoints = k.sweep.map((p) => ({ x: d(p.diameter), y: p.segmentYieldRatio }));
   const ys = [...sidePoints, ...ownPoints].map((p) => p.y).concat(1 / resize.designFactor);
