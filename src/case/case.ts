@@ -66,6 +66,40 @@ export interface Station {
   /** Position, m. */
   at: number;
   parts: Part[];
+  /** What drives the shaft at this station in normal running (`drive:`), where the case says. */
+  drive?: Drive;
+  /** The key that holds this station's hub on the shaft (`key:`), where the case gives one. */
+  key?: ShaftKey;
+}
+
+/**
+ * The drive at a station in normal running. Minimal form read by src/case/read-drive.ts; the
+ * dynamics model extends it (rotor inertia, torque curve, belt).
+ */
+export interface Drive {
+  /** Power delivered to the shaft in normal running, W. */
+  power?: number;
+  /** Running torque at shaft speed, N·m. */
+  runningTorque?: number;
+  /** The drive's (motor's) speed over the shaft's, as for a part behind a belt or gears. */
+  speedRatio?: number;
+}
+
+/** A parallel key (square or rectangular) between a hub and the shaft (Shigley 9th ed. Sec. 7-7). */
+export interface ShaftKey {
+  /** Width w, m (across the shaft). */
+  width: number;
+  /** Height h, m (radial). */
+  height: number;
+  /** Engaged length l, m (along the shaft). */
+  length: number;
+  /** Material key into `Case.materials`; it has a yield strength. */
+  material: string;
+  /**
+   * Radial height of the key that bears on the hub, m (the key's projection above the shaft, h − t1
+   * for a DIN 6885 keyway). Absent: half the key's height bears on each side (the h/2 rule).
+   */
+  hubDepth?: number;
 }
 
 export type PartShape = 'disc' | 'inertia' | 'mass';
@@ -83,6 +117,8 @@ export interface Part {
   dimensions: Record<string, number>;
   /** Material key, where the part's density came from a material. */
   material?: string;
+  /** The highest speed marked on the part (abrasive or cutting wheel), rad/s of the part itself. */
+  ratedSpeed?: number;
 }
 
 export type YieldCriterion = 'distortion-energy' | 'max-shear';
@@ -104,6 +140,14 @@ export interface Analysis {
     /** Coefficient of variation of material strengths, fraction (default 0.07). */
     strengthScatter: number;
   };
+  /** Design factor N on shear yield a replacement must keep under a repeat of the incident; default 1.5. */
+  designFactor: number;
+  /** Service factor on the running torque for a torque limiter's lowest setting; default 1.5. */
+  serviceFactor: number;
+  /** Largest scale of the shaft's diameters taken as practical (bearings, hubs); default 1.3. */
+  maxScale: number;
+  /** Station where a torque limiter would sit; absent: the rule in src/resize/torque-limiter.ts. */
+  limiterAt?: string;
 }
 
 /** What the investigator saw after the incident (`observed:` in the case file). */

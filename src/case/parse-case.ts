@@ -2,7 +2,8 @@ import { LineCounter, parseDocument } from 'yaml';
 import type { Material } from '../materials/material.ts';
 import { CaseError, type CaseProblem } from './case-error.ts';
 import { CaseReader } from './case-reader.ts';
-import type { Analysis, Case, CaseMeta, Hardening, YieldCriterion } from './case.ts';
+import type { Case, CaseMeta } from './case.ts';
+import { readAnalysis } from './read-analysis.ts';
 import { readCaseMaterials } from './read-materials.ts';
 import { readShaft } from './read-shaft.ts';
 import { readObserved } from './read-observed.ts';
@@ -11,8 +12,6 @@ import { readStations } from './read-stations.ts';
 /** The top-level keys of a case file. */
 export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis', 'observed'] as const;
 const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'investigator', 'notes'];
-const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
-const HARDENING: Hardening[] = ['none', 'linear'];
 
 /**
  * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
@@ -51,7 +50,7 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const shaft = readShaft(r, caseMaterials, used);
   const stations = readStations(r, shaft.length, caseMaterials, used);
   const observed = readObserved(r, stations);
-  const analysis = readAnalysis(r);
+  const analysis = readAnalysis(r, stations, stopAt);
 
   if (stopAt !== undefined && stations.length > 0 && !stations.some((s) => s.name === stopAt)) {
     r.fail('E_REFERENCE', ['stop', 'at'], `no station is named "${stopAt}"; give one of ${stations.map((s) => `"${s.name}"`).join(', ')}`);
@@ -89,18 +88,4 @@ function readMeta(r: CaseReader): CaseMeta {
     r.fail('E_TYPE', ['case', 'occurred'], `"${meta.occurred}" is not an ISO date; give a date such as "2026-03-14" or "2026-03-14T06:40"`);
   }
   return meta;
-}
-
-/** Default coefficient of variation of strengths: a stated assumption (see README, "How sure"). */
-export const DEFAULT_STRENGTH_SCATTER = 0.07;
-
-function readAnalysis(r: CaseReader): Analysis {
-  r.map(['analysis'], ['criterion', 'hardening', 'samples', 'seed', 'strength_scatter']);
-  const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
-  const hardening = (r.string(['analysis', 'hardening'], { allowed: HARDENING }) ?? 'none') as Hardening;
-  const samples = r.number(['analysis', 'samples'], { example: 'a whole number such as 10000', integer: true, min: 1 }) ?? 10_000;
-  const seed = r.number(['analysis', 'seed'], { example: 'a whole number such as 42', integer: true, min: 0 }) ?? 1;
-  const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, example: 'a coefficient of variation such as "7 %"' });
-  const wanted = scatter !== undefined || Object.keys(r.tolerances).length > 0;
-  return { criterion, hardening, uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER } };
 }

@@ -2,10 +2,12 @@ import { discInertia, massInertia } from '../physics/inertia.ts';
 import type { Material } from '../materials/material.ts';
 import type { CaseReader } from './case-reader.ts';
 import type { Part, PartShape, Station } from './case.ts';
+import { readDrive } from './read-drive.ts';
+import { readKey } from './read-key.ts';
 import { resolveMaterial } from './read-materials.ts';
 
-const STATION_KEYS = ['name', 'at', 'parts'];
-const COMMON_PART_KEYS = ['shape', 'name', 'count', 'speed_ratio'];
+const STATION_KEYS = ['name', 'at', 'parts', 'drive', 'key'];
+const COMMON_PART_KEYS = ['shape', 'name', 'count', 'speed_ratio', 'rated_speed'];
 const SHAPE_KEYS: Record<PartShape, string[]> = {
   disc: ['diameter', 'thickness', 'bore', 'material', 'density'],
   inertia: ['inertia'],
@@ -41,7 +43,14 @@ export function readStations(
       const part = readPart(r, [...path, 'parts', j], caseMaterials, used);
       if (part) parts.push(part);
     }
-    if (name !== undefined && at) stations.push({ name, at: Math.min(at.value, shaftLength), parts });
+    const drive = readDrive(r, [...path, 'drive']);
+    const key = readKey(r, [...path, 'key'], caseMaterials, used);
+    if (name !== undefined && at) {
+      const station: Station = { name, at: Math.min(at.value, shaftLength), parts };
+      if (drive) station.drive = drive;
+      if (key) station.key = key;
+      stations.push(station);
+    }
   }
   return stations;
 }
@@ -56,7 +65,8 @@ function readPart(r: CaseReader, path: (string | number)[], caseMaterials: Recor
   const count = r.number([...path, 'count'], { example: 'a whole number such as 2', integer: true, positive: true }) ?? 1;
   const speedRatio = r.number([...path, 'speed_ratio'], { example: 'the part\'s speed over the shaft\'s, such as 2.5', positive: true }) ?? 1;
   const name = r.string([...path, 'name']) ?? `${shape} ${Number(path[3]) + 1}`;
-  const base = { name, shape, count, speedRatio };
+  const ratedSpeed = r.quantity([...path, 'rated_speed'], 'angular_speed', { positive: true, example: 'the highest speed marked on the wheel, such as "3600 rpm"' });
+  const base = { name, shape, count, speedRatio, ...(ratedSpeed ? { ratedSpeed: ratedSpeed.value } : {}) };
 
   if (shape === 'inertia') {
     const j = r.quantity([...path, 'inertia'], 'inertia', { required: true, positive: true });

@@ -2,6 +2,7 @@ import { Command, CommanderError, InvalidArgumentError } from 'commander';
 import { CaseError } from '../case/case-error.ts';
 import { checkCommand } from './commands/check.ts';
 import { materialsCommand } from './commands/materials.ts';
+import { resizeCommand } from './commands/resize.ts';
 import { version } from './version.ts';
 
 /** Output channel of a command, so tests can run commands without a terminal. */
@@ -17,6 +18,13 @@ function wholeNumber(value: string): number {
 }
 
 const stdio: Io = { out: (t) => process.stdout.write(t), err: (t) => process.stderr.write(t) };
+
+/** Parses `--factor`: a plain number of 1 or more. */
+function designFactor(text: string): number {
+  const n = Number(text);
+  if (!Number.isFinite(n) || n < 1) throw new InvalidArgumentError(`give a design factor of 1 or more, such as 1.5 (not "${text}")`);
+  return n;
+}
 
 /**
  * The one place that prints and decides the exit status: 0 done, 2 the user's mistake (a bad case
@@ -37,6 +45,14 @@ export async function runMain(argv: string[], io: Io = stdio): Promise<number> {
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .action((file: string, opts: { json?: boolean; samples?: number; seed?: number }) => checkCommand(file, opts, io));
+
+  program
+    .command('resize')
+    .description('what goes back in: replacement sizes, another material, a torque limiter, the key as fuse')
+    .argument('<case>', 'a case .yaml file or a case folder')
+    .option('--factor <N>', 'design factor on shear yield in a repeat of the incident (default: the case\'s, else 1.5)', designFactor)
+    .option('--json', 'print the check --json object with resize added, SI units')
+    .action((file: string, opts: { factor?: number; json?: boolean }) => resizeCommand(file, opts, io));
 
   program
     .command('materials')

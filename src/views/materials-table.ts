@@ -1,5 +1,6 @@
 import type { Material } from '../materials/material.ts';
 import { sig } from './display-units.ts';
+import { textTable } from './text-table.ts';
 
 /** The material library as a text table: key, name, G, Sy, Sut, density, basis; sources below. */
 export function renderMaterials(list: readonly Material[]): string {
@@ -16,9 +17,7 @@ export function renderMaterials(list: readonly Material[]): string {
       m.strengthBasis ?? '—',
     ]),
   ];
-  const widths = rows[0].map((_, i) => Math.max(...rows.map((r) => r[i].length)));
-  const lines = rows.map((r) => r.map((c, i) => c.padEnd(widths[i])).join('  ').trimEnd());
-  lines.splice(1, 0, widths.map((w) => '-'.repeat(w)).join('  '));
+  const lines = textTable(rows);
   lines.push('', 'Sources:');
   for (const m of list) lines.push(`  ${m.key}: ${m.source}`);
   lines.push('', 'Strengths marked "minimum" are published minima: a real bar is usually stronger.');

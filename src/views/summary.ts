@@ -16,7 +16,7 @@ export function verdictSentence(r: Results): string {
 }
 
 /** "segment 2 "journal", 120–300 mm, Ø50 mm" */
-export function describePiece(p: PieceResult, units: Results['case']['units']): string {
+export function describePiece(p: Pick<PieceResult, 'piece'>, units: Results['case']['units']): string {
   const seg = p.piece.segment;
   const name = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
   const dia = `Ø${show(seg.diameter, 'length', units)}${seg.bore > 0 ? ` bore ${show(seg.bore, 'length', units)}` : ''}`;

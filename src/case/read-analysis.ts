@@ -1,0 +1,59 @@
+import type { CaseReader } from './case-reader.ts';
+import type { Analysis, Hardening, Station, YieldCriterion } from './case.ts';
+
+const ANALYSIS_KEYS = ['criterion', 'hardening', 'samples', 'seed', 'strength_scatter', 'design_factor', 'service_factor', 'max_scale', 'limiter_at'];
+const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
+const HARDENING: Hardening[] = ['none', 'linear'];
+
+/** Default coefficient of variation of strengths: a stated assumption (see README, "How sure"). */
+export const DEFAULT_STRENGTH_SCATTER = 0.07;
+
+/** Defaults of the engineer's choices; each is stated in the resize output as a choice to confirm. */
+export const ANALYSIS_DEFAULTS = { designFactor: 1.5, serviceFactor: 1.5, maxScale: 1.3 } as const;
+
+/**
+ * The `analysis:` section: the yield criterion, hardening past yield, the Monte Carlo settings and
+ * the factors the resize options use. Read after every other section, so `r.tolerances` is complete.
+ */
+export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt: string | undefined): Analysis {
+  r.map(['analysis'], ANALYSIS_KEYS);
+  const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
+  const hardening = (r.string(['analysis', 'hardening'], { allowed: HARDENING }) ?? 'none') as Hardening;
+  const samples = r.number(['analysis', 'samples'], { example: 'a whole number such as 10000', integer: true, min: 1 }) ?? 10_000;
+  const seed = r.number(['analysis', 'seed'], { example: 'a whole number such as 42', integer: true, min: 0 }) ?? 1;
+  const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, example: 'a coefficient of variation such as "7 %"' });
+  const wanted = scatter !== undefined || Object.keys(r.tolerances).length > 0;
+  const factor = (key: string, example: string) => r.number(['analysis', key], { example, min: 1 });
+  const analysis: Analysis = {
+    criterion,
+    hardening,
+    uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER },
+    designFactor: factor('design_factor', 'a design factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.designFactor,
+    serviceFactor: factor('service_factor', 'a service factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.serviceFactor,
+    maxScale: factor('max_scale', 'the largest practical scale of the diameters, such as 1.3') ?? ANALYSIS_DEFAULTS.maxScale,
+  };
+  const limiterAt = r.string(['analysis', 'limiter_at']);
+  if (limiterAt !== undefined) {
+    const names = stations.map((s) => s.name);
+    if (!names.includes(limiterAt)) {
+      r.fail('E_REFERENCE', ['analysis', 'limiter_at'], `no station is named "${limiterAt}"; give the station where a torque limiter would sit, one of ${names.map((n) => `"${n}"`).join(', ')}`);
+    } else if (limiterAt === stopAt) {
+      r.fail('E_RANGE', ['analysis', 'limiter_at'], `"${limiterAt}" is the station that stopped; a torque limiter sits between the driving parts and the stop, such as at ${names.filter((n) => n !== stopAt).map((n) => `"${n}"`).join(' or ')}`);
+    } else if (!drivesThrough(stations, limiterAt, stopAt)) {
+      r.fail('E_RANGE', ['analysis', 'limiter_at'], `a torque limiter at "${limiterAt}" would carry no torque: no station at or beyond it, on its side of the stop, carries parts; give a station between the driving parts and the stop`);
+    } else {
+      analysis.limiterAt = limiterAt;
+    }
+  }
+  return analysis;
+}
+
+/** Whether parts at or beyond `name` (away from the stop) drive the shaft through that station. */
+function drivesThrough(stations: readonly Station[], name: string, stopAt: string | undefined): boolean {
+  const stop = stations.find((s) => s.name === stopAt);
+  const at = stations.find((s) => s.name === name)!;
+  if (!stop) return true; // the stop's own problem is reported elsewhere
+  const dir = Math.sign(at.at - stop.at);
+  if (dir === 0) return false;
+  return stations.some((s) => s.parts.length > 0 && (s.at - stop.at) * dir >= (at.at - stop.at) * dir - 1e-9);
+}

@@ -1,0 +1,69 @@
+import type { Case } from '../case/case.ts';
+import type { Results } from '../results/results.ts';
+import { runningTorque } from '../results/running-torque.ts';
+import { criticalSegment } from './critical-segment.ts';
+import { guardingRecommendations } from './guarding.ts';
+import { keyFuses } from './key-fuse.ts';
+import { otherMaterials } from './other-materials.ts';
+import { ratedSpeedChecks } from './rated-speed.ts';
+import type { ResizeResult } from './resize-result.ts';
+import { runningCheck } from './running-check.ts';
+import { scaleSide } from './scale-side.ts';
+import { stiffnessChange } from './stiffness-change.ts';
+import { STOCK_SERIES } from './stock-sizes.ts';
+import { torqueLimiter } from './torque-limiter.ts';
+
+export interface ResizeOptions {
+  /** Design factor N on shear yield; default the case's analysis.design_factor. */
+  factor?: number;
+}
+
+/**
+ * The options for what goes back in, side by side: scale the governing side, resize its critical
+ * segment, another material, a torque limiter, the key as a fuse; each checked by rerunning the
+ * changed case through the engine against a repeat of the incident, and under the running torque.
+ * Pure: `results` is analyseCase(c).
+ */
+export function resizeCase(c: Case, results: Results, options: ResizeOptions = {}): ResizeResult {
+  const designFactor = options.factor ?? c.analysis.designFactor;
+  if (!(designFactor >= 1)) throw new RangeError(`resizeCase: a design factor of 1 or more is needed, not ${designFactor}`);
+  const { serviceFactor, maxScale } = c.analysis;
+  const running = runningTorque(c);
+  const side = results.governing.side.side;
+  const effects = (r: Results) => ({ running: runningCheck(r.case, running, designFactor), change: stiffnessChange(results, r, side) });
+
+  const scale = scaleSide(c, results, designFactor, maxScale);
+  const critical = criticalSegment(c, results, designFactor);
+  const limiter = torqueLimiter(c, results, running, designFactor, serviceFactor);
+  const wheels = ratedSpeedChecks(c);
+  const limited = { station: limiter.station, setting: limiter.max, sidePeakTorque: results.sides.find((s) => s.side === limiter.side)!.peakTorque };
+
+  return {
+    results,
+    designFactor,
+    serviceFactor,
+    maxScale,
+    present: { running: runningCheck(c, running, designFactor) },
+    scaleSide: { ...scale, ...effects(scale.stockRerun) },
+    criticalSegment: { ...critical, ...(critical.stockRerun ? effects(critical.stockRerun) : {}) },
+    materials: otherMaterials(c, designFactor).map((m) => ({ ...m, ...effects(m.rerun) })),
+    limiter: { ...limiter, running: runningCheck(c, running, designFactor) },
+    keys: keyFuses(c, results, limited, running),
+    ratedSpeed: wheels,
+    guarding: guardingRecommendations(wheels),
+    stockSeries: STOCK_SERIES[c.units].text,
+    notes: resizeNotes(designFactor, STOCK_SERIES[c.units].text),
+    cautions: results.cautions,
+  };
+}
+
+function resizeNotes(designFactor: number, stockSeries: string): string[] {
+  return [
+    'Every option is checked against a repeat of the recorded incident by rerunning the changed case through the same elastic energy method; its limits (instantaneous stop, several stations on a side) apply to every option.',
+    `The design factor N on shear yield is the engineer's choice (default 1.5, set by analysis.design_factor or --factor; here ${designFactor}); confirm it against the site's rules.`,
+    `The service factor on the running torque (default 1.5) sets a torque limiter's lowest setting. Typical values come from the coupling or limiter maker's tables, which rate the driven machine's load (uniform, moderate shock, heavy shock) and the driver, from about 1 for uniform loads to 2 or more for heavy shock (from memory, verify against the maker's table).`,
+    `Diameters are rounded up to stock sizes (${stockSeries}). A changed diameter means the bearings, hubs, keyways and fits must be rechecked.`,
+    'A stiffer shaft passes more torque in an energy-limited stop (T = √(2E/C) and C falls as 1/d⁴, so T grows as d²): keys, hubs and couplings must be rechecked at the new peak torque.',
+    "Stiffness and natural-frequency changes are the energy method's single-mass estimate √(k/J); the dynamics model replaces them where it is present. The limiter's slip energy and angle are from the energy method.",
+  ];
+}

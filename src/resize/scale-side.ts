@@ -1,0 +1,61 @@
+import type { Case, Segment } from '../case/case.ts';
+import type { SideName } from '../model/shaft-model.ts';
+import { analyseCase } from '../results/analyse-case.ts';
+import type { Results } from '../results/results.ts';
+import { withDiameters } from './change-case.ts';
+import { sideOf, sideSegments } from './side-ratio.ts';
+import { stockSizeUp } from './stock-sizes.ts';
+
+/** Every segment of the governing side scaled by one factor. */
+export interface ScaleSideOption {
+  side: SideName;
+  /** The scale of every diameter (and bore) of the side, s = yield_ratio·N. */
+  s: number;
+  /** The side's present yield ratio. */
+  presentYieldRatio: number;
+  /** s > 1: the present shaft does not keep the factor. */
+  needed: boolean;
+  /** s ≤ the case's max_scale: the new diameters could still fit the bearings and hubs. */
+  practical: boolean;
+  maxScale: number;
+  /** The present segments that are scaled. */
+  segments: Segment[];
+  /** Their new diameters, m, exact. */
+  diameters: number[];
+  /** The same rounded up to stock sizes, m. */
+  stockDiameters: number[];
+  /** analyseCase on the scaled case, exact diameters. */
+  rerun: Results;
+  /** analyseCase on the case with the stock diameters. */
+  stockRerun: Results;
+}
+
+/**
+ * Scales every segment of the side with the highest yield ratio by one factor s, bores with them.
+ * In the elastic energy method the side's compliance falls as 1/s⁴, so its peak torque rises as s²
+ * while each section's stress per torque falls as 1/s³: stress falls as 1/s, and s = yield_ratio·N
+ * brings the side's highest yield ratio to exactly 1/N (REFERENCE 10.10: d scales linearly with N,
+ * derived). Both the exact and the stock-size cases are rerun through the engine.
+ */
+export function scaleSide(c: Case, r: Results, designFactor: number, maxScale: number): ScaleSideOption {
+  const side = r.governing.side.side;
+  const s = r.yieldRatio * designFactor;
+  const indices = sideSegments(sideOf(r, side)).sort((a, b) => a - b);
+  const segments = indices.map((i) => c.shaft.segments.find((g) => g.index === i)!);
+  const diameters = segments.map((g) => g.diameter * s);
+  const stockDiameters = diameters.map((d) => stockSizeUp(d, c.units));
+  const map = (ds: number[]) => new Map(indices.map((i, k) => [i, ds[k]]));
+  return {
+    side,
+    s,
+    presentYieldRatio: r.yieldRatio,
+    needed: s > 1,
+    practical: s <= maxScale,
+    maxScale,
+    segments,
+    diameters,
+    stockDiameters,
+    rerun: analyseCase(withDiameters(c, map(diameters))),
+    stockRerun: analyseCase(withDiameters(c, map(stockDiameters))),
+  };
+}

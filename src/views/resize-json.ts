@@ -1,0 +1,102 @@
+import type { KeyFuse, KeyStress } from '../resize/key-fuse.ts';
+import type { ResizeResult } from '../resize/resize-result.ts';
+import type { RunningCheck } from '../resize/running-check.ts';
+import { sideOf, sideYieldRatio } from '../resize/side-ratio.ts';
+import { resultsToJson } from './results-json.ts';
+import { criticalSegmentSentence, limiterSentences, materialsSentence, scaleSideSentence } from './resize-words.ts';
+
+/** The `resize --json` object: the `check --json` object with `resize` added. SI, units in key names. */
+export function resizeToJson(z: ResizeResult): Record<string, unknown> {
+  return { ...resultsToJson(z.results), resize: resizeJson(z) };
+}
+
+function resizeJson(z: ResizeResult): Record<string, unknown> {
+  const s = z.scaleSide;
+  const k = z.criticalSegment;
+  const l = z.limiter;
+  return {
+    factor: z.designFactor,
+    service_factor: z.serviceFactor,
+    max_scale: z.maxScale,
+    method: 'elastic energy method; each option rerun through the engine',
+    running: runningJson(z.present.running),
+    scale_side: {
+      side: s.side,
+      s: s.s,
+      practical: s.practical,
+      segments: s.segments.map((g) => g.index),
+      diameters_m: s.diameters,
+      stock_diameters_m: s.stockDiameters,
+      yield_ratio: sideYieldRatio(s.rerun, s.side),
+      stock_yield_ratio: sideYieldRatio(s.stockRerun, s.side),
+      stock_peak_torque_Nm: sideOf(s.stockRerun, s.side).peakTorque,
+      stiffness_ratio: s.change.stiffness,
+      frequency_ratio: s.change.frequency,
+      running: runningJson(s.running),
+      reason: scaleSideSentence(z),
+    },
+    critical_segment: {
+      side: k.side,
+      segment: k.segment.index,
+      verdict: k.verdict,
+      diameter_m: k.diameter ?? null,
+      stock_diameter_m: k.stockDiameter ?? null,
+      stock_yield_ratio: k.stockRerun ? sideYieldRatio(k.stockRerun, k.side) : null,
+      running: k.running ? runningJson(k.running) : null,
+      reason: criticalSegmentSentence(z),
+    },
+    materials: z.materials.map((m) => ({
+      key: m.material.key,
+      yield_ratio: m.yieldRatio,
+      keeps_factor: m.keepsFactor,
+      peak_torque_ratio: m.change.peakTorque,
+      strength_basis: m.material.strengthBasis ?? null,
+      running: runningJson(m.running),
+    })),
+    materials_summary: materialsSentence(z),
+    limiter: {
+      at: l.station,
+      side: l.side,
+      min_Nm: l.min ?? null,
+      max_Nm: l.max,
+      window_empty: l.windowEmpty,
+      setting_Nm: l.slip.setting,
+      peak_torque_Nm: l.slip.peakTorque,
+      yield_ratio: l.yieldRatio,
+      slip_energy_J: l.slip.slipEnergy,
+      slip_angle_rad: l.slip.slipAngle,
+      method: l.slip.method,
+      reason: limiterSentences(z).join(' '),
+    },
+    key: z.keys.length > 0 ? keyJson(z.keys[0]) : null,
+    keys: z.keys.map(keyJson),
+    rated_speed: z.ratedSpeed.map((w) => ({ station: w.station, part: w.part, speed_rad_s: w.speed, rated_speed_rad_s: w.ratedSpeed, over: w.over })),
+    guarding: z.guarding.map((g) => `${g.topic}: ${g.text}`),
+    notes: z.notes,
+  };
+}
+
+function runningJson(r: RunningCheck): Record<string, unknown> {
+  return {
+    torque_Nm: r.running?.torque ?? null,
+    source: r.running?.source ?? null,
+    factor_static: r.factorStatic ?? null,
+    factor_with_kt: r.factorWithKt ?? null,
+    keeps_factor: r.keeps ?? null,
+  };
+}
+
+function keyJson(k: KeyFuse): Record<string, unknown> {
+  const stress = (s: KeyStress) => ({ torque_Nm: s.torque, shear_stress_Pa: s.shearStress, bearing_stress_Pa: s.bearingStress, shear_ratio: s.shearRatio, bearing_ratio: s.bearingRatio });
+  return {
+    station: k.station,
+    shaft_diameter_m: k.segment.diameter,
+    ...stress(k.incident),
+    shears_before_shaft_yields: k.shearsBeforeShaftYields,
+    shear_off_torque_Nm: k.shearOffTorque,
+    crush_torque_Nm: k.crushTorque,
+    shaft_yield_torque_Nm: k.shaftYieldTorque,
+    at_limiter: k.atLimiter ? stress(k.atLimiter) : null,
+    at_running: k.atRunning ? { ...stress(k.atRunning), factor: k.atRunning.factor } : null,
+  };
+}

@@ -1,0 +1,123 @@
+import type { Case } from '../case/case.ts';
+import type { KeyFuse } from '../resize/key-fuse.ts';
+import type { ResizeResult } from '../resize/resize-result.ts';
+import { sideYieldRatio } from '../resize/side-ratio.ts';
+import type { RunningCheck } from '../resize/running-check.ts';
+import { show, sig } from './display-units.ts';
+import { showDiameter } from './show-diameter.ts';
+import { describePiece } from './summary.ts';
+
+// The sentences of the resize output, shared by the terminal table, the JSON's reasons and the
+// report section, so all three say the same thing. Every number comes from the ResizeResult.
+
+/** A segment as the output names it: its label in quotes, or "segment 3". */
+export const segName = (s: { label?: string; index: number }) => (s.label ? `"${s.label}"` : `segment ${s.index + 1}`);
+
+/** "0.667" — the yield ratio a replacement may reach at design factor N. */
+export function allowedRatio(z: ResizeResult): string {
+  return sig(1 / z.designFactor);
+}
+
+export function factorSentence(z: ResizeResult): string {
+  return `Design factor N = ${sig(z.designFactor)} on shear yield in a repeat of the incident, so a replacement keeps a yield ratio of ${allowedRatio(z)} or less. N is the engineer's choice: confirm it against the site's rules.`;
+}
+
+export function runningWords(r: RunningCheck, units: Case['units']): string {
+  if (!r.running) return 'unknown: no drive in the case';
+  if (r.factorWithKt === undefined) return `${show(r.running.torque, 'torque', units)}: no shaft between the drive and the stop`;
+  return `${sig(r.factorWithKt)} (${sig(r.factorStatic!)})${r.keeps ? '' : ', below N'}`;
+}
+
+export function scaleSideSentence(z: ResizeResult): string {
+  const o = z.scaleSide;
+  const u = z.results.case.units;
+  const sizes = o.segments.map((g, i) => `${segName(g)} Ø${showDiameter(g.diameter, u)} → ${showDiameter(o.diameters[i], u)} (stock ${showDiameter(o.stockDiameters[i], u)})`).join('; ');
+  const head = `Scale side ${o.side}: every segment of the side by s = ${sig(o.presentYieldRatio)} × ${sig(z.designFactor)} = ${sig(o.s, 4)}, bores with them (stress falls as 1/s in the energy method): ${sizes}.`;
+  const rerun = `Rerun: side ${o.side}'s yield ratio ${sig(sideYieldRatio(o.rerun, o.side), 4)} at the exact sizes, ${sig(sideYieldRatio(o.stockRerun, o.side), 4)} at the stock sizes; peak torque ${show(o.stockRerun.sides.find((s) => s.side === o.side)!.peakTorque, 'torque', u)}.`;
+  const otherWords = otherSidesWords(z, o.stockRerun, o.side);
+  if (!o.needed) return `${head} ${rerun} The present shaft already keeps the factor (s ≤ 1): no larger shaft is needed for a repeat of this incident; do not make it smaller on this basis alone.${otherWords}`;
+  const verdict = o.practical
+    ? `s is within ${sig(o.maxScale)} (analysis.max_scale), so the new diameters may still fit; check them against the bearings and hubs.`
+    : `s is above ${sig(o.maxScale)} (analysis.max_scale): no practical shaft survives a repeat of this incident elastically. The remedy is to limit the torque (see the torque limiter).`;
+  return `${head} ${rerun} ${verdict}${otherWords}`;
+}
+
+export function criticalSegmentSentence(z: ResizeResult): string {
+  const o = z.criticalSegment;
+  const u = z.results.case.units;
+  const name = `${segName(o.segment)} (Ø${showDiameter(o.segment.diameter, u)}${o.segment.kt !== 1 ? `, kt ${o.segment.kt}` : ''})`;
+  if (o.verdict === 'others-critical') {
+    return `No size of ${name} alone keeps side ${o.side} within the factor: at Ø${showDiameter(o.ownDiameter, u)}, where it reaches ${allowedRatio(z)}, the stiffer shaft raises the torque and the rest of the side reaches a yield ratio of ${sig(o.othersAtOwn)}. The other segments then become critical.`;
+  }
+  const stock = `Stock size Ø${showDiameter(o.stockDiameter!, u)}; rerun: side ${o.side}'s yield ratio ${sig(sideYieldRatio(o.stockRerun!, o.side), 4)}.`;
+  if (o.verdict === 'present-keeps') {
+    return `${name} already keeps the factor (yield ratio ${sig(o.presentYieldRatio)}); the smallest diameter that would is Ø${showDiameter(o.diameter!, u)}. ${stock} Do not make it smaller on this basis alone.`;
+  }
+  const warn = sideYieldRatio(o.stockRerun!, o.side) * z.designFactor > 1 + 1e-9 ? ' At the stock size the stiffer segment pushes the side just past the factor: take the next size down and check, or accept the small excess knowingly.' : '';
+  return `Resize ${name} only: the smallest diameter that keeps every segment of side ${o.side} within the factor is Ø${showDiameter(o.diameter!, u)}. ${stock}${warn}${otherSidesWords(z, o.stockRerun!, o.side)}`;
+}
+
+export function materialsSentence(z: ResizeResult): string {
+  const keep = z.materials.filter((m) => m.keepsFactor);
+  if (keep.length === 0) {
+    const best = z.materials[0];
+    return `No library material keeps the factor with the present geometry; the best, ${best.material.key}, reaches a yield ratio of ${sig(best.yieldRatio)}.`;
+  }
+  const typical = keep.some((m) => m.material.strengthBasis === 'typical') ? ' Strengths marked "typical" are mean values, not minima: get the mill certificate before relying on them.' : '';
+  return `With the present geometry these library materials keep the factor (a lower G also lowers the torque): ${keep.map((m) => `${m.material.key} (${sig(m.yieldRatio)})`).join(', ')}.${typical}`;
+}
+
+export function limiterSentences(z: ResizeResult): string[] {
+  const o = z.limiter;
+  const u = z.results.case.units;
+  const w = o.weakest;
+  const out = [`Place: ${o.placement}.`];
+  const upper = `the shaft's allowable torque ${show(o.max, 'torque', u)} (${describeRunPiece(w, u)} reaches shear yield at ${show(w.yieldTorque, 'torque', u)}, over N = ${sig(o.designFactor)})`;
+  if (o.min === undefined) {
+    out.push(`Window: up to ${upper}. The lower end is unknown: the case gives no running torque. Add drive: { power: "22 kW" } or drive: { running_torque: "450 N*m" } to the driving station.`);
+  } else if (o.windowEmpty) {
+    out.push(`THE WINDOW IS EMPTY: the running torque ${show(o.runningTorque!.torque, 'torque', u)} × service factor ${sig(o.serviceFactor)} = ${show(o.min, 'torque', u)} exceeds ${upper}. No limiter setting both runs the machine and protects this shaft at this factor: the shaft's weakest section must be made stronger first.`);
+  } else {
+    out.push(`Window: from the running torque ${show(o.runningTorque!.torque, 'torque', u)} (${o.runningTorque!.source}) × service factor ${sig(o.serviceFactor)} = ${show(o.min, 'torque', u)} up to ${upper}.`);
+  }
+  const s = o.slip;
+  out.push(
+    s.slipEnergy > 0
+      ? `In a repeat incident at ${show(s.setting, 'torque', u)} the peak torque is held to the setting (from ${show(s.unlimitedTorque, 'torque', u)}); the limiter slips through ${show(s.slipAngle, 'angle', u)} and dissipates ${show(s.slipEnergy, 'energy', u)} of the ${show(s.energy, 'energy', u)} behind it (${s.method}; the dynamics model replaces this where present).`
+      : `At ${show(s.setting, 'torque', u)} the limiter would not slip in a repeat of this incident: the peak torque ${show(s.unlimitedTorque, 'torque', u)} stays below the setting.`,
+  );
+  if (o.unlimitedStations.length > 0) out.push(`The parts at ${o.unlimitedStations.map((n) => `"${n}"`).join(', ')} lie between the limiter and the stop and still drive the shaft unlimited.`);
+  for (const s2 of o.otherSides) if (s2.yieldRatio * z.designFactor > 1) out.push(`Side ${s2.side} (yield ratio ${sig(s2.yieldRatio)}) is not protected by this limiter; it needs its own.`);
+  return out;
+}
+
+export function keySentences(z: ResizeResult, k: KeyFuse): string[] {
+  const u = z.results.case.units;
+  const dims = `${showDiameter(k.key.width, u)} × ${showDiameter(k.key.height, u)} × ${showDiameter(k.key.length, u)}`.replace(/ (mm|in) ×/g, ' ×');
+  const out = [`Key at "${k.station}": ${dims}, ${k.material.key}, in ${segName(k.segment)} Ø${showDiameter(k.segment.diameter, u)}; bearing ${k.key.hubDepth === undefined ? 'on half its height (h/2)' : `on ${showDiameter(k.key.hubDepth, u)} in the hub`}.`];
+  const at = (label: string, s: KeyFuse['incident']) =>
+    `${label} ${show(s.torque, 'torque', u)}: shear ${show(s.shearStress, 'stress', u)} (${sig(s.shearRatio)} × its shear yield), bearing ${show(s.bearingStress, 'stress', u)} (${sig(s.bearingRatio)} × its yield).`;
+  out.push(at('Under the incident torque', k.incident));
+  if (k.atLimiter) out.push(at("Under the limiter's setting", k.atLimiter));
+  if (k.atRunning) out.push(`Under the running torque ${show(k.atRunning.torque, 'torque', u)} it keeps a factor of ${sig(k.atRunning.factor)}.`);
+  out.push(
+    k.shearsBeforeShaftYields
+      ? `It shears off at about ${show(k.shearOffTorque, 'torque', u)} (${k.shearOffBasis}), before the shaft yields at ${show(k.shaftYieldTorque, 'torque', u)}.`
+      : `It shears off only at about ${show(k.shearOffTorque, 'torque', u)} (${k.shearOffBasis}); the shaft yields first, at ${show(k.shaftYieldTorque, 'torque', u)}.`,
+  );
+  out.push(...k.notes);
+  out.push('Caution: a key is a poor and unpredictable fuse. Fit, fretting, wear and the hub\'s grip change the torque it fails at, a sheared key can wedge and keep driving, and the keyway is damaged either way; use a torque limiter to protect the shaft.');
+  return out;
+}
+
+/** " Side B is then at a yield ratio of 5.21, past the factor: …" for each other side a change leaves past N. */
+function otherSidesWords(z: ResizeResult, rerun: ResizeResult['results'], side: string): string {
+  return rerun.sides
+    .filter((s) => s.side !== side && sideYieldRatio(rerun, s.side) * z.designFactor > 1 + 1e-9)
+    .map((s) => ` Side ${s.side} is then at a yield ratio of ${sig(sideYieldRatio(rerun, s.side))}, past the factor: it needs its own remedy.`)
+    .join('');
+}
+
+function describeRunPiece(w: ResizeResult['limiter']['weakest'], u: Case['units']): string {
+  return describePiece(w, u) + (w.piece.segment.kt !== 1 ? ` with kt ${w.piece.segment.kt}` : '');
+}

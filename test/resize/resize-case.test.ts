@@ -1,0 +1,56 @@
+import { readdirSync, readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { parseCase } from '../../src/case/parse-case.ts';
+import { analyseCase } from '../../src/results/analyse-case.ts';
+import { resizeCase } from '../../src/resize/resize-case.ts';
+import { sideYieldRatio } from '../../src/resize/side-ratio.ts';
+import { rel } from '../helpers/layout.ts';
+
+const dir = new URL('../../sample-cases/', import.meta.url);
+const samples = readdirSync(dir).filter((f) => f.endsWith('.yaml'));
+const load = (f: string) => {
+  const c = parseCase(readFileSync(new URL(f, dir), 'utf8'), f);
+  return { c, r: analyseCase(c) };
+};
+
+describe('resizeCase on every sample case', () => {
+  it.each(samples)('%s: every option is there, and the scaled side\'s rerun confirms 1/N', (f) => {
+    const { c, r } = load(f);
+    const z = resizeCase(c, r);
+    expect(z.designFactor).toBe(1.5);
+    expect(z.scaleSide.s).toBe(r.yieldRatio * 1.5);
+    expect(rel(sideYieldRatio(z.scaleSide.rerun, z.scaleSide.side), 1 / 1.5)).toBeLessThan(1e-12);
+    expect(z.materials.length).toBeGreaterThan(5);
+    expect(z.limiter.max).toBeGreaterThan(0);
+    expect(z.guarding.length).toBeGreaterThanOrEqual(5);
+    expect(z.cautions).toBe(r.cautions);
+  });
+
+  it('the granulator and the screw conveyor carry a drive and a key; the edger has neither', () => {
+    const gr = load('granulator-tramp-metal.yaml');
+    const sc = load('screw-conveyor-jam-us.yaml');
+    const ed = load('edger-arbor-two-sides.yaml');
+    expect(resizeCase(gr.c, gr.r).keys.map((k) => k.station)).toEqual(['drive sheave']);
+    expect(resizeCase(sc.c, sc.r).limiter.min).toBeDefined();
+    const edger = resizeCase(ed.c, ed.r);
+    expect(edger.keys).toEqual([]);
+    expect(edger.limiter.min).toBeUndefined();
+  });
+
+  it('--factor overrides the case\'s design factor; a factor below 1 is a bug to call with', () => {
+    const { c, r } = load('screw-conveyor-jam-us.yaml');
+    const z = resizeCase(c, r, { factor: 2 });
+    expect(z.designFactor).toBe(2);
+    expect(z.scaleSide.s).toBe(r.yieldRatio * 2);
+    expect(() => resizeCase(c, r, { factor: 0.5 })).toThrow(/design factor of 1 or more/);
+  });
+
+  it('does not change the case or the results it is given', () => {
+    const { c, r } = load('granulator-tramp-metal.yaml');
+    const before = JSON.stringify(c);
+    const ratio = r.yieldRatio;
+    resizeCase(c, r);
+    expect(JSON.stringify(c)).toBe(before);
+    expect(r.yieldRatio).toBe(ratio);
+  });
+});

@@ -1,0 +1,43 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { parseCase } from '../../src/case/parse-case.ts';
+import { analyseCase } from '../../src/results/analyse-case.ts';
+import { resizeCase } from '../../src/resize/resize-case.ts';
+import { resizeToJson } from '../../src/views/resize-json.ts';
+import { resultsToJson } from '../../src/views/results-json.ts';
+
+const json = (f: string) => {
+  const c = parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8'));
+  const r = analyseCase(c);
+  return { r, j: JSON.parse(JSON.stringify(resizeToJson(resizeCase(c, r)))) };
+};
+
+describe('resize --json', () => {
+  it('is the check --json object with resize added, the contract keys named as in the issue', () => {
+    const { r, j } = json('granulator-tramp-metal.yaml');
+    const { resize, ...check } = j;
+    expect(check).toEqual(JSON.parse(JSON.stringify(resultsToJson(r))));
+    expect(resize.factor).toBe(1.5);
+    expect(resize.scale_side).toMatchObject({ side: 'A', s: r.yieldRatio * 1.5 });
+    expect(resize.scale_side.diameters_m).toHaveLength(4);
+    expect(resize.critical_segment).toMatchObject({ diameter_m: null });
+    expect(resize.critical_segment.reason).toMatch(/No size of/);
+    for (const m of resize.materials) expect(Object.keys(m)).toEqual(expect.arrayContaining(['key', 'yield_ratio']));
+    expect(resize.limiter).toMatchObject({ min_Nm: expect.any(Number), max_Nm: expect.any(Number), slip_energy_J: expect.any(Number) });
+    expect(resize.key).toMatchObject({ shear_stress_Pa: expect.any(Number), bearing_stress_Pa: expect.any(Number), shears_before_shaft_yields: false });
+  });
+
+  it('gives null for what the case does not say: the limiter\'s lower end and the key', () => {
+    const { j } = json('edger-arbor-two-sides.yaml');
+    expect(j.resize.limiter.min_Nm).toBeNull();
+    expect(j.resize.key).toBeNull();
+    expect(j.resize.running.torque_Nm).toBeNull();
+  });
+
+  it('carries the cautions, the guarding and the notes', () => {
+    const { j } = json('screw-conveyor-jam-us.yaml');
+    expect(j.cautions.length).toBeGreaterThanOrEqual(3);
+    expect(j.resize.guarding.join(' ')).toMatch(/speed marked on it/);
+    expect(j.resize.notes.join(' ')).toMatch(/rechecked/);
+  });
+});
