@@ -19,8 +19,8 @@ export const CHROMIUM_ARGS = [
 export const INSTALL_CHROMIUM = 'install Debian\'s package: sudo apt-get install chromium';
 
 /** The Chromium executable, or undefined when none is installed. The tool never downloads a browser. */
-export function findChromium(): string | undefined {
-  return CHROMIUM_PATHS.find((p) => existsSync(p));
+export function findChromium(paths: readonly string[] = CHROMIUM_PATHS): string | undefined {
+  return paths.find((p) => existsSync(p));
 }
 
 /** Thrown when a command needs Chromium and there is none. */

@@ -6,7 +6,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { findChromium, launchChromium, printPdf } from '../../src/io/chromium.ts';
+import { ChromiumMissing, findChromium, launchChromium, printPdf } from '../../src/io/chromium.ts';
 import { cli } from '../cli/run-cli.ts';
 import { SAMPLE, TINY_PNG } from '../report/report-fixtures.ts';
 import { tempFolder } from './io-fixtures.ts';
@@ -14,6 +14,17 @@ import { tempFolder } from './io-fixtures.ts';
 const missing = findChromium() === undefined;
 const inCI = process.env.CI === 'true';
 if (missing && !inCI) console.warn('Browser test skipped: Chromium is not installed. Install it with: sudo apt-get install chromium');
+
+describe('finding Chromium', () => {
+  it('findChromium gives the first path that exists, or undefined when none does', () => {
+    expect(findChromium(['/nonexistent/chromium'])).toBeUndefined();
+    expect(findChromium(['/nonexistent/chromium', process.execPath])).toBe(process.execPath);
+  });
+
+  it('a missing Chromium is explained with where it was looked for and how to install it', () => {
+    expect(new ChromiumMissing().message).toBe('Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian\'s package: sudo apt-get install chromium');
+  });
+});
 
 describe.skipIf(missing && !inCI)('report.html in headless Chromium (skipped without Chromium: apt-get install chromium)', () => {
   let browser: Browser;

@@ -7,9 +7,9 @@ import type { Cell, ReportTable } from './report-table.ts';
 
 /** How a stress compares with the material, in words. */
 export function stressReading(ratioToYield: number, ratioToUltimate: number | undefined): string {
-  if (ratioToUltimate !== undefined && ratioToUltimate >= 1) return 'above the ultimate shear estimate';
-  if (ratioToYield >= 1) return 'above shear yield';
-  return 'below shear yield';
+  if (ratioToUltimate !== undefined && ratioToUltimate >= 1) return 'above ultimate (est.)';
+  if (ratioToYield >= 1) return 'above yield';
+  return 'below yield';
 }
 
 /**
