@@ -51,8 +51,9 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
     try {
       files.push({ path: 'report.pdf', data: await printPdf(html, loaded.case.units === 'us' ? 'Letter' : 'A4') });
     } catch (e) {
-      if (!(e instanceof ChromiumMissing)) throw e;
-      io.err(`report.pdf not written: ${e.message}. The rest of the report is written; print report.html from a browser instead.\n`);
+      // A missing or failing browser costs the PDF, never the report.
+      const why = e instanceof ChromiumMissing ? e.message : `Chromium could not print it (${String((e as Error).message).split('\n')[0]})`;
+      io.err(`report.pdf not written: ${why}. The rest of the report is written; print report.html from a browser instead.\n`);
     }
   }
 
