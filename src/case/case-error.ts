@@ -9,7 +9,8 @@ export type CaseErrorCode =
   | 'E_REFERENCE' // a name that refers to nothing (station, material)
   | 'E_MATERIAL' // a material lacks a property its use needs
   | 'E_MODEL' // the case as a whole cannot be modelled (nothing turning, …)
-  | 'E_FILE'; // the case file or a file it names cannot be read
+  | 'E_FILE' // the case file or a file it names cannot be read
+  | 'E_TEMPLATE'; // a report template with a placeholder it cannot fill
 
 /** Where in the case file a problem is: 1-based line and column. */
 export interface SourcePosition {

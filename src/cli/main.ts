@@ -1,7 +1,8 @@
-import { Command, CommanderError, InvalidArgumentError } from 'commander';
+import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { CaseError } from '../case/case-error.ts';
 import { checkCommand } from './commands/check.ts';
 import { materialsCommand } from './commands/materials.ts';
+import { newCommand } from './commands/new.ts';
 import { resizeCommand } from './commands/resize.ts';
 import { version } from './version.ts';
 
@@ -27,10 +28,19 @@ function designFactor(text: string): number {
 }
 
 /**
+ * The clock of a run: now, or the moment SOURCE_DATE_EPOCH gives (seconds since 1970, the
+ * reproducible-builds convention) so a run can be repeated with the same date.
+ */
+export function systemClock(): Date {
+  const epoch = process.env.SOURCE_DATE_EPOCH;
+  return epoch && /^\d+$/.test(epoch) ? new Date(Number(epoch) * 1000) : new Date();
+}
+
+/**
  * The one place that prints and decides the exit status: 0 done, 2 the user's mistake (a bad case
  * file or bad arguments), 1 a bug, shown with its stack so it can be reported.
  */
-export async function runMain(argv: string[], io: Io = stdio): Promise<number> {
+export async function runMain(argv: string[], io: Io = stdio, clock: () => Date = systemClock): Promise<number> {
   const program = new Command('shaftcase')
     .description('Investigate a sudden stop of a rotating machine: impact torque, stress and twist from a case file.')
     .version(version())
@@ -59,6 +69,25 @@ export async function runMain(argv: string[], io: Io = stdio): Promise<number> {
     .description('list the built-in materials and their sources')
     .option('--json', 'print the list as JSON, SI units')
     .action((opts: { json?: boolean }) => materialsCommand(opts, io));
+
+  program
+    .command('new')
+    .description('create a case folder from the templates: case.yaml with comments on what to measure, photos/, README.md')
+    .argument('<folder>', 'the new case folder')
+    .addOption(new Option('--units <units>', 'units of the case template').choices(['metric', 'us']).default('metric'))
+    .action((folder: string, opts: { units: 'metric' | 'us' }) => newCommand(folder, opts, io));
+
+  program
+    .command('report')
+    .description('write a dated report folder (Markdown, HTML, figures, tables, results.json) and a zip for the ticket beside the case')
+    .argument('<case>', 'a case .yaml file or a case folder')
+    .option('--template <file>', "a site's own report template (Markdown with {{…}} placeholders, see templates/report.md)")
+    .option('--pdf', 'also print report.pdf with Chromium (Debian package chromium)')
+    .action(async (file: string, opts: { template?: string; pdf?: boolean }) => {
+      // The report's libraries (plots, DOM, tables, Markdown, zip, browser) load only here, so check stays fast.
+      const { reportCommand } = await import('./commands/report.ts');
+      await reportCommand(file, opts, io, clock());
+    });
 
   try {
     await program.parseAsync(argv, { from: 'user' });

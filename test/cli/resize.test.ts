@@ -13,15 +13,19 @@ async function cli(...argv: string[]) {
   return { status, out, err };
 }
 
-/** Every package the module graph from `entry` imports, following the project's own relative imports. */
+/**
+ * Every package the module graph from `entry` imports statically, following the project's own
+ * relative imports. Dynamic `import()` is left out: that is how the report command loads its
+ * plotting code only when it runs.
+ */
 function packagesImportedFrom(entry: string): Set<string> {
   const seen = new Set<string>();
   const packages = new Set<string>();
   const visit = (file: string) => {
     if (seen.has(file)) return;
     seen.add(file);
-    for (const m of readFileSync(file, 'utf8').matchAll(/(?:import|export)[^'"]*?from\s+'([^']+)'|import\('([^']+)'\)/g)) {
-      const spec = m[1] ?? m[2];
+    for (const m of readFileSync(file, 'utf8').matchAll(/(?:import|export)[^'"]*?from\s+'([^']+)'/g)) {
+      const spec = m[1];
       if (spec.startsWith('.')) visit(resolve(dirname(file), spec));
       else packages.add(spec);
     }

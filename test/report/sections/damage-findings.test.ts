@@ -1,7 +1,7 @@
 import MarkdownIt from 'markdown-it';
 import { describe, expect, it } from 'vitest';
 import { analyseCase } from '../../../src/results/analyse-case.ts';
-import { renderFindingsSection } from '../../../src/report/sections/findings.ts';
+import { renderFindingsSection } from '../../../src/report/sections/damage-findings.ts';
 import { escapeMarkdown } from '../../../src/report/sections/escape-markdown.ts';
 import { ep5Case } from '../../data/ep5-case.ts';
 

@@ -1,0 +1,30 @@
+import type { Results } from '../results/results.ts';
+import type { RunInfo } from './run-info.ts';
+
+/** The case file a report was made from, for traceability. */
+export interface CaseSource {
+  /** The case file's name (no folder), as the bundle stores it. */
+  file: string;
+  /** Its text as given. */
+  text: string;
+  /** SHA-256 of the text, hex. */
+  sha256: string;
+}
+
+/** What every report section reads. Sections show these values; they compute nothing of their own. */
+export interface ReportContext {
+  results: Results;
+  run: RunInfo;
+  source: CaseSource;
+}
+
+/**
+ * A section of the report: `render` returns its Markdown body (the heading is added from `title`),
+ * or undefined when the section has nothing to say for this case and is left out.
+ */
+export interface ReportSection {
+  /** Stable id: the template places a section with `{{section:ID}}`. */
+  id: string;
+  title: string;
+  render: (ctx: ReportContext) => string | undefined;
+}

@@ -1,0 +1,40 @@
+import { readFileSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+
+const SRC = fileURLToPath(new URL('../../src/', import.meta.url));
+/** Packages only the report needs; `check` must never load them. */
+const REPORT_ONLY = ['@observablehq/plot', 'linkedom', 'arquero', 'markdown-it', 'jszip', 'playwright-core'];
+
+/** Every module reached from `entry` through static imports (dynamic `import()` not followed). */
+function staticGraph(entry: string): { files: Set<string>; packages: Set<string> } {
+  const files = new Set<string>();
+  const packages = new Set<string>();
+  const visit = (file: string) => {
+    if (files.has(file)) return;
+    files.add(file);
+    const text = readFileSync(file, 'utf8');
+    for (const m of text.matchAll(/^\s*(?:import|export)\s+(?!type\b)(?:[^'"]*?\sfrom\s+)?['"]([^'"]+)['"]/gm)) {
+      const spec = m[1];
+      if (spec.startsWith('.')) visit(resolve(dirname(file), spec));
+      else packages.add(spec.startsWith('@') ? spec.split('/').slice(0, 2).join('/') : spec.split('/')[0]);
+    }
+  };
+  visit(entry);
+  return { files, packages };
+}
+
+describe('start-up of the CLI', () => {
+  it('the CLI entry reaches none of the report\'s packages through static imports', () => {
+    const { files, packages } = staticGraph(join(SRC, 'cli', 'bin.ts'));
+    expect(files.size).toBeGreaterThan(10);
+    for (const p of REPORT_ONLY) expect([...packages], p).not.toContain(p);
+    expect([...files].some((f) => f.includes('/src/report/'))).toBe(false);
+  });
+
+  it('the report command itself does reach them (so the check above looks at the right graph)', () => {
+    const { packages } = staticGraph(join(SRC, 'cli', 'commands', 'report.ts'));
+    for (const p of ['@observablehq/plot', 'linkedom', 'arquero', 'markdown-it', 'jszip']) expect([...packages], p).toContain(p);
+  });
+});

@@ -1,0 +1,93 @@
+// The report checked in a real browser: Debian's chromium driven by playwright-core, one launch for
+// the whole file (the CI machine has two cores). Without Chromium the test is skipped outside CI and
+// fails in CI (CI=true), where .ci/run installs it.
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ChromiumMissing, findChromium, launchChromium, printPdf } from '../../src/io/chromium.ts';
+import { cli } from '../cli/run-cli.ts';
+import { SAMPLE, TINY_PNG } from '../report/report-fixtures.ts';
+import { tempFolder } from './io-fixtures.ts';
+
+const missing = findChromium() === undefined;
+const inCI = process.env.CI === 'true';
+if (missing && !inCI) console.warn('Browser test skipped: Chromium is not installed. Install it with: sudo apt-get install chromium');
+
+describe('finding Chromium', () => {
+  it('findChromium gives the first path that exists, or undefined when none does', () => {
+    expect(findChromium(['/nonexistent/chromium'])).toBeUndefined();
+    expect(findChromium(['/nonexistent/chromium', process.execPath])).toBe(process.execPath);
+  });
+
+  it('a missing Chromium is explained with where it was looked for and how to install it', () => {
+    expect(new ChromiumMissing().message).toBe('Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian\'s package: sudo apt-get install chromium');
+  });
+});
+
+describe.skipIf(missing && !inCI)('report.html in headless Chromium (skipped without Chromium: apt-get install chromium)', () => {
+  let browser: Browser;
+  let html: string;
+  let htmlFile: string;
+
+  beforeAll(async () => {
+    const dir = join(tempFolder(), 'case');
+    mkdirSync(join(dir, 'photos'), { recursive: true });
+    writeFileSync(join(dir, 'case.yaml'), readFileSync(SAMPLE, 'utf8') + '  photos:\n    - { path: photos/key.png, caption: the rolled sheave key }\n');
+    writeFileSync(join(dir, 'photos', 'key.png'), TINY_PNG);
+    const run = await cli(['report', dir]);
+    expect(run.code, run.err).toBe(0);
+    htmlFile = join(dir, 'reports', '2026-12-01', 'report.html');
+    html = readFileSync(htmlFile, 'utf8');
+    browser = await launchChromium();
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('every figure is drawn with a size, the photo shows, the verdict is visible, no console error, and it prints to PDF', async () => {
+    const page = await browser.newPage();
+    const errors: string[] = [];
+    page.on('console', (m) => {
+      if (m.type() === 'error') errors.push(m.text());
+    });
+    page.on('pageerror', (e) => errors.push(e.message));
+    await page.goto(pathToFileURL(htmlFile).href, { waitUntil: 'load' });
+
+    const figures = page.locator('.figure svg');
+    expect(await figures.count()).toBe(4);
+    for (const svg of await figures.all()) {
+      const box = await svg.boundingBox();
+      expect(box!.width).toBeGreaterThan(100);
+      expect(box!.height).toBeGreaterThan(100);
+    }
+    const photo = page.locator('img.photo');
+    expect(await photo.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(1);
+    const verdict = page.getByText('Verdict (elastic energy method):');
+    expect(await verdict.isVisible()).toBe(true);
+    expect(await page.locator('blockquote').innerText()).toMatch(/YIELDED: the elastic stress reaches 16\.2 × shear yield/);
+    for (const heading of ['Method and assumptions', 'Sources', 'Cautions']) expect(await page.getByRole('heading', { name: heading }).isVisible()).toBe(true);
+
+    await page.emulateMedia({ media: 'print' });
+    const style = (sel: string) => page.locator(sel).first().evaluate((el) => ({ inside: getComputedStyle(el).breakInside, before: getComputedStyle(el).breakBefore }));
+    expect((await style('.figure')).inside).toBe('avoid');
+    expect((await style('h2 ~ h2')).before).toBe('page');
+    const pdf = await page.pdf({ format: 'A4' });
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it('printPdf prints the report on A4 and on Letter with the same browser', async () => {
+    const a4 = Buffer.from(await printPdf(html, 'A4', browser));
+    const letter = Buffer.from(await printPdf(html, 'Letter', browser));
+    expect(a4.subarray(0, 5).toString()).toBe('%PDF-');
+    expect(letter.subarray(0, 5).toString()).toBe('%PDF-');
+    // Page sizes in points (1/72 in): A4 is 210 × 297 mm = 595.3 × 841.9 pt, Letter 8.5 × 11 in = 612 × 792 pt (ISO 216; ANSI/ASME Y14.1).
+    // Chromium rounds A4 to whole CSS pixels at 96 per inch: 794 × 1123 px = 595.5 × 842.25 pt, written as 595.92 × 842.88.
+    expect(a4.toString('latin1')).toMatch(/\/MediaBox \[0 0 59[56]\.\d+ 84[23]\.\d+\]/);
+    expect(letter.toString('latin1')).toMatch(/\/MediaBox \[0 0 612 792\]/);
+  });
+});

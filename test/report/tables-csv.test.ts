@@ -1,0 +1,59 @@
+import { describe, expect, it } from 'vitest';
+import { guardCell, reportTablesCsv, tableToCsv } from '../../src/report/tables-csv.ts';
+import { markdownTable, type ReportTable } from '../../src/report/tables/report-table.ts';
+import { inDisplay } from '../../src/views/display-units.ts';
+import { fixture } from './report-fixtures.ts';
+
+/** A minimal CSV reader for the tests: quoted fields, doubled quotes. */
+function readCsv(csv: string): string[][] {
+  const rows: string[][] = [];
+  let row: string[] = [];
+  let field = '';
+  let quoted = false;
+  for (let i = 0; i < csv.length; i++) {
+    const c = csv[i];
+    if (quoted) {
+      if (c === '"' && csv[i + 1] === '"') (field += '"'), i++;
+      else if (c === '"') quoted = false;
+      else field += c;
+    } else if (c === '"') quoted = true;
+    else if (c === ',') row.push(field), (field = '');
+    else if (c === '\n') row.push(field), rows.push(row), (row = []), (field = '');
+    else field += c;
+  }
+  return rows.filter((r) => r.length > 1 || r[0] !== '');
+}
+
+describe('report tables as CSV', () => {
+  it('the pieces CSV holds every piece\'s stress at full precision, in the case\'s units', () => {
+    const r = fixture('two-sided-pump.yaml').results;
+    const csv = reportTablesCsv(r).find((t) => t.name === 'pieces')!.csv;
+    const [header, ...rows] = readCsv(csv);
+    const col = header.indexOf('shear stress (ksi)');
+    expect(col).toBeGreaterThan(0);
+    const stresses = r.sides.flatMap((s) => s.pieces.map((p) => inDisplay(p.shearStress, 'stress', 'us')));
+    expect(rows.map((row) => Number(row[col]))).toEqual(stresses);
+  });
+
+  it('every registered table is written, with a header and one line per row', () => {
+    const r = fixture('sample').results;
+    const tables = reportTablesCsv(r);
+    expect(tables.map((t) => t.name)).toEqual(['parts', 'segments', 'sides', 'pieces', 'material']);
+    expect(readCsv(tables.find((t) => t.name === 'segments')!.csv)).toHaveLength(1 + r.case.shaft.segments.length);
+  });
+
+  it('text a spreadsheet would run as a formula is written with a leading apostrophe; numbers are not touched', () => {
+    expect(guardCell('=HYPERLINK("x")')).toBe('\'=HYPERLINK("x")');
+    expect(guardCell('+1')).toBe("'+1");
+    expect(guardCell('@SUM')).toBe("'@SUM");
+    expect(guardCell('plain - text')).toBe('plain - text');
+    expect(guardCell(-2.5)).toBe(-2.5);
+    const t: ReportTable = { name: 't', title: 'T', columns: [{ label: 'who' }, { label: 'n', unit: 'mm' }], rows: [['=cmd|x', -1.25], ['a, "b"\nc', null]] };
+    expect(readCsv(tableToCsv(t))).toEqual([['who', 'n (mm)'], ["'=cmd|x", '-1.25'], ['a, "b"\nc', '']]);
+  });
+
+  it('markdownTable rounds numbers to the column\'s significant figures and escapes text', () => {
+    const t: ReportTable = { name: 't', title: 'T', columns: [{ label: 'a|b' }, { label: 'x', unit: 'mm', digits: 4 }, { label: 'y' }], rows: [['<b>|</b>', 1234.56, 0.0123456], [null, 2, 3]] };
+    expect(markdownTable(t)).toBe('| a\\|b | x (mm) | y |\n| :--- | ---: | ---: |\n| \\<b>\\|\\</b> | 1235 | 0.0123 |\n| — | 2 | 3 |');
+  });
+});
