@@ -83,7 +83,10 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--template <file>', "a site's own report template (Markdown with {{…}} placeholders, see templates/report.md)")
     .option('--pdf', 'also print report.pdf with Chromium (Debian package chromium)')
-    .action(async (file: string, opts: { template?: string; pdf?: boolean }) => {
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
+    .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
+    .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
+    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number }) => {
       // The report's libraries (plots, DOM, tables, Markdown, zip, browser) load only here, so check stays fast.
       const { reportCommand } = await import('./commands/report.ts');
       await reportCommand(file, opts, io, clock());

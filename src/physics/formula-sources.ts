@@ -53,6 +53,51 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     source: 'Shigley 9th ed., Sec. 6-15 (from memory, confident)',
   },
   {
+    what: 'Elastic–plastic torsion of a round section past yield (yield and fully plastic torque, torque–twist law, elastic unloading to the permanent twist)',
+    formula: 'T_Y = τ_Y·J_p/c, T_P = (2π/3)·τ_Y·(c₂³ − c₁³), T = (4/3)·T_Y·[1 − ¼(φ_Y/φ)³] (solid), φ_p = φ − T/(G·J_p)',
+    source: 'Beer & Johnston, Mechanics of Materials, Sec. 3.9–3.11 (elastoplastic shafts, residual stresses); Hibbeler, Mechanics of Materials, Sec. 5.9–5.10 (from memory, confident); the hollow and hardening forms derived by integrating τ·r over the section',
+  },
+  {
+    what: 'Linear strain-hardening slope in shear from tensile data (where the case asks for hardening)',
+    formula: 'H_p = k²·(S_ut − S_y)/elongation, H = G·H_p/(G + H_p)',
+    source: 'Dieter, Mechanical Metallurgy, 3rd ed., Sec. 3-9, effective stress and strain (from memory, verify the section)',
+  },
+  {
+    what: 'Fracture shear strain of a ductile shaft from the reduction of area',
+    formula: 'γ_f = √3·ln(1/(1 − RA)) (von Mises equivalence γ = √3·ε)',
+    source: 'Dieter, Mechanical Metallurgy, 3rd ed., Sec. 8-3 (true fracture strain) and Sec. 3-9 (effective strain) (from memory, verify the sections)',
+  },
+  {
+    what: 'Brittle material (elongation below 5 %) breaks at its tensile strength, with kt',
+    formula: 'kt·τ = S_ut',
+    source: 'Shigley 9th ed., Sec. 5-1 (brittle and ductile), Sec. 5-8 and 5-9 (brittle materials), Sec. 3-13 (kt under static load) (from memory, confident)',
+  },
+  {
+    what: 'Reading a fracture surface (transverse flat face: ductile shear overload; 45° helix: brittle; beach marks: fatigue)',
+    formula: 'the usual meanings of the surface, not a diagnosis',
+    source: 'ASM Handbook Vol. 11, Failure Analysis and Prevention (ASM International, 2002), "Failures of Shafts"; Beer & Johnston, Mechanics of Materials, Ch. 3, ductile and brittle specimens in torsion (from memory, verify the sections)',
+  },
+  {
+    what: 'Stresses in a parallel key driving a hub (the key as fuse)',
+    formula: 'F = 2T/d, τ = 2T/(d·w·l), σ = 4T/(d·h·l) (half the height bearing)',
+    source: 'Shigley 9th ed., Sec. 7-7 (from memory, confident)',
+  },
+  {
+    what: 'Running torque from the drive\'s power',
+    formula: 'T = P/ω',
+    source: 'Shigley 9th ed., Sec. 3-12, Eqs. 3-40 to 3-44 (equation numbers from memory, verify)',
+  },
+  {
+    what: 'Natural-frequency change of a replacement (single-mass estimate)',
+    formula: 'ω_n = √(k/J), so ω_new/ω_old = √(k_new/k_old)',
+    source: 'Den Hartog, Mechanical Vibrations (from memory, confident)',
+  },
+  {
+    what: 'Monte Carlo over the tolerances: seeded uniform generator, normal draws, percentiles',
+    formula: 'mulberry32 (32-bit state); Box–Muller z = √(−2 ln u₁)·cos(2π u₂); percentiles by linear interpolation between closest ranks',
+    source: 'mulberry32, T. Ettinger (public domain); Box & Muller, Ann. Math. Statist. 29 (1958) 610–611; Hyndman & Fan, The American Statistician 50 (1996) 361–365, definition 7 (from memory, confident)',
+  },
+  {
     what: 'Unit conversion factors',
     formula: 'inch = 0.0254 m, pound = 0.45359237 kg, g = 9.80665 m/s²',
     source: 'NIST Special Publication 811 (2008), Appendix B.8',

@@ -1,11 +1,13 @@
-import type { Results } from '../results/results.ts';
+import type { ReportFigure } from './figures/report-figure.ts';
 import { REPORT_FIGURES } from './registry.ts';
 import type { PlacedFigure } from './render-report.ts';
+import type { ReportData } from './report-context.ts';
 
-/** Draws every registered figure that has something to show for these results, in order. */
-export function drawFigures(results: Results, registry = REPORT_FIGURES): PlacedFigure[] {
+/** Draws every registered figure that has something to show for this report, in order. */
+export function drawFigures(data: ReportData, registry = REPORT_FIGURES): PlacedFigure[] {
   return registry.flatMap(({ section, draw }) => {
-    const figure = draw(results);
-    return figure ? [{ section, figure }] : [];
+    const drawn = draw(data);
+    const figures = drawn === undefined ? [] : Array.isArray(drawn) ? drawn : [drawn];
+    return figures.map((figure: ReportFigure) => ({ section, figure }));
   });
 }

@@ -1,5 +1,5 @@
-// What the report holds, in order. Adding a section, a figure, a table or a recommendation is one
-// line here (and its own small file): see DEVELOPERS.md, "Adding a report section or figure".
+// What the report holds, in order. Adding a section, a figure or a table is one line here (and its
+// own small file): see DEVELOPERS.md, "Adding a report section or figure".
 import type { ReportSection } from './report-context.ts';
 import type { FigureDrawer } from './figures/report-figure.ts';
 import type { ReportTable } from './tables/report-table.ts';
@@ -12,7 +12,8 @@ import { resultsSection } from './sections/results-per-side.ts';
 import { materialSection } from './sections/material.ts';
 import { observationsSection } from './sections/observations.ts';
 import { findingsSection } from './sections/findings.ts';
-import { recommendationsSection, type Recommender } from './sections/recommendations.ts';
+import { howSureSection } from './sections/how-sure.ts';
+import { recommendationsSection } from './sections/recommendations.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
 import { appendixSection } from './sections/appendix.ts';
@@ -20,14 +21,22 @@ import { shaftSchematicFigure } from './figures/shaft-schematic.ts';
 import { energyShareFigure } from './figures/energy-share.ts';
 import { stressAlongShaftFigure } from './figures/stress-along-shaft.ts';
 import { stressVsSpeedFigure } from './figures/stress-vs-speed.ts';
+import { torqueTwistFigure } from './figures/torque-twist-curve.ts';
+import { permanentTwistSpeedFigures } from './figures/permanent-twist-speed.ts';
+import { yieldRatioHistogramFigure } from './figures/yield-ratio-histogram.ts';
+import { sensitivityFigure } from './figures/sensitivity-chart.ts';
+import { yieldRatioAgainstDiameterFigure } from './figures/yield-ratio-vs-diameter.ts';
+import { peakTorqueAgainstLimiterFigure } from './figures/peak-torque-vs-limiter.ts';
 import { partsTable } from './tables/parts-table.ts';
 import { segmentsTable } from './tables/segments-table.ts';
 import { sidesTable } from './tables/sides-table.ts';
 import { piecesTable } from './tables/pieces-table.ts';
 import { materialTable } from './tables/material-table.ts';
-
-/** Recommendations, in order; while none says anything the section shows what the investigator fills in. */
-export const RECOMMENDERS: readonly Recommender[] = [];
+import { plasticSidesTable } from './tables/plastic-sides-table.ts';
+import { plasticPiecesTable } from './tables/plastic-pieces-table.ts';
+import { uncertaintyInputsTable } from './tables/uncertainty-inputs-table.ts';
+import { uncertaintyPercentilesTable } from './tables/uncertainty-percentiles-table.ts';
+import { uncertaintySensitivityTable } from './tables/uncertainty-sensitivity-table.ts';
 
 /** The report's sections, in order. The template places them (`{{sections}}` or `{{section:ID}}`). */
 export const REPORT_SECTIONS: readonly ReportSection[] = [
@@ -39,7 +48,8 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   materialSection,
   observationsSection,
   findingsSection,
-  recommendationsSection(RECOMMENDERS),
+  howSureSection,
+  recommendationsSection,
   cautionsSection,
   sourcesSection,
   appendixSection,
@@ -47,11 +57,31 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
 
 /** The figures, numbered in this order, each shown at the end of the section named beside it. */
 export const REPORT_FIGURES: readonly { section: string; draw: FigureDrawer }[] = [
-  { section: 'machine', draw: shaftSchematicFigure },
-  { section: 'machine', draw: energyShareFigure },
-  { section: 'results', draw: stressAlongShaftFigure },
-  { section: 'results', draw: stressVsSpeedFigure },
+  { section: 'machine', draw: ({ results }) => shaftSchematicFigure(results) },
+  { section: 'machine', draw: ({ results }) => energyShareFigure(results) },
+  { section: 'results', draw: ({ results }) => stressAlongShaftFigure(results) },
+  { section: 'results', draw: ({ results }) => stressVsSpeedFigure(results) },
+  { section: 'findings', draw: ({ results }) => torqueTwistFigure(results) },
+  { section: 'findings', draw: ({ results }) => permanentTwistSpeedFigures(results) },
+  { section: 'uncertainty', draw: ({ results }) => yieldRatioHistogramFigure(results) },
+  { section: 'uncertainty', draw: ({ results }) => sensitivityFigure(results) },
+  { section: 'recommendations', draw: ({ results, resize }) => yieldRatioAgainstDiameterFigure(results, resize) },
+  { section: 'recommendations', draw: ({ results, resize }) => peakTorqueAgainstLimiterFigure(results, resize) },
 ];
 
-/** The tables written to `tables/NAME.csv` (the sections show the same tables rounded). */
-export const REPORT_TABLES: readonly ((r: Results) => ReportTable)[] = [partsTable, segmentsTable, sidesTable, piecesTable, materialTable];
+/**
+ * The tables written to `tables/NAME.csv` (the sections show the same tables rounded); a table
+ * that returns undefined has nothing to show for this case and is not written.
+ */
+export const REPORT_TABLES: readonly ((r: Results) => ReportTable | undefined)[] = [
+  partsTable,
+  segmentsTable,
+  sidesTable,
+  piecesTable,
+  materialTable,
+  plasticSidesTable,
+  plasticPiecesTable,
+  uncertaintyInputsTable,
+  uncertaintyPercentilesTable,
+  uncertaintySensitivityTable,
+];

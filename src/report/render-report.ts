@@ -4,7 +4,7 @@ import type { ReportFigure } from './figures/report-figure.ts';
 import { figureHref } from './layout.ts';
 import { escapeMarkdown } from './markdown-text.ts';
 import { REPORT_SECTIONS } from './registry.ts';
-import type { CaseSource, ReportContext, ReportSection } from './report-context.ts';
+import type { CaseSource, ReportContext, ReportData, ReportSection } from './report-context.ts';
 import type { RunInfo } from './run-info.ts';
 
 /** A drawn figure and the id of the section it closes. */
@@ -51,12 +51,13 @@ export function figureMarkdown(f: ReportFigure, number: number): string {
 }
 
 /**
- * The report as Markdown: every section rendered from the results, figures placed at the end of
- * their sections and numbered in order, all set into the template. Pure: the run's date and the
- * figures are given.
+ * The report as Markdown: every section rendered from what the report shows (the results and
+ * what goes back in, computed before), figures placed at the end of their sections and numbered
+ * in order, all set into the template. Pure: the run's date and the figures are given.
  */
-export function renderReport(results: Results, input: ReportInput): string {
-  const ctx: ReportContext = { results, run: input.run, source: input.source };
+export function renderReport(data: ReportData, input: ReportInput): string {
+  const { results } = data;
+  const ctx: ReportContext = { ...data, run: input.run, source: input.source };
   let number = 0;
   const all = input.sections ?? REPORT_SECTIONS;
   const sections = all.flatMap((s) => {

@@ -1,5 +1,17 @@
+import type { ResizeResult } from '../resize/resize-result.ts';
 import type { Results } from '../results/results.ts';
 import type { RunInfo } from './run-info.ts';
+
+/**
+ * What the report shows, each part computed once before anything is rendered
+ * (`buildReportData`): the investigation's results (with how sure the finding is, where the case
+ * states tolerances) and what goes back in. Sections, figures and tables read these and compute
+ * nothing of their own.
+ */
+export interface ReportData {
+  results: Results;
+  resize: ResizeResult;
+}
 
 /** The case file a report was made from, for traceability. */
 export interface CaseSource {
@@ -12,8 +24,7 @@ export interface CaseSource {
 }
 
 /** What every report section reads. Sections show these values; they compute nothing of their own. */
-export interface ReportContext {
-  results: Results;
+export interface ReportContext extends ReportData {
   run: RunInfo;
   source: CaseSource;
 }

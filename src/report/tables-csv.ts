@@ -20,10 +20,10 @@ export function tableToCsv(t: ReportTable): string {
   return aq.table(columns).toCSV() + '\n';
 }
 
-/** Every registered table of the report, as `{ name, csv }`. */
+/** Every registered table that has something to show for these results, as `{ name, csv }`. */
 export function reportTablesCsv(r: Results, registry = REPORT_TABLES): { name: string; csv: string }[] {
-  return registry.map((build) => {
+  return registry.flatMap((build) => {
     const t = build(r);
-    return { name: t.name, csv: tableToCsv(t) };
+    return t ? [{ name: t.name, csv: tableToCsv(t) }] : [];
   });
 }

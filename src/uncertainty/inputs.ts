@@ -10,6 +10,9 @@ import type { Tolerance } from '../units/quantity.ts';
  */
 export type Spread = { kind: 'normal'; mean: number; sd: number };
 
+/** `band`: a stated ± band (2σ of a normal); `minimum` / `typical`: a library or case strength by its basis. */
+export type SpreadBasis = 'band' | 'minimum' | 'typical';
+
 /** One input the Monte Carlo varies: where it is in the case file, its spread, and how to set it. */
 export interface UncertainInput {
   /** Field path as in the case file (`speed`, `shaft.segments[1].diameter`, `materials.aisi-1045-cd.yield_strength`). */
@@ -17,6 +20,8 @@ export interface UncertainInput {
   /** The value the single run uses, SI. */
   nominal: number;
   spread: Spread;
+  /** How the spread was chosen: a stated ± band, or a material strength by its basis. */
+  basis: SpreadBasis;
   /** A new case with this input set to `value`; the input case is not changed. */
   apply: (c: Case, value: number) => Case;
 }
@@ -118,7 +123,7 @@ export function uncertainInputs(c: Case, strengthScatter: number): { inputs: Unc
       notVaried.push(path);
       continue;
     }
-    inputs.push({ path, ...s, spread: { kind: 'normal', mean: s.nominal, sd: sdOfTolerance(tol, s.nominal) } });
+    inputs.push({ path, ...s, basis: 'band', spread: { kind: 'normal', mean: s.nominal, sd: sdOfTolerance(tol, s.nominal) } });
   }
   if (strengthScatter > 0) {
     const shaftMaterials = new Set(c.shaft.segments.map((s) => s.material));
@@ -127,7 +132,8 @@ export function uncertainInputs(c: Case, strengthScatter: number): { inputs: Unc
       if (inputs.some((i) => i.path === path)) continue;
       const mat = c.materials[key];
       const s = setterFor(c, path)!;
-      inputs.push({ path, ...s, spread: strengthSpread(mat.yieldStrength!, mat.strengthBasis ?? 'typical', strengthScatter) });
+      const basis = mat.strengthBasis ?? 'typical';
+      inputs.push({ path, ...s, basis, spread: strengthSpread(mat.yieldStrength!, basis, strengthScatter) });
     }
   }
   return { inputs, notVaried };

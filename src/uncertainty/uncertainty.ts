@@ -1,5 +1,5 @@
 import type { Case } from '../case/case.ts';
-import { uncertainInputs } from './inputs.ts';
+import { uncertainInputs, type SpreadBasis } from './inputs.ts';
 import { monteCarlo, type Engine } from './monte-carlo.ts';
 import { p5p50p95 } from './percentiles.ts';
 import { sensitivity, type Swing } from './sensitivity.ts';
@@ -16,8 +16,8 @@ export interface Uncertainty {
   samples: number;
   seed: number;
   strengthScatter: number;
-  /** Field paths varied, with their spread (mean, sd; SI). */
-  inputs: { path: string; mean: number; sd: number }[];
+  /** Field paths varied, with their spread (mean, sd; SI) and how it was chosen. */
+  inputs: { path: string; mean: number; sd: number; basis: SpreadBasis }[];
   /** Toleranced fields the Monte Carlo does not vary (lengths, positions). */
   notVaried: string[];
   /** Share of samples whose yield ratio is 1 or more. */
@@ -54,7 +54,7 @@ export function runUncertainty(c: Case, engine: Engine, opts: UncertaintyOptions
     samples: opts.samples,
     seed: opts.seed,
     strengthScatter: opts.strengthScatter,
-    inputs: inputs.map((i) => ({ path: i.path, mean: i.spread.mean, sd: i.spread.sd })),
+    inputs: inputs.map((i) => ({ path: i.path, mean: i.spread.mean, sd: i.spread.sd, basis: i.basis })),
     notVaried,
     yieldProbability: yielded / opts.samples,
     percentiles: {

@@ -10,7 +10,8 @@ export function resizeToJson(z: ResizeResult): Record<string, unknown> {
   return { ...resultsToJson(z.results), resize: resizeJson(z) };
 }
 
-function resizeJson(z: ResizeResult): Record<string, unknown> {
+/** The `resize` object of `resize --json` (and of a report's results.json). */
+export function resizeJson(z: ResizeResult): Record<string, unknown> {
   const s = z.scaleSide;
   const k = z.criticalSegment;
   const l = z.limiter;

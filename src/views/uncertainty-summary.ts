@@ -1,5 +1,6 @@
 import type { Results } from '../results/results.ts';
-import { show, sig } from './display-units.ts';
+import type { Uncertainty } from '../uncertainty/uncertainty.ts';
+import { show, sig, type DisplayKind } from './display-units.ts';
 
 /** Plain name of an input from its field path: "speed", "diameter of segment 2". */
 export function inputName(path: string): string {
@@ -12,6 +13,24 @@ export function inputName(path: string): string {
   m = /^stations\[(\d+)\]\.parts\[(\d+)\]\.(\w+)$/.exec(path);
   if (m) return `${m[3].replace(/_/g, ' ')} of part ${Number(m[2]) + 1} at station ${Number(m[1]) + 1}`;
   return path.replace(/_/g, ' ');
+}
+
+const QUANTITY: Record<string, DisplayKind> = {
+  speed: 'speed', diameter: 'length', bore: 'length', thickness: 'length', radius_of_gyration: 'length',
+  inertia: 'inertia', angle: 'angle', shear_modulus: 'stress', yield_strength: 'stress', tensile_strength: 'stress',
+};
+
+/** The kind of quantity an input's field path holds, for showing it in the case's units; undefined for one shown in SI (density, mass). */
+export function inputQuantity(path: string): DisplayKind | undefined {
+  const field = path === 'speed' ? 'speed' : /\.(\w+)$/.exec(path)?.[1];
+  return field !== undefined && Object.hasOwn(QUANTITY, field) ? QUANTITY[field] : undefined;
+}
+
+/** The chance of yield in words, as a sentence without its final stop: "0.04 % of the 10000 samples reach a yield ratio of 1 or more". */
+export function chanceOfYieldWords(u: Pick<Uncertainty, 'yieldProbability' | 'samples'>): string {
+  if (u.yieldProbability === 0) return `None of the ${u.samples} samples reaches a yield ratio of 1 (the chance of yield is below 1 in ${u.samples})`;
+  if (u.yieldProbability === 1) return `Every one of the ${u.samples} samples reaches a yield ratio of 1 or more`;
+  return `${sig(100 * u.yieldProbability, 3)} % of the ${u.samples} samples reach a yield ratio of 1 or more`;
 }
 
 /** The one-line finding: which input to measure better first. */

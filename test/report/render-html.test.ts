@@ -10,8 +10,8 @@ const PNG_URI = `data:image/png;base64,${TINY_PNG.toString('base64')}`;
 
 function hostileHtml() {
   const f = fixture('hostile.yaml');
-  const figures = drawFigures(f.results);
-  const md = renderReport(f.results, { run: RUN, source: f.source, figures, template: defaultTemplate() });
+  const figures = drawFigures(f.data);
+  const md = renderReport(f.data, { run: RUN, source: f.source, figures, template: defaultTemplate() });
   const html = renderHtml(md, {
     title: `${f.results.case.meta.id} ${f.results.case.meta.title}`,
     figures: Object.fromEntries(figures.map((x) => [figureHref(x.figure.name), x.figure.svg])),

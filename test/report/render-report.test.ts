@@ -2,14 +2,19 @@ import { describe, expect, it } from 'vitest';
 import { drawFigures } from '../../src/report/draw-figures.ts';
 import { REPORT_FIGURES, REPORT_SECTIONS } from '../../src/report/registry.ts';
 import { renderReport } from '../../src/report/render-report.ts';
+import type { ReportData } from '../../src/report/report-context.ts';
+import { plasticPiecesTable } from '../../src/report/tables/plastic-pieces-table.ts';
+import { plasticSidesTable } from '../../src/report/tables/plastic-sides-table.ts';
+import { markdownTable } from '../../src/report/tables/report-table.ts';
 import { show, sig } from '../../src/views/display-units.ts';
+import { describePlasticPiece } from '../../src/views/plastic-lines.ts';
 import { describePiece } from '../../src/views/summary.ts';
 import { defaultTemplate, fixture, RUN } from './report-fixtures.ts';
 
-function report(name: string) {
+function report(name: string, data = fixture(name).data) {
   const f = fixture(name);
-  const figures = drawFigures(f.results);
-  return { ...f, figures, md: renderReport(f.results, { run: RUN, source: f.source, figures, template: defaultTemplate() }) };
+  const figures = drawFigures(data);
+  return { ...f, figures, md: renderReport(data, { run: RUN, source: f.source, figures, template: defaultTemplate() }) };
 }
 
 /** The Markdown between `## title` and the next `## `. */
@@ -20,21 +25,27 @@ function section(md: string, title: string): string {
   return md.slice(start, end < 0 ? undefined : end);
 }
 
+const CASES = ['sample', 'two-sided-pump.yaml', 'elastic-fan.yaml', 'screw-conveyor-jam-us.yaml', 'exhaust-fan-seized-impeller.yaml'];
+const HOW_SURE = 'How sure the finding is';
+
 describe('renderReport', () => {
-  it.each(['sample', 'two-sided-pump.yaml', 'elastic-fan.yaml'])('renderReport(%s) has every registered section once, in order, and the sign-off', (name) => {
-    const { md } = report(name);
-    const positions = REPORT_SECTIONS.map((s) => md.indexOf(`\n## ${s.title}\n`));
-    for (const [i, p] of positions.entries()) expect(p, REPORT_SECTIONS[i].title).toBeGreaterThan(0);
+  it.each(CASES)('renderReport(%s) has every section that applies once, in order, and the sign-off', (name) => {
+    const { md, results } = report(name);
+    const shown = REPORT_SECTIONS.filter((s) => s.id !== 'uncertainty' || results.uncertainty);
+    const positions = shown.map((s) => md.indexOf(`\n## ${s.title}\n`));
+    for (const [i, p] of positions.entries()) expect(p, shown[i].title).toBeGreaterThan(0);
     expect([...positions].sort((a, b) => a - b)).toEqual(positions);
-    for (const s of REPORT_SECTIONS) expect(md.split(`\n## ${s.title}\n`)).toHaveLength(2);
+    for (const s of shown) expect(md.split(`\n## ${s.title}\n`)).toHaveLength(2);
+    expect(md.includes(`\n## ${HOW_SURE}\n`)).toBe(results.uncertainty !== undefined);
     expect(md).toContain('\n## Sign-off\n');
   });
 
   it('every number in the summary is one of the results object\'s, shown in the case\'s units', () => {
-    for (const name of ['sample', 'two-sided-pump.yaml', 'elastic-fan.yaml']) {
+    for (const name of CASES) {
       const { results: r, md } = report(name);
       const u = r.case.units;
       const g = r.governing.piece;
+      const p = r.plastic;
       const expected = [
         show(r.speed, 'speed', u, 4),
         ...r.sides.flatMap((s) => [show(s.kineticEnergy, 'energy', u), show(s.peakTorque, 'torque', u), show(s.twist, 'angle', u)]),
@@ -46,25 +57,91 @@ describe('renderReport', () => {
       ];
       const summary = section(md, 'Summary');
       for (const e of expected) expect(summary, `${name}: ${e}`).toContain(e);
-      // Conversely, every number in the summary comes from those values, the incident's date, the machine's or the material's name.
-      const allowed = new Set([...expected, r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[g.piece.segment.material].name, String(r.warnings.length)].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
-      for (const n of summary.replace(/side [AB]/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the summary`).toContain(n);
+      // Conversely, every number in the summary comes from those values, the plastic result, the
+      // uncertainty run, the incident's date, the machine's or the material's name.
+      const plastic = p.sides.flatMap((s) => [show(s.energy, 'energy', u), show(s.fractureEnergy, 'energy', u), show(s.peakTorque, 'torque', u), show(s.permanentTwist, 'angle', u), ...s.pieces.map((x) => describePlasticPiece(x, u))]);
+      const sure = r.uncertainty ? [String(r.uncertainty.samples), sig(100 * r.uncertainty.yieldProbability, 3)] : [];
+      const context = [r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[g.piece.segment.material].name, String(r.warnings.length), show(p.peakTorque, 'torque', u)];
+      const allowed = new Set([...expected, ...plastic, ...sure, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
+      for (const n of summary.replace(/side [AB]/g, '').replace(/a yield ratio of 1\b/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the summary`).toContain(n);
     }
   });
 
-  it('the summary states the verdict in plain words for both verdicts', () => {
-    expect(section(report('sample').md, 'Summary')).toMatch(/\*\*Verdict \(elastic energy method\):\*\* YIELDED: .*\n>\n> The shaft cannot have stayed elastic/);
-    expect(section(report('elastic-fan.yaml').md, 'Summary')).toMatch(/\*\*Verdict \(elastic energy method\):\*\* ELASTIC: .*\n>\n> The shaft can have stayed elastic/);
+  it('the summary states the overall verdict in plain words for each verdict, the elastic method\'s beside it', () => {
+    expect(section(report('sample').md, 'Summary')).toMatch(/> \*\*Verdict: YIELDED: the peak torque is capped by plasticity at .*\*\*\n>\n> The shaft cannot have stayed elastic: .* permanent twist of .*; no fracture is predicted\. .*\n>\n> Elastic energy method: YIELDED: /);
+    expect(section(report('elastic-fan.yaml').md, 'Summary')).toMatch(/> \*\*Verdict: ELASTIC: no yield is predicted\.\*\*\n>\n> The shaft can have stayed elastic/);
+    expect(section(report('exhaust-fan-seized-impeller.yaml').md, 'Summary')).toMatch(/> \*\*Verdict: FRACTURE PREDICTED: .*\*\*\n>\n> The shaft is predicted to break: side A had .* and it can absorb only .* before .* reaches its fracture strain\./);
+  });
+
+  it('with tolerances the summary gives the chance of yield from the uncertainty run', () => {
+    const { md, results } = report('screw-conveyor-jam-us.yaml');
+    expect(section(md, 'Summary')).toContain(`Over the case's tolerances (see How sure the finding is), ${sig(100 * results.uncertainty!.yieldProbability, 3)} % of the ${results.uncertainty!.samples} samples reach a yield ratio of 1 or more.`);
+  });
+
+  it('the findings are one section: the verdicts, past yield, the measured twist read back and the fracture reading', () => {
+    const { md, results } = report('exhaust-fan-seized-impeller.yaml');
+    const findings = section(md, 'Findings');
+    expect(md.match(/\n## Findings\n/g)).toHaveLength(1);
+    expect(findings).toMatch(/^\n## Findings\n\n\*\*Verdict: FRACTURE PREDICTED: /);
+    for (const h of ['### Past yield', '### Measured permanent twist, read back to the stop', '### Fracture']) expect(findings).toContain(h);
+    expect(findings).toContain(`Elastic energy method: YIELDED: `);
+    expect(findings).toContain(markdownTable(plasticSidesTable(results)));
+    expect(findings).toContain(markdownTable(plasticPiecesTable(results)!));
+    expect(findings).toMatch(/\*\*Agrees with the prediction\.\*\*/);
+    expect(findings).not.toContain('### Cautions');
+  });
+
+  it('a case with tolerances has the section "How sure the finding is" with every part the investigator needs', () => {
+    const { md, results } = report('screw-conveyor-jam-us.yaml');
+    const u = results.uncertainty!;
+    const s = section(md, HOW_SURE);
+    expect(s).toContain(`repeated ${u.samples} times (a seeded Monte Carlo, seed ${u.seed})`);
+    expect(s).toContain('A stated ± band is taken as two standard deviations of a normal distribution');
+    expect(s).toContain('A handbook minimum strength is taken as the 5th percentile of a normal distribution with a coefficient of variation of 7 %');
+    expect(s).toContain(`| yield ratio (elastic method, kt applied) | — | ${sig(results.yieldRatio)} | ${u.percentiles.yieldRatio.map((v) => sig(v)).join(' | ')} |`);
+    expect(s).toContain(`**Chance of yield:** ${sig(100 * u.yieldProbability, 3)} % of the ${u.samples} samples`);
+    expect(s).toContain(`| 1 | yield strength of aisi-1045-cd | ${sig(u.sensitivity[0].low)} | ${sig(u.sensitivity[0].high)} |`);
+    expect(s).toMatch(/\*\*Yield strength of aisi-1045-cd moves the yield ratio most \(from .* across its band\): measure it better first\.\*\*/);
+    expect(s).toContain('](figures/uncertainty-yield-ratio.svg)');
+    expect(s).toContain('](figures/uncertainty-sensitivity.svg)');
+  });
+
+  it('the speed interval behind a measured twist is stated with whether the recorded speed lies inside', () => {
+    const { md, results } = report('exhaust-fan-seized-impeller.yaml');
+    expect(results.uncertainty!.observed).toHaveLength(1);
+    // The twist measured between the bearings is zero and that shaft never yields: it cannot bound the speed.
+    expect(section(md, HOW_SURE)).toContain('Twist between "drive-end bearing" and "non-drive bearing": none was measured, and the shaft between these stations does not yield at any speed, so the measurement does not bound the speed.');
+  });
+
+  it('the recommendations carry what goes back in from the resize result given, computing nothing again', () => {
+    const { data, md } = report('sample');
+    expect(md.match(/\n## Recommendations: what goes back in\n/g)).toHaveLength(1);
+    expect(md).not.toContain('## What goes back in');
+    const rec = section(md, 'Recommendations: what goes back in');
+    expect(rec).toContain('| Option |');
+    expect(rec).toContain('### Guarding and restart');
+    // A resize result with a marked guarding line shows that line: the section reads what it is given.
+    const marked: ReportData = { ...data, resize: { ...data.resize, guarding: [{ topic: 'Marker', text: 'given, not recomputed' }] } };
+    expect(section(report('sample', marked).md, 'Recommendations: what goes back in')).toContain('- Marker: given, not recomputed');
   });
 
   it('each figure is linked once, numbered in order, in the section the registry names', () => {
     const { md, figures } = report('two-sided-pump.yaml');
-    expect(figures.map((f) => f.figure.name)).toEqual(['shaft-schematic', 'energy-share', 'stress-along-shaft', 'stress-vs-speed']);
+    expect(figures.map((f) => f.figure.name)).toEqual(['shaft-schematic', 'energy-share', 'stress-along-shaft', 'stress-vs-speed', 'torque-twist', 'resize-yield-ratio-vs-diameter', 'resize-peak-torque-vs-limiter']);
     figures.forEach((f, i) => {
       const title = REPORT_SECTIONS.find((s) => s.id === f.section)!.title;
       expect(section(md, title)).toContain(`![Figure ${i + 1}: ${f.figure.title}.`);
       expect(md.split(`](figures/${f.figure.name}.svg)`)).toHaveLength(2);
     });
+  });
+
+  it('the figures of past yield, the measured twist and the uncertainty run are drawn only where there is data', () => {
+    const names = (n: string) => report(n).figures.map((f) => f.figure.name);
+    expect(names('elastic-fan.yaml')).not.toContain('torque-twist');
+    expect(names('elastic-fan.yaml').some((n) => n.startsWith('uncertainty-'))).toBe(false);
+    expect(names('screw-conveyor-jam-us.yaml')).toEqual(expect.arrayContaining(['uncertainty-yield-ratio', 'uncertainty-sensitivity']));
+    expect(names('exhaust-fan-seized-impeller.yaml')).toContain('torque-twist');
+    expect(names('sample')).toContain('permanent-twist-speed-1');
   });
 
   it('every registered figure names a registered section', () => {
@@ -80,10 +157,17 @@ describe('renderReport', () => {
     expect(md).toContain(source.sha256);
   });
 
-  it('the method lists the engine\'s warnings', () => {
+  it('the sources list the formulas past yield, of the fracture, the key, the drive and the Monte Carlo', () => {
+    const sources = section(report('sample').md, 'Sources');
+    for (const s of ['Beer & Johnston, Mechanics of Materials, Sec. 3.9–3.11', 'Dieter, Mechanical Metallurgy, 3rd ed., Sec. 8-3', 'ASM Handbook Vol. 11', 'Shigley 9th ed., Sec. 7-7', 'T = P/ω', 'mulberry32', 'Box & Muller', 'Hyndman & Fan']) expect(sources).toContain(s);
+  });
+
+  it('the method lists the engine\'s warnings and the assumptions past yield', () => {
     const { md, results } = report('two-sided-pump.yaml');
     expect(results.warnings.length).toBeGreaterThan(0);
-    for (const w of results.warnings) expect(section(md, 'Method and assumptions')).toContain(w);
+    const method = section(md, 'Method and assumptions');
+    for (const w of results.warnings) expect(method).toContain(w);
+    for (const a of results.plastic.assumptions) expect(method).toContain(a);
   });
 
   it('the Markdown report of the two-sided US case matches its snapshot', () => {

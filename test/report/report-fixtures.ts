@@ -3,14 +3,18 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { existsSync } from 'node:fs';
 import { parseCase } from '../../src/case/parse-case.ts';
-import type { CaseSource } from '../../src/report/report-context.ts';
+import { buildReportData } from '../../src/report/build-report-data.ts';
+import type { CaseSource, ReportContext, ReportData } from '../../src/report/report-context.ts';
 import { runInfo } from '../../src/report/run-info.ts';
-import { analyseCase } from '../../src/results/analyse-case.ts';
 import type { Results } from '../../src/results/results.ts';
 
 export const DATA = fileURLToPath(new URL('../data/report/', import.meta.url));
-export const SAMPLE = fileURLToPath(new URL('../../sample-cases/granulator-tramp-metal.yaml', import.meta.url));
+export const SAMPLE_CASES = fileURLToPath(new URL('../../sample-cases/', import.meta.url));
+export const SAMPLE = join(SAMPLE_CASES, 'granulator-tramp-metal.yaml');
+/** The sample case with a tolerance on its speed, so its report has the uncertainty section. */
+export const TOLERANCED_SAMPLE = join(SAMPLE_CASES, 'screw-conveyor-jam-us.yaml');
 export const DEFAULT_TEMPLATE = fileURLToPath(new URL('../../templates/report.md', import.meta.url));
 
 /** A fixed run (vitest pins TZ=UTC), so reports made in tests do not depend on the clock. */
@@ -18,20 +22,32 @@ export const FIXED_NOW = new Date('2026-12-01T10:20:30Z');
 export const RUN = runInfo(FIXED_NOW, '9.9.9-test');
 
 export interface Fixture {
+  /** What the report shows, as the report command builds it (investigate, then resize). */
+  data: ReportData;
   results: Results;
   source: CaseSource;
+  /** The context every section renders from, with the fixed run. */
+  ctx: ReportContext;
   path: string;
 }
 
-/** A test case by file name in test/data/report/, or the sample case for "sample". */
+const made = new Map<string, Fixture>();
+
+/**
+ * A test case by file name in test/data/report/ (else in sample-cases/), or the granulator sample
+ * case for "sample". Built once per name (the Monte Carlo of a toleranced case takes a moment);
+ * treat it as read-only.
+ */
 export function fixture(name: string): Fixture {
-  const path = name === 'sample' ? SAMPLE : join(DATA, name);
+  const path = name === 'sample' ? SAMPLE : existsSync(join(DATA, name)) ? join(DATA, name) : join(SAMPLE_CASES, name);
+  const cached = made.get(path);
+  if (cached) return cached;
   const text = readFileSync(path, 'utf8');
-  return {
-    results: analyseCase(parseCase(text, basename(path))),
-    source: { file: basename(path), text, sha256: createHash('sha256').update(text).digest('hex') },
-    path,
-  };
+  const data = buildReportData(parseCase(text, basename(path)));
+  const source = { file: basename(path), text, sha256: createHash('sha256').update(text).digest('hex') };
+  const f = { data, results: data.results, source, ctx: { ...data, run: RUN, source }, path };
+  made.set(path, f);
+  return f;
 }
 
 export function defaultTemplate(): { text: string; file: string } {

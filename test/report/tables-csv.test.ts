@@ -35,11 +35,26 @@ describe('report tables as CSV', () => {
     expect(rows.map((row) => Number(row[col]))).toEqual(stresses);
   });
 
-  it('every registered table is written, with a header and one line per row', () => {
+  it('every registered table with something to show is written, with a header and one line per row', () => {
     const r = fixture('sample').results;
     const tables = reportTablesCsv(r);
-    expect(tables.map((t) => t.name)).toEqual(['parts', 'segments', 'sides', 'pieces', 'material']);
+    // The granulator yields and states no tolerances: the past-yield tables, no uncertainty tables.
+    expect(tables.map((t) => t.name)).toEqual(['parts', 'segments', 'sides', 'pieces', 'material', 'past-yield-sides', 'past-yield-pieces']);
     expect(readCsv(tables.find((t) => t.name === 'segments')!.csv)).toHaveLength(1 + r.case.shaft.segments.length);
+    const elastic = reportTablesCsv(fixture('elastic-fan.yaml').results).map((t) => t.name);
+    expect(elastic).toContain('past-yield-sides');
+    expect(elastic).not.toContain('past-yield-pieces');
+  });
+
+  it('a case with tolerances adds the inputs, percentiles and sensitivity of its uncertainty run', () => {
+    const r = fixture('screw-conveyor-jam-us.yaml').results;
+    const tables = reportTablesCsv(r);
+    expect(tables.map((t) => t.name)).toEqual(expect.arrayContaining(['uncertainty-inputs', 'uncertainty-percentiles', 'uncertainty-sensitivity']));
+    const [header, ...rows] = readCsv(tables.find((t) => t.name === 'uncertainty-percentiles')!.csv);
+    expect(header).toEqual(['quantity', 'unit', 'single run', '5th percentile', 'median', '95th percentile']);
+    expect(rows[0].slice(2).map(Number)).toEqual([r.yieldRatio, ...r.uncertainty!.percentiles.yieldRatio]);
+    const ranked = readCsv(tables.find((t) => t.name === 'uncertainty-sensitivity')!.csv).slice(1);
+    expect(ranked.map((row) => Number(row[2]))).toEqual(r.uncertainty!.sensitivity.map((s) => s.low));
   });
 
   it('text a spreadsheet would run as a formula is written with a leading apostrophe; numbers are not touched', () => {

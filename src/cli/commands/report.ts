@@ -6,6 +6,7 @@ import { loadCase } from '../../io/load-case.ts';
 import { packageFile } from '../../io/package-files.ts';
 import { readPhotos } from '../../io/read-photos.ts';
 import { writeReport, type ReportFile } from '../../io/write-report.ts';
+import { buildReportData } from '../../report/build-report-data.ts';
 import { drawFigures } from '../../report/draw-figures.ts';
 import { figureHref, photoHref, tableHref } from '../../report/layout.ts';
 import { renderHtml } from '../../report/render-html.ts';
@@ -13,7 +14,7 @@ import { renderReport } from '../../report/render-report.ts';
 import { reportJson } from '../../report/report-json.ts';
 import { runInfo } from '../../report/run-info.ts';
 import { reportTablesCsv } from '../../report/tables-csv.ts';
-import { analyseCase } from '../../results/analyse-case.ts';
+import { overallVerdictSentence } from '../../views/plastic-lines.ts';
 import { verdictSentence } from '../../views/summary.ts';
 import type { Io } from '../main.ts';
 import { version } from '../version.ts';
@@ -21,19 +22,26 @@ import { version } from '../version.ts';
 export interface ReportOptions {
   template?: string;
   pdf?: boolean;
+  /** Monte Carlo samples and seed, as `check` takes them. */
+  samples?: number;
+  seed?: number;
+  /** Design factor for what goes back in, as `resize` takes it. */
+  factor?: number;
 }
 
 /** `shaftcase report CASE`: a new dated report folder and its zip beside the case. */
 export async function reportCommand(path: string, opts: ReportOptions, io: Io, now: Date): Promise<void> {
   const loaded = loadCase(path);
-  const results = analyseCase(loaded.case);
+  // Everything the report shows is computed here, once; rendering only reads it.
+  const data = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor });
+  const { results } = data;
   const template = readTemplate(opts.template);
   const photos = readPhotos(loaded.file, loaded.text, loaded.case.observed.photos);
   const run = runInfo(now, version());
   const source = { file: basename(loaded.file), text: loaded.text, sha256: loaded.sha256 };
 
-  const figures = drawFigures(results);
-  const markdown = renderReport(results, { run, source, figures, template });
+  const figures = drawFigures(data);
+  const markdown = renderReport(data, { run, source, figures, template });
   const meta = loaded.case.meta;
   const html = renderHtml(markdown, {
     title: `${meta.id}${meta.title ? ` ${meta.title}` : ''}: investigation report`,
@@ -43,7 +51,7 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
   const files: ReportFile[] = [
     { path: 'report.md', data: markdown },
     { path: 'report.html', data: html },
-    { path: 'results.json', data: JSON.stringify(reportJson(results, run, source), null, 2) + '\n' },
+    { path: 'results.json', data: JSON.stringify(reportJson(data, run, source), null, 2) + '\n' },
     ...figures.map((f) => ({ path: figureHref(f.figure.name), data: f.figure.svg })),
     ...reportTablesCsv(results).map((t) => ({ path: tableHref(t.name), data: t.csv })),
   ];
@@ -62,6 +70,7 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
   lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
   lines.push(`Open ${written.folder}/report.html`);
   lines.push(`Verdict (elastic energy method): ${verdictSentence(results)}`);
+  lines.push(`Verdict: ${overallVerdictSentence(results)}`);
   io.out(lines.join('\n') + '\n');
 }
 

@@ -2,7 +2,8 @@ import * as Plot from '@observablehq/plot';
 import type { Results } from '../../results/results.ts';
 import { show, sig } from '../../views/display-units.ts';
 import type { ReportFigure } from './report-figure.ts';
-import { FIGURE_WIDTH, frameFigure, marginFor, plotDocument } from './svg-frame.ts';
+import { plotToSvg } from './plot-svg.ts';
+import { FIGURE_WIDTH, marginFor } from './svg-frame.ts';
 
 /** Bars of each part's share of the kinetic energy the shaft had to take. */
 export function energyShareFigure(r: Results): ReportFigure | undefined {
@@ -24,8 +25,7 @@ export function energyShareFigure(r: Results): ReportFigure | undefined {
   }
   if (bars.length === 0 || !(r.kineticEnergy > 0)) return undefined;
   const labels = bars.map((b) => b.label);
-  const plot = Plot.plot({
-    document: plotDocument(),
+  const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
     height: 50 + 32 * bars.length,
     marginLeft: marginFor(labels),
@@ -37,11 +37,11 @@ export function energyShareFigure(r: Results): ReportFigure | undefined {
       Plot.text(bars, { x: 'share', y: 'label', text: (b) => `${sig(b.share)} % (${show(b.energy, 'energy', u)})`, textAnchor: 'start', dx: 4 }),
       Plot.ruleX([0]),
     ],
-  }) as unknown as Element;
+  };
   const top = bars.reduce((a, b) => (b.share > a.share ? b : a));
   const title = 'Share of the kinetic energy by part';
   const caption = `Each bar is one part's share of the ${show(r.kineticEnergy, 'energy', u)} the shaft had to take at the stop (side · station · part); the largest share, ${sig(top.share)} %, is "${top.full}", the part whose inertia matters most.`;
-  return { name: 'energy-share', title, caption, svg: frameFigure(plot, title, caption) };
+  return { name: 'energy-share', title, caption, svg: plotToSvg(options, title, caption) };
 }
 
 function truncate(text: string, n: number): string {

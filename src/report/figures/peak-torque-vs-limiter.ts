@@ -2,17 +2,20 @@ import * as Plot from '@observablehq/plot';
 import type { ResizeResult } from '../../resize/resize-result.ts';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, unitLabel } from '../../views/display-units.ts';
-import { plotToSvg, type ReportFigure } from './plot-svg.ts';
+import { plotToSvg } from './plot-svg.ts';
+import type { ReportFigure } from './report-figure.ts';
+import { FIGURE_WIDTH } from './svg-frame.ts';
 
 /**
  * Repeat-incident peak torque against a torque limiter's setting, with the incident's unlimited
  * peak and the setting window (running torque × service factor to the shaft's allowable torque).
  * The points come from the resize options' limiter sweep (the energy method, or the dynamics model
- * through the same seam); nothing is computed here.
+ * through the same seam); nothing is computed here. Undefined when the sweep has no points.
  */
-export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeResult): ReportFigure {
+export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeResult): ReportFigure | undefined {
   const u = results.case.units;
   const l = resize.limiter;
+  if (l.sweep.length < 2) return undefined;
   const t = (v: number) => inDisplay(v, 'torque', u);
   const label = unitLabel('torque', u);
   const points = l.sweep.map((s) => ({ x: t(s.setting), y: t(s.peakTorque) }));
@@ -35,8 +38,8 @@ export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeR
     );
   }
   marks.push(Plot.line(points, { x: 'x', y: 'y', stroke: 'black' }));
-  const svg = plotToSvg({
-    width: 680,
+  const options: Plot.PlotOptions = {
+    width: FIGURE_WIDTH,
     height: 380,
     marginLeft: 64,
     marginRight: 24,
@@ -44,12 +47,10 @@ export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeR
     x: { type: 'log', label: `limiter setting (${label})`, labelAnchor: 'center', domain: [points[0].x, xEnd], tickFormat: '~s' },
     y: { type: 'log', label: `repeat-incident peak torque (${label})`, domain: [yMin, yMax], grid: true, tickFormat: '~s' },
     marks,
-  });
-  const window = l.min === undefined ? 'the lower end is unknown (no running torque in the case)' : l.windowEmpty ? 'the window is empty' : 'shaded: the window of settings';
-  return {
-    name: 'resize-peak-torque-vs-limiter',
-    title: `Repeat-incident peak torque against the limiter's setting at "${l.station}"`,
-    caption: `Both axes logarithmic. Peak torque between the limiter and the stop in a repeat of the incident against the limiter's slip torque (${l.slip.method}). Dashed red line: the incident's peak without a limiter. Blue line: the shaft's allowable torque at the design factor; ${window}.`,
-    svg,
   };
+  const window = l.min === undefined ? 'the lower end is unknown (no running torque in the case)' : l.windowEmpty ? 'the window is empty' : 'shaded: the window of settings';
+  const title = `Repeat-incident peak torque against the limiter's setting at "${l.station}"`;
+  const caption =
+    `Both axes logarithmic. Peak torque between the limiter and the stop in a repeat of the incident against the limiter's slip torque (${l.slip.method}). Dashed red line: the incident's peak without a limiter. Blue line: the shaft's allowable torque at the design factor; ${window}.`;
+  return { name: 'resize-peak-torque-vs-limiter', title, caption, svg: plotToSvg(options, title, caption) };
 }

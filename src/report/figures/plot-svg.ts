@@ -1,24 +1,17 @@
 import * as Plot from '@observablehq/plot';
-import { parseHTML } from 'linkedom';
-
-/** A figure for the report: a file name without extension, a title, a caption and standalone SVG text. */
-export interface ReportFigure {
-  name: string;
-  title: string;
-  caption: string;
-  svg: string;
-}
+import { frameFigure, plotDocument } from './svg-frame.ts';
 
 /**
- * Draws a Plot chart server-side with linkedom's document and returns standalone SVG text. Plot
- * wraps the chart in a <figure> when it has a legend or caption, so the inner <svg> is taken; the
- * svg namespace is set because neither DOM library adds it (shared STACK.md, pitfalls).
+ * The one way the report draws a chart: @observablehq/plot in Node with linkedom's document
+ * (`plotDocument`), framed as a standalone SVG with the title and caption drawn in (`frameFigure`:
+ * white background, `xmlns` set). Plot wraps the chart in a <figure> when it has a legend or
+ * caption, so the inner <svg> is taken (shared STACK.md, pitfalls). Plot cannot measure text in
+ * Node: set margins for long labels (`marginFor`). Avoid Plot's `clip` and `marker` options, whose
+ * ids count up across plots and break byte-identical output.
  */
-export function plotToSvg(options: Plot.PlotOptions): string {
-  const { document } = parseHTML('<!doctype html><html><body></body></html>');
-  const el = Plot.plot({ ...options, document: document as unknown as Document }) as unknown as Element;
+export function plotToSvg(options: Plot.PlotOptions, title: string, caption: string): string {
+  const el = Plot.plot({ ...options, document: plotDocument() }) as unknown as Element;
   const svg = el.tagName.toLowerCase() === 'svg' ? el : el.querySelector('svg');
   if (!svg) throw new Error('plotToSvg: the plot has no <svg>');
-  svg.setAttribute('xmlns', 'http://www.w3.org/2000/svg');
-  return svg.outerHTML;
+  return frameFigure(svg, title, caption);
 }

@@ -1,4 +1,4 @@
-import type { Results } from '../../results/results.ts';
+import type { ReportData } from '../report-context.ts';
 
 /** One figure of the report: `figures/NAME.svg`, embedded in the HTML and linked from the Markdown. */
 export interface ReportFigure {
@@ -11,5 +11,8 @@ export interface ReportFigure {
   svg: string;
 }
 
-/** Draws one figure from the results, or returns undefined when the case has nothing to show in it. */
-export type FigureDrawer = (results: Results) => ReportFigure | undefined;
+/**
+ * Draws a figure (or one per item, such as per measured twist) from what the report shows, or
+ * returns undefined (or none) when the case has nothing to show in it.
+ */
+export type FigureDrawer = (data: ReportData) => ReportFigure | readonly ReportFigure[] | undefined;

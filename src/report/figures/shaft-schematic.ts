@@ -3,7 +3,8 @@ import type { Part } from '../../case/case.ts';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, sig, unitLabel } from '../../views/display-units.ts';
 import type { ReportFigure } from './report-figure.ts';
-import { FIGURE_WIDTH, frameFigure, plotDocument } from './svg-frame.ts';
+import { plotToSvg } from './plot-svg.ts';
+import { FIGURE_WIDTH } from './svg-frame.ts';
 
 interface Block {
   x1: number;
@@ -53,8 +54,7 @@ export function shaftSchematicFigure(r: Results): ReportFigure | undefined {
   const stretch = innerHeight / natural;
   const stop = c.stations.find((s) => s.name === c.stop.at)!;
 
-  const plot = Plot.plot({
-    document: plotDocument(),
+  const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
     height: Math.round(innerHeight + MARGIN.top + MARGIN.bottom),
     ...Object.fromEntries(Object.entries(MARGIN).map(([k, v]) => [`margin${k[0].toUpperCase()}${k.slice(1)}`, v])),
@@ -72,11 +72,11 @@ export function shaftSchematicFigure(r: Results): ReportFigure | undefined {
       Plot.text([stop], { x: (s) => len(s.at), y: yDomain[1], text: (s) => `STOP: ${s.name}`, dy: -8, fill: '#b22222', fontWeight: 'bold' }),
       Plot.text(blocks, { x: (b) => (b.x1 + b.x2) / 2, y: 'y1', text: 'label', dy: 10, fontSize: 9, fill: '#6b5a3a' }),
     ],
-  }) as unknown as Element;
+  };
   const title = 'The shaft as modelled';
   const scale = Math.abs(stretch - 1) < 1e-9 ? 'drawn to scale' : `radii drawn ${sig(stretch, 2)} × the length scale`;
   const caption = `Segments (grey, each marked with Ø and its diameter) and parts (brown; dashed where the size is not known or the part turns through a ratio), ${scale}; the red line is the stop at "${stop.name}", where the shaft was held while the parts kept turning.`;
-  return { name: 'shaft-schematic', title, caption, svg: frameFigure(plot, title, caption) };
+  return { name: 'shaft-schematic', title, caption, svg: plotToSvg(options, title, caption) };
 }
 
 /** A part's block, m: a disc at its size, a mass as the equivalent solid disc, anything else nominal. */

@@ -2,7 +2,8 @@ import * as Plot from '@observablehq/plot';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, show, sig, unitLabel } from '../../views/display-units.ts';
 import type { ReportFigure } from './report-figure.ts';
-import { FIGURE_WIDTH, frameFigure, plotDocument } from './svg-frame.ts';
+import { plotToSvg } from './plot-svg.ts';
+import { FIGURE_WIDTH } from './svg-frame.ts';
 
 interface StepPoint {
   x: number;
@@ -35,8 +36,7 @@ export function stressAlongShaftFigure(r: Results): ReportFigure | undefined {
   const stopAt = len(r.case.stations.find((s) => s.name === r.case.stop.at)!.at);
   const top = Math.max(...stressPts.map((p) => p.y), ...yieldPts.map((p) => p.y)) * 1.15;
   const firstYield = yieldPts.reduce((a, b) => (b.x < a.x ? b : a));
-  const plot = Plot.plot({
-    document: plotDocument(),
+  const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
     height: 320,
     marginLeft: 60,
@@ -52,9 +52,9 @@ export function stressAlongShaftFigure(r: Results): ReportFigure | undefined {
       Plot.line(stressPts, { x: 'x', y: 'y', z: 'series', stroke: '#1f4e8c', strokeWidth: 2 }),
       Plot.text(ktLabels, { x: 'x', y: 'y', text: 'text', dy: -8, fill: '#1f4e8c' }),
     ],
-  }) as unknown as Element;
+  };
   const g = r.governing;
   const title = 'Shear stress along the shaft at the stop';
   const caption = `The solid line is the elastic shear stress in each loaded piece of shaft (kt applied where given), the dashed line the shear yield of its material; the highest, ${show(g.piece.shearStress, 'stress', u)} on side ${g.side.side}, is ${sig(r.yieldRatio)} × yield. Shaft beyond the last loaded station carries no torque.`;
-  return { name: 'stress-along-shaft', title, caption, svg: frameFigure(plot, title, caption) };
+  return { name: 'stress-along-shaft', title, caption, svg: plotToSvg(options, title, caption) };
 }

@@ -3,7 +3,8 @@ import { analyseCase } from '../../results/analyse-case.ts';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, show, sig, unitLabel } from '../../views/display-units.ts';
 import type { ReportFigure } from './report-figure.ts';
-import { FIGURE_WIDTH, frameFigure, plotDocument } from './svg-frame.ts';
+import { plotToSvg } from './plot-svg.ts';
+import { FIGURE_WIDTH } from './svg-frame.ts';
 
 /** Samples of the sweep from zero to 1.5 × the incident's speed. */
 const SAMPLES = 30;
@@ -31,8 +32,7 @@ export function stressVsSpeedFigure(r: Results): ReportFigure | undefined {
   const xMax = rpm(SPAN * r.speed);
   const top = Math.max(tauY, ...points.map((p) => p.y)) * 1.1;
   const yieldShown = yieldSpeed <= SPAN * r.speed;
-  const plot = Plot.plot({
-    document: plotDocument(),
+  const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
     height: 320,
     marginLeft: 60,
@@ -54,13 +54,13 @@ export function stressVsSpeedFigure(r: Results): ReportFigure | undefined {
       Plot.dot([incident], { x: 'x', y: 'y', r: 5, fill: '#b22222' }),
       Plot.text([incident], { x: 'x', y: 'y', text: () => `incident, ${show(r.speed, 'speed', u, 4)}`, dx: -8, textAnchor: 'end', fill: '#b22222' }),
     ],
-  }) as unknown as Element;
+  };
   const title = 'Peak shear stress against the speed at the stop';
   const where = yieldShown
     ? `yield begins at ${show(yieldSpeed, 'speed', u)}, ${sig((100 * yieldSpeed) / r.speed)} % of the incident's ${show(r.speed, 'speed', u, 4)}`
     : `yield would begin only at ${show(yieldSpeed, 'speed', u)}, beyond the plotted range`;
   const caption = `The stress in the most-loaded piece grows in proportion to the speed at the stop (elastic energy method); ${where}.`;
-  return { name: 'stress-vs-speed', title, caption, svg: frameFigure(plot, title, caption) };
+  return { name: 'stress-vs-speed', title, caption, svg: plotToSvg(options, title, caption) };
 }
 
 /** The speed at the stop at which the governing piece just reaches shear yield, rad/s (stress ∝ speed). */

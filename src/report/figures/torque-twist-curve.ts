@@ -2,16 +2,20 @@ import * as Plot from '@observablehq/plot';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, show, unitLabel } from '../../views/display-units.ts';
 import { describePlasticPiece } from '../../views/plastic-lines.ts';
-import { plotToSvg, type ReportFigure } from './plot-svg.ts';
+import { plotToSvg } from './plot-svg.ts';
+import type { ReportFigure } from './report-figure.ts';
+import { FIGURE_WIDTH } from './svg-frame.ts';
 
 /**
  * Torque against twist of the most strained piece during the stop: the loading path to the peak,
  * the elastic unloading line down to the permanent twist, and the energy the piece absorbed
- * shaded under the loading path. Every number comes from `results.plastic`.
+ * shaded under the loading path. Every number comes from `results.plastic`. Drawn only when the
+ * shaft went past yield (an elastic stop's curve is a straight line with no permanent twist).
  */
-export function torqueTwistFigure(r: Results): ReportFigure {
+export function torqueTwistFigure(r: Results): ReportFigure | undefined {
   const u = r.case.units;
   const ms = r.plastic.mostStrained;
+  if (r.plastic.verdict === 'elastic' || ms.curve.length < 2) return undefined;
   const side = r.plastic.sides.find((s) => s.side === ms.side)!;
   const piece = side.pieces[ms.index];
   const deg = (rad: number) => inDisplay(rad, 'angle', u);
@@ -36,23 +40,20 @@ export function torqueTwistFigure(r: Results): ReportFigure {
     marks.push(Plot.ruleY([tq(piece.plasticTorque)], { stroke: '#999', strokeDasharray: '2,3', ariaDescription: 'fully plastic torque' }));
     marks.push(Plot.text([{ x: 0, y: tq(piece.plasticTorque) }], { x: 'x', y: 'y', text: () => `fully plastic ${show(piece.plasticTorque, 'torque', u)}`, dy: -7, dx: 6, textAnchor: 'start', fill: '#666', ariaDescription: 'fully plastic label' }));
   }
-  const svg = plotToSvg({
-    width: 640,
+  const options: Plot.PlotOptions = {
+    width: FIGURE_WIDTH,
     height: 400,
     marginLeft: 70,
     marginBottom: 45,
     x: { label: `twist of the piece (${unitLabel('angle', u)})`, domain: [0, xMax] },
     y: { label: `torque (${unitLabel('torque', u)})`, domain: [0, Math.max(peak.y, tq(Number.isFinite(piece.plasticTorque) ? piece.plasticTorque : 0)) * 1.12 || 1] },
     marks,
-  });
-  const where = describePlasticPiece(piece, u);
-  return {
-    name: 'torque-twist',
-    title: `Torque against twist of the most strained piece (side ${side.side})`,
-    caption:
-      `${where}: loading path to the peak torque of ${show(side.peakTorque, 'torque', u)} at ${show(piece.state.twist, 'angle', u)}, ` +
-      `elastic unloading to a permanent twist of ${show(piece.state.permanentTwist, 'angle', u)}; shaded, the ${show(piece.state.energy, 'energy', u)} the piece absorbed. ` +
-      `${r.case.analysis.hardening === 'linear' ? 'Linear strain hardening assumed' : 'Elastic–perfectly plastic'}; net section, no kt.`,
-    svg,
   };
+  const where = describePlasticPiece(piece, u);
+  const title = `Torque against twist of the most strained piece (side ${side.side})`;
+  const caption =
+    `${where}: loading path to the peak torque of ${show(side.peakTorque, 'torque', u)} at ${show(piece.state.twist, 'angle', u)}, ` +
+    `elastic unloading to a permanent twist of ${show(piece.state.permanentTwist, 'angle', u)}; shaded, the ${show(piece.state.energy, 'energy', u)} the piece absorbed. ` +
+    `${r.case.analysis.hardening === 'linear' ? 'Linear strain hardening assumed' : 'Elastic–perfectly plastic'}; net section, no kt.`;
+  return { name: 'torque-twist', title, caption, svg: plotToSvg(options, title, caption) };
 }

@@ -4,16 +4,20 @@ import { sideYieldRatio } from '../../resize/side-ratio.ts';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, sig, unitLabel } from '../../views/display-units.ts';
 import { segName } from '../../views/resize-words.ts';
-import { plotToSvg, type ReportFigure } from './plot-svg.ts';
+import { plotToSvg } from './plot-svg.ts';
+import type { ReportFigure } from './report-figure.ts';
+import { FIGURE_WIDTH } from './svg-frame.ts';
 
 /**
  * Repeat-incident yield ratio of the governing side against the diameter of its critical segment
  * (the others as they are), with the line of the design factor (1/N) and the stock sizes marked.
  * Every point is a rerun of the engine made by the resize options; nothing is computed here.
+ * Undefined when the sweep has no points.
  */
-export function yieldRatioAgainstDiameterFigure(results: Results, resize: ResizeResult): ReportFigure {
+export function yieldRatioAgainstDiameterFigure(results: Results, resize: ResizeResult): ReportFigure | undefined {
   const u = results.case.units;
   const k = resize.criticalSegment;
+  if (k.sweep.length < 2) return undefined;
   const d = (m: number) => inDisplay(m, 'length', u);
   const seg = segName(k.segment);
   const sidePoints = k.sweep.map((p) => ({ x: d(p.diameter), y: p.sideYieldRatio }));
@@ -36,8 +40,8 @@ export function yieldRatioAgainstDiameterFigure(results: Results, resize: Resize
     const pt = [{ x: d(k.stockDiameter), y: sideYieldRatio(k.stockRerun, k.side) }];
     marks.push(Plot.dot(pt, { x: 'x', y: 'y', r: 4, fill: 'black' }), Plot.text(pt, { x: 'x', y: 'y', text: () => `stock Ø${sig(pt[0].x)} ${unitLabel('length', u)}`, dx: 6, dy: -8, textAnchor: 'start' }));
   }
-  const svg = plotToSvg({
-    width: 680,
+  const options: Plot.PlotOptions = {
+    width: FIGURE_WIDTH,
     height: 380,
     marginLeft: 56,
     marginRight: 24,
@@ -45,11 +49,9 @@ export function yieldRatioAgainstDiameterFigure(results: Results, resize: Resize
     x: { label: `diameter of ${seg} (${unitLabel('length', u)})`, labelAnchor: 'center' },
     y: { type: log ? 'log' : 'linear', domain: [yMin, yMax], label: 'repeat-incident yield ratio', grid: true, tickFormat: '~g' },
     marks,
-  });
-  return {
-    name: 'resize-yield-ratio-vs-diameter',
-    title: `Repeat-incident yield ratio against the diameter of ${seg}`,
-    caption: `Highest yield ratio on side ${k.side} (solid) and of ${seg} itself (dashed) in a repeat of the incident, the other segments as they are and the bore ratio kept; each point is a rerun of the elastic energy method. Dashed red line: 1/N for the design factor N = ${sig(resize.designFactor)}. Ticks at the foot: stock sizes (${resize.stockSeries}).`,
-    svg,
   };
+  const title = `Repeat-incident yield ratio against the diameter of ${seg}`;
+  const caption =
+    `Highest yield ratio on side ${k.side} (solid) and of ${seg} itself (dashed) in a repeat of the incident, the other segments as they are and the bore ratio kept; each point is a rerun of the elastic energy method. Dashed red line: 1/N for the design factor N = ${sig(resize.designFactor)}. Ticks at the foot: stock sizes (${resize.stockSeries}).`;
+  return { name: 'resize-yield-ratio-vs-diameter', title, caption, svg: plotToSvg(options, title, caption) };
 }

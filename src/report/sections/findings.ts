@@ -1,24 +1,104 @@
+import type { Results } from '../../results/results.ts';
+import type { TwistFinding } from '../../results/twist-findings.ts';
 import { show } from '../../views/display-units.ts';
+import { bandText, overallVerdictSentence } from '../../views/plastic-lines.ts';
 import { describePiece, verdictSentence } from '../../views/summary.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
+import { plasticPiecesTable } from '../tables/plastic-pieces-table.ts';
+import { plasticSidesTable } from '../tables/plastic-sides-table.ts';
+import { markdownTable } from '../tables/report-table.ts';
 
-/** What the numbers establish, one finding a line. */
+const FINDING_HEAD: Record<TwistFinding['finding'], string> = {
+  consistent: 'Consistent with the recorded speed',
+  more: 'More than the recorded speed explains',
+  less: 'Less than the recorded speed explains',
+  no_loaded_shaft: 'No loaded shaft between these stations',
+  unexplained: 'Not explained by any speed',
+};
+
+/**
+ * What the numbers establish: the overall verdict, the elastic method's, the result past yield,
+ * each measured permanent twist read back to the stop and the fracture compared with the
+ * prediction. Every number comes from the results; all text is escaped whole (it holds the case's
+ * names). The observations themselves are in their own section, the cautions in theirs.
+ */
 export const findingsSection: ReportSection = {
   id: 'findings',
   title: 'Findings',
   render({ results: r }) {
-    const u = r.case.units;
-    const items = [
-      `Verdict of the elastic energy method: ${verdictSentence(r)}`,
-      ...r.sides.map((s) => {
-        const worst = s.pieces.reduce((a, b) => (b.yieldRatio > a.yieldRatio ? b : a));
-        return `Side ${s.side} (${s.stations.join(', ')}): peak torque ${show(s.peakTorque, 'torque', u)}, which every key, hub and coupling between the stop and these stations had to carry; the most stressed piece on this side is ${describePiece(worst, u)} at ${show(worst.shearStress, 'stress', u)}.`;
-      }),
-      r.warnings.length > 0
-        ? `The engine raised ${r.warnings.length} warning${r.warnings.length === 1 ? '' : 's'} about the model's fit to this case (listed under the method); weigh the numbers with them.`
-        : 'The engine raised no warning about the model\'s fit to this case.',
-    ];
-    return bulletList(items.map(escapeMarkdown));
+    return [verdicts(r), pastYield(r), ...twistReadBack(r), ...fractureReading(r)].join('\n\n');
   },
 };
+
+function verdicts(r: Results): string {
+  const u = r.case.units;
+  const items = [
+    `Elastic energy method: ${verdictSentence(r)}`,
+    ...r.sides.map((s) => {
+      const worst = s.pieces.reduce((a, b) => (b.yieldRatio > a.yieldRatio ? b : a));
+      return `Side ${s.side} (${s.stations.join(', ')}): elastic peak torque ${show(s.peakTorque, 'torque', u)}; the most stressed piece on this side is ${describePiece(worst, u)} at ${show(worst.shearStress, 'stress', u)}.`;
+    }),
+    ...(r.plastic.verdict === 'elastic'
+      ? []
+      : [`Past yield, the energy balance caps the peak torque at ${show(r.plastic.peakTorque, 'torque', u)}${r.plastic.verdict === 'fracture predicted' ? ' (at the break)' : ''}: the torque every key, hub and coupling between the stop and the loaded stations had to carry.`]),
+    r.warnings.length > 0
+      ? `The engine raised ${r.warnings.length} warning${r.warnings.length === 1 ? '' : 's'} about the model's fit to this case (listed under the method); weigh the numbers with them.`
+      : "The engine raised no warning about the model's fit to this case.",
+  ];
+  return `**Verdict: ${escapeMarkdown(overallVerdictSentence(r))}**\n\n${bulletList(items.map(escapeMarkdown))}`;
+}
+
+function pastYield(r: Results): string {
+  const p = r.plastic;
+  const law = r.case.analysis.hardening === 'linear' ? 'linear strain hardening' : 'elastic–perfectly plastic';
+  const out = [
+    '### Past yield',
+    escapeMarkdown(`The energy balance past yield (${law}, net section, no kt): each side's kinetic energy is taken up by its run of shaft with the torque capped by plasticity.`),
+    markdownTable(plasticSidesTable(r)),
+  ];
+  const pieces = plasticPiecesTable(r);
+  if (!pieces) {
+    out.push(escapeMarkdown('No piece of shaft passes yield over its net section: no permanent twist is predicted.'));
+  } else {
+    const atBreak = p.sides.some((s) => s.verdict === 'fracture predicted');
+    out.push(`**${escapeMarkdown(`The pieces that went past yield${atBreak ? ' (at the break, where fracture is predicted)' : ''}`)}**`, markdownTable(pieces));
+    out.push(escapeMarkdown('The surface offset and the angle an originally axial line (keyway wall, grinding mark, paint line) now makes are how the permanent twist shows on the shaft.'));
+  }
+  if (p.brittleNotes.length > 0) out.push(bulletList(p.brittleNotes.map(escapeMarkdown)));
+  return out.join('\n\n');
+}
+
+function twistReadBack(r: Results): string[] {
+  const u = r.case.units;
+  const { twist } = r.observedFindings;
+  if (twist.length === 0) return [];
+  const head = '| between | measured | predicted at the recorded speed | speed that leaves the measured twist | kinetic energy at that speed | finding |\n| :--- | ---: | ---: | ---: | ---: | :--- |';
+  const rows = twist.map((f) => {
+    const tol = f.angleTolerance > 0 ? ` ± ${show(f.angleTolerance, 'angle', u)}` : '';
+    const speed = f.speedForMeasured === undefined ? '—' : `${f.measurement.angle === 0 ? 'at most ' : ''}${show(f.speedForMeasured, 'speed', u, 4)}`;
+    const energy = f.energyForMeasured === undefined || f.measurement.angle === 0 ? '—' : show(f.energyForMeasured, 'energy', u);
+    const cells = [f.measurement.between.join(' – '), `${show(f.measurement.angle, 'angle', u)}${tol}`, show(f.predicted, 'angle', u), speed, energy, FINDING_HEAD[f.finding]];
+    return `| ${cells.map(escapeMarkdown).join(' | ')} |`;
+  });
+  const words = twist.map((f) => {
+    const [a, b] = f.measurement.between;
+    const shielded = f.curve.length > 0 && !Number.isFinite(f.yieldOnsetSpeed) ? ' The shaft between these stations does not yield at any speed: a weaker piece elsewhere in the run yields first and takes the energy.' : '';
+    const fracture = f.beyondFracture ? ' At that speed the model predicts fracture: check the measurement and the fracture strain.' : '';
+    const text = `**${escapeMarkdown(`${a} – ${b}: ${FINDING_HEAD[f.finding].toLowerCase()}.`)}** ${escapeMarkdown(`Recorded speed ${bandText(f, u)}.${shielded} ${f.meaning}${fracture}`)}`;
+    return f.measurement.method ? `${text}\n\n${escapeMarkdown(`Measured by: ${f.measurement.method}`)}` : text;
+  });
+  return ['### Measured permanent twist, read back to the stop', `${head}\n${rows.join('\n')}`, ...words];
+}
+
+function fractureReading(r: Results): string[] {
+  const u = r.case.units;
+  const f = r.observedFindings.fracture;
+  if (!f) return [];
+  const o = f.observation;
+  const at = o.at === undefined ? '' : ` at ${typeof o.at === 'number' ? show(o.at, 'length', u) : `"${o.at}"`}`;
+  const word = f.agreement === 'agrees' ? 'Agrees with the prediction' : f.agreement === 'disagrees' ? 'Disagrees with the prediction' : 'Not comparable with the prediction';
+  const out = ['### Fracture', `Observed: **${escapeMarkdown(`${o.type}${at}`)}**.${o.notes ? ` ${escapeMarkdown(o.notes)}` : ''}`, escapeMarkdown(f.meaning), `**${word}.** ${escapeMarkdown(f.comparison)}`];
+  if (o.type !== 'none') out.push(escapeMarkdown(`Source: ${f.source}.`), `> ${escapeMarkdown(f.caution)}`);
+  return out;
+}

@@ -25,13 +25,16 @@ export const methodSection: ReportSection = {
       stop,
       `The shaft itself is taken as massless, as in the hand method: its own kinetic energy is left out (${shaftEnergy.join('; ')}).`,
       'Parts are rigid and fixed to the shaft; keys, hubs, belts and couplings do not slip and absorb nothing; nothing is lost to friction or to the jammed material. Each of these would lower the torque, so the result leans to the high side.',
-      'The material stays linear-elastic. A stress above shear yield therefore means only that yield was reached: the real stress is capped by the material, and the rest of the energy goes into permanent twist.',
+      'In the elastic method the material stays linear-elastic, so a stress above shear yield means only that yield was reached. Past yield, the energy balance takes over: the real stress is capped by the material, the torque by the section\'s fully plastic torque, and the rest of the energy goes into permanent twist (see the findings).',
       `Stress is compared with shear yield by ${criterion}.`,
-      tolerances.length > 0
-        ? `The case states tolerances on ${tolerances.join(', ')}; this version reports the nominal values and does not carry the bands through.`
-        : 'The case states no tolerances; the numbers are for the nominal values.',
+      r.uncertainty
+        ? `The case states tolerances on ${tolerances.join(', ') || 'no field (the material strengths are varied by their basis)'}; the single run uses the nominal values, and a seeded Monte Carlo of ${r.uncertainty.samples} samples carries the bands through (see How sure the finding is).`
+        : tolerances.length > 0
+          ? `The case states tolerances on ${tolerances.join(', ')}; the numbers are for the nominal values (the Monte Carlo was switched off).`
+          : 'The case states no tolerances; the numbers are for the nominal values.',
     ];
+    const pastYield = r.plastic.assumptions.length > 0 ? `\n\n**Past yield:**\n\n${bulletList(r.plastic.assumptions.map(escapeMarkdown))}` : '';
     const warnings = r.warnings.length > 0 ? `**Warnings about the model's fit to this case:**\n\n${bulletList(r.warnings.map(escapeMarkdown))}` : 'The engine raised no warnings about the model\'s fit to this case.';
-    return `${escapeMarkdown('The numbers come from the elastic energy method for a sudden stop.')}\n\n${bulletList(assumptions.map(escapeMarkdown))}\n\n${warnings}`;
+    return `${escapeMarkdown('The numbers come from the elastic energy method for a sudden stop and, past yield, from the energy balance with elastic–plastic torsion of each piece.')}\n\n${bulletList(assumptions.map(escapeMarkdown))}${pastYield}\n\n${warnings}`;
   },
 };

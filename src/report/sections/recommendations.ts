@@ -1,25 +1,47 @@
-import { escapeMarkdown } from '../markdown-text.ts';
-import type { ReportContext, ReportSection } from '../report-context.ts';
-
-/** One recommendation in Markdown from the results, or undefined when it has nothing to say. */
-export type Recommender = (ctx: ReportContext) => string | undefined;
+import type { ResizeResult } from '../../resize/resize-result.ts';
+import { optionRows, ROW_HEADINGS, type OptionRow } from '../../views/resize-rows.ts';
+import { criticalSegmentSentence, factorSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from '../../views/resize-words.ts';
+import { verdictSentence } from '../../views/summary.ts';
+import { bulletList, escapeMarkdown } from '../markdown-text.ts';
+import type { ReportSection } from '../report-context.ts';
 
 /**
- * The recommendations section: each recommender (listed in src/report/registry.ts) adds its
- * paragraph; while none has anything to say, the section says what the investigator completes.
+ * What goes back in (`shaftcase resize`, computed once before the report is rendered): the options
+ * table, each option in words, the guarding and restart recommendations, and what the investigator
+ * decides. Every text (the case's names and labels among them) is escaped; the figures follow.
  */
-export function recommendationsSection(recommenders: readonly Recommender[]): ReportSection {
-  return {
-    id: 'recommendations',
-    title: 'Recommendations',
-    render(ctx) {
-      const given = recommenders.map((rec) => rec(ctx)).filter((t): t is string => t !== undefined && t.trim() !== '');
-      if (given.length > 0) return given.join('\n\n');
-      const placeholder = escapeMarkdown(
-        'This version of shaftcase computes no recommendation. The investigator completes this section: the replacement shaft (material, diameters, keys and hubs), whether a torque limiter or shear pin belongs in the drive, and the return-to-service decision.',
-      );
-      const yielded = ctx.results.verdict === 'yielded' ? `\n\n${escapeMarkdown('A shaft that may have yielded is not returned to service on a calculation alone.')}` : '';
-      return `*${placeholder}*${yielded}`;
-    },
-  };
+export const recommendationsSection: ReportSection = {
+  id: 'recommendations',
+  title: 'Recommendations: what goes back in',
+  render({ results, resize }) {
+    const e = escapeMarkdown;
+    const out = [
+      e(`Each option is checked against a repeat of the recorded incident by a rerun of the changed case through the elastic energy method, and under the running torque. Present shaft: ${verdictSentence(results)}`),
+      e(factorSentence(resize)),
+      optionsTable(resize),
+      e("Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present, the energy method's single-mass estimate."),
+    ];
+    const part = (title: string, lines: readonly string[]) => out.push(`### ${e(title)}`, bulletList(lines.map(e)));
+    part('Scale the side', [scaleSideSentence(resize)]);
+    part('Resize the critical segment only', [criticalSegmentSentence(resize)]);
+    part('Another material', [materialsSentence(resize)]);
+    part('Torque limiter or slip coupling', limiterSentences(resize));
+    if (resize.keys.length === 0) part('The key as fuse', ['No key is given in the case.']);
+    for (const k of resize.keys) part(`The key as fuse at "${k.station}"`, keySentences(resize, k));
+    part('Guarding and restart', resize.guarding.map((g) => `${g.topic}: ${g.text}`));
+    part('What the options rest on', resize.notes);
+    const decision = [
+      'The investigator decides which option goes back in, with the machine builder, and records the return-to-service decision.',
+      ...(results.verdict !== 'elastic' ? ['A shaft that may have yielded is not returned to service on a calculation alone.'] : []),
+    ];
+    out.push(`*${e(decision.join(' '))}*`);
+    return out.join('\n\n');
+  },
+};
+
+/** The options side by side, one row each, every cell escaped. */
+function optionsTable(resize: ResizeResult): string {
+  const keys = Object.keys(ROW_HEADINGS) as (keyof OptionRow)[];
+  const row = (cells: string[]) => `| ${cells.join(' | ')} |`;
+  return [row(keys.map((k) => escapeMarkdown(ROW_HEADINGS[k]))), row(keys.map(() => '---')), ...optionRows(resize).map((r) => row(keys.map((k) => escapeMarkdown(r[k]) || '—')))].join('\n');
 }

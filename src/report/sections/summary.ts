@@ -1,19 +1,34 @@
 import type { Results } from '../../results/results.ts';
 import { show, sig } from '../../views/display-units.ts';
+import { describePlasticPiece, overallVerdictSentence } from '../../views/plastic-lines.ts';
 import { describePiece, verdictSentence } from '../../views/summary.ts';
+import { chanceOfYieldWords } from '../../views/uncertainty-summary.ts';
 import { escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
 
-/** The verdict in plain words for someone who will not read further. */
+/** The overall verdict (`Results.verdict`) in plain words for someone who will not read further. */
 export function verdictInPlainWords(r: Results): string {
-  const where = describePiece(r.governing.piece, r.case.units);
+  const u = r.case.units;
+  const p = r.plastic;
+  const inspect = 'Inspect it, and every key, hub and coupling between the stop and the loaded parts, before anything goes back into service.';
+  if (r.verdict === 'fracture predicted') {
+    const side = p.sides.find((s) => s.verdict === 'fracture predicted')!;
+    const first = side.firstToBreak === undefined ? undefined : side.pieces[side.firstToBreak];
+    const what = first ? `${describePlasticPiece(first, u)} reaches its fracture ${first.brittle ? 'stress' : 'strain'}` : 'its first piece breaks';
+    return `The shaft is predicted to break: side ${side.side} had ${show(side.energy, 'energy', u)} of kinetic energy to take, and it can absorb only ${show(side.fractureEnergy, 'energy', u)} before ${what}. ${inspect}`;
+  }
+  if (r.verdict === 'yielded' && p.verdict === 'yielded') {
+    const side = p.sides.reduce((a, b) => (b.permanentTwist > a.permanentTwist ? b : a));
+    const ms = p.sides.find((s) => s.side === p.mostStrained.side)!.pieces[p.mostStrained.index];
+    return `The shaft cannot have stayed elastic: the calculated elastic stress is ${sig(r.yieldRatio)} times what its material takes before it yields. Past yield the torque is capped at ${show(p.peakTorque, 'torque', u)}, and the shaft is left with a permanent twist of ${show(side.permanentTwist, 'angle', u)} on side ${side.side}, most of it in ${describePlasticPiece(ms, u)}; no fracture is predicted. ${inspect}`;
+  }
   if (r.verdict === 'yielded') {
-    return `The shaft cannot have stayed elastic: the calculated stress is ${sig(r.yieldRatio)} times what its material takes before it yields, so expect a permanent twist, or worse, in ${where}. Inspect it before anything goes back into service.`;
+    return `The net section of the shaft can have stayed elastic, but the calculated stress at the stress raiser (kt) of ${describePiece(r.governing.piece, u)} is ${sig(r.yieldRatio)} times its shear yield: expect local yielding there, with no measurable permanent twist. ${inspect}`;
   }
   return `The shaft can have stayed elastic: the highest calculated stress is ${sig(100 * r.yieldRatio)} % of what its material takes before it yields. The method puts all the energy into the shaft, so it leans to the high side; keys, hubs and couplings still need their own inspection.`;
 }
 
-/** One paragraph: what stopped, how fast, the energy, the torque, the stress; then the verdict. */
+/** One paragraph: what stopped, how fast, the energy, the torque, the stress; then the overall verdict. */
 export const summarySection: ReportSection = {
   id: 'summary',
   title: 'Summary',
@@ -32,7 +47,13 @@ export const summarySection: ReportSection = {
     const critical = `The most critical piece is ${describePiece(g, u)}: its stress of ${show(g.shearStress, 'stress', u)} against a shear yield of ${show(g.shearYield, 'stress', u)} (${material}) is ${sig(r.yieldRatio)} × yield.`;
     const warned = r.warnings.length > 0 ? ` The model carries ${r.warnings.length} warning${r.warnings.length === 1 ? '' : 's'} about its fit to this case (see the method).` : '';
     const paragraph = escapeMarkdown([opening, ...sides, critical].join(' ')) + warned;
-    const verdict = `> **Verdict (elastic energy method):** ${escapeMarkdown(verdictSentence(r))}\n>\n> ${escapeMarkdown(verdictInPlainWords(r))}`;
+    const chance = r.uncertainty ? chanceOfYieldWords(r.uncertainty) : '';
+    const sure = r.uncertainty ? ` Over the case's tolerances (see How sure the finding is), ${chance[0].toLowerCase()}${chance.slice(1)}.` : '';
+    const verdict = [
+      `> **Verdict: ${escapeMarkdown(overallVerdictSentence(r))}**`,
+      `> ${escapeMarkdown(verdictInPlainWords(r) + sure)}`,
+      `> ${escapeMarkdown(`Elastic energy method: ${verdictSentence(r)}`)}`,
+    ].join('\n>\n');
     return `${paragraph}\n\n${verdict}`;
   },
 };

@@ -25,3 +25,17 @@ export function checkFigure(f: ReportFigure, name: string, axisLabels: RegExp[])
 export function roundNumbers(svg: string): string {
   return svg.replace(/-?\d+\.\d+/g, (n) => String(Math.round(Number(n) * 10) / 10));
 }
+
+/**
+ * The chart's x scale read back from its tick labels (value → px), for a linear axis: a straight
+ * line through the first and last labelled ticks. Lets a test check where a mark was drawn
+ * without trusting the code that drew it.
+ */
+export function xScaleFromTicks(document: Document): (value: number) => number {
+  const ticks = [...document.querySelectorAll('[aria-label="x-axis tick label"] text')].map((t) => ({
+    value: Number((t.textContent ?? '').replace(/,/g, '').replace('−', '-')),
+    px: Number(/translate\(([-\d.]+),/.exec(t.getAttribute('transform') ?? '')![1]),
+  }));
+  const [a, b] = [ticks[0], ticks[ticks.length - 1]];
+  return (v) => a.px + ((v - a.value) * (b.px - a.px)) / (b.value - a.value);
+}

@@ -22,8 +22,8 @@ describe('stressAlongShaftFigure', () => {
   });
 
   it('every figure is drawn the same, byte for byte, when drawn again', () => {
-    const r = fixture('two-sided-pump.yaml').results;
-    expect(drawFigures(r).map((f) => f.figure.svg)).toEqual(drawFigures(r).map((f) => f.figure.svg));
+    const { data } = fixture('two-sided-pump.yaml');
+    expect(drawFigures(data).map((f) => f.figure.svg)).toEqual(drawFigures(data).map((f) => f.figure.svg));
   });
 
   it('the stress-along-shaft SVG of the two-sided case matches its snapshot after rounding', () => {

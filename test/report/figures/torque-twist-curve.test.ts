@@ -8,7 +8,7 @@ const marks = (root: Element) => [...root.querySelectorAll('[aria-description]')
 
 describe('torqueTwistFigure', () => {
   const r = analyseCase(ep5Case());
-  const fig = torqueTwistFigure(r);
+  const fig = torqueTwistFigure(r)!;
 
   it('is standalone SVG: an <svg> root with the svg namespace', () => {
     expect(fig.svg.startsWith('<svg')).toBe(true);
@@ -36,8 +36,14 @@ describe('torqueTwistFigure', () => {
     expect(fig.svg).toContain(`permanent twist ${Number(((piece.state.permanentTwist * 180) / Math.PI).toPrecision(3))}°`);
   });
 
+  it('torqueTwistFigure draws nothing for an elastic stop (a straight line, no permanent twist)', () => {
+    const slow = analyseCase(ep5Case({ speed: '20 rpm' }));
+    expect(slow.plastic.verdict).toBe('elastic');
+    expect(torqueTwistFigure(slow)).toBeUndefined();
+  });
+
   it('draws in the case\'s units (US: lbf·ft)', () => {
     const us = analyseCase({ ...ep5Case(), units: 'us' });
-    expect(torqueTwistFigure(us).svg).toMatch(/torque \(lbf·ft\)/);
+    expect(torqueTwistFigure(us)!.svg).toMatch(/torque \(lbf·ft\)/);
   });
 });

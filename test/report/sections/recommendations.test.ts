@@ -1,19 +1,46 @@
+import MarkdownIt from 'markdown-it';
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { parseCase } from '../../../src/case/parse-case.ts';
+import { buildReportData } from '../../../src/report/build-report-data.ts';
 import { recommendationsSection } from '../../../src/report/sections/recommendations.ts';
-import { fixture, RUN } from '../report-fixtures.ts';
+import { optionRows } from '../../../src/views/resize-rows.ts';
+import { RUN } from '../report-fixtures.ts';
 
-describe('recommendationsSection', () => {
-  const f = fixture('sample');
-  const ctx = { results: f.results, run: RUN, source: f.source };
+const section = (text: string) => {
+  const data = buildReportData(parseCase(text));
+  return { z: data.resize, md: recommendationsSection.render({ ...data, run: RUN, source: { file: 'c.yaml', text, sha256: '0'.repeat(64) } })! };
+};
+const granulator = readFileSync(new URL('../../../sample-cases/granulator-tramp-metal.yaml', import.meta.url), 'utf8');
 
-  it('without recommenders it says what the investigator completes, and repeats the return-to-service caution for a yielded shaft', () => {
-    const md = recommendationsSection([]).render(ctx)!;
-    expect(md).toMatch(/^\*This version of shaftcase computes no recommendation\. The investigator completes this section: the replacement shaft/);
-    expect(md).toMatch(/not returned to service on a calculation alone\.$/);
+describe('the report section "Recommendations: what goes back in"', () => {
+  it('carries the options table, one row per option, and the guarding recommendations', () => {
+    const { z, md } = section(granulator);
+    const rows = md.split('\n').filter((l) => l.startsWith('| '));
+    expect(rows).toHaveLength(optionRows(z).length + 2); // headings, rule, one row per option
+    expect(md).toMatch(/### Guarding and restart/);
+    expect(md).toMatch(/ring-tested/);
+    expect(md).toMatch(/### What the options rest on/);
   });
 
-  it('shows each recommender\'s paragraph in order, skipping those with nothing to say', () => {
-    const md = recommendationsSection([() => 'Fit a torque limiter.', () => undefined, (c) => `Speed was ${c.results.case.meta.id}.`]).render(ctx);
-    expect(md).toBe('Fit a torque limiter.\n\nSpeed was DEMO-GR-0117.');
+  it('ends with what the investigator decides, and for a yielded shaft the return-to-service caution', () => {
+    const { md } = section(granulator);
+    expect(md.trimEnd().split('\n').pop()).toBe('*The investigator decides which option goes back in, with the machine builder, and records the return-to-service decision. A shaft that may have yielded is not returned to service on a calculation alone.*');
+  });
+
+  it('renders to HTML with one table of the options', () => {
+    const html = new MarkdownIt().render(section(granulator).md);
+    expect(html.match(/<table>/g)).toHaveLength(1);
+    expect(html).toMatch(/<td>Torque limiter at &quot;drive sheave&quot;<\/td>/);
+  });
+
+  it('escapes the case\'s own text: names and labels cannot break the table or add markup', () => {
+    const text = granulator.replaceAll('drive sheave', 'sheave | *main* <b>').replace('label: sheave seat', 'label: "seat_[1]"');
+    const html = new MarkdownIt().render(section(text).md);
+    expect(html).toContain('Torque limiter at &quot;sheave | *main* &lt;b&gt;&quot;');
+    expect(html).not.toMatch(/<b>|<em>main/);
+    expect(html).toContain('seat_[1]');
+    const table = html.slice(html.indexOf('<table>'), html.indexOf('</table>'));
+    for (const row of table.split('<tr>').slice(2)) expect(row.match(/<td>/g)).toHaveLength(6);
   });
 });

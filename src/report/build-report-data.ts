@@ -1,0 +1,23 @@
+import type { Case } from '../case/case.ts';
+import { resizeCase } from '../resize/resize-case.ts';
+import { investigate } from '../results/investigate.ts';
+import type { ReportData } from './report-context.ts';
+
+/** Overrides from the command line, as `check` and `resize` take them. */
+export interface ReportDataOptions {
+  /** Monte Carlo samples; 0 switches the uncertainty run off. */
+  samples?: number;
+  seed?: number;
+  /** Design factor N on shear yield for what goes back in. */
+  factor?: number;
+}
+
+/**
+ * Everything a report shows, computed once: the investigation (`check`'s results, with the
+ * uncertainty run where the case states tolerances) and the options for what goes back in
+ * (`resize`'s). Pure; the report's sections and figures only read it.
+ */
+export function buildReportData(c: Case, opts: ReportDataOptions = {}): ReportData {
+  const results = investigate(c, { samples: opts.samples, seed: opts.seed });
+  return { results, resize: resizeCase(c, results, { factor: opts.factor }) };
+}
