@@ -63,7 +63,7 @@ function pastYield(r: Results): string {
   } else {
     const atBreak = p.sides.some((s) => s.verdict === 'fracture predicted');
     out.push(`**${escapeMarkdown(`The pieces that went past yield${atBreak ? ' (at the break, where fracture is predicted)' : ''}`)}**`, markdownTable(pieces));
-    out.push(escapeMarkdown('The surface offset and the angle an originally axial line (keyway wall, grinding mark, paint line) now makes are how the permanent twist shows on the shaft.'));
+    out.push(escapeMarkdown("The permanent twist shows on the shaft as the surface offset between a piece's ends and the helix angle an originally axial line (keyway wall, grinding mark, paint line) now makes."));
   }
   if (p.brittleNotes.length > 0) out.push(bulletList(p.brittleNotes.map(escapeMarkdown)));
   return out.join('\n\n');

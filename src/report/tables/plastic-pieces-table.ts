@@ -6,8 +6,8 @@ import type { ReportTable } from './report-table.ts';
 /**
  * Every piece that went past yield, net section and no kt (at the break where fracture is
  * predicted): its limits, the permanent twist and how it shows on the surface, the strain against
- * fracture (the material of each piece is in the material table). Undefined when no piece passes
- * yield over its net section.
+ * fracture; a piece that breaks is marked so beside its segment (the material of each piece is in
+ * the material table). Undefined when no piece passes yield over its net section.
  */
 export function plasticPiecesTable(r: Results): ReportTable | undefined {
   if (r.plastic.verdict === 'elastic') return undefined;
@@ -25,15 +25,14 @@ export function plasticPiecesTable(r: Results): ReportTable | undefined {
       { label: 'fully plastic torque', unit: unitLabel('torque', u) },
       { label: 'permanent twist', unit: unitLabel('angle', u) },
       { label: 'surface offset', unit: unitLabel('length', u) },
-      { label: 'axial line now at', unit: unitLabel('angle', u) },
+      { label: 'helix angle', unit: unitLabel('angle', u) },
       { label: 'shear strain' },
       { label: 'fracture strain' },
-      { label: 'state' },
     ],
     rows: r.plastic.sides.flatMap((s) =>
       s.pieces.filter((p) => p.yielded || p.state.fractured).map((p) => [
         s.side,
-        segmentName(p.piece.segment),
+        `${segmentName(p.piece.segment)}${p.state.fractured ? ' (breaks)' : ''}`,
         inDisplay(p.piece.start, 'length', u),
         inDisplay(p.piece.end, 'length', u),
         torque(p.yieldTorque),
@@ -43,7 +42,6 @@ export function plasticPiecesTable(r: Results): ReportTable | undefined {
         inDisplay(p.helixAngle, 'angle', u),
         p.state.maxShearStrain,
         p.fractureStrain ?? 'unknown',
-        p.state.fractured ? 'breaks' : p.yielded ? 'past yield' : 'elastic',
       ]),
     ),
   };
