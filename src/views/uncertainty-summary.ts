@@ -57,14 +57,19 @@ export function renderUncertaintyLines(r: Results): string[] {
   ];
   const pt = u.percentiles.permanentTwist;
   if (pt && pt[2] > 0) out.splice(4, 0, `  permanent twist  ${show(pt[1], 'angle', units)} (5–95 %: ${show(pt[0], 'angle', units)} to ${show(pt[2], 'angle', units)})`);
-  for (const o of u.observed) {
+  u.observed.forEach((o, k) => {
     const [a, b] = o.between;
+    const single = r.observedFindings.twist[k];
+    const none =
+      single && (single.finding === 'no_loaded_shaft' || single.predicted === 0) && single.speedForMeasured === undefined
+        ? 'no shaft between these stations yields in the model, so no speed interval applies (see the read-back below)'
+        : 'no speed explains it in any sample';
     out.push(
       o.speedInterval
         ? `  twist "${a}"–"${b}" is explained by a stop from ${show(o.speedInterval[0], 'speed', units, 4)} to ${show(o.speedInterval[1], 'speed', units, 4)} (5–95 %); the recorded speed lies ${o.recordedInside ? 'inside' : 'outside'} it`
-        : `  twist "${a}"–"${b}": no speed explains it in any sample`,
+        : `  twist "${a}"–"${b}": ${none}`,
     );
-  }
+  });
   if (u.sensitivity.length > 0) {
     out.push('  inputs by effect on the yield ratio:');
     for (const s of u.sensitivity) out.push(`    ${inputName(s.input).padEnd(36)} ${sig(s.low)} to ${sig(s.high)}`);
