@@ -2,9 +2,10 @@ import { discInertia, massInertia } from '../physics/inertia.ts';
 import type { Material } from '../materials/material.ts';
 import type { CaseReader } from './case-reader.ts';
 import type { Part, PartShape, Station } from './case.ts';
+import { readDrive } from './read-drive.ts';
 import { resolveMaterial } from './read-materials.ts';
 
-const STATION_KEYS = ['name', 'at', 'parts'];
+const STATION_KEYS = ['name', 'at', 'parts', 'drive'];
 const COMMON_PART_KEYS = ['shape', 'name', 'count', 'speed_ratio'];
 const SHAPE_KEYS: Record<PartShape, string[]> = {
   disc: ['diameter', 'thickness', 'bore', 'material', 'density'],
@@ -13,7 +14,7 @@ const SHAPE_KEYS: Record<PartShape, string[]> = {
 };
 const SHAPES = Object.keys(SHAPE_KEYS) as PartShape[];
 
-/** Stations with their parts; each part's inertia worked out from its shape. */
+/** Stations with their parts and drives; each part's inertia worked out from its shape. */
 export function readStations(
   r: CaseReader,
   shaftLength: number,
@@ -41,7 +42,8 @@ export function readStations(
       const part = readPart(r, [...path, 'parts', j], caseMaterials, used);
       if (part) parts.push(part);
     }
-    if (name !== undefined && at) stations.push({ name, at: Math.min(at.value, shaftLength), parts });
+    const drive = r.has([...path, 'drive']) ? readDrive(r, [...path, 'drive'], parts) : undefined;
+    if (name !== undefined && at) stations.push({ name, at: Math.min(at.value, shaftLength), parts, ...(drive ? { drive } : {}) });
   }
   return stations;
 }

@@ -2,6 +2,27 @@ import type { PieceResult } from '../physics/energy-method.ts';
 import type { Results, Verdict } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
 
+/** The dynamic model beside the energy method: a few lines per side, the lowest frequencies, what slipped. */
+export function dynamicLines(r: Results): string[] {
+  const d = r.dynamic;
+  const u = r.case.units;
+  const out = [`Dynamic model (torsional chain, ${d.elements} shaft element${d.elements === 1 ? '' : 's'}, ${sig(d.duration * 1000)} ms from the stop)`];
+  for (const s of d.sides) {
+    out.push(
+      `  side ${s.side}  peak torque ${show(s.dynamicPeakTorque, 'torque', u)} (energy method ${show(s.energyPeakTorque, 'torque', u)}), yield ratio ${sig(s.dynamicYieldRatio)} (${sig(s.energyYieldRatio)})`,
+    );
+  }
+  out.push(`  natural frequencies with the stop held: ${d.naturalFrequencies.slice(0, 3).map((f) => sig(f)).join(', ')} Hz`);
+  for (const s of d.slips) {
+    const what = s.firstSlip === undefined ? 'did not slip' : `slipped ${show(s.angle, 'angle', u)} and took ${show(s.energy, 'energy', u)}${s.slippingAtEnd ? ', still slipping at the end' : ''}`;
+    out.push(`  ${s.element} (slip torque ${show(s.slipTorque, 'torque', u)}) ${what}`);
+  }
+  for (const p of d.pins) {
+    out.push(`  ${p.element} (${show(p.shearTorque, 'torque', u)}) ${p.partedAt === undefined ? 'held' : `parted at ${sig(p.partedAt * 1000)} ms`}`);
+  }
+  return out;
+}
+
 /** The verdict in plain words, one sentence. */
 export function verdictSentence(r: Results): string {
   const where = describePiece(r.governing.piece, r.case.units);
@@ -41,7 +62,10 @@ export function renderSummary(r: Results): string {
     out.push(`  stress           ${show(worst.shearStress, 'stress', u)} against shear yield ${show(worst.shearYield, 'stress', u)} (ratio ${sig(worst.yieldRatio)})`);
   }
   out.push('');
-  out.push(`Verdict (elastic energy method): ${verdictSentence(r)}`);
+  out.push(...dynamicLines(r));
+  out.push('');
+  out.push(`Verdict (${r.verdictBasis === 'dynamic model' ? 'dynamic model' : 'elastic energy method'}): ${verdictSentence(r)}`);
+  out.push(`  ${r.verdictReason}`);
   if (r.warnings.length > 0) {
     out.push('');
     out.push('Warnings:');
