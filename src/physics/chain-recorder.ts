@@ -71,7 +71,7 @@ export class ChainRecorder {
 
   /** Whether a step ending at t will be kept as a sample. */
   due(t: number): boolean {
-    return t >= this.next - 1e-12 * this.spacing && this.count < this.samples;
+    return t >= this.next - 1e-6 * this.spacing && this.count < this.samples;
   }
 
   /**
@@ -116,7 +116,7 @@ export class ChainRecorder {
     for (let e = 0; e < st.m; e++) h.elementTorque[e][k] = this.elementTorque(e);
     for (let i = 0; i < belt.length; i++) h.beltTorque[i][k] = belt[i];
     h.jamTorque[k] = jam;
-    while (this.next <= st.t + 1e-12 * this.spacing) this.next += this.spacing;
+    while (this.next <= st.t + 1e-6 * this.spacing) this.next += this.spacing;
   }
 
   /** The histories, trimmed to the samples taken. */
