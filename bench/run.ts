@@ -70,7 +70,7 @@ function odexRun(sys: ChainSystem, tol: number, times: number[]): number[] {
   s.maxSteps = 1e8;
   const out: number[] = [];
   const y0 = [...new Array<number>(n).fill(0), ...new Array<number>(n).fill(sys.speed)];
-  s.solve(f, 0, y0, times[times.length - 1], s.grid(SAMPLE, (_, y) => void out.push(y[n - 1])));
+  s.solve(f, 0, y0, times[times.length - 1] + SAMPLE / 2, s.grid(SAMPLE, (_, y) => void out.push(y[n - 1])));
   return out.slice(0, times.length);
 }
 

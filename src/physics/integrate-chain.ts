@@ -109,7 +109,12 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
   let burstTime = -1;
   const direction = new Float64Array(K);
   while (st.t < T * (1 - 1e-12)) {
-    let h = Math.min(st.t < fineUntil ? hFine : h0, T - st.t);
+    // Steps end on the grid of the step in use, so an event's short step is followed by one that
+    // brings the grid back (samples and the peak parabola then fall on equal steps).
+    const hNow = st.t < fineUntil ? hFine : h0;
+    let grid = (Math.floor(st.t / hNow) + 1) * hNow;
+    if (grid - st.t < 1e-9 * hNow) grid += hNow;
+    let h = Math.min(grid - st.t, T - st.t);
     if (rampEnd > st.t * (1 + 1e-12) + 1e-15 && rampEnd < st.t + h) h = rampEnd - st.t;
     st.trial(h);
     eventValues(st, sources, evT);
@@ -191,6 +196,7 @@ function locate(st: ChainStepper, sources: readonly EventSource[], h: number, ev
   let hi = 1;
   let ghi = G(evT);
   let side = 0;
+  let found = -1;
   for (let it = 0; it < 80 && hi - lo > 1e-12; it++) {
     let s = glo < 0 ? lo + ((hi - lo) * glo) / (glo - ghi) : 0.5 * (lo + hi);
     if (!(s > lo && s < hi)) s = 0.5 * (lo + hi);
@@ -208,9 +214,13 @@ function locate(st: ChainStepper, sources: readonly EventSource[], h: number, ev
       if (side === -1) ghi *= 0.5;
       side = -1;
     }
-    if (Math.abs(g) < 1e-13) break;
+    if (Math.abs(g) < 1e-12) {
+      found = s;
+      break;
+    }
   }
-  const s = lo > 0 ? lo : hi;
+  // The root itself where it was hit, else the bracket's safe end (its late end if the event is at the start).
+  const s = found >= 0 ? found : lo > 0 ? lo : hi;
   st.trial(s * h);
   eventValues(st, sources, vals);
   const hit = V.filter((k, j) => vals[k] / scale[j] >= -1e-6);
