@@ -24,7 +24,7 @@ export function verdictBasis(c: Case, sides: readonly SideResult[]): { basis: Ve
     belts > 0 ? (belts === 1 ? 'a belt that can slip' : `${belts} belts that can slip`) : '',
     c.stop.torqueCapacity !== undefined ? 'a jam that can slip' : '',
   ].filter(Boolean);
-  if (slip.length > 0) why.push(`the case has ${slip.join(', ')}`);
+  if (slip.length > 0) why.push(`the case has ${joinAnd(slip)}`);
   if (why.length === 0) {
     return {
       basis: 'energy method',
