@@ -25,6 +25,7 @@ export function uniformChain(n: number, damping = 0): ChainSystem {
     inertia,
     laws: Array.from({ length: n }, () => new ElasticLaw(k)),
     damping: new Float64Array(n).fill(damping * k),
+    elementInertia: new Float64Array(n).fill(je),
     initialTwist: new Float64Array(n),
     speed: BENCH.speed,
     stop: { node: 0, duration: 0 },

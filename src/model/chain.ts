@@ -22,6 +22,8 @@ export interface ChainElement {
   end: number;
   /** N·m/rad. */
   stiffness: number;
+  /** The element's own shaft inertia, kg·m², lumped half on each end node (0 with shaft inertia off). */
+  inertia: number;
   /** Indices into `Chain.pieces` it lies in. */
   pieces: number[];
   side: SideName;
@@ -89,7 +91,8 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
       for (let j = 0; j < n; j++) {
         const a = p.piece.start + (len * j) / n;
         const b = j === n - 1 ? p.piece.end : p.piece.start + (len * (j + 1)) / n;
-        elements.push({ start: a, end: b, stiffness: 1 / compliance(b - a, G(p.piece), p.piece.segment.diameter, p.piece.segment.bore), pieces: [i], side: p.side });
+        const seg = p.piece.segment;
+        elements.push({ start: a, end: b, stiffness: 1 / compliance(b - a, G(p.piece), seg.diameter, seg.bore), inertia: shaftInertia(rho(seg), b - a, seg.diameter, seg.bore), pieces: [i], side: p.side });
         positions.push(b);
       }
     });
@@ -99,7 +102,7 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
     for (let k = 0; k + 1 < at.length; k++) {
       const inRun = pieces.flatMap((p, i) => (p.piece.start >= at[k] - EPS && p.piece.end <= at[k + 1] + EPS ? [i] : []));
       const C = inRun.reduce((s, i) => s + compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore), 0);
-      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])) });
+      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])) });
     }
   }
   placeDevices(elements, pieces);
@@ -118,10 +121,8 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
   }
   if (opts.shaftInertia) {
     elements.forEach((el, e) => {
-      const seg = pieces[el.pieces[0]].piece.segment;
-      const j = shaftInertia(rho(seg), el.end - el.start, seg.diameter, seg.bore);
-      nodes[e].inertia += j / 2;
-      nodes[e + 1].inertia += j / 2;
+      nodes[e].inertia += el.inertia / 2;
+      nodes[e + 1].inertia += el.inertia / 2;
     });
     for (const seg of c.shaft.segments) {
       const left = Math.min(seg.end, lo) - seg.start;

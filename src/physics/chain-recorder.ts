@@ -17,7 +17,8 @@ export interface ChainHistory {
 }
 
 /**
- * Peaks and sampled histories of an integration. Peaks are taken at every step, and where |T| has a
+ * Peaks and sampled histories of an integration. An element's torque for its peak is the larger of
+ * its end-face torques (see `record`). Peaks are taken at every step, and where |T| has a
  * local maximum between equal steps the parabola through the three values refines it (an O(h²)
  * better estimate than the largest sample; the step is small against the period, so the parabola
  * is close to the sine it samples).
@@ -35,6 +36,8 @@ export class ChainRecorder {
   private next = 0;
   private readonly spacing: number;
   private readonly h: ChainHistory;
+  /** Half of each element's own inertia, kg·m². */
+  private readonly halfInertia: Float64Array;
 
   constructor(
     private readonly st: ChainStepper,
@@ -45,6 +48,7 @@ export class ChainRecorder {
     this.peak = new Float64Array(m);
     this.peakTime = new Float64Array(m);
     this.peakBelt = new Float64Array(st.drives.length);
+    this.halfInertia = Float64Array.from(st.sys.elementInertia ?? new Float64Array(m), (j) => j / 2);
     this.a = new Float64Array(m);
     this.b = new Float64Array(m);
     this.spacing = duration / Math.max(samples - 1, 1);
@@ -81,8 +85,15 @@ export class ChainRecorder {
   record(step: number, belt: ArrayLike<number>, jam: number, force = false): void {
     const st = this.st;
     const equal = step > 0 && Math.abs(step - this.hB) <= 1e-9 * step && Math.abs(this.hB - this.hA) <= 1e-9 * step;
+    const J = this.halfInertia;
+    const acc = st.acc;
     for (let e = 0; e < st.m; e++) {
-      const c = Math.abs(this.elementTorque(e));
+      // The torque at the element's end faces, T − ½j·a₀ and T + ½j·a₁: the half-element slab on
+      // each side of the spring is accelerated by the difference. Along a piece of shaft carrying
+      // its own inertia, the section torque is largest at a face, and this makes the peak torque
+      // converge as 1/n² with the element count, like the frequencies (not as 1/n).
+      const T = st.tq[e];
+      const c = Math.max(Math.abs(T - J[e] * acc[e]), Math.abs(T + J[e] * acc[e + 1]), Math.abs(T));
       const a = this.a[e];
       const b = this.b[e];
       if (equal && b >= a && b > c) {

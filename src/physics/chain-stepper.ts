@@ -45,6 +45,8 @@ export class ChainStepper {
   readonly thetaT: Float64Array;
   readonly rateT: Float64Array;
   readonly dphi: Float64Array;
+  /** Node accelerations at the committed state, rad/s² (from the torques on each node; the ramp's for a holding stop node). */
+  readonly acc: Float64Array;
   hT = 0;
   // Matrix and right side.
   private readonly diag: Float64Array;
@@ -85,6 +87,7 @@ export class ChainStepper {
     this.phiT = f();
     this.vT = f();
     this.dphi = f();
+    this.acc = f();
     this.diag = f();
     this.rhs = f();
     this.jeff = f();
@@ -132,6 +135,7 @@ export class ChainStepper {
     this.updateInertia();
     this.refreshBranches();
     this.refreshStart();
+    this.updateAccelerations(0);
   }
 
   /**
@@ -376,6 +380,28 @@ export class ChainStepper {
       theta[e] = th;
     }
     this.t += h;
+    this.updateAccelerations(h);
+  }
+
+  /**
+   * Node accelerations from the forces at the committed state: elastic torques, dashpots at the
+   * last step's mean rate, motors, slipping belts and a slipping jam, over the node's inertia.
+   */
+  private updateAccelerations(h: number): void {
+    const { n, m, tq, cEff, acc, jeff, dphi, P } = this;
+    acc.fill(0);
+    for (let e = 0; e < m; e++) {
+      const T = tq[e] + (h > 0 ? (cEff[e] * (dphi[e + 1] - dphi[e])) / h : 0);
+      acc[e] += T;
+      acc[e + 1] -= T;
+    }
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      acc[d.node] += d.stuck ? pieceTorque(d.line, d.piece, this.v[d.node]) : d.sigma * d.beltSlipTorque!;
+    }
+    if (this.jam !== 0) acc[P] -= this.jam * this.sys.stop.torqueCapacity!;
+    for (let i = 0; i < n; i++) acc[i] = jeff[i] > 0 ? acc[i] / jeff[i] : 0;
+    if (this.jam === 0) acc[P] = this.motion.accelerationAt(this.t - 0.5 * h);
   }
 
   /** Node i's torque averaged over the trial step as the trapezoidal rule takes it (elements, dashpots, motors), N·m. */

@@ -13,6 +13,11 @@ export interface ChainSystem {
   laws: TorqueLaw[];
   /** Dashpot per element, N·m·s/rad (stiffness-proportional damping; used where the law says it acts). */
   damping: Float64Array;
+  /**
+   * Each element's own inertia, kg·m², already lumped half on each end node; with it the torque at
+   * an element's end faces is T ∓ ½j·a (see `ChainRecorder`). Absent: 0 (massless springs).
+   */
+  elementInertia?: Float64Array;
   /** Initial twist per element, rad (the running torque's twist; 0 without a drive). */
   initialTwist: Float64Array;
   /** Speed of the whole shaft just before the stop, rad/s. */

@@ -115,6 +115,8 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     let grid = (Math.floor(st.t / hNow) + 1) * hNow;
     if (grid - st.t < 1e-9 * hNow) grid += hNow;
     let h = Math.min(grid - st.t, T - st.t);
+    // A step within rounding of the regular one is the regular one (the factorisation is kept).
+    if (Math.abs(h - hNow) <= 1e-9 * hNow) h = hNow;
     if (rampEnd > st.t * (1 + 1e-12) + 1e-15 && rampEnd < st.t + h) h = rampEnd - st.t;
     st.trial(h);
     eventValues(st, sources, evT);

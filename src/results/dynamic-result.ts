@@ -5,6 +5,7 @@ import { shearYield } from '../physics/shear-strength.ts';
 import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
 import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
+import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
 import { solveDynamics } from './dynamic-solve.ts';
 
@@ -144,7 +145,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     energy: run.energy,
     histories: dynamicHistories(chain, solve.final, slips),
     assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),
-    notes: solve.notes,
+    notes: [...runningChecks(chain, c.speed), ...solve.notes],
   };
 }
 

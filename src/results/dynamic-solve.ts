@@ -33,7 +33,7 @@ export const REFINE_TOLERANCE = 0.005;
 /** Steps per period of the lowest mode. */
 const STEPS_PER_LOWEST_PERIOD = 120;
 /** Steps per period of the highest mode that carries energy (see `stepFor`). */
-const STEPS_PER_ENERGETIC_PERIOD = 30;
+const STEPS_PER_ENERGETIC_PERIOD = 20;
 /** Auto refinement doubles the elements up to this many, within the work budget below. */
 const MAX_AUTO_ELEMENTS = 96;
 /** Element-steps all refinement levels together may take, to keep `check` quick. */
@@ -120,11 +120,11 @@ function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boo
 
 /**
  * The steps. Regular: 120 per period of the lowest mode. Fine, for the transients (from the stop
- * through its ramp and half a lowest period, where the first peak falls, and for ten periods of
- * the highest energetic mode after every event): 30 per period of every mode
+ * through its ramp and 0.3 of a lowest period, past the first peak at a quarter period, and for
+ * ten periods of the highest energetic mode after every event): 20 per period of every mode
  * up to the one where 99 % of a side's energy after an instantaneous stop is accounted for, and 40
  * over a stop's ramp. Once stiffness-proportional damping has taken the higher modes down (ten
- * periods of the highest of them, at least half a lowest period), the regular step carries on;
+ * periods of the highest of them at least), the regular step carries on;
  * without damping the fine step is kept throughout. The trapezoidal rule is stable at any step,
  * so the choice is one of accuracy only.
  */
@@ -143,7 +143,7 @@ function stepFor(modes: SideMode[], ramp: number, damping: number): { regular: n
   fine = Math.min(fine, shortest / STEPS_PER_ENERGETIC_PERIOD);
   if (ramp > 0) fine = Math.min(fine, ramp / 40);
   const regular = damping > 0 ? T1 / STEPS_PER_LOWEST_PERIOD : fine;
-  return { regular, fine, settle: Math.max(10 * shortest, 0.5 * T1), afterEvent: Math.max(10 * shortest, 20 * fine) };
+  return { regular, fine, settle: Math.max(10 * shortest, 0.3 * T1), afterEvent: Math.max(10 * shortest, 20 * fine) };
 }
 
 /**

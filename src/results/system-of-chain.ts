@@ -35,6 +35,7 @@ export function systemOf(chain: Chain, speed: number, stop: { duration: number; 
     inertia: Float64Array.from(chain.nodes, (n) => n.inertia),
     laws,
     damping,
+    elementInertia: Float64Array.from(chain.elements, (el) => el.inertia),
     initialTwist,
     speed,
     stop: { node: P, duration: stop.duration, ...(stop.torqueCapacity !== undefined ? { torqueCapacity: stop.torqueCapacity } : {}) },

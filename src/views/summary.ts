@@ -1,6 +1,7 @@
 import type { PieceResult } from '../physics/energy-method.ts';
 import type { Results, Verdict } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
+import { showSlipAngle } from './slip-angle.ts';
 
 /** The dynamic model beside the energy method: a few lines per side, the lowest frequencies, what slipped. */
 export function dynamicLines(r: Results): string[] {
@@ -14,7 +15,7 @@ export function dynamicLines(r: Results): string[] {
   }
   out.push(`  natural frequencies with the stop held: ${d.naturalFrequencies.slice(0, 3).map((f) => sig(f)).join(', ')} Hz`);
   for (const s of d.slips) {
-    const what = s.firstSlip === undefined ? 'did not slip' : `slipped ${show(s.angle, 'angle', u)} and took ${show(s.energy, 'energy', u)}${s.slippingAtEnd ? ', still slipping at the end' : ''}`;
+    const what = s.firstSlip === undefined ? 'did not slip' : `slipped ${showSlipAngle(s.angle, u)} and took ${show(s.energy, 'energy', u)}${s.slippingAtEnd ? ', still slipping at the end' : ''}`;
     out.push(`  ${s.element} (slip torque ${show(s.slipTorque, 'torque', u)}) ${what}`);
   }
   for (const p of d.pins) {

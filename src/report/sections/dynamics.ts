@@ -1,6 +1,7 @@
 import type { Results } from '../../results/results.ts';
 import type { DynamicResult } from '../../results/dynamic-result.ts';
 import { show, sig } from '../../views/display-units.ts';
+import { showSlipAngle } from '../../views/slip-angle.ts';
 
 const MAX_EVENTS = 12;
 
@@ -78,7 +79,7 @@ function protectionLines(r: Results, d: DynamicResult): string[] {
     out.push('|---|---|---|---|---|---|');
     for (const s of d.slips) {
       const first = s.firstSlip === undefined ? 'did not slip' : `${sig(s.firstSlip * 1000)} ms`;
-      out.push(`| ${s.element} | ${show(s.slipTorque, 'torque', u)} | ${first} | ${show(s.angle, 'angle', u)} | ${show(s.energy, 'energy', u)} | ${s.slippingAtEnd ? 'still slipping' : 'holding'} |`);
+      out.push(`| ${s.element} | ${show(s.slipTorque, 'torque', u)} | ${first} | ${showSlipAngle(s.angle, u)} | ${show(s.energy, 'energy', u)} | ${s.slippingAtEnd ? 'still slipping' : 'holding'} |`);
     }
     out.push('');
   }
