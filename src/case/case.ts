@@ -40,8 +40,16 @@ export interface CaseMeta {
 export interface Stop {
   /** Name of the station that stopped. */
   at: string;
-  /** Time the stop takes, s; 0 is instantaneous. */
+  /**
+   * Time the stop takes, s; 0 is instantaneous. Over a positive duration the stop station's speed
+   * falls linearly to zero, then stays there.
+   */
   duration: number;
+  /**
+   * The most torque the jam can hold, N·m (a soft jam); above it the jam slips with this torque
+   * (Coulomb). Absent: the jam holds whatever torque it takes.
+   */
+  torqueCapacity?: number;
 }
 
 export interface Segment {
@@ -59,6 +67,10 @@ export interface Segment {
   material: string;
   /** Torsional stress-concentration factor at the segment's critical section (1 = none). */
   kt: number;
+  /** Slip torque of a friction torque limiter or slip coupling in this segment, N·m. */
+  slipTorque?: number;
+  /** Torque at which a shear pin or breakaway element in this segment parts, N·m; afterwards it carries nothing. */
+  shearTorque?: number;
 }
 
 export interface Station {
@@ -66,23 +78,10 @@ export interface Station {
   /** Position, m. */
   at: number;
   parts: Part[];
-  /** What drives the shaft at this station in normal running (`drive:`), where the case says. */
+  /** The motor that drives the shaft at this station (`drive:`), if any. */
   drive?: Drive;
   /** The key that holds this station's hub on the shaft (`key:`), where the case gives one. */
   key?: ShaftKey;
-}
-
-/**
- * The drive at a station in normal running. Minimal form read by src/case/read-drive.ts; the
- * dynamics model extends it (rotor inertia, torque curve, belt).
- */
-export interface Drive {
-  /** Power delivered to the shaft in normal running, W. */
-  power?: number;
-  /** Running torque at shaft speed, N·m. */
-  runningTorque?: number;
-  /** The drive's (motor's) speed over the shaft's, as for a part behind a belt or gears. */
-  speedRatio?: number;
 }
 
 /** A parallel key (square or rectangular) between a hub and the shaft (Shigley 9th ed. Sec. 7-7). */
@@ -101,6 +100,53 @@ export interface ShaftKey {
    */
   hubDepth?: number;
 }
+
+/**
+ * A motor driving the shaft at a station, directly, through gears or through a belt. Torques and
+ * speeds of the motor itself are at the motor's shaft; the model reflects them through
+ * `speedRatio` (torque × ratio, speed ÷ ratio at the machine shaft).
+ *
+ * The rotor's inertia is one of the station's parts, listed once: either a part in `parts` (at the
+ * drive's speed ratio) or `drive.rotor_inertia` in the case file, which the reader adds to `parts`
+ * as a part named "motor rotor". Giving both is refused as a double entry.
+ */
+export interface Drive {
+  /** Motor speed over shaft speed (belt or gear ratio); 1 for a motor coupled to the shaft. */
+  speedRatio: number;
+  /** Indices into the station's `parts` that make up the motor's rotor (behind the belt, if any). */
+  rotorParts: number[];
+  /** Rated power, W, as given (read by the resizing work; the dynamics do not use it unless nothing else gives the torque). */
+  power?: number;
+  /** Normal running torque at the motor shaft, N·m, as given. */
+  runningTorque?: number;
+  /** The motor's torque while it is pulled down, at the motor shaft; absent: see the dynamic model's assumptions. */
+  torque?: MotorTorqueSpec;
+  /** A belt between the motor and this station's pulley, which can slip. */
+  belt?: BeltSpec;
+}
+
+/** A constant torque, or a speed–torque curve by points (motor speed rad/s, torque N·m), speeds rising from 0. */
+export type MotorTorqueSpec =
+  | { kind: 'constant'; torque: number }
+  | { kind: 'curve'; points: { speed: number; torque: number }[] };
+
+/**
+ * A belt drive's slip limit: a stated slip torque at this station's shaft, N·m, or belt data from
+ * which the capstan relation gives it (wrap angle on the pulley that slips first, rad; coefficient
+ * of friction; V-groove included angle, rad; belt tension, N, all belts together; diameter of the
+ * pulley on this station's shaft, m).
+ */
+export type BeltSpec =
+  | { kind: 'slip torque'; slipTorque: number }
+  | {
+      kind: 'capstan';
+      wrapAngle: number;
+      friction: number;
+      grooveAngle?: number;
+      tension: number;
+      tensionIs: 'installed' | 'tight side';
+      pulleyDiameter: number;
+    };
 
 export type PartShape = 'disc' | 'inertia' | 'mass';
 
@@ -148,7 +194,24 @@ export interface Analysis {
   maxScale: number;
   /** Station where a torque limiter would sit; absent: the rule in src/resize/torque-limiter.ts. */
   limiterAt?: string;
+  /** Shaft elements in the dynamic model; absent: refined automatically. */
+  elements?: number;
+  /** Whether the dynamic model carries the shaft's own inertia (default true). */
+  shaftInertia: boolean;
+  /** Damping ratio of each side's lowest mode, stiffness-proportional (default `DEFAULT_DAMPING_RATIO`). */
+  dampingRatio: number;
+  /** Simulated time from the stop, s; absent: chosen from the lowest mode and the drive. */
+  duration?: number;
 }
+
+/**
+ * Default damping ratio of the dynamic model: 0.5 % of critical in each side's lowest mode,
+ * stiffness-proportional. A small value typical of steel shafting: the material damping of steel
+ * is a fraction of a percent, and keyed hubs, couplings and bearings add to it, up to the few
+ * percent quoted for whole drive lines (from memory, verify). The low end is taken so that the
+ * first peak (lowered by about ζ·π/2) and the ringing are not understated.
+ */
+export const DEFAULT_DAMPING_RATIO = 0.005;
 
 /** What the investigator saw after the incident (`observed:` in the case file). */
 export interface Observed {

@@ -4,10 +4,12 @@ import { CaseError, type CaseProblem } from './case-error.ts';
 import { CaseReader } from './case-reader.ts';
 import type { Case, CaseMeta } from './case.ts';
 import { readAnalysis } from './read-analysis.ts';
+import { checkDriveCurves } from './read-drive.ts';
 import { readCaseMaterials } from './read-materials.ts';
-import { readShaft } from './read-shaft.ts';
+import { checkProtectedSegments, readShaft } from './read-shaft.ts';
 import { readObserved } from './read-observed.ts';
 import { readStations } from './read-stations.ts';
+import { readStop } from './read-stop.ts';
 
 /** The top-level keys of a case file. */
 export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis', 'observed'] as const;
@@ -41,9 +43,8 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const meta = readMeta(r);
   const units = (r.string(['units'], { allowed: ['metric', 'us'] }) ?? 'metric') as Case['units'];
   const speed = r.quantity(['speed'], 'angular_speed', { required: true, positive: true });
-  r.map(['stop'], ['at', 'duration'], { required: true, example: 'a mapping with at: the name of the station that stopped' });
-  const stopAt = r.string(['stop', 'at'], { required: true, example: 'the name of the station that stopped' });
-  const duration = r.quantity(['stop', 'duration'], 'time', { nonNegative: true });
+  const stop = readStop(r);
+  const stopAt = stop.at;
 
   const caseMaterials = readCaseMaterials(r);
   const used: Record<string, Material> = {};
@@ -61,13 +62,17 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
       r.fail('E_MODEL', ['stations'], 'no station other than the one that stopped carries parts, so nothing drives the shaft; add the rotating parts (rotor, pulley, flywheel) to their stations');
     }
   }
+  if (r.problems.length === 0) {
+    checkDriveCurves(r, stations, speed!.value);
+    checkProtectedSegments(r, shaft.segments, stations);
+  }
   if (r.problems.length > 0) throw new CaseError(file, r.problems);
 
   return {
     meta,
     units,
     speed: speed!.value,
-    stop: { at: stopAt!, duration: duration?.value ?? 0 },
+    stop: { ...stop, at: stopAt!, duration: stop.duration ?? 0 },
     materials: { ...used },
     shaft: { segments: shaft.segments },
     stations,

@@ -1,7 +1,23 @@
 import type { CaseReader } from './case-reader.ts';
-import type { Analysis, Hardening, Station, YieldCriterion } from './case.ts';
+import { DEFAULT_DAMPING_RATIO, type Analysis, type Hardening, type Station, type YieldCriterion } from './case.ts';
 
-const ANALYSIS_KEYS = ['criterion', 'hardening', 'samples', 'seed', 'strength_scatter', 'design_factor', 'service_factor', 'max_scale', 'limiter_at'];
+const ANALYSIS_KEYS = [
+  'criterion',
+  'hardening',
+  'elements',
+  'shaft_inertia',
+  'damping_ratio',
+  'duration',
+  'samples',
+  'seed',
+  'strength_scatter',
+  'design_factor',
+  'service_factor',
+  'max_scale',
+  'limiter_at',
+];
+/** More elements than this buy nothing a case file can measure and make `check` slow. */
+export const MAX_ELEMENTS = 2000;
 const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
 const HARDENING: Hardening[] = ['none', 'linear'];
 
@@ -12,8 +28,8 @@ export const DEFAULT_STRENGTH_SCATTER = 0.07;
 export const ANALYSIS_DEFAULTS = { designFactor: 1.5, serviceFactor: 1.5, maxScale: 1.3 } as const;
 
 /**
- * The `analysis:` section: the yield criterion, hardening past yield, the Monte Carlo settings and
- * the factors the resize options use. Read after every other section, so `r.tolerances` is complete.
+ * The `analysis:` section: the yield criterion, hardening past yield, the dynamic model's settings,
+ * the Monte Carlo settings and the factors the resize options use. Read after every other section, so `r.tolerances` is complete.
  */
 export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt: string | undefined): Analysis {
   r.map(['analysis'], ANALYSIS_KEYS);
@@ -23,15 +39,39 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
   const seed = r.number(['analysis', 'seed'], { example: 'a whole number such as 42', integer: true, min: 0 }) ?? 1;
   const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, example: 'a coefficient of variation such as "7 %"' });
   const wanted = scatter !== undefined || Object.keys(r.tolerances).length > 0;
+  const elements = r.number(['analysis', 'elements'], {
+    example: `a whole number of shaft elements from 1 to ${MAX_ELEMENTS}, such as 40, or leave it out to refine automatically`,
+    integer: true,
+    positive: true,
+  });
+  if (elements !== undefined && elements > MAX_ELEMENTS) {
+    r.fail('E_RANGE', ['analysis', 'elements'], `${elements} is more than ${MAX_ELEMENTS}; give a number such as 40, or leave it out to refine automatically`);
+  }
+  const shaftInertia = r.boolean(['analysis', 'shaft_inertia']) ?? true;
+  const damping = r.quantity(['analysis', 'damping_ratio'], 'fraction', {
+    nonNegative: true,
+    example: 'a damping ratio such as 0.02 or "2 %"',
+  });
+  if (damping && damping.value >= 1) {
+    r.fail('E_RANGE', ['analysis', 'damping_ratio'], `${damping.value} is not below 1 (critical damping); give a ratio such as 0.02 or "2 %"`);
+  }
+  const duration = r.quantity(['analysis', 'duration'], 'time', {
+    positive: true,
+    example: 'the time to simulate from the stop, such as "0.5 s" or "300 ms"',
+  });
   const factor = (key: string, example: string) => r.number(['analysis', key], { example, min: 1 });
   const analysis: Analysis = {
     criterion,
     hardening,
+    shaftInertia,
+    dampingRatio: damping && damping.value < 1 ? damping.value : DEFAULT_DAMPING_RATIO,
     uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER },
     designFactor: factor('design_factor', 'a design factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.designFactor,
     serviceFactor: factor('service_factor', 'a service factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.serviceFactor,
     maxScale: factor('max_scale', 'the largest practical scale of the diameters, such as 1.3') ?? ANALYSIS_DEFAULTS.maxScale,
   };
+  if (elements !== undefined && elements <= MAX_ELEMENTS) analysis.elements = elements;
+  if (duration) analysis.duration = duration.value;
   const limiterAt = r.string(['analysis', 'limiter_at']);
   if (limiterAt !== undefined) {
     const names = stations.map((s) => s.name);

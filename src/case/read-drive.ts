@@ -1,25 +1,106 @@
 import type { CaseReader, Path } from './case-reader.ts';
-import type { Drive } from './case.ts';
+import type { Drive, MotorTorqueSpec, Part, Station } from './case.ts';
+import { readBelt } from './read-belt.ts';
+
+const DRIVE_KEYS = ['rotor_inertia', 'speed_ratio', 'power', 'running_torque', 'torque', 'curve', 'belt'];
+/** Parts at a direct drive (speed ratio 1) whose names say they are the motor's rotor. */
+const ROTOR_NAME = /\b(motor|rotor)\b/i;
 
 /**
- * The keys of a station's `drive:` this branch reads. The dynamics model's fuller drive (rotor
- * inertia, torque curve, belt) replaces this reader; the resize options read the drive only through
- * `runningTorque` (src/results/running-torque.ts).
+ * A station's `drive:`. The rotor's inertia is counted once, as a part: `rotor_inertia` (at the
+ * motor's own speed) is added to the station's `parts` as "motor rotor"; without it the rotor is
+ * the station's parts that turn at the drive's speed ratio. A rotor given both ways is refused.
+ * `parts` is the station's list being built; the rotor part is appended to it.
  */
-export const DRIVE_KEYS = ['power', 'running_torque', 'speed_ratio'];
-
-/** A station's `drive: {power, running_torque, speed_ratio}`; undefined when absent or wrong. */
-export function readDrive(r: CaseReader, path: Path): Drive | undefined {
+export function readDrive(r: CaseReader, path: Path, parts: Part[]): Drive | undefined {
   if (!r.map(path, DRIVE_KEYS)) return undefined;
-  const power = r.quantity([...path, 'power'], 'power', { positive: true, example: 'the power in normal running, such as "30 kW" or "15 hp"' });
-  const torque = r.quantity([...path, 'running_torque'], 'torque', {
-    positive: true,
-    example: 'the torque at shaft speed in normal running, such as "680 N*m" or "500 lbf*ft"',
-  });
-  const speedRatio = r.number([...path, 'speed_ratio'], { example: "the drive's speed over the shaft's, such as 3.52", positive: true });
-  const drive: Drive = {};
+  const givenRatio = r.number([...path, 'speed_ratio'], { example: 'the motor\'s speed over the shaft\'s, such as 3.52', positive: true });
+  const rotorInertia = r.quantity([...path, 'rotor_inertia'], 'inertia', { positive: true, example: 'the rotor\'s inertia from the motor data sheet, such as "0.42 kg*m^2"' });
+  const power = r.quantity([...path, 'power'], 'power', { positive: true });
+  const running = r.quantity([...path, 'running_torque'], 'torque', { positive: true, example: 'the motor\'s normal running torque, such as "240 N*m"' });
+  const torque = readMotorTorque(r, path);
+  const belt = r.has([...path, 'belt']) ? readBelt(r, [...path, 'belt']) : undefined;
+
+  const geared = [...new Set(parts.filter((p) => p.speedRatio !== 1).map((p) => p.speedRatio))];
+  let speedRatio = givenRatio ?? 1;
+  if (givenRatio === undefined && geared.length === 1 && !rotorInertia) speedRatio = geared[0];
+  if (givenRatio === undefined && geared.length > 1 && !rotorInertia) {
+    r.fail('E_MISSING', [...path, 'speed_ratio'], `the station's parts turn at several speed ratios (${geared.join(', ')}); give the motor's, such as speed_ratio: ${geared[0]}`);
+    return undefined;
+  }
+
+  let rotorParts = parts.flatMap((p, i) => (p.speedRatio === speedRatio && speedRatio !== 1 ? [i] : []));
+  if (rotorInertia) {
+    const twice = parts.find((p) => (speedRatio !== 1 ? p.speedRatio === speedRatio : ROTOR_NAME.test(p.name)));
+    if (twice) {
+      r.fail('E_RANGE', [...path, 'rotor_inertia'], `the rotor is already listed as the part "${twice.name}" (speed_ratio ${twice.speedRatio}); give its inertia once: drop drive.rotor_inertia or that part`);
+      return undefined;
+    }
+    parts.push({ name: 'motor rotor', shape: 'inertia', inertia: rotorInertia.value, count: 1, speedRatio, dimensions: { inertia: rotorInertia.value } });
+    rotorParts = [parts.length - 1];
+  }
+  if (belt && rotorParts.length === 0) {
+    r.fail('E_MISSING', [...path, 'rotor_inertia'], `a belt drive needs the motor's rotor behind the belt: give rotor_inertia (at the motor's speed), or list the rotor as a part with speed_ratio ${speedRatio === 1 ? 'such as 3.5' : speedRatio}`);
+  }
+  if (belt && parts.length === rotorParts.length) {
+    r.fail('E_MODEL', [...path, 'belt'], 'a belt drive needs the pulley on this shaft: add the pulley (sheave) to this station\'s parts');
+  }
+  if (parts.length === 0) {
+    r.fail('E_MISSING', [...path, 'rotor_inertia'], 'a drive needs the rotor\'s inertia: give rotor_inertia, such as "0.42 kg*m^2", or the rotor as one of the station\'s parts');
+  }
+  const drive: Drive = { speedRatio, rotorParts };
   if (power) drive.power = power.value;
-  if (torque) drive.runningTorque = torque.value;
-  if (speedRatio !== undefined) drive.speedRatio = speedRatio;
+  if (running) drive.runningTorque = running.value;
+  if (torque) drive.torque = torque;
+  if (belt) drive.belt = belt;
   return drive;
+}
+
+/** `torque:` (constant while pulled down) or `curve:` (speed–torque points from 0 rpm up), not both. */
+function readMotorTorque(r: CaseReader, path: Path): MotorTorqueSpec | undefined {
+  if (r.has([...path, 'torque']) && r.has([...path, 'curve'])) {
+    r.fail('E_RANGE', [...path, 'curve'], 'give either torque (constant) or curve (speed–torque points), not both');
+    return undefined;
+  }
+  if (r.has([...path, 'torque'])) {
+    const t = r.quantity([...path, 'torque'], 'torque', { nonNegative: true, example: 'the motor\'s torque while it is pulled down, such as "580 N*m"' });
+    return t && { kind: 'constant', torque: t.value };
+  }
+  const n = r.list([...path, 'curve']);
+  if (n === 0) return undefined;
+  if (n < 2) {
+    r.fail('E_RANGE', [...path, 'curve'], 'give at least two points, from 0 rpm to the running speed, such as [{speed: 0 rpm, torque: 580 N*m}, {speed: 1480 rpm, torque: 290 N*m}]');
+    return undefined;
+  }
+  const points: { speed: number; torque: number }[] = [];
+  for (let i = 0; i < n; i++) {
+    const p = [...path, 'curve', i];
+    if (!r.map(p, ['speed', 'torque'], { required: true, example: 'a point such as {speed: 1200 rpm, torque: 640 N*m}' })) continue;
+    const speed = r.quantity([...p, 'speed'], 'angular_speed', { required: true, nonNegative: true, example: 'the motor\'s speed at this point, such as "1200 rpm"' });
+    const torque = r.quantity([...p, 'torque'], 'torque', { required: true, example: 'the motor\'s torque at this point, such as "640 N*m"' });
+    if (!speed || !torque) continue;
+    if (i === 0 && speed.value !== 0) r.fail('E_RANGE', [...p, 'speed'], 'the curve starts at standstill; give the locked-rotor point first, such as {speed: 0 rpm, torque: 580 N*m}');
+    if (points.length > 0 && speed.value <= points[points.length - 1].speed) {
+      r.fail('E_RANGE', [...p, 'speed'], 'speeds must rise from one point to the next; list the points from 0 rpm upward');
+    }
+    points.push({ speed: speed.value, torque: torque.value });
+  }
+  return points.length === n ? { kind: 'curve', points } : undefined;
+}
+
+/**
+ * Checks needing the whole case: a speed–torque curve must reach the motor's speed at the stop
+ * (shaft speed × ratio), or the motor's torque there would be a guess. Call with no problems left.
+ */
+export function checkDriveCurves(r: CaseReader, stations: readonly Station[], shaftSpeed: number): void {
+  stations.forEach((s, i) => {
+    const t = s.drive?.torque;
+    if (!s.drive || t?.kind !== 'curve') return;
+    const motorSpeed = shaftSpeed * s.drive.speedRatio;
+    const top = t.points[t.points.length - 1].speed;
+    if (top < motorSpeed * (1 - 1e-9)) {
+      const rpm = (w: number) => `${Number(((w * 60) / (2 * Math.PI)).toPrecision(4))} rpm`;
+      r.fail('E_RANGE', ['stations', i, 'drive', 'curve'], `ends at ${rpm(top)}, below the motor's speed at the stop (${rpm(motorSpeed)} = shaft speed × speed_ratio ${s.drive.speedRatio}); extend the curve to the synchronous speed`);
+    }
+  });
 }

@@ -1,9 +1,9 @@
 import type { Material } from '../materials/material.ts';
 import type { CaseReader } from './case-reader.ts';
-import type { Segment } from './case.ts';
+import type { Segment, Station } from './case.ts';
 import { resolveMaterial } from './read-materials.ts';
 
-const SEGMENT_KEYS = ['length', 'diameter', 'bore', 'material', 'kt', 'label'];
+const SEGMENT_KEYS = ['length', 'diameter', 'bore', 'material', 'kt', 'label', 'slip_torque', 'shear_torque'];
 
 /** The shaft's segments in order from its start, with positions accumulated. */
 export function readShaft(
@@ -24,6 +24,7 @@ export function readShaft(
     const bore = r.quantity([...path, 'bore'], 'length', { nonNegative: true });
     const kt = r.number([...path, 'kt'], { example: 'a factor of 1 or more, such as 1.6', min: 1 }) ?? 1;
     const label = r.string([...path, 'label']);
+    const protection = readProtection(r, path);
     const materialKey = r.string([...path, 'material']) ?? shaftMaterial;
     if (diameter && bore && bore.value >= diameter.value) {
       r.fail('E_RANGE', [...path, 'bore'], `the bore must be smaller than the diameter (${fmtMm(diameter.value)}); give a bore such as "${fmtMm(diameter.value * 0.5)}", or leave it out for a solid segment`);
@@ -48,10 +49,37 @@ export function readShaft(
       bore: bore?.value ?? 0,
       material: material.key,
       kt,
+      ...protection,
     });
     position += length.value;
   }
   return { segments, length: position };
+}
+
+/** A segment's `slip_torque` (friction torque limiter, slip coupling) or `shear_torque` (shear pin), not both. */
+function readProtection(r: CaseReader, path: (string | number)[]): Pick<Segment, 'slipTorque' | 'shearTorque'> {
+  const slip = r.quantity([...path, 'slip_torque'], 'torque', { positive: true, example: 'the torque limiter\'s slip setting, such as "1500 N*m"' });
+  const shear = r.quantity([...path, 'shear_torque'], 'torque', { positive: true, example: 'the torque at which the shear pin parts, such as "2200 N*m"' });
+  if (slip && shear) {
+    r.fail('E_RANGE', [...path, 'shear_torque'], 'give either slip_torque (a limiter that slips) or shear_torque (a pin that parts) on one segment, not both; split the segment if it has both');
+    return {};
+  }
+  return slip ? { slipTorque: slip.value } : shear ? { shearTorque: shear.value } : {};
+}
+
+/**
+ * A limiter or shear pin sits somewhere in its segment; a station with parts inside that segment
+ * would leave unclear which side of the device the parts are on. Call with no problems left.
+ */
+export function checkProtectedSegments(r: CaseReader, segments: readonly Segment[], stations: readonly Station[]): void {
+  for (const seg of segments) {
+    if (seg.slipTorque === undefined && seg.shearTorque === undefined) continue;
+    const inside = stations.find((s) => s.parts.length > 0 && s.at > seg.start + 1e-9 && s.at < seg.end - 1e-9);
+    if (inside) {
+      const key = seg.slipTorque !== undefined ? 'slip_torque' : 'shear_torque';
+      r.fail('E_MODEL', ['shaft', 'segments', seg.index, key], `station "${inside.name}" with parts lies inside this segment, so it is unclear which side of the ${key === 'slip_torque' ? 'limiter' : 'shear pin'} its parts are on; split the segment at the station and put ${key} on the piece that holds the device`);
+    }
+  }
 }
 
 function fmtMm(m: number): string {

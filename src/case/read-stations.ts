@@ -15,7 +15,7 @@ const SHAPE_KEYS: Record<PartShape, string[]> = {
 };
 const SHAPES = Object.keys(SHAPE_KEYS) as PartShape[];
 
-/** Stations with their parts; each part's inertia worked out from its shape. */
+/** Stations with their parts and drives; each part's inertia worked out from its shape. */
 export function readStations(
   r: CaseReader,
   shaftLength: number,
@@ -43,7 +43,7 @@ export function readStations(
       const part = readPart(r, [...path, 'parts', j], caseMaterials, used);
       if (part) parts.push(part);
     }
-    const drive = readDrive(r, [...path, 'drive']);
+    const drive = r.has([...path, 'drive']) ? readDrive(r, [...path, 'drive'], parts) : undefined;
     const key = readKey(r, [...path, 'key'], caseMaterials, used);
     if (name !== undefined && at) {
       const station: Station = { name, at: Math.min(at.value, shaftLength), parts };

@@ -13,6 +13,7 @@ import { materialSection } from './sections/material.ts';
 import { observationsSection } from './sections/observations.ts';
 import { findingsSection } from './sections/findings.ts';
 import { howSureSection } from './sections/how-sure.ts';
+import { dynamicsSection } from './sections/dynamics.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
@@ -21,6 +22,9 @@ import { shaftSchematicFigure } from './figures/shaft-schematic.ts';
 import { energyShareFigure } from './figures/energy-share.ts';
 import { stressAlongShaftFigure } from './figures/stress-along-shaft.ts';
 import { stressVsSpeedFigure } from './figures/stress-vs-speed.ts';
+import { dynamicTorqueFigure } from './figures/dynamic-torque.ts';
+import { dynamicSpeedsFigure } from './figures/dynamic-speeds.ts';
+import { dynamicModesFigure } from './figures/dynamic-modes.ts';
 import { torqueTwistFigure } from './figures/torque-twist-curve.ts';
 import { permanentTwistSpeedFigures } from './figures/permanent-twist-speed.ts';
 import { yieldRatioHistogramFigure } from './figures/yield-ratio-histogram.ts';
@@ -45,6 +49,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   machineSection,
   methodSection,
   resultsSection,
+  dynamicsSection,
   materialSection,
   observationsSection,
   findingsSection,
@@ -61,6 +66,9 @@ export const REPORT_FIGURES: readonly { section: string; draw: FigureDrawer }[] 
   { section: 'machine', draw: ({ results }) => energyShareFigure(results) },
   { section: 'results', draw: ({ results }) => stressAlongShaftFigure(results) },
   { section: 'results', draw: ({ results }) => stressVsSpeedFigure(results) },
+  { section: 'dynamics', draw: ({ results }) => dynamicTorqueFigure(results) },
+  { section: 'dynamics', draw: ({ results }) => dynamicSpeedsFigure(results) },
+  { section: 'dynamics', draw: ({ results }) => dynamicModesFigure(results) },
   { section: 'findings', draw: ({ results }) => torqueTwistFigure(results) },
   { section: 'findings', draw: ({ results }) => permanentTwistSpeedFigures(results) },
   { section: 'uncertainty', draw: ({ results }) => yieldRatioHistogramFigure(results) },

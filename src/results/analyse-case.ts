@@ -1,11 +1,14 @@
 import type { Case } from '../case/case.ts';
 import { buildShaftModel } from '../model/shaft-model.ts';
-import { energyMethodSide } from '../physics/energy-method.ts';
+import { energyMethodSide, type PieceResult, type SideResult } from '../physics/energy-method.ts';
+import { compliance } from '../physics/torsion.ts';
 import { analysePlastic } from './analyse-plastic.ts';
 import { CAUTIONS } from './cautions.ts';
+import { dynamicResult, type DynamicResult } from './dynamic-result.ts';
 import { readFracture } from './fracture-reading.ts';
 import type { ElasticVerdict, Results, Verdict } from './results.ts';
 import { readTwistBack } from './twist-findings.ts';
+import { verdictBasis } from './verdict-basis.ts';
 
 /** Share of a side's energy above which the shaft's own kinetic energy is worth a warning. */
 const SHAFT_ENERGY_WARNING = 0.05;
@@ -15,14 +18,17 @@ export function analyseCase(c: Case): Results {
   const model = buildShaftModel(c);
   const warnings: string[] = [];
   const sides = model.sides.map((side) => energyMethodSide(side, c.speed, c.materials, c.analysis.criterion));
+  const dynamic = dynamicResult(c, model, sides);
+  const basis = verdictBasis(c, sides);
 
   for (const s of model.atStop) {
     warnings.push(`Station "${s.name}" stands at the stop itself; its parts release no energy into the shaft and are left out.`);
   }
   for (const side of sides) {
     if (side.stations.length > 1) {
+      const d = dynamic.sides.find((x) => x.side === side.side)!;
       warnings.push(
-        `Side ${side.side} has ${side.stations.length} stations with parts (${side.stations.join(', ')}); the energy method puts all their energy through the whole run of shaft and is approximate here.`,
+        `Side ${side.side} has ${side.stations.length} stations with parts (${side.stations.join(', ')}); the energy method puts all their energy through the whole run of shaft and is approximate here; the dynamic model resolves them (peak torque ${fmt(d.dynamicPeakTorque)} N·m against ${fmt(d.energyPeakTorque)} N·m) and the verdict uses it.`,
       );
     }
     if (side.shaftKineticEnergy === undefined) {
@@ -30,13 +36,19 @@ export function analyseCase(c: Case): Results {
     } else if (side.shaftKineticEnergy > SHAFT_ENERGY_WARNING * side.kineticEnergy) {
       const pct = (100 * side.shaftKineticEnergy) / side.kineticEnergy;
       warnings.push(
-        `Side ${side.side}: the shaft's own kinetic energy is ${pct.toFixed(0)} % of the parts' energy and is not included (as in the hand method); the result may be low.`,
+        `Side ${side.side}: the shaft's own kinetic energy is ${pct.toFixed(0)} % of the parts' energy and is not included in the energy method (as in the hand method); the result may be low. ${dynamic.shaftInertia ? 'The dynamic model includes it.' : 'The dynamic model leaves it out too.'}`,
       );
     }
   }
   if (c.stop.duration > 0) {
-    warnings.push(`The stop took ${(c.stop.duration * 1000).toPrecision(3)} ms; the energy method treats it as instantaneous, which overestimates the torque.`);
+    warnings.push(
+      `The stop took ${(c.stop.duration * 1000).toPrecision(3)} ms; the energy method treats it as instantaneous, which overestimates the torque; the dynamic model follows the stop's ramp and the verdict uses it.`,
+    );
   }
+  for (const s of dynamic.slips) {
+    if (s.slippingAtEnd) warnings.push(`${capitalise(s.element)} was still slipping when the simulated window ended (${(dynamic.duration * 1000).toPrecision(3)} ms); its slip energy and angle are to that moment.`);
+  }
+  warnings.push(...dynamic.notes);
 
   let governing = { side: sides[0], piece: sides[0].pieces[0] };
   for (const side of sides) {
@@ -44,13 +56,30 @@ export function analyseCase(c: Case): Results {
   }
   const maxShearStress = Math.max(...sides.flatMap((s) => s.pieces.map((p) => p.shearStress)));
   const elasticVerdict: ElasticVerdict = governing.piece.yieldRatio < 1 ? 'elastic' : 'yielded';
+  // The verdict's elastic check stands on the dynamic model where the energy method is not exact;
+  // governing, maxShearStress and yieldRatio stay the energy method's (the JSON contract's keys).
+  const verdictGoverning = basis.basis === 'dynamic model' ? dynamicGoverning(c, sides, dynamic) : governing;
+  const basisVerdict: ElasticVerdict = verdictGoverning.piece.yieldRatio < 1 ? 'elastic' : 'yielded';
 
   const { plastic, balances, warnings: plasticWarnings } = analysePlastic(c, model, sides);
   warnings.push(...plasticWarnings);
-  if (elasticVerdict === 'yielded' && plastic.verdict === 'elastic') {
-    warnings.push('The net section stays elastic, but the stress at a stress raiser (kt) passes yield: local yielding there, no measurable permanent twist; the spot matters for fatigue.');
+  let verdict: Verdict;
+  if (basis.basis === 'dynamic model' && basisVerdict === 'elastic') {
+    // The dynamic model (slip, drive, ramp, several masses) keeps every segment below yield; the
+    // energy balance past yield puts all the energy into the shaft and does not apply.
+    verdict = 'elastic';
+    if (plastic.verdict !== 'elastic') {
+      warnings.push('The energy balance past yield (all the energy into the shaft) predicts yield, but the dynamic model, which follows the slip, the drive and the stop in time, keeps every segment elastic; the verdict follows the dynamic model, and the past-yield figures are an upper bound.');
+    }
+  } else {
+    if (basisVerdict === 'yielded' && plastic.verdict === 'elastic') {
+      warnings.push('The net section stays elastic, but the stress at a stress raiser (kt) passes yield: local yielding there, no measurable permanent twist; the spot matters for fatigue.');
+    }
+    verdict = plastic.verdict === 'elastic' ? basisVerdict : plastic.verdict;
+    if (basis.basis === 'dynamic model' && plastic.verdict !== 'elastic') {
+      warnings.push('Past yield, the permanent twist and fracture come from the energy balance (all of a side\'s energy into its shaft); the dynamic model is elastic, so where slip or the drive matter these figures are approximate.');
+    }
   }
-  const verdict: Verdict = plastic.verdict === 'elastic' ? elasticVerdict : plastic.verdict;
   const observedFindings = { twist: readTwistBack(c, model.sides, balances), fracture: readFracture(c, plastic) };
 
   return {
@@ -65,7 +94,35 @@ export function analyseCase(c: Case): Results {
     elasticVerdict,
     plastic,
     observedFindings,
+    verdictGoverning,
+    verdictYieldRatio: verdictGoverning.piece.yieldRatio,
+    verdictBasis: basis.basis,
+    verdictReason: basis.reason,
+    dynamic,
     warnings,
     cautions: CAUTIONS,
   };
+}
+
+/** The dynamic model's governing piece in the energy method's shape, so the views read one type. */
+function dynamicGoverning(c: Case, sides: SideResult[], d: DynamicResult): Results['governing'] {
+  const p = d.pieces[d.governing];
+  const seg = p.piece.segment;
+  const piece: PieceResult = {
+    piece: p.piece,
+    torque: p.peakTorque,
+    shearStress: p.shearStress,
+    shearYield: p.shearYield,
+    twist: p.peakTorque * compliance(p.piece.end - p.piece.start, c.materials[seg.material].shearModulus!, seg.diameter, seg.bore),
+    yieldRatio: p.yieldRatio,
+  };
+  return { side: sides.find((s) => s.side === p.side) ?? sides[0], piece };
+}
+
+function fmt(x: number): string {
+  return Number(x.toPrecision(3)).toString();
+}
+
+function capitalise(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
 }

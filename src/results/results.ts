@@ -4,6 +4,8 @@ import type { Uncertainty } from '../uncertainty/uncertainty.ts';
 import type { FractureFinding } from './fracture-reading.ts';
 import type { PlasticResult } from './plastic-result.ts';
 import type { TwistFinding } from './twist-findings.ts';
+import type { DynamicResult } from './dynamic-result.ts';
+import type { VerdictBasis } from './verdict-basis.ts';
 
 /**
  * The case's verdict. `elastic`: no yield anywhere; `yielded`: the net section yields and takes a
@@ -33,11 +35,13 @@ export interface Results {
   sides: SideResult[];
   /** Kinetic energy of both sides, J. */
   kineticEnergy: number;
-  /** The piece of shaft with the highest yield ratio, and its side. */
+  /**
+   * The piece of shaft with the highest yield ratio, and its side, by the elastic energy method.
+   */
   governing: { side: SideResult; piece: PieceResult };
-  /** Highest shear stress over all sides, Pa. */
+  /** Highest shear stress over all sides, Pa, by the energy method. */
   maxShearStress: number;
-  /** Highest yield ratio over all sides. */
+  /** Highest yield ratio over all sides, by the energy method. */
   yieldRatio: number;
   /** Overall verdict: the worse of the plastic balance's and the elastic method's. */
   verdict: Verdict;
@@ -47,6 +51,18 @@ export interface Results {
   plastic: PlasticResult;
   /** The damage recorded in the case read back to the incident. */
   observedFindings: ObservedFindings;
+  /** Which result the verdict's elastic check stands on. */
+  verdictBasis: VerdictBasis;
+  /**
+   * The governing piece and its yield ratio by the verdict's basis: the energy method's `governing`,
+   * or the dynamic model's piece with the highest peak yield ratio over the window.
+   */
+  verdictGoverning: { side: SideResult; piece: PieceResult };
+  verdictYieldRatio: number;
+  /** Why that result, one sentence. */
+  verdictReason: string;
+  /** The lumped torsional chain solved in time, beside the energy method. */
+  dynamic: DynamicResult;
   /** Warnings about the model's fit to the case, in plain words. */
   warnings: string[];
   cautions: readonly string[];

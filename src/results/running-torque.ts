@@ -12,8 +12,9 @@ export interface RunningTorque {
 }
 
 /**
- * The running torque at shaft speed from the first station with a `drive:`: its `running_torque`,
- * or else its `power` over the shaft speed ω (T = P/ω). ω is the case's speed at the stop, taken
+ * The running torque at shaft speed from the first station with a `drive:`: its `running_torque`
+ * (given at the motor shaft, so times the drive's speed ratio at the machine shaft), or else its
+ * `power` over the shaft speed ω (T = P/ω). ω is the case's speed at the stop, taken
  * as the running speed. Undefined when no drive gives either. The one place the resize options
  * read the drive: the dynamics model's fuller drive replaces what is read here, not the callers.
  */
@@ -21,7 +22,12 @@ export function runningTorque(c: Case): RunningTorque | undefined {
   for (const s of c.stations) {
     const d = s.drive;
     if (d?.runningTorque !== undefined) {
-      return { torque: d.runningTorque, source: `running_torque of the drive at "${s.name}"`, station: s.name };
+      const ratio = d.speedRatio;
+      return {
+        torque: d.runningTorque * ratio,
+        source: `running_torque of the drive at "${s.name}"${ratio !== 1 ? ` × its speed ratio ${ratio}` : ''}`,
+        station: s.name,
+      };
     }
     if (d?.power !== undefined) {
       return { torque: torqueFromPower(d.power, c.speed), source: `power of the drive at "${s.name}" over the shaft speed, T = P/ω`, station: s.name };

@@ -1,9 +1,15 @@
 import type { PieceResult, SideResult } from '../physics/energy-method.ts';
+import type { DynamicResult } from '../results/dynamic-result.ts';
 import type { Results } from '../results/results.ts';
 import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
 import type { Uncertainty } from '../uncertainty/uncertainty.ts';
 
-/** The machine-readable result, SI, keys carrying their units. These names are a contract: keep them stable. */
+/**
+ * The machine-readable result, SI, keys carrying their units. These names are a contract: keep them
+ * stable. `max_shear_stress_Pa`, `shear_yield_Pa`, `yield_ratio`, `verdict` and `governing` are by
+ * the verdict's basis, which `verdict_basis` names ("energy method" or "dynamic model") and
+ * `verdict_reason` explains; `sides` is always the energy method, `dynamic` always the dynamic model.
+ */
 export function resultsToJson(r: Results): Record<string, unknown> {
   return {
     case_id: r.case.meta.id,
@@ -13,6 +19,9 @@ export function resultsToJson(r: Results): Record<string, unknown> {
     shear_yield_Pa: r.governing.piece.shearYield,
     yield_ratio: r.yieldRatio,
     verdict: r.verdict,
+    verdict_basis: r.verdictBasis,
+    verdict_yield_ratio: r.verdictYieldRatio,
+    verdict_reason: r.verdictReason,
     governing: { side: r.governing.side.side, from_m: r.governing.piece.piece.start, to_m: r.governing.piece.piece.end },
     warnings: r.warnings,
     cautions: r.cautions,
@@ -22,6 +31,23 @@ export function resultsToJson(r: Results): Record<string, unknown> {
     observed: observedToJson(r.observedFindings),
     observed_fracture: observedFractureToJson(r.observedFindings),
     ...(r.uncertainty ? { uncertainty: uncertaintyJson(r.uncertainty) } : {}),
+    dynamic: dynamicJson(r.dynamic),
+  };
+}
+
+/** The dynamic model: maxima over all segments and the whole window, per segment, and what slipped. */
+function dynamicJson(d: DynamicResult): Record<string, unknown> {
+  return {
+    natural_frequencies_Hz: d.naturalFrequencies,
+    peak_torque_Nm: d.peakTorque,
+    max_shear_stress_Pa: d.maxShearStress,
+    yield_ratio: d.yieldRatio,
+    duration_s: d.duration,
+    time_step_s: d.timeStep,
+    elements: d.elements,
+    segments: d.pieces.map((p) => ({ from_m: p.piece.start, to_m: p.piece.end, peak_torque_Nm: p.peakTorque, shear_stress_Pa: p.shearStress, yield_ratio: p.yieldRatio })),
+    slip: d.slips.map((s) => ({ element: s.element, energy_J: s.energy, angle_rad: s.angle })),
+    events: d.events.map((e) => ({ time_s: e.time, event: e.text })),
   };
 }
 

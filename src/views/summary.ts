@@ -3,16 +3,42 @@ import type { ElasticVerdict, Results } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
 import { renderUncertaintyLines } from './uncertainty-summary.ts';
 import { observedLines, overallVerdictSentence, plasticLines } from './plastic-lines.ts';
+import { showSlipAngle } from './slip-angle.ts';
 
-/** The elastic energy method's verdict in plain words, one sentence. */
-export function verdictSentence(r: Results): string {
-  const where = describePiece(r.governing.piece, r.case.units);
-  const ratio = sig(r.yieldRatio, 3);
+/** The dynamic model beside the energy method: a few lines per side, the lowest frequencies, what slipped. */
+export function dynamicLines(r: Results): string[] {
+  const d = r.dynamic;
+  const u = r.case.units;
+  const out = [`Dynamic model (torsional chain, ${d.elements} shaft element${d.elements === 1 ? '' : 's'}, ${sig(d.duration * 1000)} ms from the stop)`];
+  for (const s of d.sides) {
+    out.push(
+      `  side ${s.side}  peak torque ${show(s.dynamicPeakTorque, 'torque', u)} (energy method ${show(s.energyPeakTorque, 'torque', u)}), yield ratio ${sig(s.dynamicYieldRatio)} (${sig(s.energyYieldRatio)})`,
+    );
+  }
+  out.push(`  natural frequencies with the stop held: ${d.naturalFrequencies.slice(0, 3).map((f) => sig(f)).join(', ')} Hz`);
+  for (const s of d.slips) {
+    const what = s.firstSlip === undefined ? 'did not slip' : `slipped ${showSlipAngle(s.angle, u)} and took ${show(s.energy, 'energy', u)}${s.slippingAtEnd ? ', still slipping at the end' : ''}`;
+    out.push(`  ${s.element} (slip torque ${show(s.slipTorque, 'torque', u)}) ${what}`);
+  }
+  for (const p of d.pins) {
+    out.push(`  ${p.element} (${show(p.shearTorque, 'torque', u)}) ${p.partedAt === undefined ? 'held' : `parted at ${sig(p.partedAt * 1000)} ms`}`);
+  }
+  return out;
+}
+
+/**
+ * The elastic check's verdict in plain words, one sentence: by the energy method, or with
+ * `basis: true` by the verdict's basis (the dynamic model where the case needs it).
+ */
+export function verdictSentence(r: Results, basis = false): string {
+  const g = basis ? r.verdictGoverning : r.governing;
+  const where = describePiece(g.piece, r.case.units);
+  const ratio = sig(g.piece.yieldRatio, 3);
   const words: Record<ElasticVerdict, string> = {
-    elastic: `ELASTIC: the highest stress is ${ratio} of shear yield (side ${r.governing.side.side}, ${where}); no yield is predicted.`,
-    yielded: `YIELDED: the elastic stress reaches ${ratio} × shear yield (side ${r.governing.side.side}, ${where}); the shaft may have taken a permanent twist.`,
+    elastic: `ELASTIC: the highest stress is ${ratio} of shear yield (side ${g.side.side}, ${where}); no yield is predicted.`,
+    yielded: `YIELDED: the elastic stress reaches ${ratio} × shear yield (side ${g.side.side}, ${where}); the shaft may have taken a permanent twist.`,
   };
-  return words[r.elasticVerdict];
+  return words[g.piece.yieldRatio < 1 ? 'elastic' : 'yielded'];
 }
 
 /** "segment 2 "journal", 120–300 mm, Ø50 mm" */
@@ -45,8 +71,11 @@ export function renderSummary(r: Results): string {
   const sure = renderUncertaintyLines(r);
   if (sure.length > 0) out.push('', ...sure);
   out.push('');
-  out.push(`Verdict (elastic energy method): ${verdictSentence(r)}`);
-  if (r.yieldRatio >= 1 || r.verdict !== r.elasticVerdict) {
+  out.push(...dynamicLines(r));
+  out.push('');
+  out.push(`Verdict (${r.verdictBasis === 'dynamic model' ? 'dynamic model' : 'elastic energy method'}): ${verdictSentence(r, true)}`);
+  out.push(`  ${r.verdictReason}`);
+  if (r.verdictYieldRatio >= 1 || r.yieldRatio >= 1 || r.verdict !== r.elasticVerdict) {
     out.push(...plasticLines(r));
     out.push('');
     out.push(`Verdict: ${overallVerdictSentence(r)}`);

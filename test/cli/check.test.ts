@@ -31,6 +31,34 @@ describe('shaftcase check', () => {
       expect(j.sides[0]).toHaveProperty(key);
     }
     for (const key of ['from_m', 'to_m', 'torque_Nm', 'shear_stress_Pa', 'twist_rad', 'yield_ratio']) expect(j.sides[0].segments[0]).toHaveProperty(key);
+    expect(j.verdict_basis).toBe('energy method');
+    expect(j.verdict_reason).toMatch(/energy method/);
+    for (const key of ['natural_frequencies_Hz', 'peak_torque_Nm', 'max_shear_stress_Pa', 'yield_ratio', 'duration_s', 'time_step_s', 'elements', 'segments', 'slip']) {
+      expect(j.dynamic).toHaveProperty(key);
+    }
+    for (const key of ['from_m', 'to_m', 'peak_torque_Nm', 'shear_stress_Pa', 'yield_ratio']) expect(j.dynamic.segments[0]).toHaveProperty(key);
+  });
+
+  it('--json on a case with a belt lists its slip, and the verdict keys follow the dynamic model', async () => {
+    const sample = fileURLToPath(new URL('../../sample-cases/granulator-tramp-metal.yaml', import.meta.url));
+    const j = JSON.parse((await cli('check', sample, '--json')).out);
+    expect(j.verdict_basis).toBe('dynamic model');
+    expect(j.verdict_yield_ratio).toBe(j.dynamic.yield_ratio);
+    expect(j.max_shear_stress_Pa).toBe(Math.max(...j.sides.flatMap((s: any) => s.segments.map((g: any) => g.shear_stress_Pa))));
+    expect(j.dynamic.slip[0]).toEqual({ element: 'the belt at "drive sheave"', energy_J: expect.any(Number), angle_rad: expect.any(Number) });
+    const f = j.dynamic.natural_frequencies_Hz;
+    expect([...f].sort((a: number, b: number) => a - b)).toEqual(f);
+    expect(j.dynamic.peak_torque_Nm).toBe(Math.max(...j.dynamic.segments.map((s: { peak_torque_Nm: number }) => s.peak_torque_Nm)));
+  });
+
+  it('the summary shows the dynamic model beside the energy method and says which the verdict used', async () => {
+    const sample = fileURLToPath(new URL('../../sample-cases/roll-line-limiter-two-sides.yaml', import.meta.url));
+    const r = await cli('check', sample);
+    expect(r.out).toMatch(/Dynamic model \(torsional chain, \d+ shaft elements, [\d.]+ ms from the stop\)/);
+    expect(r.out).toMatch(/side A {2}peak torque .* \(energy method .*\), yield ratio [\d.]+ \([\d.]+\)/);
+    expect(r.out).toMatch(/the torque limiter in "limiter hub seat" \(slip torque 9000 N·m\) slipped/);
+    expect(r.out).toMatch(/Verdict \(dynamic model\): (ELASTIC|YIELDED)/);
+    expect(r.out).toMatch(/The verdict uses the dynamic model because the stop took 6\.00 ms/);
   });
 
   it('a bad case file exits 2 with file:line:column and no stack trace', () => {

@@ -127,7 +127,7 @@ describe('renderReport', () => {
 
   it('each figure is linked once, numbered in order, in the section the registry names', () => {
     const { md, figures } = report('two-sided-pump.yaml');
-    expect(figures.map((f) => f.figure.name)).toEqual(['shaft-schematic', 'energy-share', 'stress-along-shaft', 'stress-vs-speed', 'torque-twist', 'resize-yield-ratio-vs-diameter', 'resize-peak-torque-vs-limiter']);
+    expect(figures.map((f) => f.figure.name)).toEqual(['shaft-schematic', 'energy-share', 'stress-along-shaft', 'stress-vs-speed', 'dynamic-torque', 'dynamic-speeds', 'dynamic-modes', 'torque-twist', 'resize-yield-ratio-vs-diameter', 'resize-peak-torque-vs-limiter']);
     figures.forEach((f, i) => {
       const title = REPORT_SECTIONS.find((s) => s.id === f.section)!.title;
       expect(section(md, title)).toContain(`![Figure ${i + 1}: ${f.figure.title}.`);

@@ -1,0 +1,71 @@
+import type { Drive, Station } from '../case/case.ts';
+import { reflectedInertia } from '../physics/inertia.ts';
+import { motorLine, reflectLine, torqueAt, type TorqueSpeedLine } from '../physics/motor-torque.ts';
+import { beltSlip, type BeltSlip } from '../physics/slip.ts';
+
+/** A drive as the chain carries it: everything at the machine shaft. */
+export interface ChainDrive {
+  station: string;
+  /** The chain node the drive turns. */
+  node: number;
+  drive: Drive;
+  /** The rotor's inertia at shaft speed, kg·m² (behind the belt with one, else already in the node). */
+  rotorInertia: number;
+  /** The belt's slip torque and its capstan working; undefined without a belt. */
+  belt?: BeltSlip;
+  /** Motor torque against shaft speed, reflected through the speed ratio. */
+  line: TorqueSpeedLine;
+  /** Running torque at the shaft before the stop, N·m (0 when nothing gives it). */
+  runningTorque: number;
+  /** How the motor's torques were settled where the case leaves them open, as sentences. */
+  assumptions: string[];
+}
+
+/**
+ * Settles a station's drive for the chain. The torque while pulled down: the case's `torque` or
+ * `curve`; else the running torque held; else power ÷ motor speed held; else none (a motor that
+ * tripped). The running torque (the shaft's twist before the stop): the case's `running_torque`;
+ * else the curve at the motor's speed; else power ÷ motor speed; else none.
+ */
+export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainDrive {
+  const d = s.drive!;
+  const r = d.speedRatio;
+  const motorSpeed = shaftSpeed * r;
+  const assumptions: string[] = [];
+  const fromPower = d.power !== undefined ? d.power / motorSpeed : undefined;
+  let spec = d.torque;
+  if (!spec) {
+    if (d.runningTorque !== undefined) {
+      spec = { kind: 'constant', torque: d.runningTorque };
+      assumptions.push(`The motor at "${s.name}" is taken to hold its running torque while it is pulled down (no torque or curve given).`);
+    } else if (fromPower !== undefined) {
+      spec = { kind: 'constant', torque: fromPower };
+      assumptions.push(`The motor at "${s.name}" is taken to hold its rated torque, power ÷ speed, while it is pulled down (no torque or curve given).`);
+    } else {
+      spec = { kind: 'constant', torque: 0 };
+      assumptions.push(`The motor at "${s.name}" is taken to give no torque after the stop (no torque, curve, running torque or power given), as if it had tripped at once.`);
+    }
+  }
+  let running = d.runningTorque;
+  if (running === undefined) {
+    if (d.torque?.kind === 'curve') running = torqueAt(motorLine(d.torque), motorSpeed);
+    else if (fromPower !== undefined) {
+      running = fromPower;
+      assumptions.push(`The shaft at "${s.name}" is taken to run at the motor's rated torque, power ÷ speed, before the stop (no running torque given).`);
+    } else {
+      running = 0;
+      if (spec.kind === 'constant' && spec.torque > 0) assumptions.push(`The shaft at "${s.name}" is taken to be untwisted before the stop (no running torque given).`);
+    }
+  }
+  const rotorInertia = d.rotorParts.reduce((sum, i) => sum + reflectedInertia(s.parts[i].inertia, s.parts[i].speedRatio) * s.parts[i].count, 0);
+  return {
+    station: s.name,
+    node,
+    drive: d,
+    rotorInertia,
+    ...(d.belt ? { belt: beltSlip(d.belt) } : {}),
+    line: reflectLine(motorLine(spec), r),
+    runningTorque: running * r,
+    assumptions,
+  };
+}

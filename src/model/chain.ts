@@ -1,0 +1,165 @@
+import type { Case, Segment, Station } from '../case/case.ts';
+import { reflectedInertia } from '../physics/inertia.ts';
+import { compliance, shaftInertia } from '../physics/torsion.ts';
+import { chainDrive, type ChainDrive } from './chain-drive.ts';
+import { cutAtStations, type ShaftModel, type ShaftPiece, type SideName } from './shaft-model.ts';
+
+/** A node of the lumped torsional chain. */
+export interface ChainNode {
+  /** Position along the shaft, m. */
+  at: number;
+  /** Inertia at shaft speed, kg·m²: the parts of the stations here (not a belt drive's rotor) and the shaft's lumped share. */
+  inertia: number;
+  /** Stations standing here. */
+  stations: string[];
+  side: SideName | 'stop';
+}
+
+/** A torsional spring between neighbouring nodes: a shaft element, or with shaft inertia off a run of pieces in series. */
+export interface ChainElement {
+  /** Positions of its ends, m. */
+  start: number;
+  end: number;
+  /** N·m/rad. */
+  stiffness: number;
+  /** The element's own shaft inertia, kg·m², lumped half on each end node (0 with shaft inertia off). */
+  inertia: number;
+  /** Indices into `Chain.pieces` it lies in. */
+  pieces: number[];
+  side: SideName;
+  /** A torque limiter or shear pin in this element, from its segment. */
+  device?: { kind: 'torque limiter' | 'shear pin'; torque: number; segment: Segment };
+}
+
+/** A piece of shaft (a segment cut at stations) inside the chain, with its side. */
+export interface ChainPiece {
+  piece: ShaftPiece;
+  side: SideName;
+}
+
+/**
+ * The lumped-parameter torsional model of a case: nodes in order along the shaft at the stations
+ * and element joints, joined by elements (element e joins node e to node e + 1).
+ */
+export interface Chain {
+  nodes: ChainNode[];
+  elements: ChainElement[];
+  pieces: ChainPiece[];
+  stopNode: number;
+  drives: ChainDrive[];
+  /** Whether the shaft's own inertia is lumped onto the nodes. */
+  shaftInertia: boolean;
+}
+
+export interface ChainOptions {
+  /** Shaft elements to aim at, shared among the pieces by length (at least one each). */
+  elements: number;
+  shaftInertia: boolean;
+}
+
+const EPS = 1e-9;
+
+/**
+ * Builds the chain from the stop to the farthest loaded station on each side. Parts count at
+ * their station's node as J·ratio²·count (Den Hartog, Mechanical Vibrations, geared systems; from
+ * memory, confident), except a belt drive's rotor, which is its own node behind the belt. With
+ * shaft inertia, each piece is split into elements and each element's ρ·J_p·L (shared reference
+ * 2.4) is lumped half on each end node; shaft outside the chain is lumped onto its end nodes.
+ * Without, the nodes are the stop and the loaded stations, joined by the pieces between in series.
+ */
+export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chain {
+  const stop = model.stop;
+  const loaded = c.stations.filter((s) => s !== stop && s.parts.length > 0);
+  const lo = Math.min(stop.at, ...loaded.map((s) => s.at));
+  const hi = Math.max(stop.at, ...loaded.map((s) => s.at));
+  const sideOf = (x: number): SideName => (x < stop.at - EPS ? 'A' : 'B');
+  const pieces: ChainPiece[] = cutAtStations(c.shaft.segments, c.stations)
+    .filter((p) => p.start >= lo - EPS && p.end <= hi + EPS && p.end - p.start > EPS)
+    .map((piece) => ({ piece, side: sideOf(0.5 * (piece.start + piece.end)) }));
+  const G = (p: ShaftPiece) => c.materials[p.segment.material].shearModulus!;
+  const rho = (s: Segment) => c.materials[s.material].density ?? 0;
+
+  // Node positions and the elements between them.
+  const positions: number[] = [];
+  const elements: ChainElement[] = [];
+  if (opts.shaftInertia) {
+    const total = pieces.reduce((s, p) => s + p.piece.end - p.piece.start, 0);
+    positions.push(lo);
+    pieces.forEach((p, i) => {
+      const len = p.piece.end - p.piece.start;
+      const n = Math.max(1, Math.round((opts.elements * len) / total));
+      for (let j = 0; j < n; j++) {
+        const a = p.piece.start + (len * j) / n;
+        const b = j === n - 1 ? p.piece.end : p.piece.start + (len * (j + 1)) / n;
+        const seg = p.piece.segment;
+        elements.push({ start: a, end: b, stiffness: 1 / compliance(b - a, G(p.piece), seg.diameter, seg.bore), inertia: shaftInertia(rho(seg), b - a, seg.diameter, seg.bore), pieces: [i], side: p.side });
+        positions.push(b);
+      }
+    });
+  } else {
+    const at = [...new Set([stop.at, ...loaded.map((s) => s.at)])].sort((x, y) => x - y);
+    positions.push(...at);
+    for (let k = 0; k + 1 < at.length; k++) {
+      const inRun = pieces.flatMap((p, i) => (p.piece.start >= at[k] - EPS && p.piece.end <= at[k + 1] + EPS ? [i] : []));
+      const C = inRun.reduce((s, i) => s + compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore), 0);
+      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])) });
+    }
+  }
+  placeDevices(elements, pieces);
+
+  const nodes: ChainNode[] = positions.map((at) => ({ at, inertia: 0, stations: [], side: Math.abs(at - stop.at) <= EPS ? 'stop' : sideOf(at) }));
+  const stopNode = nodes.findIndex((n) => n.side === 'stop');
+  const nodeAt = (x: number) => nodes.reduce((best, n, i) => (Math.abs(n.at - x) < Math.abs(nodes[best].at - x) ? i : best), 0);
+  const drives: ChainDrive[] = [];
+  for (const s of c.stations) {
+    if (s.at < lo - EPS || s.at > hi + EPS) continue;
+    const i = Math.abs(s.at - stop.at) <= EPS ? stopNode : nodeAt(s.at);
+    if (!opts.shaftInertia && s.parts.length === 0 && i !== stopNode) continue;
+    nodes[i].stations.push(s.name);
+    nodes[i].inertia += stationInertia(s);
+    if (s.drive) drives.push(chainDrive(s, i, c.speed));
+  }
+  if (opts.shaftInertia) {
+    elements.forEach((el, e) => {
+      nodes[e].inertia += el.inertia / 2;
+      nodes[e + 1].inertia += el.inertia / 2;
+    });
+    for (const seg of c.shaft.segments) {
+      const left = Math.min(seg.end, lo) - seg.start;
+      const right = seg.end - Math.max(seg.start, hi);
+      if (left > EPS) nodes[0].inertia += shaftInertia(rho(seg), left, seg.diameter, seg.bore);
+      if (right > EPS) nodes[nodes.length - 1].inertia += shaftInertia(rho(seg), right, seg.diameter, seg.bore);
+    }
+  }
+  return { nodes, elements, pieces, stopNode, drives, shaftInertia: opts.shaftInertia };
+}
+
+/** Parts at a station at shaft speed, less a belt drive's rotor (which sits behind its belt). */
+export function stationInertia(s: Station): number {
+  const behindBelt = s.drive?.belt ? new Set(s.drive.rotorParts) : new Set<number>();
+  return s.parts.reduce((sum, p, i) => (behindBelt.has(i) ? sum : sum + reflectedInertia(p.inertia, p.speedRatio) * p.count), 0);
+}
+
+/**
+ * A segment's limiter or shear pin goes on one element: the middle one of the segment's elements
+ * on each side of the stop (the segment's own inertia is small, so where in it hardly matters).
+ */
+function placeDevices(elements: ChainElement[], pieces: ChainPiece[]): void {
+  const groups = new Map<string, number[]>();
+  elements.forEach((el, e) => {
+    for (const i of el.pieces) {
+      const seg = pieces[i].piece.segment;
+      if (seg.slipTorque === undefined && seg.shearTorque === undefined) continue;
+      const key = `${seg.index}:${el.side}`;
+      const list = groups.get(key) ?? [];
+      if (!list.includes(e)) list.push(e);
+      groups.set(key, list);
+    }
+  });
+  for (const list of groups.values()) {
+    const el = elements[list[Math.floor((list.length - 1) / 2)]];
+    const seg = el.pieces.map((i) => pieces[i].piece.segment).find((s) => s.slipTorque !== undefined || s.shearTorque !== undefined)!;
+    const device = seg.slipTorque !== undefined ? { kind: 'torque limiter' as const, torque: seg.slipTorque, segment: seg } : { kind: 'shear pin' as const, torque: seg.shearTorque!, segment: seg };
+    if (!el.device || device.torque < el.device.torque) el.device = device;
+  }
+}

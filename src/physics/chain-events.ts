@@ -1,0 +1,112 @@
+import type { ChainStepper, DriveState } from './chain-stepper.ts';
+
+/** Where an event comes from: an element's law, a drive's belt, the jam, or a drive's motor curve. */
+export type EventSource = { kind: 'element'; index: number } | { kind: 'belt'; index: number } | { kind: 'jam' } | { kind: 'motor'; index: number };
+
+/** An event the integrator located in time. */
+export interface ChainEvent {
+  /** s from the stop's start. */
+  time: number;
+  source: EventSource;
+  /** What happened, in words without the element's name: "starts to slip", "parts", "reaches standstill". */
+  what: string;
+}
+
+/** The event functions the integrator watches, for a system: elements with a non-elastic law, belts, a soft jam, motors. */
+export function eventSources(st: ChainStepper): EventSource[] {
+  const out: EventSource[] = [];
+  st.laws.forEach((l, e) => {
+    if (l.kind !== 'shaft') out.push({ kind: 'element', index: e });
+  });
+  st.drives.forEach((d, i) => {
+    if (d.beltSlipTorque !== undefined) out.push({ kind: 'belt', index: i });
+  });
+  if (st.sys.stop.torqueCapacity !== undefined) out.push({ kind: 'jam' });
+  st.drives.forEach((_, i) => out.push({ kind: 'motor', index: i }));
+  return out;
+}
+
+/**
+ * Event values at the stepper's trial end, into `out`: ≤ 0 while each element, belt, jam and motor
+ * stays on its branch, > 0 once it has left it.
+ */
+export function eventValues(st: ChainStepper, sources: readonly EventSource[], out: Float64Array): void {
+  for (let k = 0; k < sources.length; k++) {
+    const src = sources[k];
+    if (src.kind === 'element') {
+      out[k] = st.laws[src.index].leave(st.thetaT[src.index], st.rateT[src.index]);
+    } else if (src.kind === 'belt') {
+      const d = st.drives[src.index];
+      out[k] = d.stuck ? Math.abs(st.stuckBeltTorque(d)) - d.beltSlipTorque! : -d.sigma * (d.vRT - st.vT[d.node]);
+    } else if (src.kind === 'jam') {
+      out[k] = st.jam === 0 ? Math.abs(st.holdingJamTorque()) - st.sys.stop.torqueCapacity! : -st.jam * (st.vT[st.P] - st.motion.speedAt(st.t + st.hT));
+    } else {
+      out[k] = st.motorPieceValue(st.drives[src.index]);
+    }
+  }
+}
+
+/**
+ * Moves the source onto the branch the committed state enters, and says what happened. `direction`
+ * is the sense the motor's speed was moving in (for the motor curve's next piece).
+ */
+export function enterEvent(st: ChainStepper, src: EventSource, direction: number): string {
+  if (src.kind === 'element') {
+    const e = src.index;
+    return st.laws[e].enter(st.theta[e], st.v[e + 1] - st.v[e]);
+  }
+  if (src.kind === 'belt') return enterBelt(st, st.drives[src.index]);
+  if (src.kind === 'jam') return enterJam(st);
+  const d = st.drives[src.index];
+  const before = d.piece;
+  d.piece = Math.max(0, Math.min(d.line.speeds.length, before + (direction >= 0 ? 1 : -1)));
+  st.dirty = true;
+  const crossed = d.line.speeds[direction < 0 ? d.piece : d.piece - 1];
+  if (crossed === 0) return direction < 0 ? 'reaches standstill' : 'turns forward again';
+  return 'passes a point of its curve';
+}
+
+function enterBelt(st: ChainStepper, d: DriveState): string {
+  if (d.stuck) {
+    const Tb = st.stuckBeltTorque(d);
+    d.stuck = false;
+    d.sigma = Tb >= 0 ? 1 : -1;
+    d.vR = st.v[d.node];
+    st.updateInertia();
+    return 'starts to slip';
+  }
+  // The rotor has caught up with its pulley: try sticking, keeping the momentum of the pair.
+  const J = st.jeff[d.node];
+  const merged = (J * st.v[d.node] + d.rotorInertia * d.vR) / (J + d.rotorInertia);
+  d.slipWork += 0.5 * J * st.v[d.node] ** 2 + 0.5 * d.rotorInertia * d.vR ** 2 - 0.5 * (J + d.rotorInertia) * merged ** 2;
+  st.v[d.node] = merged;
+  d.vR = merged;
+  d.stuck = true;
+  st.updateInertia();
+  st.refreshStart();
+  const Tb = st.stuckBeltTorque(d);
+  if (Math.abs(Tb) <= d.beltSlipTorque! * (1 + 1e-9)) return 'stops slipping';
+  d.stuck = false;
+  d.sigma = Tb >= 0 ? 1 : -1;
+  st.updateInertia();
+  return 'reverses its slip';
+}
+
+function enterJam(st: ChainStepper): string {
+  const cap = st.sys.stop.torqueCapacity!;
+  if (st.jam === 0) {
+    st.jam = st.holdingJamTorque() <= 0 ? 1 : -1;
+    st.dirty = true;
+    return 'starts to slip';
+  }
+  const ground = st.motion.speedAt(st.t);
+  st.jamWork += 0.5 * st.jeff[st.P] * (st.v[st.P] ** 2 - ground ** 2);
+  st.v[st.P] = ground;
+  st.jam = 0;
+  st.dirty = true;
+  st.refreshStart();
+  const R = st.holdingJamTorque();
+  if (Math.abs(R) <= cap * (1 + 1e-9)) return 'holds again';
+  st.jam = R <= 0 ? 1 : -1;
+  return 'slips again';
+}

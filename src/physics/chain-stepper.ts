@@ -1,0 +1,453 @@
+import type { ChainSystem } from './chain-system.ts';
+import { outsidePiece, pieceOf, pieceSlope, pieceTorque, type TorqueSpeedLine } from './motor-torque.ts';
+import { StopMotion } from './stop-motion.ts';
+import { TridiagonalSolver } from './tridiagonal.ts';
+import { ElasticLaw, type TorqueLaw } from './torque-law.ts';
+
+/**
+ * One time step of the torsional chain by the trapezoidal rule (Newmark's average-acceleration
+ * method, γ = ½, β = ¼; Newmark 1959, and Hughes, The Finite Element Method, Sec. 9.1; from memory,
+ * confident):
+ *
+ *   J·(v₁ − v₀)/h = ½(F₀ + F₁),   φ₁ − φ₀ = ½h(v₀ + v₁).
+ *
+ * Why this scheme. It is unconditionally stable, so the step follows the modes that matter (the
+ * lowest few) and not the stiff short elements a finely split shaft adds; for a linear undamped
+ * chain it conserves the energy ½vᵀJv + ½θᵀKθ exactly (to rounding), which is what a sudden stop's
+ * peak torque hangs on; and its matrix (2J/h² + ½K_t + C/h) is tridiagonal, so a step costs O(n):
+ * one forward and one back substitution with a factorisation that is reused until the step size or
+ * a branch changes. Nothing dense is ever formed.
+ *
+ * Unknown per step: Δφ. With v₁ = 2Δφ/h − v₀ each node's row reads
+ *   (2J/h²)Δφᵢ + Σ wₑ(Δφᵢ − Δφⱼ) = (2J/h)v₀ + Σ ±Tₑ₀ + f̄ᵢ,   wₑ = ½kₜ + c/h,
+ * exact for laws that are affine on their branch; other laws are Newton-iterated on the same
+ * matrix form. Motor torque, piecewise linear in speed, is exact within a piece of its curve.
+ *
+ * Belts and the jam are rigid until they slip: a sticking belt adds the rotor's inertia to its
+ * pulley's node, a slipping one leaves the rotor on its own scalar equation and puts ±T_slip on the
+ * node; a holding jam prescribes the stop node's motion, a slipping one puts ∓T_cap on it.
+ *
+ * The stepper only does trial steps and commits them; `integrateChain` decides the step and
+ * locates events.
+ */
+export class ChainStepper {
+  readonly n: number;
+  readonly m: number;
+  t = 0;
+  readonly phi: Float64Array;
+  readonly v: Float64Array;
+  readonly theta: Float64Array;
+  /** Torque of each law at the committed twist, current branch. */
+  readonly tq: Float64Array;
+  // Trial end state.
+  readonly phiT: Float64Array;
+  readonly vT: Float64Array;
+  readonly thetaT: Float64Array;
+  readonly rateT: Float64Array;
+  readonly dphi: Float64Array;
+  /** Node accelerations at the committed state, rad/s² (from the torques on each node; the ramp's for a holding stop node). */
+  readonly acc: Float64Array;
+  hT = 0;
+  // Matrix and right side.
+  private readonly diag: Float64Array;
+  private readonly off: Float64Array;
+  private readonly rhs: Float64Array;
+  private readonly kt: Float64Array;
+  private readonly ofs: Float64Array;
+  private readonly w: Float64Array;
+  private readonly solver: TridiagonalSolver;
+  private hFactored = 0;
+  dirty = true;
+  readonly jeff: Float64Array;
+  readonly laws: TorqueLaw[];
+  readonly nonAffine: number[];
+  /** 1 where the element's law is plain elastic (handled inline, no call into the law). */
+  private readonly plain: Uint8Array;
+  /** The dashpot acting across each element on its current branch (0 across a slipping or parted device). */
+  readonly cEff: Float64Array;
+  readonly motion: StopMotion;
+  readonly P: number;
+  /** Jam: 0 holding (prescribed motion), ±1 slipping with the stop node ahead (+1) or behind the jam. */
+  jam: -1 | 0 | 1 = 0;
+  readonly drives: DriveState[];
+  // Energy books, J.
+  dampingWork = 0;
+  motorWork = 0;
+  boundaryWork = 0;
+  jamWork = 0;
+  jamSlipAngle = 0;
+
+  constructor(readonly sys: ChainSystem) {
+    const n = sys.inertia.length;
+    this.n = n;
+    this.m = n - 1;
+    const f = () => new Float64Array(n);
+    this.phi = f();
+    this.v = f();
+    this.phiT = f();
+    this.vT = f();
+    this.dphi = f();
+    this.acc = f();
+    this.diag = f();
+    this.rhs = f();
+    this.jeff = f();
+    const g = () => new Float64Array(Math.max(n - 1, 1));
+    this.theta = g();
+    this.tq = g();
+    this.thetaT = g();
+    this.rateT = g();
+    this.off = g();
+    this.kt = g();
+    this.ofs = g();
+    this.w = g();
+    this.solver = new TridiagonalSolver(n);
+    this.laws = sys.laws;
+    this.nonAffine = sys.laws.flatMap((l, e) => (l.affine ? [] : [e]));
+    this.plain = Uint8Array.from(sys.laws, (l) => (l instanceof ElasticLaw ? 1 : 0));
+    this.cEff = new Float64Array(Math.max(n - 1, 1));
+    this.P = sys.stop.node;
+    this.motion = new StopMotion(sys.speed, sys.stop.duration);
+    this.drives = sys.drives.map((d) => ({ ...d, stuck: true, sigma: 0, vR: 0, vRT: 0, dphiR: 0, piece: 0, slipAngle: 0, slipWork: 0 }));
+
+    // Running state: the running torque's twist, everything at ω0; then the stop's start at t = 0.
+    let angle = 0;
+    for (let i = 0; i < n; i++) {
+      if (i > 0) angle += sys.initialTwist[i - 1];
+      this.phi[i] = angle;
+      this.v[i] = sys.speed;
+    }
+    const origin = this.phi[this.P];
+    for (let i = 0; i < n; i++) this.phi[i] -= origin;
+    for (let e = 0; e < this.m; e++) {
+      this.theta[e] = this.phi[e + 1] - this.phi[e];
+      this.tq[e] = this.laws[e].torque(this.theta[e]);
+    }
+    if (sys.stop.torqueCapacity === undefined || sys.stop.duration > 0) {
+      this.jam = 0;
+      this.v[this.P] = this.motion.speedAt(0);
+    } else {
+      this.jam = 1;
+    }
+    for (const d of this.drives) {
+      d.vR = sys.speed;
+      d.piece = pieceOf(d.line, this.v[d.node]);
+    }
+    this.updateInertia();
+    this.refreshBranches();
+    this.refreshStart();
+    this.updateAccelerations(0);
+  }
+
+  /**
+   * Re-reads every law's tangent, dashpot and torque at the committed twist: after an event has
+   * moved a law to another branch. Between events the integrator uses these cached values, so a
+   * plain elastic element costs a few multiplications per step and no call.
+   */
+  refreshBranches(): void {
+    for (let e = 0; e < this.m; e++) {
+      const law = this.laws[e];
+      this.kt[e] = law.tangent(this.theta[e]);
+      this.cEff[e] = law.damped() ? this.sys.damping[e] : 0;
+      this.tq[e] = law.torque(this.theta[e]);
+    }
+    this.dirty = true;
+  }
+
+  /** Copies the committed state into the trial arrays (a zero-length trial). */
+  refreshStart(): void {
+    this.phiT.set(this.phi);
+    this.vT.set(this.v);
+    for (let e = 0; e < this.m; e++) {
+      this.thetaT[e] = this.theta[e];
+      this.rateT[e] = this.v[e + 1] - this.v[e];
+    }
+    for (const d of this.drives) d.vRT = d.vR;
+    this.hT = 0;
+  }
+
+  /** Speed of drive d's motor side (rotor when the belt slips, else its node), shaft units. */
+  motorSpeed(d: DriveState, trial: boolean): number {
+    if (!d.stuck) return trial ? d.vRT : d.vR;
+    return trial ? this.vT[d.node] : this.v[d.node];
+  }
+
+  updateInertia(): void {
+    this.jeff.set(this.sys.inertia);
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      if (d.beltSlipTorque !== undefined && d.stuck) this.jeff[d.node] += d.rotorInertia;
+    }
+    this.dirty = true;
+  }
+
+  private assemble(h: number): void {
+    const { n, m, diag, off, w, kt, jeff, cEff } = this;
+    for (let e = 0; e < m; e++) w[e] = 0.5 * kt[e] + cEff[e] / h;
+    for (let i = 0; i < n; i++) diag[i] = (2 * jeff[i]) / (h * h) + (i > 0 ? w[i - 1] : 0) + (i < m ? w[i] : 0);
+    for (let e = 0; e < m; e++) off[e] = -w[e];
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      if (d.stuck) diag[d.node] -= pieceSlope(d.line, d.piece) / h;
+    }
+    if (this.jam === 0) {
+      const P = this.P;
+      diag[P] = 1;
+      if (P > 0) off[P - 1] = 0;
+      if (P < m) off[P] = 0;
+    }
+    this.solver.factor(diag, off);
+    this.hFactored = h;
+    this.dirty = false;
+  }
+
+  /** A trial step of length h from the committed state; fills the trial arrays. */
+  trial(h: number): void {
+    const { n, m, laws, kt, ofs, tq, theta } = this;
+    for (let q = 0; q < this.nonAffine.length; q++) {
+      const e = this.nonAffine[q];
+      const k = laws[e].tangent(theta[e]);
+      if (k !== kt[e]) {
+        kt[e] = k;
+        this.dirty = true;
+      }
+      ofs[e] = tq[e];
+    }
+    if (this.dirty || h !== this.hFactored) this.assemble(h);
+    this.solveWith(h);
+    for (let it = 0; it < 30 && this.nonAffine.length > 0; it++) {
+      let worst = 0;
+      for (let q = 0; q < this.nonAffine.length; q++) {
+        const e = this.nonAffine[q];
+        const dth = this.dphi[e + 1] - this.dphi[e];
+        const th = theta[e] + dth;
+        const k = laws[e].tangent(th);
+        const model = ofs[e] + kt[e] * dth;
+        const real = laws[e].torque(th);
+        worst = Math.max(worst, Math.abs(real - model) / (Math.abs(real) + laws[e].stiffness * 1e-9 + 1e-12));
+        ofs[e] = real - k * dth;
+        kt[e] = k;
+      }
+      if (worst < 1e-12) break;
+      this.assemble(h);
+      this.solveWith(h);
+    }
+    this.hT = h;
+    const { dphi, phi, v, phiT, vT, thetaT, rateT } = this;
+    for (let i = 0; i < n; i++) {
+      phiT[i] = phi[i] + dphi[i];
+      vT[i] = (2 * dphi[i]) / h - v[i];
+    }
+    for (let e = 0; e < m; e++) {
+      thetaT[e] = phiT[e + 1] - phiT[e];
+      rateT[e] = vT[e + 1] - vT[e];
+    }
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      if (d.stuck) continue;
+      const s = pieceSlope(d.line, d.piece);
+      const f0 = pieceTorque(d.line, d.piece, d.vR);
+      d.vRT = d.vR + (f0 - d.sigma * d.beltSlipTorque!) / (d.rotorInertia / h - 0.5 * s);
+      d.dphiR = 0.5 * h * (d.vR + d.vRT);
+    }
+  }
+
+  private solveWith(h: number): void {
+    const { n, m, rhs, jeff, v, tq, ofs, w, P } = this;
+    for (let i = 0; i < n; i++) rhs[i] = ((2 * jeff[i]) / h) * v[i];
+    for (let e = 0; e < m; e++) {
+      rhs[e] += tq[e];
+      rhs[e + 1] -= tq[e];
+    }
+    for (let q = 0; q < this.nonAffine.length; q++) {
+      // A law that is not affine: ½(T₀ + T₁) with T₁ from its linearisation about the last iterate.
+      const e = this.nonAffine[q];
+      const d = 0.5 * (ofs[e] - tq[e]);
+      rhs[e] += d;
+      rhs[e + 1] -= d;
+    }
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      if (d.stuck) {
+        const s = pieceSlope(d.line, d.piece);
+        rhs[d.node] += pieceTorque(d.line, d.piece, v[d.node]) - s * v[d.node];
+      } else {
+        rhs[d.node] += d.sigma * d.beltSlipTorque!;
+      }
+    }
+    if (this.jam !== 0) {
+      rhs[P] -= this.jam * this.sys.stop.torqueCapacity!;
+    } else {
+      const dG = this.motion.angleAt(this.t + h) - this.motion.angleAt(this.t);
+      rhs[P] = dG;
+      if (P > 0) rhs[P - 1] += w[P - 1] * dG;
+      if (P < m) rhs[P + 1] += w[P] * dG;
+    }
+    this.solver.solve(rhs, this.dphi);
+  }
+
+  /**
+   * Net torque on node i at the trial step's end, from the elements, motors, belts and a slipping
+   * jam (not a holding jam). The dashpots enter with the step's mean twist rate Δθ/h, the rate the
+   * trapezoidal rule itself uses: the end-point rate of an element much stiffer than the step
+   * resolves swings from step to step and would make the belt and jam checks chatter.
+   */
+  trialForce(i: number): number {
+    const { m, laws, thetaT, cEff, sys } = this;
+    let F = 0;
+    if (i > 0) F -= laws[i - 1].torque(thetaT[i - 1]) + cEff[i - 1] * this.meanRate(i - 1);
+    if (i < m) F += laws[i].torque(thetaT[i]) + cEff[i] * this.meanRate(i);
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      if (d.node !== i) continue;
+      F += d.stuck ? pieceTorque(d.line, d.piece, this.vT[i]) : d.sigma * d.beltSlipTorque!;
+    }
+    if (this.jam !== 0 && i === this.P) F -= this.jam * sys.stop.torqueCapacity!;
+    return F;
+  }
+
+  /** Element e's mean twist rate over the trial step, rad/s (its end-point rate for a zero-length trial). */
+  private meanRate(e: number): number {
+    return this.hT > 0 ? (this.thetaT[e] - this.theta[e]) / this.hT : this.rateT[e];
+  }
+
+  /** Acceleration of node i at the trial step's end, rad/s² (the ramp's for a holding stop node). */
+  trialAcceleration(i: number): number {
+    if (i === this.P && this.jam === 0) return this.motion.accelerationAt(this.t + 0.5 * this.hT);
+    return this.trialForce(i) / this.jeff[i];
+  }
+
+  /** Torque a sticking belt must carry at the trial end: motor torque less what accelerates the rotor. */
+  stuckBeltTorque(d: DriveState): number {
+    return pieceTorque(d.line, d.piece, this.vT[d.node]) - d.rotorInertia * this.trialAcceleration(d.node);
+  }
+
+  /** Torque the holding jam puts on the stop node at the trial end, N·m. */
+  holdingJamTorque(): number {
+    return this.jeff[this.P] * this.motion.accelerationAt(this.t + 0.5 * this.hT) - this.trialForce(this.P);
+  }
+
+  /** Motor-curve event value for drive d at the trial end (> 0: its speed left the curve's piece). */
+  motorPieceValue(d: DriveState): number {
+    return outsidePiece(d.line, d.piece, this.motorSpeed(d, true));
+  }
+
+  /** Makes the trial step the committed state, with its energy books. */
+  commit(): void {
+    const { m, laws, sys, dphi, hT: h, P, cEff, plain, theta, thetaT, tq, kt } = this;
+    let damp = 0;
+    for (let e = 0; e < m; e++) {
+      const d = thetaT[e] - theta[e];
+      damp += cEff[e] * d * d;
+    }
+    this.dampingWork += damp / h;
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      const s = pieceSlope(d.line, d.piece);
+      if (d.stuck) {
+        const f = pieceTorque(d.line, d.piece, this.v[d.node]) + 0.5 * s * (this.vT[d.node] - this.v[d.node]);
+        this.motorWork += f * dphi[d.node];
+      } else {
+        const f = pieceTorque(d.line, d.piece, d.vR) + 0.5 * s * (d.vRT - d.vR);
+        this.motorWork += f * d.dphiR;
+        const rel = d.dphiR - dphi[d.node];
+        d.slipWork += d.sigma * d.beltSlipTorque! * rel;
+        d.slipAngle += Math.abs(rel);
+        d.vR = d.vRT;
+      }
+    }
+    for (let j = 0; j < this.drives.length; j++) if (this.drives[j].stuck) this.drives[j].vR = this.vT[this.drives[j].node];
+    const dG = this.motion.angleAt(this.t + h) - this.motion.angleAt(this.t);
+    if (this.jam !== 0) {
+      const cap = sys.stop.torqueCapacity!;
+      this.jamWork += this.jam * cap * (dphi[P] - dG);
+      this.jamSlipAngle += Math.abs(dphi[P] - dG);
+      this.boundaryWork -= this.jam * cap * dG;
+    } else if (dG !== 0) {
+      // Work of the holding jam: its torque over the step, from the stop node's trapezoidal
+      // equation J·(v₁ − v₀)/h = F̄ + R̄, through the stop node's turn.
+      this.boundaryWork += ((this.jeff[P] * (this.vT[P] - this.v[P])) / h - this.meanForce(P)) * dG;
+    }
+    this.phi.set(this.phiT);
+    this.v.set(this.vT);
+    for (let e = 0; e < m; e++) {
+      const th = thetaT[e];
+      if (plain[e] === 1) {
+        tq[e] = kt[e] * th;
+      } else {
+        laws[e].commit(th);
+        tq[e] = laws[e].torque(th);
+      }
+      theta[e] = th;
+    }
+    this.t += h;
+    this.updateAccelerations(h);
+  }
+
+  /**
+   * Node accelerations from the forces at the committed state: elastic torques, dashpots at the
+   * last step's mean rate, motors, slipping belts and a slipping jam, over the node's inertia.
+   */
+  private updateAccelerations(h: number): void {
+    const { n, m, tq, cEff, acc, jeff, dphi, P } = this;
+    acc.fill(0);
+    for (let e = 0; e < m; e++) {
+      const T = tq[e] + (h > 0 ? (cEff[e] * (dphi[e + 1] - dphi[e])) / h : 0);
+      acc[e] += T;
+      acc[e + 1] -= T;
+    }
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      acc[d.node] += d.stuck ? pieceTorque(d.line, d.piece, this.v[d.node]) : d.sigma * d.beltSlipTorque!;
+    }
+    if (this.jam !== 0) acc[P] -= this.jam * this.sys.stop.torqueCapacity!;
+    for (let i = 0; i < n; i++) acc[i] = jeff[i] > 0 ? acc[i] / jeff[i] : 0;
+    if (this.jam === 0) acc[P] = this.motion.accelerationAt(this.t - 0.5 * h);
+  }
+
+  /** Node i's torque averaged over the trial step as the trapezoidal rule takes it (elements, dashpots, motors), N·m. */
+  private meanForce(i: number): number {
+    const { m, laws, cEff, hT: h } = this;
+    let F = 0;
+    const el = (e: number) => 0.5 * (this.tq[e] + laws[e].torque(this.thetaT[e])) + (cEff[e] * (this.thetaT[e] - this.theta[e])) / h;
+    if (i > 0) F -= el(i - 1);
+    if (i < m) F += el(i);
+    for (let j = 0; j < this.drives.length; j++) {
+      const d = this.drives[j];
+      if (d.node !== i) continue;
+      F += d.stuck ? pieceTorque(d.line, d.piece, this.v[i]) + 0.5 * pieceSlope(d.line, d.piece) * (this.vT[i] - this.v[i]) : d.sigma * d.beltSlipTorque!;
+    }
+    return F;
+  }
+
+
+  /** Total mechanical energy at the committed state: kinetic + strain, J. */
+  energy(): number {
+    let E = 0;
+    for (let i = 0; i < this.n; i++) E += 0.5 * this.jeff[i] * this.v[i] * this.v[i];
+    for (const d of this.drives) if (!d.stuck) E += 0.5 * d.rotorInertia * d.vR * d.vR;
+    for (let e = 0; e < this.m; e++) E += this.laws[e].energy(this.theta[e]);
+    return E;
+  }
+}
+
+/** A drive's state during the integration. */
+export interface DriveState {
+  node: number;
+  line: TorqueSpeedLine;
+  rotorInertia: number;
+  beltSlipTorque?: number;
+  /** Belt sticking (or no belt). */
+  stuck: boolean;
+  /** Slip sense while slipping: +1 rotor ahead of the pulley. */
+  sigma: number;
+  /** Rotor speed while the belt slips, committed and trial, rad/s at shaft. */
+  vR: number;
+  vRT: number;
+  dphiR: number;
+  /** Piece of the motor's curve the motor's speed is on. */
+  piece: number;
+  /** Total slip angle so far, rad at the shaft. */
+  slipAngle: number;
+  /** Friction work in the belt so far, J. */
+  slipWork: number;
+}

@@ -1,0 +1,169 @@
+import { DEFAULT_DAMPING_RATIO, type Case } from '../case/case.ts';
+import type { ShaftModel, ShaftPiece, SideName } from '../model/shaft-model.ts';
+import type { SideResult } from '../physics/energy-method.ts';
+import { shearYield } from '../physics/shear-strength.ts';
+import type { BeltSlip } from '../physics/slip.ts';
+import { shearStress } from '../physics/torsion.ts';
+import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
+import { runningChecks } from './running-checks.ts';
+import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
+import { solveDynamics } from './dynamic-solve.ts';
+
+/** The dynamic model's result for one piece of shaft (a segment cut at stations). */
+export interface DynamicPiece {
+  piece: ShaftPiece;
+  side: SideName;
+  /** Largest |torque| over the window and along the piece, N·m, and when, s. */
+  peakTorque: number;
+  peakTime: number;
+  /** kt times the outer-fibre stress at the peak torque, Pa. */
+  shearStress: number;
+  shearYield: number;
+  yieldRatio: number;
+}
+
+/** Energy method against dynamic model for one side. */
+export interface SideComparison {
+  side: SideName;
+  energyPeakTorque: number;
+  dynamicPeakTorque: number;
+  energyYieldRatio: number;
+  dynamicYieldRatio: number;
+}
+
+export interface DynamicMode {
+  side: SideName;
+  /** Hz. */
+  frequency: number;
+  /** Share of its side's running energy it rings with after an instantaneous stop. */
+  participation: number;
+  /** The shape along the shaft: node positions, m, and amplitudes (largest +1), the stop at 0. */
+  at: number[];
+  amplitude: number[];
+}
+
+/** The lumped torsional chain solved in time: the refined result beside the energy method. */
+export interface DynamicResult {
+  /** Shaft elements in the chain (springs between nodes). */
+  elements: number;
+  shaftInertia: boolean;
+  dampingRatio: number;
+  /** Simulated window from the stop's start, s, and the regular time step, s. */
+  duration: number;
+  timeStep: number;
+  steps: number;
+  /** Peak torque at each element count tried (automatic refinement), and whether it settled. */
+  refinement: { elements: number; peakTorque: number }[];
+  converged: boolean;
+  /** Natural frequencies with the stop held, Hz, ascending (the lowest ten at most). */
+  naturalFrequencies: number[];
+  /** The same modes with their side and their share of the side's energy after an instantaneous stop. */
+  frequencies: { side: SideName; frequency: number; participation: number }[];
+  /** The lowest three modes with their shapes. */
+  modes: DynamicMode[];
+  pieces: DynamicPiece[];
+  sides: SideComparison[];
+  /** Maxima over all pieces and the whole window. */
+  peakTorque: number;
+  maxShearStress: number;
+  yieldRatio: number;
+  /** Index into `pieces` of the highest yield ratio. */
+  governing: number;
+  slips: SlipOutcome[];
+  pins: PinOutcome[];
+  /** Belts and their slip torque, with the capstan working where it came from belt data. */
+  belts: { station: string; slip: BeltSlip }[];
+  /** Located events in time order, as sentences. */
+  events: { time: number; text: string }[];
+  /** Energy books, J: final − initial = motor + boundary − damping − slip − released. */
+  energy: { initial: number; final: number; motorWork: number; boundaryWork: number; dampingWork: number; slipWork: number; released: number };
+  histories: DynamicHistories;
+  /** The model's assumptions, as sentences for the report. */
+  assumptions: string[];
+  /** Remarks on this case's solution (refinement, window), as sentences. */
+  notes: string[];
+}
+
+/** Runs the dynamic model on a case and gathers what the views show. Pure: no I/O, no clock. */
+export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
+  const solve = solveDynamics(c, model);
+  const { chain, modes, run, piecePeak, pieceTime } = solve.final;
+  const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {
+    const seg = p.piece.segment;
+    const tauY = shearYield(c.materials[seg.material].yieldStrength!, c.analysis.criterion);
+    const tau = seg.kt * shearStress(piecePeak[i], seg.diameter, seg.bore);
+    return { piece: p.piece, side: p.side, peakTorque: piecePeak[i], peakTime: pieceTime[i], shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY };
+  });
+  const governing = pieces.reduce((best, p, i) => (p.yieldRatio > pieces[best].yieldRatio ? i : best), 0);
+  const sides = energy.map((s): SideComparison => {
+    const mine = pieces.filter((p) => p.side === s.side);
+    return {
+      side: s.side,
+      energyPeakTorque: s.peakTorque,
+      dynamicPeakTorque: Math.max(0, ...mine.map((p) => p.peakTorque)),
+      energyYieldRatio: Math.max(...s.pieces.map((p) => p.yieldRatio)),
+      dynamicYieldRatio: Math.max(0, ...mine.map((p) => p.yieldRatio)),
+    };
+  });
+  const { slips, pins } = slipOutcomes(c, chain, run);
+  const P = chain.stopNode;
+  const stopName = c.stop.at;
+  const nameOf = (src: (typeof run.events)[number]['source']): string => {
+    if (src.kind === 'element') return slips.find((s) => s.elementIndex === src.index)?.element ?? pins.find((p) => p.elementIndex === src.index)?.element ?? `element ${src.index + 1}`;
+    if (src.kind === 'belt') return `The belt at "${chain.drives[src.index].station}"`;
+    if (src.kind === 'motor') return `The motor at "${chain.drives[src.index].station}"`;
+    return `The jam at "${stopName}"`;
+  };
+  const events = run.events
+    .filter((e) => e.what !== 'passes a point of its curve')
+    .map((e) => ({ time: e.time, text: `${capitalise(nameOf(e.source))} ${e.what}.` }));
+  return {
+    elements: chain.elements.length,
+    shaftInertia: chain.shaftInertia,
+    dampingRatio: c.analysis.dampingRatio,
+    duration: run.duration,
+    timeStep: run.timeStep,
+    steps: run.steps,
+    refinement: solve.refinement,
+    converged: solve.converged,
+    naturalFrequencies: modes.slice(0, 10).map((m) => m.frequency),
+    frequencies: modes.slice(0, 10).map((m) => ({ side: m.side, frequency: m.frequency, participation: m.participation })),
+    modes: modes.slice(0, 3).map((m) => {
+      const idx = chain.nodes.flatMap((n, i) => (n.side === m.side || i === P ? [i] : []));
+      return { side: m.side, frequency: m.frequency, participation: m.participation, at: idx.map((i) => chain.nodes[i].at), amplitude: idx.map((i) => m.shape[i]) };
+    }),
+    pieces,
+    sides,
+    peakTorque: Math.max(...pieces.map((p) => p.peakTorque)),
+    maxShearStress: Math.max(...pieces.map((p) => p.shearStress)),
+    yieldRatio: pieces[governing].yieldRatio,
+    governing,
+    slips,
+    pins,
+    belts: chain.drives.flatMap((d) => (d.belt ? [{ station: d.station, slip: d.belt }] : [])),
+    events,
+    energy: run.energy,
+    histories: dynamicHistories(chain, solve.final, slips),
+    assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),
+    notes: [...runningChecks(chain, c.speed), ...solve.notes],
+  };
+}
+
+function capitalise(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
+}
+
+function assumptionsOf(c: Case, shaftInertia: boolean, drives: string[]): string[] {
+  return [
+    'The shaft is a chain of lumped inertias joined by elastic torsional springs (k = G·J_p/L per element); parts count at their station as J·ratio², and gears and couplings are rigid.',
+    shaftInertia ? 'The shaft\'s own inertia is lumped half onto each end of every element.' : 'The shaft\'s own inertia is left out (analysis.shaft_inertia: false).',
+    `Damping is stiffness-proportional, ${(100 * c.analysis.dampingRatio).toPrecision(2)} % of critical in each side's lowest mode${c.analysis.dampingRatio === DEFAULT_DAMPING_RATIO ? ' (the default, a small value typical of steel shafting: material damping of steel is a fraction of a percent, and it is taken low so that the peak and the ringing are not understated)' : ''}; the dashpots take energy but the torques reported are the elastic ones.`,
+    c.stop.duration > 0 ? `The stop station's speed falls linearly to zero over ${(c.stop.duration * 1000).toPrecision(3)} ms, then stays at zero.` : 'The stop station\'s speed drops to zero at once and stays there.',
+    ...(c.stop.torqueCapacity !== undefined ? [`The jam holds up to ${c.stop.torqueCapacity.toPrecision(4)} N·m and slips with that torque above it (Coulomb).`] : []),
+    'Belts, torque limiters and a soft jam stick rigidly until their slip torque is reached, then slip with that torque (Coulomb friction, no difference between static and sliding friction).',
+    ...(c.stations.some((s) => s.drive)
+      ? ['A drive\'s motor gives the torque of its speed–torque curve (or its constant torque) at its momentary speed, held at the curve\'s end values beyond it; the motor\'s electrical transients and its protection trip are not modelled.']
+      : []),
+    ...drives,
+  ];
+}

@@ -1,0 +1,44 @@
+import type { Chain } from '../model/chain.ts';
+import type { SideName } from '../model/shaft-model.ts';
+import type { ChainSystem } from '../physics/chain-system.ts';
+import { ShearPinLaw } from '../physics/shear-pin-law.ts';
+import { SlipLaw } from '../physics/slip-law.ts';
+import { ElasticLaw, type TorqueLaw } from '../physics/torque-law.ts';
+
+/**
+ * The numeric system the integrator takes, from a chain: one law per element (elastic shaft, a
+ * limiter's slip, a pin's parting), stiffness-proportional damping c = β·k with β = 2ζ/ω₁ per side
+ * so that each side's lowest mode has the damping ratio ζ (Rayleigh damping with the mass term
+ * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident), and the twist
+ * of the running torque, which flows from each drive to the stop.
+ */
+export function systemOf(chain: Chain, speed: number, stop: { duration: number; torqueCapacity?: number }, dampingRatio: number, lowest: Partial<Record<SideName, number>>): ChainSystem {
+  const P = chain.stopNode;
+  const m = chain.elements.length;
+  const torque = new Float64Array(m);
+  for (const d of chain.drives) {
+    if (d.runningTorque === 0 || d.node === P) continue;
+    if (d.node < P) for (let e = d.node; e < P; e++) torque[e] -= d.runningTorque;
+    else for (let e = P; e < d.node; e++) torque[e] += d.runningTorque;
+  }
+  const initialTwist = Float64Array.from(chain.elements, (el, e) => torque[e] / el.stiffness);
+  const laws: TorqueLaw[] = chain.elements.map((el, e) => {
+    if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e]);
+    if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
+    return new ElasticLaw(el.stiffness);
+  });
+  const damping = Float64Array.from(chain.elements, (el) => {
+    const w = lowest[el.side];
+    return w ? ((2 * dampingRatio) / w) * el.stiffness : 0;
+  });
+  return {
+    inertia: Float64Array.from(chain.nodes, (n) => n.inertia),
+    laws,
+    damping,
+    elementInertia: Float64Array.from(chain.elements, (el) => el.inertia),
+    initialTwist,
+    speed,
+    stop: { node: P, duration: stop.duration, ...(stop.torqueCapacity !== undefined ? { torqueCapacity: stop.torqueCapacity } : {}) },
+    drives: chain.drives.map((d) => ({ node: d.node, line: d.line, rotorInertia: d.rotorInertia, ...(d.belt ? { beltSlipTorque: d.belt.slipTorque } : {}) })),
+  };
+}

@@ -1,0 +1,40 @@
+import { describe, expect, it } from 'vitest';
+import type { Station } from '../../src/case/case.ts';
+import { chainDrive } from '../../src/model/chain-drive.ts';
+import { torqueAt } from '../../src/physics/motor-torque.ts';
+
+const station = (drive: Station['drive']): Station => ({
+  name: 'pulley',
+  at: 0,
+  parts: [
+    { name: 'sheave', shape: 'inertia', inertia: 1, count: 1, speedRatio: 1, dimensions: {} },
+    { name: 'rotor', shape: 'inertia', inertia: 0.2, count: 1, speedRatio: 4, dimensions: {} },
+  ],
+  drive,
+});
+const w = 30; // shaft speed, rad/s; motor at 120 rad/s
+
+describe('chainDrive: a drive as the chain sees it', () => {
+  it('reflects the motor through its ratio and takes the running torque from the curve at the motor\'s speed', () => {
+    const d = chainDrive(station({ speedRatio: 4, rotorParts: [1], torque: { kind: 'curve', points: [{ speed: 0, torque: 100 }, { speed: 150, torque: 0 }] } }), 0, w);
+    expect(d.rotorInertia).toBeCloseTo(0.2 * 16, 12);
+    expect(d.runningTorque).toBeCloseTo(4 * (100 * (1 - 120 / 150)), 12);
+    expect(torqueAt(d.line, 10)).toBeCloseTo(4 * (100 * (1 - 40 / 150)), 12);
+    expect(d.assumptions).toEqual([]);
+  });
+
+  it('without a torque, holds the running torque, or power ÷ speed, or nothing, and says so', () => {
+    const held = chainDrive(station({ speedRatio: 4, rotorParts: [1], runningTorque: 50 }), 0, w);
+    expect(torqueAt(held.line, 0)).toBeCloseTo(200, 12);
+    expect(held.runningTorque).toBeCloseTo(200, 12);
+    expect(held.assumptions.join(' ')).toMatch(/hold its running torque/);
+    const rated = chainDrive(station({ speedRatio: 4, rotorParts: [1], power: 6000 }), 0, w);
+    // T = P/ω at the motor (shared REFERENCE.md 1.1.9, H = T·ω): 6000/120 = 50 N·m, ×4 at the shaft.
+    expect(torqueAt(rated.line, 0)).toBeCloseTo(200, 12);
+    expect(rated.assumptions.join(' ')).toMatch(/power ÷ speed/);
+    const tripped = chainDrive(station({ speedRatio: 4, rotorParts: [1] }), 0, w);
+    expect(torqueAt(tripped.line, 0)).toBe(0);
+    expect(tripped.runningTorque).toBe(0);
+    expect(tripped.assumptions.join(' ')).toMatch(/no torque after the stop/);
+  });
+});

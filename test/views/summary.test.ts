@@ -1,0 +1,31 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { parseCase } from '../../src/case/parse-case.ts';
+import { analyseCase } from '../../src/results/analyse-case.ts';
+import { show, sig } from '../../src/views/display-units.ts';
+import { dynamicLines, renderSummary } from '../../src/views/summary.ts';
+
+const sample = (f: string) => analyseCase(parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8')));
+
+describe('the summary with the dynamic model', () => {
+  it('shows each side\'s dynamic peak beside the energy method\'s, the lowest frequencies, and what slipped', () => {
+    const r = sample('granulator-tramp-metal.yaml');
+    const lines = dynamicLines(r).join('\n');
+    const s = r.dynamic.sides[0];
+    expect(lines).toContain(`peak torque ${show(s.dynamicPeakTorque, 'torque', 'metric')} (energy method ${show(s.energyPeakTorque, 'torque', 'metric')})`);
+    expect(lines).toContain(`${sig(r.dynamic.naturalFrequencies[0])}`);
+    expect(lines).toMatch(/the belt at "drive sheave" \(slip torque 1870 N·m\) slipped .* still slipping at the end/);
+  });
+
+  it('names the verdict\'s basis and gives the reason under it', () => {
+    const r = sample('granulator-tramp-metal.yaml');
+    const text = renderSummary(r);
+    expect(text).toMatch(/Verdict \(dynamic model\): YIELDED/);
+    expect(text).toContain(`  ${r.verdictReason}`);
+    expect(renderSummary(sample('edger-arbor-two-sides.yaml'))).toMatch(/Verdict \(elastic energy method\): .*\n {2}The verdict uses the energy method/);
+  });
+
+  it('shows US units in a US case', () => {
+    expect(dynamicLines(sample('screw-conveyor-jam-us.yaml')).join('\n')).toMatch(/peak torque [\d.]+ lbf·ft \(energy method [\d.]+ lbf·ft\)/);
+  });
+});
