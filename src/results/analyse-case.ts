@@ -57,6 +57,12 @@ export function analyseCase(c: Case): Results {
     maxShearStress = dynamic.maxShearStress;
   }
 
+  let reason = basis.reason;
+  if (basis.basis === 'energy method') {
+    const worst = Math.max(...dynamic.sides.map((s) => Math.abs(s.dynamicPeakTorque / s.energyPeakTorque - 1)));
+    reason += ` The dynamic model's peak torques are within ${(100 * worst).toPrecision(2)} % of it${dynamic.shaftInertia ? ' (it adds the shaft\'s own inertia and damping)' : ''}.`;
+  }
+
   return {
     case: c,
     speed: c.speed,
@@ -67,7 +73,7 @@ export function analyseCase(c: Case): Results {
     yieldRatio: governing.piece.yieldRatio,
     verdict: governing.piece.yieldRatio < 1 ? 'elastic' : 'yielded',
     verdictBasis: basis.basis,
-    verdictReason: basis.reason,
+    verdictReason: reason,
     dynamic,
     warnings,
     cautions: CAUTIONS,
