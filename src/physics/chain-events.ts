@@ -1,6 +1,6 @@
 import { holdingJamTorque, motorPieceValue, stuckBeltTorque } from './chain-forces.ts';
 import type { ChainStepper } from './chain-stepper.ts';
-import type { DriveState } from './drive-state.ts';
+import { setPiece, type DriveState } from './drive-state.ts';
 
 /** Where an event comes from: an element's law, a drive's belt, the jam, or a drive's motor curve. */
 export type EventSource = { kind: 'element'; index: number } | { kind: 'belt'; index: number } | { kind: 'jam' } | { kind: 'motor'; index: number };
@@ -39,7 +39,8 @@ export function eventValues(st: ChainStepper, sources: readonly EventSource[], o
       out[k] = st.laws[src.index].leave(st.thetaT[src.index], st.rateT[src.index]);
     } else if (src.kind === 'belt') {
       const d = st.drives[src.index];
-      out[k] = d.stuck ? Math.abs(stuckBeltTorque(st, d)) - d.beltSlipTorque! : -d.sigma * (d.vRT - st.vT[d.node]);
+      d.beltTorque = d.stuck ? stuckBeltTorque(st, d) : d.sigma * d.beltSlipTorque!;
+      out[k] = d.stuck ? Math.abs(d.beltTorque) - d.beltSlipTorque! : -d.sigma * (d.vRT - st.vT[d.node]);
     } else if (src.kind === 'jam') {
       out[k] = st.jam === 0 ? Math.abs(holdingJamTorque(st)) - st.sys.stop.torqueCapacity! : -st.jam * (st.vT[st.P] - st.motion.speedAt(st.t + st.hT));
     } else {
@@ -60,8 +61,7 @@ export function enterEvent(st: ChainStepper, src: EventSource, direction: number
   if (src.kind === 'belt') return enterBelt(st, st.drives[src.index]);
   if (src.kind === 'jam') return enterJam(st);
   const d = st.drives[src.index];
-  const before = d.piece;
-  d.piece = Math.max(0, Math.min(d.line.speeds.length, before + (direction >= 0 ? 1 : -1)));
+  setPiece(d, Math.max(0, Math.min(d.line.speeds.length, d.piece + (direction >= 0 ? 1 : -1))));
   st.dirty = true;
   const crossed = d.line.speeds[direction < 0 ? d.piece : d.piece - 1];
   if (crossed === 0) return direction < 0 ? 'reaches standstill' : 'turns forward again';

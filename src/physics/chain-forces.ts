@@ -1,6 +1,6 @@
 import type { ChainStepper } from './chain-stepper.ts';
 import type { DriveState } from './drive-state.ts';
-import { outsidePiece, pieceSlope, pieceTorque } from './motor-torque.ts';
+import { motorTorque } from './drive-state.ts';
 
 // Torques, accelerations and energy of the chain at the stepper's trial end or committed state:
 // what the event functions, the jam's work and the recorder read. Not on the hot path of a plain
@@ -20,7 +20,7 @@ export function trialForce(st: ChainStepper, i: number): number {
   for (let j = 0; j < st.drives.length; j++) {
     const d = st.drives[j];
     if (d.node !== i) continue;
-    F += d.stuck ? pieceTorque(d.line, d.piece, st.vT[i]) : d.sigma * d.beltSlipTorque!;
+    F += d.stuck ? motorTorque(d, st.vT[i]) : d.sigma * d.beltSlipTorque!;
   }
   if (st.jam !== 0 && i === st.P) F -= st.jam * sys.stop.torqueCapacity!;
   return F;
@@ -39,7 +39,7 @@ export function trialAcceleration(st: ChainStepper, i: number): number {
 
 /** Torque a sticking belt must carry at the trial end: motor torque less what accelerates the rotor. */
 export function stuckBeltTorque(st: ChainStepper, d: DriveState): number {
-  return pieceTorque(d.line, d.piece, st.vT[d.node]) - d.rotorInertia * trialAcceleration(st, d.node);
+  return motorTorque(d, st.vT[d.node]) - d.rotorInertia * trialAcceleration(st, d.node);
 }
 
 /** Torque the holding jam puts on the stop node at the trial end, N·m. */
@@ -49,7 +49,8 @@ export function holdingJamTorque(st: ChainStepper): number {
 
 /** Motor-curve event value for drive d at the trial end (> 0: its speed left the curve's piece). */
 export function motorPieceValue(st: ChainStepper, d: DriveState): number {
-  return outsidePiece(d.line, d.piece, st.motorSpeed(d, true));
+  const w = st.motorSpeed(d, true);
+  return Math.max(d.lo - w, w - d.hi);
 }
 
 /**
@@ -66,7 +67,7 @@ export function updateAccelerations(st: ChainStepper, h: number): void {
   }
   for (let j = 0; j < st.drives.length; j++) {
     const d = st.drives[j];
-    acc[d.node] += d.stuck ? pieceTorque(d.line, d.piece, st.v[d.node]) : d.sigma * d.beltSlipTorque!;
+    acc[d.node] += d.stuck ? motorTorque(d, st.v[d.node]) : d.sigma * d.beltSlipTorque!;
   }
   if (st.jam !== 0) acc[P] -= st.jam * st.sys.stop.torqueCapacity!;
   for (let i = 0; i < n; i++) acc[i] = jeff[i] > 0 ? acc[i] / jeff[i] : 0;
@@ -83,7 +84,7 @@ export function meanForce(st: ChainStepper, i: number): number {
   for (let j = 0; j < st.drives.length; j++) {
     const d = st.drives[j];
     if (d.node !== i) continue;
-    F += d.stuck ? pieceTorque(d.line, d.piece, st.v[i]) + 0.5 * pieceSlope(d.line, d.piece) * (st.vT[i] - st.v[i]) : d.sigma * d.beltSlipTorque!;
+    F += d.stuck ? d.base + 0.5 * d.slope * (st.vT[i] + st.v[i]) : d.sigma * d.beltSlipTorque!;
   }
   return F;
 }

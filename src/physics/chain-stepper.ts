@@ -1,7 +1,7 @@
 import type { ChainSystem } from './chain-system.ts';
 import { meanForce, updateAccelerations } from './chain-forces.ts';
-import type { DriveState } from './drive-state.ts';
-import { pieceOf, pieceSlope, pieceTorque } from './motor-torque.ts';
+import { setPiece, type DriveState } from './drive-state.ts';
+import { pieceOf } from './motor-torque.ts';
 import { StopMotion } from './stop-motion.ts';
 import { TridiagonalSolver } from './tridiagonal.ts';
 import { ElasticLaw, type TorqueLaw } from './torque-law.ts';
@@ -109,7 +109,7 @@ export class ChainStepper {
     this.cEff = new Float64Array(Math.max(n - 1, 1));
     this.P = sys.stop.node;
     this.motion = new StopMotion(sys.speed, sys.stop.duration);
-    this.drives = sys.drives.map((d) => ({ ...d, stuck: true, sigma: 0, vR: 0, vRT: 0, dphiR: 0, piece: 0, slipAngle: 0, slipWork: 0 }));
+    this.drives = sys.drives.map((d) => ({ ...d, stuck: true, sigma: 0, vR: 0, vRT: 0, dphiR: 0, piece: 0, base: 0, slope: 0, lo: 0, hi: 0, beltTorque: 0, slipAngle: 0, slipWork: 0 }));
 
     // Running state: the running torque's twist, everything at ω0; then the stop's start at t = 0.
     let angle = 0;
@@ -132,7 +132,7 @@ export class ChainStepper {
     }
     for (const d of this.drives) {
       d.vR = sys.speed;
-      d.piece = pieceOf(d.line, this.v[d.node]);
+      setPiece(d, pieceOf(d.line, this.v[d.node]));
     }
     this.updateInertia();
     this.refreshBranches();
@@ -189,7 +189,7 @@ export class ChainStepper {
     for (let e = 0; e < m; e++) off[e] = -w[e];
     for (let j = 0; j < this.drives.length; j++) {
       const d = this.drives[j];
-      if (d.stuck) diag[d.node] -= pieceSlope(d.line, d.piece) / h;
+      if (d.stuck) diag[d.node] -= d.slope / h;
     }
     if (this.jam === 0) {
       const P = this.P;
@@ -246,8 +246,8 @@ export class ChainStepper {
     for (let j = 0; j < this.drives.length; j++) {
       const d = this.drives[j];
       if (d.stuck) continue;
-      const s = pieceSlope(d.line, d.piece);
-      const f0 = pieceTorque(d.line, d.piece, d.vR);
+      const s = d.slope;
+      const f0 = d.base + s * d.vR;
       d.vRT = d.vR + (f0 - d.sigma * d.beltSlipTorque!) / (d.rotorInertia / h - 0.5 * s);
       d.dphiR = 0.5 * h * (d.vR + d.vRT);
     }
@@ -270,8 +270,8 @@ export class ChainStepper {
     for (let j = 0; j < this.drives.length; j++) {
       const d = this.drives[j];
       if (d.stuck) {
-        const s = pieceSlope(d.line, d.piece);
-        rhs[d.node] += pieceTorque(d.line, d.piece, v[d.node]) - s * v[d.node];
+        // Trapezoidal mean of the motor's torque on its piece: T(v₀) + s·(Δφ/h − v₀), the s·Δφ/h part in the matrix.
+        rhs[d.node] += d.base;
       } else {
         rhs[d.node] += d.sigma * d.beltSlipTorque!;
       }
@@ -298,12 +298,12 @@ export class ChainStepper {
     this.dampingWork += damp / h;
     for (let j = 0; j < this.drives.length; j++) {
       const d = this.drives[j];
-      const s = pieceSlope(d.line, d.piece);
+      const s = d.slope;
       if (d.stuck) {
-        const f = pieceTorque(d.line, d.piece, this.v[d.node]) + 0.5 * s * (this.vT[d.node] - this.v[d.node]);
+        const f = d.base + 0.5 * s * (this.vT[d.node] + this.v[d.node]);
         this.motorWork += f * dphi[d.node];
       } else {
-        const f = pieceTorque(d.line, d.piece, d.vR) + 0.5 * s * (d.vRT - d.vR);
+        const f = d.base + 0.5 * s * (d.vRT + d.vR);
         this.motorWork += f * d.dphiR;
         const rel = d.dphiR - dphi[d.node];
         d.slipWork += d.sigma * d.beltSlipTorque! * rel;

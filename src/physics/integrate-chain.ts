@@ -1,6 +1,6 @@
 import { enterEvent, eventSources, eventValues, locateEvent, type ChainEvent } from './chain-events.ts';
 import { ChainRecorder, type ChainHistory } from './chain-recorder.ts';
-import { chainEnergy, holdingJamTorque, stuckBeltTorque } from './chain-forces.ts';
+import { chainEnergy, holdingJamTorque } from './chain-forces.ts';
 import { ChainStepper } from './chain-stepper.ts';
 import type { ChainSystem } from './chain-system.ts';
 import type { TorqueLaw } from './torque-law.ts';
@@ -80,10 +80,8 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
   // Belt torques at every step (for their peaks); the jam's only where it is kept (a soft jam's
   // peak, and the history's samples), as it costs a sum over the stop node's neighbours.
   const measure = (sampling: boolean): number => {
-    for (let i = 0; i < st.drives.length; i++) {
-      const d = st.drives[i];
-      belt[i] = d.beltSlipTorque === undefined ? NaN : d.stuck ? stuckBeltTorque(st, d) : d.sigma * d.beltSlipTorque;
-    }
+    // Each belt's torque was found with the event values of this same trial end.
+    for (let i = 0; i < st.drives.length; i++) belt[i] = st.drives[i].beltSlipTorque === undefined ? NaN : st.drives[i].beltTorque;
     if (!soft && !sampling) return 0;
     return st.jam === 0 ? -holdingJamTorque(st) : st.jam * sys.stop.torqueCapacity!;
   };
