@@ -87,7 +87,8 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
     positions.push(lo);
     pieces.forEach((p, i) => {
       const len = p.piece.end - p.piece.start;
-      const n = Math.max(1, Math.round((opts.elements * len) / total));
+      // Half-way shares round up, with room for the rounding in positions that sum lengths.
+      const n = Math.max(1, Math.floor((opts.elements * len) / total + 0.5 + 1e-9));
       for (let j = 0; j < n; j++) {
         const a = p.piece.start + (len * j) / n;
         const b = j === n - 1 ? p.piece.end : p.piece.start + (len * (j + 1)) / n;

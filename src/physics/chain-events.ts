@@ -1,4 +1,6 @@
-import type { ChainStepper, DriveState } from './chain-stepper.ts';
+import { holdingJamTorque, motorPieceValue, stuckBeltTorque } from './chain-forces.ts';
+import type { ChainStepper } from './chain-stepper.ts';
+import { setPiece, type DriveState } from './drive-state.ts';
 
 /** Where an event comes from: an element's law, a drive's belt, the jam, or a drive's motor curve. */
 export type EventSource = { kind: 'element'; index: number } | { kind: 'belt'; index: number } | { kind: 'jam' } | { kind: 'motor'; index: number };
@@ -37,11 +39,12 @@ export function eventValues(st: ChainStepper, sources: readonly EventSource[], o
       out[k] = st.laws[src.index].leave(st.thetaT[src.index], st.rateT[src.index]);
     } else if (src.kind === 'belt') {
       const d = st.drives[src.index];
-      out[k] = d.stuck ? Math.abs(st.stuckBeltTorque(d)) - d.beltSlipTorque! : -d.sigma * (d.vRT - st.vT[d.node]);
+      d.beltTorque = d.stuck ? stuckBeltTorque(st, d) : d.sigma * d.beltSlipTorque!;
+      out[k] = d.stuck ? Math.abs(d.beltTorque) - d.beltSlipTorque! : -d.sigma * (d.vRT - st.vT[d.node]);
     } else if (src.kind === 'jam') {
-      out[k] = st.jam === 0 ? Math.abs(st.holdingJamTorque()) - st.sys.stop.torqueCapacity! : -st.jam * (st.vT[st.P] - st.motion.speedAt(st.t + st.hT));
+      out[k] = st.jam === 0 ? Math.abs(holdingJamTorque(st)) - st.sys.stop.torqueCapacity! : -st.jam * (st.vT[st.P] - st.motion.speedAt(st.t + st.hT));
     } else {
-      out[k] = st.motorPieceValue(st.drives[src.index]);
+      out[k] = motorPieceValue(st, st.drives[src.index]);
     }
   }
 }
@@ -58,8 +61,7 @@ export function enterEvent(st: ChainStepper, src: EventSource, direction: number
   if (src.kind === 'belt') return enterBelt(st, st.drives[src.index]);
   if (src.kind === 'jam') return enterJam(st);
   const d = st.drives[src.index];
-  const before = d.piece;
-  d.piece = Math.max(0, Math.min(d.line.speeds.length, before + (direction >= 0 ? 1 : -1)));
+  setPiece(d, Math.max(0, Math.min(d.line.speeds.length, d.piece + (direction >= 0 ? 1 : -1))));
   st.dirty = true;
   const crossed = d.line.speeds[direction < 0 ? d.piece : d.piece - 1];
   if (crossed === 0) return direction < 0 ? 'reaches standstill' : 'turns forward again';
@@ -68,7 +70,7 @@ export function enterEvent(st: ChainStepper, src: EventSource, direction: number
 
 function enterBelt(st: ChainStepper, d: DriveState): string {
   if (d.stuck) {
-    const Tb = st.stuckBeltTorque(d);
+    const Tb = stuckBeltTorque(st, d);
     d.stuck = false;
     d.sigma = Tb >= 0 ? 1 : -1;
     d.vR = st.v[d.node];
@@ -84,7 +86,7 @@ function enterBelt(st: ChainStepper, d: DriveState): string {
   d.stuck = true;
   st.updateInertia();
   st.refreshStart();
-  const Tb = st.stuckBeltTorque(d);
+  const Tb = stuckBeltTorque(st, d);
   if (Math.abs(Tb) <= d.beltSlipTorque! * (1 + 1e-9)) return 'stops slipping';
   d.stuck = false;
   d.sigma = Tb >= 0 ? 1 : -1;
@@ -95,7 +97,7 @@ function enterBelt(st: ChainStepper, d: DriveState): string {
 function enterJam(st: ChainStepper): string {
   const cap = st.sys.stop.torqueCapacity!;
   if (st.jam === 0) {
-    st.jam = st.holdingJamTorque() <= 0 ? 1 : -1;
+    st.jam = holdingJamTorque(st) <= 0 ? 1 : -1;
     st.dirty = true;
     return 'starts to slip';
   }
@@ -105,8 +107,69 @@ function enterJam(st: ChainStepper): string {
   st.jam = 0;
   st.dirty = true;
   st.refreshStart();
-  const R = st.holdingJamTorque();
+  const R = holdingJamTorque(st);
   if (Math.abs(R) <= cap * (1 + 1e-9)) return 'holds again';
   st.jam = R <= 0 ? 1 : -1;
   return 'slips again';
+}
+
+/**
+ * Finds where in the trial step of length h the first event happens, by the Illinois variant of
+ * regula falsi (Dahlquist & Björck, Numerical Methods, Sec. 6.2; from memory, confident) on the
+ * largest of the violated event functions, each scaled by its change over the step; leaves the
+ * stepper's trial at that point (on the safe side of it) and returns the sources that reach their
+ * switch there.
+ */
+export function locateEvent(st: ChainStepper, sources: readonly EventSource[], h: number, ev0: Float64Array, evT: Float64Array): number[] {
+  const V: number[] = [];
+  const scale: number[] = [];
+  for (let k = 0; k < sources.length; k++) {
+    if (evT[k] > 0) {
+      V.push(k);
+      scale.push(Math.max(evT[k] - ev0[k], 1e-300));
+    }
+  }
+  const vals = new Float64Array(sources.length);
+  const G = (x: ArrayLike<number>) => V.reduce((g, k, j) => Math.max(g, x[k] / scale[j]), -Infinity);
+  let lo = 0;
+  let glo = Math.min(G(ev0), 0);
+  let hi = 1;
+  let ghi = G(evT);
+  let side = 0;
+  let found = -1;
+  for (let it = 0; it < 80 && hi - lo > 1e-12; it++) {
+    let s = glo < 0 ? lo + ((hi - lo) * glo) / (glo - ghi) : 0.5 * (lo + hi);
+    if (!(s > lo && s < hi)) s = 0.5 * (lo + hi);
+    st.trial(s * h);
+    eventValues(st, sources, vals);
+    const g = G(vals);
+    if (g > 0) {
+      hi = s;
+      ghi = g;
+      if (side === 1) glo *= 0.5;
+      side = 1;
+    } else {
+      lo = s;
+      glo = g;
+      if (side === -1) ghi *= 0.5;
+      side = -1;
+    }
+    if (Math.abs(g) < 1e-12) {
+      found = s;
+      break;
+    }
+  }
+  // The root itself where it was hit, else the bracket's safe end (its late end if the event is at the start).
+  const s = found >= 0 ? found : lo > 0 ? lo : hi;
+  st.trial(s * h);
+  eventValues(st, sources, vals);
+  const hit = V.filter((k, j) => vals[k] / scale[j] >= -1e-6);
+  if (hit.length === 0) {
+    let best = V[0];
+    V.forEach((k, j) => {
+      if (vals[k] / scale[j] > vals[best] / scale[V.indexOf(best)]) best = k;
+    });
+    hit.push(best);
+  }
+  return hit;
 }

@@ -1,5 +1,7 @@
 import type { ChainSystem } from './chain-system.ts';
-import { outsidePiece, pieceOf, pieceSlope, pieceTorque, type TorqueSpeedLine } from './motor-torque.ts';
+import { meanForce, updateAccelerations } from './chain-forces.ts';
+import { setPiece, type DriveState } from './drive-state.ts';
+import { pieceOf } from './motor-torque.ts';
 import { StopMotion } from './stop-motion.ts';
 import { TridiagonalSolver } from './tridiagonal.ts';
 import { ElasticLaw, type TorqueLaw } from './torque-law.ts';
@@ -52,7 +54,7 @@ export class ChainStepper {
   private readonly diag: Float64Array;
   private readonly off: Float64Array;
   private readonly rhs: Float64Array;
-  private readonly kt: Float64Array;
+  readonly kt: Float64Array;
   private readonly ofs: Float64Array;
   private readonly w: Float64Array;
   private readonly solver: TridiagonalSolver;
@@ -107,7 +109,7 @@ export class ChainStepper {
     this.cEff = new Float64Array(Math.max(n - 1, 1));
     this.P = sys.stop.node;
     this.motion = new StopMotion(sys.speed, sys.stop.duration);
-    this.drives = sys.drives.map((d) => ({ ...d, stuck: true, sigma: 0, vR: 0, vRT: 0, dphiR: 0, piece: 0, slipAngle: 0, slipWork: 0 }));
+    this.drives = sys.drives.map((d) => ({ ...d, stuck: true, sigma: 0, vR: 0, vRT: 0, dphiR: 0, piece: 0, base: 0, slope: 0, lo: 0, hi: 0, beltTorque: 0, slipAngle: 0, slipWork: 0 }));
 
     // Running state: the running torque's twist, everything at ω0; then the stop's start at t = 0.
     let angle = 0;
@@ -130,12 +132,12 @@ export class ChainStepper {
     }
     for (const d of this.drives) {
       d.vR = sys.speed;
-      d.piece = pieceOf(d.line, this.v[d.node]);
+      setPiece(d, pieceOf(d.line, this.v[d.node]));
     }
     this.updateInertia();
     this.refreshBranches();
     this.refreshStart();
-    this.updateAccelerations(0);
+    updateAccelerations(this, 0);
   }
 
   /**
@@ -187,7 +189,7 @@ export class ChainStepper {
     for (let e = 0; e < m; e++) off[e] = -w[e];
     for (let j = 0; j < this.drives.length; j++) {
       const d = this.drives[j];
-      if (d.stuck) diag[d.node] -= pieceSlope(d.line, d.piece) / h;
+      if (d.stuck) diag[d.node] -= d.slope / h;
     }
     if (this.jam === 0) {
       const P = this.P;
@@ -244,8 +246,8 @@ export class ChainStepper {
     for (let j = 0; j < this.drives.length; j++) {
       const d = this.drives[j];
       if (d.stuck) continue;
-      const s = pieceSlope(d.line, d.piece);
-      const f0 = pieceTorque(d.line, d.piece, d.vR);
+      const s = d.slope;
+      const f0 = d.base + s * d.vR;
       d.vRT = d.vR + (f0 - d.sigma * d.beltSlipTorque!) / (d.rotorInertia / h - 0.5 * s);
       d.dphiR = 0.5 * h * (d.vR + d.vRT);
     }
@@ -268,8 +270,8 @@ export class ChainStepper {
     for (let j = 0; j < this.drives.length; j++) {
       const d = this.drives[j];
       if (d.stuck) {
-        const s = pieceSlope(d.line, d.piece);
-        rhs[d.node] += pieceTorque(d.line, d.piece, v[d.node]) - s * v[d.node];
+        // Trapezoidal mean of the motor's torque on its piece: T(v₀) + s·(Δφ/h − v₀), the s·Δφ/h part in the matrix.
+        rhs[d.node] += d.base;
       } else {
         rhs[d.node] += d.sigma * d.beltSlipTorque!;
       }
@@ -285,52 +287,6 @@ export class ChainStepper {
     this.solver.solve(rhs, this.dphi);
   }
 
-  /**
-   * Net torque on node i at the trial step's end, from the elements, motors, belts and a slipping
-   * jam (not a holding jam). The dashpots enter with the step's mean twist rate Δθ/h, the rate the
-   * trapezoidal rule itself uses: the end-point rate of an element much stiffer than the step
-   * resolves swings from step to step and would make the belt and jam checks chatter.
-   */
-  trialForce(i: number): number {
-    const { m, laws, thetaT, cEff, sys } = this;
-    let F = 0;
-    if (i > 0) F -= laws[i - 1].torque(thetaT[i - 1]) + cEff[i - 1] * this.meanRate(i - 1);
-    if (i < m) F += laws[i].torque(thetaT[i]) + cEff[i] * this.meanRate(i);
-    for (let j = 0; j < this.drives.length; j++) {
-      const d = this.drives[j];
-      if (d.node !== i) continue;
-      F += d.stuck ? pieceTorque(d.line, d.piece, this.vT[i]) : d.sigma * d.beltSlipTorque!;
-    }
-    if (this.jam !== 0 && i === this.P) F -= this.jam * sys.stop.torqueCapacity!;
-    return F;
-  }
-
-  /** Element e's mean twist rate over the trial step, rad/s (its end-point rate for a zero-length trial). */
-  private meanRate(e: number): number {
-    return this.hT > 0 ? (this.thetaT[e] - this.theta[e]) / this.hT : this.rateT[e];
-  }
-
-  /** Acceleration of node i at the trial step's end, rad/s² (the ramp's for a holding stop node). */
-  trialAcceleration(i: number): number {
-    if (i === this.P && this.jam === 0) return this.motion.accelerationAt(this.t + 0.5 * this.hT);
-    return this.trialForce(i) / this.jeff[i];
-  }
-
-  /** Torque a sticking belt must carry at the trial end: motor torque less what accelerates the rotor. */
-  stuckBeltTorque(d: DriveState): number {
-    return pieceTorque(d.line, d.piece, this.vT[d.node]) - d.rotorInertia * this.trialAcceleration(d.node);
-  }
-
-  /** Torque the holding jam puts on the stop node at the trial end, N·m. */
-  holdingJamTorque(): number {
-    return this.jeff[this.P] * this.motion.accelerationAt(this.t + 0.5 * this.hT) - this.trialForce(this.P);
-  }
-
-  /** Motor-curve event value for drive d at the trial end (> 0: its speed left the curve's piece). */
-  motorPieceValue(d: DriveState): number {
-    return outsidePiece(d.line, d.piece, this.motorSpeed(d, true));
-  }
-
   /** Makes the trial step the committed state, with its energy books. */
   commit(): void {
     const { m, laws, sys, dphi, hT: h, P, cEff, plain, theta, thetaT, tq, kt } = this;
@@ -342,12 +298,12 @@ export class ChainStepper {
     this.dampingWork += damp / h;
     for (let j = 0; j < this.drives.length; j++) {
       const d = this.drives[j];
-      const s = pieceSlope(d.line, d.piece);
+      const s = d.slope;
       if (d.stuck) {
-        const f = pieceTorque(d.line, d.piece, this.v[d.node]) + 0.5 * s * (this.vT[d.node] - this.v[d.node]);
+        const f = d.base + 0.5 * s * (this.vT[d.node] + this.v[d.node]);
         this.motorWork += f * dphi[d.node];
       } else {
-        const f = pieceTorque(d.line, d.piece, d.vR) + 0.5 * s * (d.vRT - d.vR);
+        const f = d.base + 0.5 * s * (d.vRT + d.vR);
         this.motorWork += f * d.dphiR;
         const rel = d.dphiR - dphi[d.node];
         d.slipWork += d.sigma * d.beltSlipTorque! * rel;
@@ -365,7 +321,7 @@ export class ChainStepper {
     } else if (dG !== 0) {
       // Work of the holding jam: its torque over the step, from the stop node's trapezoidal
       // equation J·(v₁ − v₀)/h = F̄ + R̄, through the stop node's turn.
-      this.boundaryWork += ((this.jeff[P] * (this.vT[P] - this.v[P])) / h - this.meanForce(P)) * dG;
+      this.boundaryWork += ((this.jeff[P] * (this.vT[P] - this.v[P])) / h - meanForce(this, P)) * dG;
     }
     this.phi.set(this.phiT);
     this.v.set(this.vT);
@@ -380,74 +336,6 @@ export class ChainStepper {
       theta[e] = th;
     }
     this.t += h;
-    this.updateAccelerations(h);
+    updateAccelerations(this, h);
   }
-
-  /**
-   * Node accelerations from the forces at the committed state: elastic torques, dashpots at the
-   * last step's mean rate, motors, slipping belts and a slipping jam, over the node's inertia.
-   */
-  private updateAccelerations(h: number): void {
-    const { n, m, tq, cEff, acc, jeff, dphi, P } = this;
-    acc.fill(0);
-    for (let e = 0; e < m; e++) {
-      const T = tq[e] + (h > 0 ? (cEff[e] * (dphi[e + 1] - dphi[e])) / h : 0);
-      acc[e] += T;
-      acc[e + 1] -= T;
-    }
-    for (let j = 0; j < this.drives.length; j++) {
-      const d = this.drives[j];
-      acc[d.node] += d.stuck ? pieceTorque(d.line, d.piece, this.v[d.node]) : d.sigma * d.beltSlipTorque!;
-    }
-    if (this.jam !== 0) acc[P] -= this.jam * this.sys.stop.torqueCapacity!;
-    for (let i = 0; i < n; i++) acc[i] = jeff[i] > 0 ? acc[i] / jeff[i] : 0;
-    if (this.jam === 0) acc[P] = this.motion.accelerationAt(this.t - 0.5 * h);
-  }
-
-  /** Node i's torque averaged over the trial step as the trapezoidal rule takes it (elements, dashpots, motors), N·m. */
-  private meanForce(i: number): number {
-    const { m, laws, cEff, hT: h } = this;
-    let F = 0;
-    const el = (e: number) => 0.5 * (this.tq[e] + laws[e].torque(this.thetaT[e])) + (cEff[e] * (this.thetaT[e] - this.theta[e])) / h;
-    if (i > 0) F -= el(i - 1);
-    if (i < m) F += el(i);
-    for (let j = 0; j < this.drives.length; j++) {
-      const d = this.drives[j];
-      if (d.node !== i) continue;
-      F += d.stuck ? pieceTorque(d.line, d.piece, this.v[i]) + 0.5 * pieceSlope(d.line, d.piece) * (this.vT[i] - this.v[i]) : d.sigma * d.beltSlipTorque!;
-    }
-    return F;
-  }
-
-
-  /** Total mechanical energy at the committed state: kinetic + strain, J. */
-  energy(): number {
-    let E = 0;
-    for (let i = 0; i < this.n; i++) E += 0.5 * this.jeff[i] * this.v[i] * this.v[i];
-    for (const d of this.drives) if (!d.stuck) E += 0.5 * d.rotorInertia * d.vR * d.vR;
-    for (let e = 0; e < this.m; e++) E += this.laws[e].energy(this.theta[e]);
-    return E;
-  }
-}
-
-/** A drive's state during the integration. */
-export interface DriveState {
-  node: number;
-  line: TorqueSpeedLine;
-  rotorInertia: number;
-  beltSlipTorque?: number;
-  /** Belt sticking (or no belt). */
-  stuck: boolean;
-  /** Slip sense while slipping: +1 rotor ahead of the pulley. */
-  sigma: number;
-  /** Rotor speed while the belt slips, committed and trial, rad/s at shaft. */
-  vR: number;
-  vRT: number;
-  dphiR: number;
-  /** Piece of the motor's curve the motor's speed is on. */
-  piece: number;
-  /** Total slip angle so far, rad at the shaft. */
-  slipAngle: number;
-  /** Friction work in the belt so far, J. */
-  slipWork: number;
 }

@@ -1,5 +1,6 @@
-import { enterEvent, eventSources, eventValues, type ChainEvent, type EventSource } from './chain-events.ts';
+import { enterEvent, eventSources, eventValues, locateEvent, type ChainEvent } from './chain-events.ts';
 import { ChainRecorder, type ChainHistory } from './chain-recorder.ts';
+import { chainEnergy, holdingJamTorque } from './chain-forces.ts';
 import { ChainStepper } from './chain-stepper.ts';
 import type { ChainSystem } from './chain-system.ts';
 import type { TorqueLaw } from './torque-law.ts';
@@ -79,12 +80,10 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
   // Belt torques at every step (for their peaks); the jam's only where it is kept (a soft jam's
   // peak, and the history's samples), as it costs a sum over the stop node's neighbours.
   const measure = (sampling: boolean): number => {
-    for (let i = 0; i < st.drives.length; i++) {
-      const d = st.drives[i];
-      belt[i] = d.beltSlipTorque === undefined ? NaN : d.stuck ? st.stuckBeltTorque(d) : d.sigma * d.beltSlipTorque;
-    }
+    // Each belt's torque was found with the event values of this same trial end.
+    for (let i = 0; i < st.drives.length; i++) belt[i] = st.drives[i].beltSlipTorque === undefined ? NaN : st.drives[i].beltTorque;
     if (!soft && !sampling) return 0;
-    return st.jam === 0 ? -st.holdingJamTorque() : st.jam * sys.stop.torqueCapacity!;
+    return st.jam === 0 ? -holdingJamTorque(st) : st.jam * sys.stop.torqueCapacity!;
   };
   const enter = (k: number, direction: number) => {
     events.push({ time: st.t, source: sources[k], what: enterEvent(st, sources[k], direction) });
@@ -97,7 +96,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
   st.refreshStart();
   eventValues(st, sources, ev0);
   rec.record(0, belt, measure(true));
-  const E0 = st.energy();
+  const E0 = chainEnergy(st);
 
   const T = opts.duration;
   const h0 = opts.timeStep;
@@ -124,7 +123,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     for (let k = 0; k < K; k++) if (evT[k] > 0) violated = true;
     if (violated && burst < MAX_EVENTS_AT_ONE_INSTANT) {
       sources.forEach((src, k) => (direction[k] = src.kind === 'motor' ? Math.sign(st.motorSpeed(st.drives[src.index], true) - st.motorSpeed(st.drives[src.index], false)) : 0));
-      const hit = locate(st, sources, h, ev0, evT);
+      const hit = locateEvent(st, sources, h, ev0, evT);
       const jam = measure(rec.due(st.t + st.hT));
       st.commit();
       steps++;
@@ -168,7 +167,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     events,
     energy: {
       initial: E0,
-      final: st.energy(),
+      final: chainEnergy(st),
       motorWork: st.motorWork,
       boundaryWork: st.boundaryWork,
       dampingWork: st.dampingWork,
@@ -176,62 +175,4 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
       released,
     },
   };
-}
-
-/**
- * Finds where in the trial step the first event happens; leaves the stepper's trial at that point
- * (on the safe side of it) and returns the sources that reach their switch there.
- */
-function locate(st: ChainStepper, sources: readonly EventSource[], h: number, ev0: Float64Array, evT: Float64Array): number[] {
-  const V: number[] = [];
-  const scale: number[] = [];
-  for (let k = 0; k < sources.length; k++) {
-    if (evT[k] > 0) {
-      V.push(k);
-      scale.push(Math.max(evT[k] - ev0[k], 1e-300));
-    }
-  }
-  const vals = new Float64Array(sources.length);
-  const G = (x: ArrayLike<number>) => V.reduce((g, k, j) => Math.max(g, x[k] / scale[j]), -Infinity);
-  let lo = 0;
-  let glo = Math.min(G(ev0), 0);
-  let hi = 1;
-  let ghi = G(evT);
-  let side = 0;
-  let found = -1;
-  for (let it = 0; it < 80 && hi - lo > 1e-12; it++) {
-    let s = glo < 0 ? lo + ((hi - lo) * glo) / (glo - ghi) : 0.5 * (lo + hi);
-    if (!(s > lo && s < hi)) s = 0.5 * (lo + hi);
-    st.trial(s * h);
-    eventValues(st, sources, vals);
-    const g = G(vals);
-    if (g > 0) {
-      hi = s;
-      ghi = g;
-      if (side === 1) glo *= 0.5;
-      side = 1;
-    } else {
-      lo = s;
-      glo = g;
-      if (side === -1) ghi *= 0.5;
-      side = -1;
-    }
-    if (Math.abs(g) < 1e-12) {
-      found = s;
-      break;
-    }
-  }
-  // The root itself where it was hit, else the bracket's safe end (its late end if the event is at the start).
-  const s = found >= 0 ? found : lo > 0 ? lo : hi;
-  st.trial(s * h);
-  eventValues(st, sources, vals);
-  const hit = V.filter((k, j) => vals[k] / scale[j] >= -1e-6);
-  if (hit.length === 0) {
-    let best = V[0];
-    V.forEach((k, j) => {
-      if (vals[k] / scale[j] > vals[best] / scale[V.indexOf(best)]) best = k;
-    });
-    hit.push(best);
-  }
-  return hit;
 }

@@ -82,6 +82,12 @@ export function analyseCase(c: Case): Results {
   }
   const observedFindings = { twist: readTwistBack(c, model.sides, balances), fracture: readFracture(c, plastic) };
 
+  let reason = basis.reason;
+  if (basis.basis === 'energy method') {
+    const worst = Math.max(...dynamic.sides.map((s) => Math.abs(s.dynamicPeakTorque / s.energyPeakTorque - 1)));
+    reason += ` The dynamic model's peak torques are within ${(100 * worst).toPrecision(2)} % of it${dynamic.shaftInertia ? ' (it adds the shaft\'s own inertia and damping)' : ''}.`;
+  }
+
   return {
     case: c,
     speed: c.speed,
@@ -97,7 +103,7 @@ export function analyseCase(c: Case): Results {
     verdictGoverning,
     verdictYieldRatio: verdictGoverning.piece.yieldRatio,
     verdictBasis: basis.basis,
-    verdictReason: basis.reason,
+    verdictReason: reason,
     dynamic,
     warnings,
     cautions: CAUTIONS,

@@ -73,8 +73,9 @@ export interface DynamicResult {
   pins: PinOutcome[];
   /** Belts and their slip torque, with the capstan working where it came from belt data. */
   belts: { station: string; slip: BeltSlip }[];
-  /** Located events in time order, as sentences. */
+  /** Located events in time order, as sentences (the first `MAX_EVENTS_KEPT`; `eventCount` says how many there were). */
   events: { time: number; text: string }[];
+  eventCount: number;
   /** Energy books, J: final − initial = motor + boundary − damping − slip − released. */
   energy: { initial: number; final: number; motorWork: number; boundaryWork: number; dampingWork: number; slipWork: number; released: number };
   histories: DynamicHistories;
@@ -83,6 +84,9 @@ export interface DynamicResult {
   /** Remarks on this case's solution (refinement, window), as sentences. */
   notes: string[];
 }
+
+/** Events kept in the results (a belt that keeps reversing its slip can log hundreds). */
+const MAX_EVENTS_KEPT = 100;
 
 /** Runs the dynamic model on a case and gathers what the views show. Pure: no I/O, no clock. */
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
@@ -114,9 +118,8 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     if (src.kind === 'motor') return `The motor at "${chain.drives[src.index].station}"`;
     return `The jam at "${stopName}"`;
   };
-  const events = run.events
-    .filter((e) => e.what !== 'passes a point of its curve')
-    .map((e) => ({ time: e.time, text: `${capitalise(nameOf(e.source))} ${e.what}.` }));
+  const shown = run.events.filter((e) => e.what !== 'passes a point of its curve');
+  const events = shown.slice(0, MAX_EVENTS_KEPT).map((e) => ({ time: e.time, text: `${capitalise(nameOf(e.source))} ${e.what}.` }));
   return {
     elements: chain.elements.length,
     shaftInertia: chain.shaftInertia,
@@ -142,6 +145,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     pins,
     belts: chain.drives.flatMap((d) => (d.belt ? [{ station: d.station, slip: d.belt }] : [])),
     events,
+    eventCount: shown.length,
     energy: run.energy,
     histories: dynamicHistories(chain, solve.final, slips),
     assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),

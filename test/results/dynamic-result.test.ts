@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
@@ -91,5 +92,55 @@ describe('dynamicResult through analyseCase', () => {
       expect(Math.max(...m.amplitude)).toBeCloseTo(1, 12);
     }
     expect(new Set(r.dynamic.modes.slice(0, 2).map((m) => m.side))).toEqual(new Set(['A', 'B']));
+  });
+});
+
+describe('the laws of the dynamic model', () => {
+  /** A drive, a limiter and a flywheel on one side of the stop; `mirror` puts them on the other. */
+  const layout = (mirror: boolean, rpm: number, slip: number, ramp: number) => {
+    const segs = ['{ length: 300 mm, diameter: 45 mm, label: drive end }', `{ length: 200 mm, diameter: 50 mm, slip_torque: ${slip} N*m, label: limiter }`, '{ length: 400 mm, diameter: 55 mm, label: to the jam }'];
+    const at = (x: number) => (mirror ? 900 - x : x);
+    return `case: { id: M }
+speed: ${rpm} rpm
+stop: { at: jam, duration: ${ramp} ms }
+analysis: { elements: 18 }
+shaft:
+  material: aisi-4140-qt540
+  segments:
+${(mirror ? [...segs].reverse() : segs).map((s) => `    - ${s}`).join('\n')}
+stations:
+  - name: pulley
+    at: ${at(100)} mm
+    parts: [{ shape: inertia, name: sheave, inertia: 0.8 kg*m^2 }, { shape: inertia, name: rotor, inertia: 0.05 kg*m^2, speed_ratio: 4 }]
+    drive: { running_torque: 60 N*m, torque: 150 N*m, belt: { slip_torque: 900 N*m } }
+  - { name: flywheel, at: ${at(300)} mm, parts: [{ shape: inertia, inertia: 2 kg*m^2 }] }
+  - { name: jam, at: ${at(900)} mm }
+`;
+  };
+
+  it('a mirrored shaft gives the same peaks, slips and frequencies on the other side', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 200, max: 900 }), fc.integer({ min: 500, max: 4000 }), fc.integer({ min: 0, max: 8 }), (rpm, slip, ramp) => {
+        const a = analyseCase(parseCase(layout(false, rpm, slip, ramp))).dynamic;
+        const b = analyseCase(parseCase(layout(true, rpm, slip, ramp))).dynamic;
+        // Equal to rounding: the mirrored positions (900 − x) and eigenvalues differ in the last digits.
+        const close = (x: number, y: number) => Math.abs(x - y) <= 1e-5 * Math.max(Math.abs(x), Math.abs(y), 1);
+        return (
+          a.sides[0].side === 'A' &&
+          b.sides[0].side === 'B' &&
+          close(a.peakTorque, b.peakTorque) &&
+          a.pieces.every((p, i) => close(p.peakTorque, b.pieces[a.pieces.length - 1 - i].peakTorque)) &&
+          a.slips.every((s, i) => close(s.energy, b.slips[i].energy) && close(s.angle, b.slips[i].angle)) &&
+          a.naturalFrequencies.every((f, i) => close(f, b.naturalFrequencies[i]))
+        );
+      }),
+      { numRuns: 8 },
+    );
+  });
+
+  it('a slower stop never raises the peak torque of a single mass (the velocity-ramp factor falls with τ)', () => {
+    const peak = (ramp: number) => analyseCase(parseCase(fixture.replace('  at: jam', `  at: jam\n  duration: ${ramp} ms`) + 'analysis: { shaft_inertia: false, damping_ratio: 0 }\n')).dynamic.peakTorque;
+    const values = [0, 2, 5, 10, 20, 40].map(peak);
+    for (let i = 1; i < values.length; i++) expect(values[i]).toBeLessThan(values[i - 1] * (1 + 1e-6));
   });
 });

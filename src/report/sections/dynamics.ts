@@ -49,7 +49,7 @@ export function renderDynamicsSection(r: Results): string {
   if (d.events.length > 0) {
     out.push('### Events, located in time', '');
     for (const e of d.events.slice(0, MAX_EVENTS)) out.push(`- ${sig(e.time * 1000, 4)} ms: ${e.text}`);
-    if (d.events.length > MAX_EVENTS) out.push(`- … and ${d.events.length - MAX_EVENTS} more.`);
+    if (d.eventCount > MAX_EVENTS) out.push(`- … and ${d.eventCount - MAX_EVENTS} more.`);
     out.push('');
   }
 

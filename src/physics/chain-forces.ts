@@ -1,0 +1,99 @@
+import type { ChainStepper } from './chain-stepper.ts';
+import type { DriveState } from './drive-state.ts';
+import { motorTorque } from './drive-state.ts';
+
+// Torques, accelerations and energy of the chain at the stepper's trial end or committed state:
+// what the event functions, the jam's work and the recorder read. Not on the hot path of a plain
+// step, except the accelerations the recorder needs for end-face torques.
+
+/**
+ * Net torque on node i at the trial step's end, from the elements, motors, belts and a slipping
+ * jam (not a holding jam). The dashpots enter with the step's mean twist rate Δθ/h, the rate the
+ * trapezoidal rule itself uses: the end-point rate of an element much stiffer than the step
+ * resolves swings from step to step and would make the belt and jam checks chatter.
+ */
+export function trialForce(st: ChainStepper, i: number): number {
+  const { m, laws, thetaT, cEff, sys } = st;
+  let F = 0;
+  if (i > 0) F -= laws[i - 1].torque(thetaT[i - 1]) + cEff[i - 1] * meanRate(st, i - 1);
+  if (i < m) F += laws[i].torque(thetaT[i]) + cEff[i] * meanRate(st, i);
+  for (let j = 0; j < st.drives.length; j++) {
+    const d = st.drives[j];
+    if (d.node !== i) continue;
+    F += d.stuck ? motorTorque(d, st.vT[i]) : d.sigma * d.beltSlipTorque!;
+  }
+  if (st.jam !== 0 && i === st.P) F -= st.jam * sys.stop.torqueCapacity!;
+  return F;
+}
+
+/** Element e's mean twist rate over the trial step, rad/s (its end-point rate for a zero-length trial). */
+function meanRate(st: ChainStepper, e: number): number {
+  return st.hT > 0 ? (st.thetaT[e] - st.theta[e]) / st.hT : st.rateT[e];
+}
+
+/** Acceleration of node i at the trial step's end, rad/s² (the ramp's for a holding stop node). */
+export function trialAcceleration(st: ChainStepper, i: number): number {
+  if (i === st.P && st.jam === 0) return st.motion.accelerationAt(st.t + 0.5 * st.hT);
+  return trialForce(st, i) / st.jeff[i];
+}
+
+/** Torque a sticking belt must carry at the trial end: motor torque less what accelerates the rotor. */
+export function stuckBeltTorque(st: ChainStepper, d: DriveState): number {
+  return motorTorque(d, st.vT[d.node]) - d.rotorInertia * trialAcceleration(st, d.node);
+}
+
+/** Torque the holding jam puts on the stop node at the trial end, N·m. */
+export function holdingJamTorque(st: ChainStepper): number {
+  return st.jeff[st.P] * st.motion.accelerationAt(st.t + 0.5 * st.hT) - trialForce(st, st.P);
+}
+
+/** Motor-curve event value for drive d at the trial end (> 0: its speed left the curve's piece). */
+export function motorPieceValue(st: ChainStepper, d: DriveState): number {
+  const w = st.motorSpeed(d, true);
+  return Math.max(d.lo - w, w - d.hi);
+}
+
+/**
+ * Node accelerations from the forces at the committed state: elastic torques, dashpots at the
+ * last step's mean rate, motors, slipping belts and a slipping jam, over the node's inertia.
+ */
+export function updateAccelerations(st: ChainStepper, h: number): void {
+  const { n, m, tq, cEff, acc, jeff, dphi, P } = st;
+  acc.fill(0);
+  for (let e = 0; e < m; e++) {
+    const T = tq[e] + (h > 0 ? (cEff[e] * (dphi[e + 1] - dphi[e])) / h : 0);
+    acc[e] += T;
+    acc[e + 1] -= T;
+  }
+  for (let j = 0; j < st.drives.length; j++) {
+    const d = st.drives[j];
+    acc[d.node] += d.stuck ? motorTorque(d, st.v[d.node]) : d.sigma * d.beltSlipTorque!;
+  }
+  if (st.jam !== 0) acc[P] -= st.jam * st.sys.stop.torqueCapacity!;
+  for (let i = 0; i < n; i++) acc[i] = jeff[i] > 0 ? acc[i] / jeff[i] : 0;
+  if (st.jam === 0) acc[P] = st.motion.accelerationAt(st.t - 0.5 * h);
+}
+
+/** Node i's torque averaged over the trial step as the trapezoidal rule takes it (elements, dashpots, motors), N·m. */
+export function meanForce(st: ChainStepper, i: number): number {
+  const { m, laws, cEff, hT: h } = st;
+  let F = 0;
+  const el = (e: number) => 0.5 * (st.tq[e] + laws[e].torque(st.thetaT[e])) + (cEff[e] * (st.thetaT[e] - st.theta[e])) / h;
+  if (i > 0) F -= el(i - 1);
+  if (i < m) F += el(i);
+  for (let j = 0; j < st.drives.length; j++) {
+    const d = st.drives[j];
+    if (d.node !== i) continue;
+    F += d.stuck ? d.base + 0.5 * d.slope * (st.vT[i] + st.v[i]) : d.sigma * d.beltSlipTorque!;
+  }
+  return F;
+}
+
+/** Total mechanical energy at the committed state: kinetic + strain, J. */
+export function chainEnergy(st: ChainStepper): number {
+  let E = 0;
+  for (let i = 0; i < st.n; i++) E += 0.5 * st.jeff[i] * st.v[i] * st.v[i];
+  for (const d of st.drives) if (!d.stuck) E += 0.5 * d.rotorInertia * d.vR * d.vR;
+  for (let e = 0; e < st.m; e++) E += st.laws[e].energy(st.theta[e]);
+  return E;
+}
