@@ -53,7 +53,8 @@ describe('renderReport', () => {
         show(g.shearYield, 'stress', u),
         sig(r.yieldRatio),
         describePiece(g, u),
-        ...(r.verdict === 'elastic' ? [`${sig(100 * r.yieldRatio)} %`] : []),
+        ...(r.verdict === 'elastic' ? [`${sig(100 * r.verdictYieldRatio)} %`] : []),
+        ...(r.verdictBasis === 'dynamic model' ? [sig(r.verdictYieldRatio), describePiece(r.verdictGoverning.piece, u)] : []),
       ];
       const summary = section(md, 'Summary');
       for (const e of expected) expect(summary, `${name}: ${e}`).toContain(e);
@@ -61,7 +62,7 @@ describe('renderReport', () => {
       // uncertainty run, the incident's date, the machine's or the material's name.
       const plastic = p.sides.flatMap((s) => [show(s.energy, 'energy', u), show(s.fractureEnergy, 'energy', u), show(s.peakTorque, 'torque', u), show(s.permanentTwist, 'angle', u), ...s.pieces.map((x) => describePlasticPiece(x, u))]);
       const sure = r.uncertainty ? [String(r.uncertainty.samples), sig(100 * r.uncertainty.yieldProbability, 3)] : [];
-      const context = [r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[g.piece.segment.material].name, String(r.warnings.length), show(p.peakTorque, 'torque', u)];
+      const context = [r.verdictReason, r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[g.piece.segment.material].name, String(r.warnings.length), show(p.peakTorque, 'torque', u)];
       const allowed = new Set([...expected, ...plastic, ...sure, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
       for (const n of summary.replace(/side [AB]/g, '').replace(/a yield ratio of 1\b/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the summary`).toContain(n);
     }

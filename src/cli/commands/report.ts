@@ -69,7 +69,7 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
   const lines = [`Wrote the report ${written.folder}/`, ...files.map((f) => `  ${f.path}`)];
   lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
   lines.push(`Open ${written.folder}/report.html`);
-  lines.push(`Verdict (elastic energy method): ${verdictSentence(results)}`);
+  lines.push(`Verdict (${results.verdictBasis === 'dynamic model' ? 'dynamic model' : 'elastic energy method'}): ${verdictSentence(results, true)}`);
   lines.push(`Verdict: ${overallVerdictSentence(results)}`);
   io.out(lines.join('\n') + '\n');
 }

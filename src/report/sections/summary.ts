@@ -20,12 +20,16 @@ export function verdictInPlainWords(r: Results): string {
   if (r.verdict === 'yielded' && p.verdict === 'yielded') {
     const side = p.sides.reduce((a, b) => (b.permanentTwist > a.permanentTwist ? b : a));
     const ms = p.sides.find((s) => s.side === p.mostStrained.side)!.pieces[p.mostStrained.index];
-    return `The shaft cannot have stayed elastic: the calculated elastic stress is ${sig(r.yieldRatio)} times what its material takes before it yields. Past yield the torque is capped at ${show(p.peakTorque, 'torque', u)}, and the shaft is left with a permanent twist of ${show(side.permanentTwist, 'angle', u)} on side ${side.side}, most of it in ${describePlasticPiece(ms, u)}; no fracture is predicted. ${inspect}`;
+    return `The shaft cannot have stayed elastic: the calculated elastic stress is ${sig(r.verdictYieldRatio)} times what its material takes before it yields. Past yield the torque is capped at ${show(p.peakTorque, 'torque', u)}, and the shaft is left with a permanent twist of ${show(side.permanentTwist, 'angle', u)} on side ${side.side}, most of it in ${describePlasticPiece(ms, u)}; no fracture is predicted. ${inspect}`;
   }
   if (r.verdict === 'yielded') {
-    return `The net section of the shaft can have stayed elastic, but the calculated stress at the stress raiser (kt) of ${describePiece(r.governing.piece, u)} is ${sig(r.yieldRatio)} times its shear yield: expect local yielding there, with no measurable permanent twist. ${inspect}`;
+    return `The net section of the shaft can have stayed elastic, but the calculated stress at the stress raiser (kt) of ${describePiece(r.verdictGoverning.piece, u)} is ${sig(r.verdictYieldRatio)} times its shear yield: expect local yielding there, with no measurable permanent twist. ${inspect}`;
   }
-  return `The shaft can have stayed elastic: the highest calculated stress is ${sig(100 * r.yieldRatio)} % of what its material takes before it yields. The method puts all the energy into the shaft, so it leans to the high side; keys, hubs and couplings still need their own inspection.`;
+  const lean =
+    r.verdictBasis === 'dynamic model'
+      ? 'by the dynamic model, which follows the stop, the drive and any slip in time'
+      : 'by the energy method, which puts all the energy into the shaft and so leans to the high side';
+  return `The shaft can have stayed elastic: the highest calculated stress is ${sig(100 * r.verdictYieldRatio)} % of what its material takes before it yields, ${lean}; keys, hubs and couplings still need their own inspection.`;
 }
 
 /** One paragraph: what stopped, how fast, the energy, the torque, the stress; then the overall verdict. */
@@ -46,13 +50,18 @@ export const summarySection: ReportSection = {
     const material = r.case.materials[g.piece.segment.material].name;
     const critical = `The most critical piece is ${describePiece(g, u)}: its stress of ${show(g.shearStress, 'stress', u)} against a shear yield of ${show(g.shearYield, 'stress', u)} (${material}) is ${sig(r.yieldRatio)} × yield.`;
     const warned = r.warnings.length > 0 ? ` The model carries ${r.warnings.length} warning${r.warnings.length === 1 ? '' : 's'} about its fit to this case (see the method).` : '';
-    const paragraph = escapeMarkdown([opening, ...sides, critical].join(' ')) + warned;
+    const dynamic =
+      r.verdictBasis === 'dynamic model'
+        ? `${r.verdictReason} It gives a peak yield ratio of ${sig(r.verdictYieldRatio)} in ${describePiece(r.verdictGoverning.piece, u)} (see After the stop: the torsional chain in time).`
+        : '';
+    const paragraph = escapeMarkdown([opening, ...sides, critical, dynamic].filter((x) => x).join(' ')) + warned;
     const chance = r.uncertainty ? chanceOfYieldWords(r.uncertainty) : '';
     const sure = r.uncertainty ? ` Over the case's tolerances (see How sure the finding is), ${chance[0].toLowerCase()}${chance.slice(1)}.` : '';
     const verdict = [
       `> **Verdict: ${escapeMarkdown(overallVerdictSentence(r))}**`,
       `> ${escapeMarkdown(verdictInPlainWords(r) + sure)}`,
       `> ${escapeMarkdown(`Elastic energy method: ${verdictSentence(r)}`)}`,
+      ...(r.verdictBasis === 'dynamic model' ? [`> ${escapeMarkdown(`Dynamic model: ${verdictSentence(r, true)}`)}`] : []),
     ].join('\n>\n');
     return `${paragraph}\n\n${verdict}`;
   },
