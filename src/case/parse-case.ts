@@ -57,9 +57,11 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
     r.fail('E_REFERENCE', ['stop', 'at'], `no station is named "${stopAt}"; give one of ${stations.map((s) => `"${s.name}"`).join(', ')}`);
   }
   if (r.problems.length === 0 && stopAt !== undefined) {
-    const loaded = stations.filter((s) => s.name !== stopAt && s.parts.length > 0);
+    // Parts at the stop's own position release nothing into the shaft (see buildShaftModel).
+    const stopPosition = stations.find((s) => s.name === stopAt)?.at;
+    const loaded = stations.filter((s) => s.name !== stopAt && s.parts.length > 0 && (stopPosition === undefined || Math.abs(s.at - stopPosition) > 1e-9));
     if (loaded.length === 0) {
-      r.fail('E_MODEL', ['stations'], 'no station other than the one that stopped carries parts, so nothing drives the shaft; add the rotating parts (rotor, pulley, flywheel) to their stations');
+      r.fail('E_MODEL', ['stations'], 'no station away from the one that stopped carries parts, so nothing drives the shaft; add the rotating parts (rotor, pulley, flywheel) to their stations');
     }
   }
   if (r.problems.length === 0) {

@@ -20,7 +20,12 @@ export interface TorsionLaw {
   hardeningModulus: number;
 }
 
-const polar = (l: TorsionLaw) => (Math.PI / 2) * (l.outerRadius ** 4 - l.innerRadius ** 4);
+// Plain products rather than `**`: these run in the Monte Carlo's inner loop (npm run bench).
+const fourth = (x: number) => {
+  const x2 = x * x;
+  return x2 * x2;
+};
+const polar = (l: TorsionLaw) => (Math.PI / 2) * (fourth(l.outerRadius) - fourth(l.innerRadius));
 const yieldStrain = (l: TorsionLaw) => l.shearYield / l.shearModulus;
 
 /** Elastic torsional rigidity G·J_p, N·m². */

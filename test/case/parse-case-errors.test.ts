@@ -102,7 +102,12 @@ describe('parseCase reports each mistake with file:line:column, the field path a
 
   it('nothing turning is a modelling error', () => {
     const text = base.replace(/    parts:[\s\S]*$/, '');
-    expect(problems(text).join('\n')).toMatch(/stations: no station other than the one that stopped carries parts/);
+    expect(problems(text).join('\n')).toMatch(/stations: no station away from the one that stopped carries parts/);
+  });
+
+  it('parts only at the stop\'s own position are a modelling error too, not a crash', () => {
+    const text = base.replace('    at: 800 mm', '    at: 0 mm');
+    expect(problems(text).join('\n')).toMatch(/stations: no station away from the one that stopped carries parts/);
   });
 
   it('reports every mistake at once', () => {
