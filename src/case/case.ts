@@ -185,6 +185,11 @@ export interface Analysis {
     seed: number;
     /** Coefficient of variation of material strengths, fraction (default 0.07). */
     strengthScatter: number;
+    /**
+     * Samples through the dynamic model where the verdict stands on it (default 40, 0: none). Each
+     * costs a full time solution, so the count is small and stated with the result.
+     */
+    dynamicSamples: number;
   };
   /** Design factor N on shear yield a replacement must keep under a repeat of the incident; default 1.5. */
   designFactor: number;

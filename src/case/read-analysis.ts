@@ -9,6 +9,7 @@ const ANALYSIS_KEYS = [
   'damping_ratio',
   'duration',
   'samples',
+  'dynamic_samples',
   'seed',
   'strength_scatter',
   'design_factor',
@@ -24,6 +25,9 @@ const HARDENING: Hardening[] = ['none', 'linear'];
 /** Default coefficient of variation of strengths: a stated assumption (see README, "How sure"). */
 export const DEFAULT_STRENGTH_SCATTER = 0.07;
 
+/** Default samples through the dynamic model: about 2–4 s on a 2-core machine for the sample cases. */
+export const DEFAULT_DYNAMIC_SAMPLES = 40;
+
 /** Defaults of the engineer's choices; each is stated in the resize output as a choice to confirm. */
 export const ANALYSIS_DEFAULTS = { designFactor: 1.5, serviceFactor: 1.5, maxScale: 1.3 } as const;
 
@@ -36,6 +40,7 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
   const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
   const hardening = (r.string(['analysis', 'hardening'], { allowed: HARDENING }) ?? 'none') as Hardening;
   const samples = r.number(['analysis', 'samples'], { example: 'a whole number such as 10000', integer: true, min: 1 }) ?? 10_000;
+  const dynamicSamples = r.number(['analysis', 'dynamic_samples'], { example: 'a whole number such as 40, or 0 for none', integer: true, min: 0 }) ?? DEFAULT_DYNAMIC_SAMPLES;
   const seed = r.number(['analysis', 'seed'], { example: 'a whole number such as 42', integer: true, min: 0 }) ?? 1;
   const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, example: 'a coefficient of variation such as "7 %"' });
   const wanted = scatter !== undefined || Object.keys(r.tolerances).length > 0;
@@ -65,7 +70,7 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
     hardening,
     shaftInertia,
     dampingRatio: damping && damping.value < 1 ? damping.value : DEFAULT_DAMPING_RATIO,
-    uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER },
+    uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER, dynamicSamples },
     designFactor: factor('design_factor', 'a design factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.designFactor,
     serviceFactor: factor('service_factor', 'a service factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.serviceFactor,
     maxScale: factor('max_scale', 'the largest practical scale of the diameters, such as 1.3') ?? ANALYSIS_DEFAULTS.maxScale,

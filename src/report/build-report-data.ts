@@ -10,6 +10,8 @@ export interface ReportDataOptions {
   seed?: number;
   /** Design factor N on shear yield for what goes back in. */
   factor?: number;
+  /** Progress of the dynamic-model samples, for a terminal. */
+  onDynamicProgress?: (done: number, total: number) => void;
 }
 
 /**
@@ -18,6 +20,6 @@ export interface ReportDataOptions {
  * (`resize`'s). Pure; the report's sections and figures only read it.
  */
 export function buildReportData(c: Case, opts: ReportDataOptions = {}): ReportData {
-  const results = investigate(c, { samples: opts.samples, seed: opts.seed });
+  const results = investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress });
   return { results, resize: resizeCase(c, results, { factor: opts.factor }) };
 }

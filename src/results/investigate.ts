@@ -1,7 +1,7 @@
 import type { Case } from '../case/case.ts';
 import type { Metrics } from '../uncertainty/monte-carlo.ts';
 import { sampleMetrics } from '../uncertainty/sample-engine.ts';
-import { runUncertainty } from '../uncertainty/uncertainty.ts';
+import { runDynamicUncertainty, runUncertainty } from '../uncertainty/uncertainty.ts';
 import { judgeByInterval } from './twist-findings.ts';
 import { analyseCase } from './analyse-case.ts';
 import type { Results } from './results.ts';
@@ -11,6 +11,8 @@ export interface InvestigateOptions {
   /** Monte Carlo samples; 0 switches the uncertainty run off. */
   samples?: number;
   seed?: number;
+  /** Called after each dynamic-model sample, so a terminal can show progress (the core keeps no clock). */
+  onDynamicProgress?: (done: number, total: number) => void;
 }
 
 /** The numbers one Monte Carlo sample keeps, read from a full run (the sampling engine must agree with it). */
@@ -24,6 +26,12 @@ export function metricsOf(r: Results): Metrics {
   };
 }
 
+/** A dynamic-model sample: the verdict's yield ratio, the dynamic peak torque and stress. */
+export function dynamicMetrics(k: Case): Metrics {
+  const r = analyseCase(k);
+  return { yieldRatio: r.verdictYieldRatio, maxShearStress: r.dynamic.maxShearStress, peakTorque: r.dynamic.peakTorque };
+}
+
 /**
  * The whole investigation of a case: the single run, and where the case states tolerances, how
  * sure its finding is. Pure.
@@ -33,7 +41,11 @@ export function investigate(c: Case, opts: InvestigateOptions = {}): Results {
   const u = c.analysis.uncertainty;
   const samples = opts.samples ?? u.samples;
   if (!u.wanted || samples === 0) return results;
-  const uncertainty = runUncertainty(c, sampleMetrics, { samples, seed: opts.seed ?? u.seed, strengthScatter: u.strengthScatter });
+  const settings = { samples, seed: opts.seed ?? u.seed, strengthScatter: u.strengthScatter };
+  const uncertainty = runUncertainty(c, sampleMetrics, settings);
+  if (results.verdictBasis === 'dynamic model' && u.dynamicSamples > 0) {
+    uncertainty.dynamic = runDynamicUncertainty(c, dynamicMetrics, { ...settings, samples: u.dynamicSamples }, opts.onDynamicProgress);
+  }
   const twist = results.observedFindings.twist.map((f, k) => judgeByInterval(f, uncertainty.observed[k]?.speedInterval ?? null));
   return { ...results, uncertainty, observedFindings: { ...results.observedFindings, twist } };
 }

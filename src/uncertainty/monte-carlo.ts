@@ -31,7 +31,14 @@ export interface Samples {
  * seed gives the same numbers. A draw that would make a size or strength non-positive is held at
  * 1 % of its nominal (the spreads are narrow, so this is a guard, not a model).
  */
-export function monteCarlo(c: Case, inputs: readonly UncertainInput[], engine: Engine, samples: number, seed: number): Samples {
+export function monteCarlo(
+  c: Case,
+  inputs: readonly UncertainInput[],
+  engine: Engine,
+  samples: number,
+  seed: number,
+  onProgress?: (done: number, total: number) => void,
+): Samples {
   const z = normalSource(seededRandom(seed));
   const out: Samples = {
     yieldRatio: new Float64Array(samples),
@@ -47,6 +54,7 @@ export function monteCarlo(c: Case, inputs: readonly UncertainInput[], engine: E
       k = input.apply(k, Math.max(v, 0.01 * input.nominal));
     }
     const m = engine(k);
+    onProgress?.(i + 1, samples);
     out.yieldRatio[i] = m.yieldRatio;
     out.maxShearStress[i] = m.maxShearStress;
     out.peakTorque[i] = m.peakTorque;

@@ -38,6 +38,34 @@ export interface Uncertainty {
   observed: { between: [string, string]; speedInterval: [number, number] | null; recordedInside: boolean; unexplainedShare: number }[];
   /** Raw yield-ratio samples, for the report's histogram. */
   yieldRatioSamples: Float64Array;
+  /**
+   * Where the verdict stands on the dynamic model: the same inputs drawn (same seed) through the
+   * dynamic model, fewer samples since each is a full time solution.
+   */
+  dynamic?: DynamicUncertainty;
+}
+
+export interface DynamicUncertainty {
+  samples: number;
+  /** Share of samples whose peak yield ratio over the window is 1 or more. */
+  yieldProbability: number;
+  percentiles: { yieldRatio: [number, number, number]; peakTorque: [number, number, number]; maxShearStress: [number, number, number] };
+}
+
+/**
+ * The dynamic model's share of the uncertainty run: the case's inputs drawn `samples` times (same
+ * seed as the main run) through `engine`; `onProgress(done, total)` lets a terminal show progress.
+ */
+export function runDynamicUncertainty(c: Case, engine: Engine, opts: UncertaintyOptions, onProgress?: (done: number, total: number) => void): DynamicUncertainty {
+  const { inputs } = uncertainInputs(c, opts.strengthScatter);
+  const s = monteCarlo(c, inputs, engine, opts.samples, opts.seed, onProgress);
+  let yielded = 0;
+  for (const y of s.yieldRatio) if (y >= 1) yielded++;
+  return {
+    samples: opts.samples,
+    yieldProbability: yielded / opts.samples,
+    percentiles: { yieldRatio: p5p50p95(s.yieldRatio), peakTorque: p5p50p95(s.peakTorque), maxShearStress: p5p50p95(s.maxShearStress) },
+  };
 }
 
 /**

@@ -115,5 +115,18 @@ function uncertaintyJson(u: Uncertainty): Record<string, unknown> {
       ...(s.twistLow !== undefined ? { permanent_twist_low_rad: s.twistLow, permanent_twist_high_rad: s.twistHigh } : {}),
     })),
     observed: u.observed.map((o) => ({ between: o.between, speed_interval_rad_s: o.speedInterval, recorded_inside: o.recordedInside, unexplained_share: o.unexplainedShare })),
+    ...(u.dynamic
+      ? {
+          dynamic: {
+            samples: u.dynamic.samples,
+            yield_probability: u.dynamic.yieldProbability,
+            percentiles: {
+              yield_ratio: u.dynamic.percentiles.yieldRatio,
+              peak_torque_Nm: u.dynamic.percentiles.peakTorque,
+              max_shear_stress_Pa: u.dynamic.percentiles.maxShearStress,
+            },
+          },
+        }
+      : {}),
   };
 }

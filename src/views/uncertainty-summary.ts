@@ -49,12 +49,18 @@ export function renderUncertaintyLines(r: Results): string[] {
   const [s5, , s95] = u.percentiles.maxShearStress;
   const [t5, , t95] = u.percentiles.peakTorque;
   const out = [
-    `How sure (${u.samples} samples, seed ${u.seed}):`,
+    `How sure (${u.samples} samples through the energy method and the balance past yield, seed ${u.seed}):`,
     `  yield ratio      ${sig(y50)} (5–95 %: ${sig(y5)} to ${sig(y95)}); single run ${sig(r.yieldRatio)}`,
     `  peak stress      ${show(s5, 'stress', units)} to ${show(s95, 'stress', units)}`,
     `  peak torque      ${show(t5, 'torque', units)} to ${show(t95, 'torque', units)}`,
     `  chance of yield  ${sig(100 * u.yieldProbability, 3)} %`,
   ];
+  if (u.dynamic) {
+    const [d5, d50, d95] = u.dynamic.percentiles.yieldRatio;
+    out.push(
+      `  dynamic model (${u.dynamic.samples} samples, the verdict's basis): yield ratio ${sig(d50)} (5–95 %: ${sig(d5)} to ${sig(d95)}), chance of yield ${sig(100 * u.dynamic.yieldProbability, 3)} %`,
+    );
+  }
   const pt = u.percentiles.permanentTwist;
   if (pt && pt[2] > 0) out.splice(4, 0, `  permanent twist  ${show(pt[1], 'angle', units)} (5–95 %: ${show(pt[0], 'angle', units)} to ${show(pt[2], 'angle', units)})`);
   u.observed.forEach((o, k) => {

@@ -18,6 +18,7 @@ import { overallVerdictSentence } from '../../views/plastic-lines.ts';
 import { verdictSentence } from '../../views/summary.ts';
 import type { Io } from '../main.ts';
 import { version } from '../version.ts';
+import { terminalProgress } from '../progress.ts';
 
 export interface ReportOptions {
   template?: string;
@@ -33,7 +34,7 @@ export interface ReportOptions {
 export async function reportCommand(path: string, opts: ReportOptions, io: Io, now: Date): Promise<void> {
   const loaded = loadCase(path);
   // Everything the report shows is computed here, once; rendering only reads it.
-  const data = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor });
+  const data = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances') });
   const { results } = data;
   const template = readTemplate(opts.template);
   const photos = readPhotos(loaded.file, loaded.text, loaded.case.observed.photos);

@@ -32,6 +32,13 @@ export const howSureSection: ReportSection = {
       '**The ranges**',
       markdownTable(uncertaintyPercentilesTable(r)!),
       `**Chance of yield:** ${escapeMarkdown(`${chanceOfYieldWords(u)}. The single run gives a yield ratio of ${sig(r.yieldRatio)}; over the tolerances the median is ${sig(y50)} and 90 % of the samples lie between ${sig(y5)} and ${sig(y95)}.`)}`,
+      ...(u.dynamic
+        ? [
+            `**Through the dynamic model:** ${escapeMarkdown(
+              `the verdict stands on the dynamic model, so the same inputs were also drawn ${u.dynamic.samples} times (same seed; fewer samples, since each is a full time solution; analysis.dynamic_samples) through it. Its peak yield ratio has a median of ${sig(u.dynamic.percentiles.yieldRatio[1])}, 90 % of the samples between ${sig(u.dynamic.percentiles.yieldRatio[0])} and ${sig(u.dynamic.percentiles.yieldRatio[2])}; ${sig(100 * u.dynamic.yieldProbability, 3)} % of them reach 1 or more. With so few samples the tails are rough.`,
+            )}`,
+          ]
+        : []),
       ...observedWords(r, u),
     ];
     if (u.sensitivity.length > 0) {
