@@ -1,25 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { CaseError } from '../../src/case/case-error.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
+import { lineOf, problems } from './problems.ts';
 
 const base = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 'utf8');
-
-/** The problems parseCase reports for `text`, as the CLI prints them. */
-function problems(text: string): string[] {
-  try {
-    parseCase(text, 'case.yaml');
-  } catch (e) {
-    if (e instanceof CaseError) return e.message.split('\n');
-    throw e;
-  }
-  throw new Error('expected a CaseError');
-}
-
-/** Line number (1-based) of the first line of `text` containing `needle`. */
-function lineOf(text: string, needle: string): number {
-  return text.split('\n').findIndex((l) => l.includes(needle)) + 1;
-}
 
 describe('parseCase reports each mistake with file:line:column, the field path and an example', () => {
   it('accepts the fixture', () => {
