@@ -1,5 +1,8 @@
 import type { SideName } from '../model/shaft-model.ts';
 import type { Results } from '../results/results.ts';
+import { dynamicLimiterSlip } from './dynamic-limiter-slip.ts';
+
+export type SlipMethod = 'energy method' | 'dynamic model';
 
 /** What a torque limiter set at `setting` does in a repeat of the incident. */
 export interface LimiterSlip {
@@ -11,13 +14,27 @@ export interface LimiterSlip {
   unlimitedTorque: number;
   /** Kinetic energy of the parts behind the limiter, J. */
   energy: number;
-  /** Energy stored in the twisted run at the peak, J. */
+  /**
+   * Energy method: energy stored in the twisted run at the peak, J. Dynamic model: energy left in
+   * the model (kinetic and elastic) at the end of the simulated window, J.
+   */
   storedEnergy: number;
   /** Energy the limiter dissipates while it slips, J. */
   slipEnergy: number;
   /** Angle the limiter slips through, rad. */
   slipAngle: number;
+  /** Which method gave the slip energy, angle and peak torque. */
+  slipMethod: SlipMethod;
+  /** How, in words. */
   method: string;
+  /** Dynamic model: the segment (index into `shaft.segments`) the limiter was put in. */
+  segment?: number;
+  /** Dynamic model: the limited side's highest yield ratio in the rerun. */
+  yieldRatio?: number;
+  /** Dynamic model: energy its damping took in the rerun, J. */
+  dampingWork?: number;
+  /** Why the energy method was kept where the verdict stands on the dynamic model. */
+  note?: string;
 }
 
 /**
@@ -42,12 +59,39 @@ export interface LimiterPlace {
 }
 
 /**
- * A limiter's slip in a repeat incident. This is the seam for the dynamics model: when Results
- * carries a time-domain result, its slip energy and angle replace the energy method here, and
- * nothing that calls this function changes. Parts at stations nearer the stop than the limiter
- * still drive the shaft unlimited; their energy is not counted as the limiter's.
+ * A limiter's slip in a repeat incident. Where the case's verdict stands on the dynamic model
+ * (a drive, belt, stop ramp, several masses), the limiter is put into the case as a slip element
+ * and the changed case rerun (`dynamicLimiterSlip`); where the energy method is exact, or
+ * `energyOnly` is asked (the report's sweep), the energy method. When no segment between the
+ * limiter's station and the stop can hold a limiter, the energy method is kept and `note` says so.
  */
-export function limiterSlip(r: Results, place: LimiterPlace, setting: number): LimiterSlip {
+export function limiterSlip(r: Results, place: LimiterPlace, setting: number, energyOnly = false): LimiterSlip {
+  const energy = energyLimiterSlip(r, place, setting);
+  if (energyOnly || r.verdictBasis !== 'dynamic model') return energy;
+  const d = dynamicLimiterSlip(r.case, place.station, place.side, setting);
+  if (!d) {
+    return { ...energy, note: `No shaft segment between "${place.station}" and the stop can hold a limiter (each holds a station with parts, the stop or a shear pin), so the slip is the energy method's although the verdict stands on the dynamic model.` };
+  }
+  const seg = r.case.shaft.segments[d.segment];
+  const unlimited = r.dynamic.sides.find((s) => s.side === place.side)?.dynamicPeakTorque ?? energy.unlimitedTorque;
+  return {
+    setting,
+    energy: energy.energy,
+    unlimitedTorque: unlimited,
+    peakTorque: d.peakTorque,
+    storedEnergy: d.energyLeft,
+    slipEnergy: d.slipEnergy,
+    slipAngle: d.slipAngle,
+    slipMethod: 'dynamic model',
+    method: `dynamic model: the limiter put into ${seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`} as a slip element and the changed case rerun in time`,
+    segment: d.segment,
+    yieldRatio: d.yieldRatio,
+    dampingWork: d.dampingWork,
+  };
+}
+
+/** The energy method's limiter slip. Parts nearer the stop than the limiter still drive the shaft unlimited; their energy is not the limiter's. */
+export function energyLimiterSlip(r: Results, place: LimiterPlace, setting: number): LimiterSlip {
   const side = r.sides.find((s) => s.side === place.side)!;
   const stations = r.case.stations;
   const stop = stations.find((s) => s.name === r.case.stop.at)!;
@@ -59,5 +103,5 @@ export function limiterSlip(r: Results, place: LimiterPlace, setting: number): L
     .filter((p) => Math.max(Math.abs(p.piece.start - stop.at), Math.abs(p.piece.end - stop.at)) <= reach + 2e-9)
     .reduce((sum, p) => sum + p.twist / p.torque, 0);
   const slip = energyMethodSlip(energy, compliance, setting, side.peakTorque);
-  return { setting, energy, ...slip, method: 'energy method: elastic twist up to the slip torque, the rest dissipated in slip' };
+  return { setting, energy, ...slip, slipMethod: 'energy method', method: 'energy method: elastic twist up to the slip torque, the rest dissipated in slip' };
 }

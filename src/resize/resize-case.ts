@@ -52,18 +52,20 @@ export function resizeCase(c: Case, results: Results, options: ResizeOptions = {
     ratedSpeed: wheels,
     guarding: guardingRecommendations(wheels),
     stockSeries: STOCK_SERIES[c.units].text,
-    notes: resizeNotes(designFactor, STOCK_SERIES[c.units].text),
+    notes: resizeNotes(results, limiter.slip.slipMethod === 'dynamic model', designFactor, STOCK_SERIES[c.units].text),
     cautions: results.cautions,
   };
 }
 
-function resizeNotes(designFactor: number, stockSeries: string): string[] {
+function resizeNotes(results: Results, dynamicSlip: boolean, designFactor: number, stockSeries: string): string[] {
   return [
     'Every option is checked against a repeat of the recorded incident by rerunning the changed case through the same elastic energy method; its limits (instantaneous stop, several stations on a side) apply to every option.',
     `The design factor N on shear yield is the engineer's choice (default 1.5, set by analysis.design_factor or --factor; here ${designFactor}); confirm it against the site's rules.`,
     `The service factor on the running torque (default 1.5) sets a torque limiter's lowest setting. Typical values come from the coupling or limiter maker's tables, which rate the driven machine's load (uniform, moderate shock, heavy shock) and the driver, from about 1 for uniform loads to 2 or more for heavy shock (from memory, verify against the maker's table).`,
     `Diameters are rounded up to stock sizes (${stockSeries}). A changed diameter means the bearings, hubs, keyways and fits must be rechecked.`,
     'A stiffer shaft passes more torque in an energy-limited stop (T = √(2E/C) and C falls as 1/d⁴, so T grows as d²): keys, hubs and couplings must be rechecked at the new peak torque.',
-    "Stiffness and natural-frequency changes are the energy method's single-mass estimate √(k/J); the dynamics model replaces them where it is present. The limiter's slip energy and angle are from the energy method.",
+    results.verdictBasis === 'dynamic model'
+      ? `The verdict stands on the dynamic model, so the natural-frequency changes are the ratio of the side's lowest natural frequency in the dynamic models of the option and of the present case${dynamicSlip ? ", and the limiter's slip energy, slip angle and peak torque come from the dynamic model with the limiter put into the case as a slip element (the report's sweep of settings stays the energy method's)" : "; the limiter's slip energy and angle stay the energy method's (see the limiter option for why)"}. Stiffness and peak-torque ratios are the energy method's.`
+      : "Stiffness and natural-frequency changes are the energy method's single-mass estimate √(k/J), and the limiter's slip energy and angle are the energy method's: the energy method is exact for this case.",
   ];
 }

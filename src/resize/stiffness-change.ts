@@ -9,24 +9,35 @@ export interface StiffnessChange {
   frequency: number;
   /** New repeat-incident peak torque over the present. */
   peakTorque: number;
+  /** Which method gave the frequency. */
+  frequencyMethod: 'energy method' | 'dynamic model';
   /** How the frequency was found, for the output. */
   method: string;
 }
 
 /**
- * The change of one side between the present case and an option's rerun. The frequency is the
- * energy method's single-mass estimate ω_n = √(k/J) with the parts' inertia unchanged (Den Hartog,
- * Mechanical Vibrations; from memory, confident), so it scales as √(k_new/k_old). This is the seam
- * where the dynamics model's natural frequencies replace the estimate when Results carries them.
+ * The change of one side between the present case and an option's rerun. Where the present
+ * case's verdict stands on the dynamic model, the frequency is the ratio of the side's lowest
+ * natural frequency with the stop held in the two dynamic models (both reruns compute them
+ * anyway). Where the energy method is exact, it is the single-mass estimate ω_n = √(k/J) with the
+ * parts' inertia unchanged (Den Hartog, Mechanical Vibrations; from memory, confident), so it
+ * scales as √(k_new/k_old).
  */
 export function stiffnessChange(present: Results, option: Results, side: SideName): StiffnessChange {
   const before = present.sides.find((s) => s.side === side)!;
   const after = option.sides.find((s) => s.side === side)!;
   const stiffness = before.compliance / after.compliance;
-  return {
-    stiffness,
-    frequency: Math.sqrt(stiffness),
-    peakTorque: after.peakTorque / before.peakTorque,
-    method: 'energy method, single-mass estimate √(k/J)',
-  };
+  const peakTorque = after.peakTorque / before.peakTorque;
+  const f0 = lowestFrequency(present, side);
+  const f1 = lowestFrequency(option, side);
+  if (present.verdictBasis === 'dynamic model' && f0 !== undefined && f1 !== undefined) {
+    return { stiffness, frequency: f1 / f0, peakTorque, frequencyMethod: 'dynamic model', method: `dynamic model, side ${side}'s lowest natural frequency with the stop held` };
+  }
+  return { stiffness, frequency: Math.sqrt(stiffness), peakTorque, frequencyMethod: 'energy method', method: 'energy method, single-mass estimate √(k/J)' };
+}
+
+/** A side's lowest natural frequency in the dynamic model, Hz; undefined if the side has no mode. */
+export function lowestFrequency(r: Results, side: SideName): number | undefined {
+  const f = r.dynamic.frequencies.filter((m) => m.side === side).map((m) => m.frequency);
+  return f.length > 0 ? Math.min(...f) : undefined;
 }

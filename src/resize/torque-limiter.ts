@@ -69,16 +69,18 @@ export function torqueLimiter(c: Case, r: Results, running: RunningTorque | unde
   const slip = limiterSlip(r, place, max);
   // Pieces between the limiter and the stop carry the held torque; any others keep the incident's.
   const reach = Math.abs(at.at - stop.at) + 1e-9;
-  const yieldRatio = Math.max(
+  const energyYieldRatio = Math.max(
     ...sideResult.pieces.map((p) => {
       const inRun = Math.max(Math.abs(p.piece.start - stop.at), Math.abs(p.piece.end - stop.at)) <= reach;
       return inRun ? (p.yieldRatio * slip.peakTorque) / sideResult.peakTorque : p.yieldRatio;
     }),
   );
+  const yieldRatio = slip.yieldRatio ?? energyYieldRatio;
   // Settings spaced evenly on a log scale, from well below the window to past the unlimited peak.
   const low = Math.min(max, min ?? max) / 6;
   const top = Math.max(sideResult.peakTorque, max, min ?? 0) * 1.3;
-  const sweep = Array.from({ length: SWEEP_POINTS + 1 }, (_, i) => limiterSlip(r, place, low * (top / low) ** (i / SWEEP_POINTS)));
+  // The sweep is the energy method's (a dynamic rerun at each of its points would be too slow).
+  const sweep = Array.from({ length: SWEEP_POINTS + 1 }, (_, i) => limiterSlip(r, place, low * (top / low) ** (i / SWEEP_POINTS), true));
   return {
     station,
     side,

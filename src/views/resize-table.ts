@@ -21,7 +21,7 @@ export function renderResize(z: ResizeResult): string {
   out.push(running ? `Running torque ${show(running.torque, 'torque', u)}: ${running.source}.` : 'Running torque: unknown; the case gives no drive power or running torque.');
   out.push('');
   out.push(...textTable([keys.map((k) => ROW_HEADINGS[k]), ...rows.map((row) => keys.map((k) => row[k]))]));
-  out.push('Running factor: shear yield over the stress under the running torque, static and with kt. Stiffness and natural frequency: new over present, energy-method single-mass estimate.');
+  out.push('Running factor: shear yield over the stress under the running torque, static and with kt. Stiffness and natural frequency: new over present; the frequency is the dynamic model\'s lowest of the side where the verdict stands on it, else the energy method\'s single-mass estimate.');
 
   const section = (title: string, lines: string[], table: string[] = []) => {
     out.push('', title);

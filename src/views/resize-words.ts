@@ -83,9 +83,12 @@ export function limiterSentences(z: ResizeResult): string[] {
   const s = o.slip;
   out.push(
     s.slipEnergy > 0
-      ? `In a repeat incident at ${show(s.setting, 'torque', u)} the peak torque is held to the setting (from ${show(s.unlimitedTorque, 'torque', u)}); the limiter slips through ${show(s.slipAngle, 'angle', u)} and dissipates ${show(s.slipEnergy, 'energy', u)} of the ${show(s.energy, 'energy', u)} behind it (${s.method}; the dynamics model replaces this where present).`
-      : `At ${show(s.setting, 'torque', u)} the limiter would not slip in a repeat of this incident: the peak torque ${show(s.unlimitedTorque, 'torque', u)} stays below the setting.`,
+      ? s.slipMethod === 'dynamic model'
+        ? `In a repeat incident at ${show(s.setting, 'torque', u)} the peak torque between the limiter and the stop is ${show(s.peakTorque, 'torque', u)} (from ${show(s.unlimitedTorque, 'torque', u)}); the limiter slips through ${show(s.slipAngle, 'angle', u)} and dissipates ${show(s.slipEnergy, 'energy', u)}; the parts behind it had ${show(s.energy, 'energy', u)}, and the drive can add more while it slips (${s.method}).`
+        : `In a repeat incident at ${show(s.setting, 'torque', u)} the peak torque is held to the setting (from ${show(s.unlimitedTorque, 'torque', u)}); the limiter slips through ${show(s.slipAngle, 'angle', u)} and dissipates ${show(s.slipEnergy, 'energy', u)} of the ${show(s.energy, 'energy', u)} behind it (${s.method}).`
+      : `At ${show(s.setting, 'torque', u)} the limiter would not slip in a repeat of this incident: the peak torque ${show(s.peakTorque, 'torque', u)} stays below the setting (${s.method}).`,
   );
+  if (s.note) out.push(s.note);
   if (o.unlimitedStations.length > 0) out.push(`The parts at ${o.unlimitedStations.map((n) => `"${n}"`).join(', ')} lie between the limiter and the stop and still drive the shaft unlimited.`);
   for (const s2 of o.otherSides) if (s2.yieldRatio * z.designFactor > 1) out.push(`Side ${s2.side} (yield ratio ${sig(s2.yieldRatio)}) is not protected by this limiter; it needs its own.`);
   return out;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
-import { energyMethodSlip, limiterSlip } from '../../src/resize/limiter-slip.ts';
+import { energyLimiterSlip, energyMethodSlip, limiterSlip } from '../../src/resize/limiter-slip.ts';
 import { caseText, rel } from '../helpers/layout.ts';
 
 describe('a torque limiter\'s slip in a repeat incident, by the energy method', () => {
@@ -34,5 +34,17 @@ describe('a torque limiter\'s slip in a repeat incident, by the energy method', 
     expect(rel(s.slipEnergy, 1250 - 500 ** 2 / (2 * k))).toBeLessThan(1e-12);
     expect(rel(s.unlimitedTorque, 50 * Math.sqrt(1 * k))).toBeLessThan(1e-12);
     expect(s.method).toMatch(/energy method/);
+  });
+
+  it('where the energy method is exact, the limiter keeps its numbers and says so', () => {
+    const text = caseText({ rpm: 1, segments: [[500, 40, 0]], stations: [['disc', 0, 1], ['jam', 500, 0]], stop: 'jam' }).replace('speed: 1 rpm', 'speed: 50 rad/s');
+    const r = analyseCase(parseCase(text));
+    expect(r.verdictBasis).toBe('energy method');
+    const s = limiterSlip(r, { station: 'disc', side: 'A' }, 500);
+    expect(s.slipMethod).toBe('energy method');
+    expect(s).toEqual(energyLimiterSlip(r, { station: 'disc', side: 'A' }, 500));
+    const k = (79.3e9 * Math.PI * 0.04 ** 4) / 32 / 0.5;
+    expect(rel(s.slipEnergy, 1250 - 500 ** 2 / (2 * k))).toBeLessThan(1e-12);
+    expect(s.segment).toBeUndefined();
   });
 });

@@ -24,12 +24,18 @@ describe('resize --json', () => {
     expect(resize.critical_segment.reason).toMatch(/No size of/);
     for (const m of resize.materials) expect(Object.keys(m)).toEqual(expect.arrayContaining(['key', 'yield_ratio']));
     expect(resize.limiter).toMatchObject({ min_Nm: expect.any(Number), max_Nm: expect.any(Number), slip_energy_J: expect.any(Number) });
+    // The granulator's verdict stands on the dynamic model (a drive behind a belt): so do these figures.
+    expect(resize.limiter).toMatchObject({ slip_method: 'dynamic model', slip_segment: 1 });
+    expect(resize.scale_side.frequency_method).toBe('dynamic model');
     expect(resize.key).toMatchObject({ shear_stress_Pa: expect.any(Number), bearing_stress_Pa: expect.any(Number), shears_before_shaft_yields: false });
   });
 
   it('gives null for what the case does not say: the limiter\'s lower end and the key', () => {
     const { j } = json('edger-arbor-two-sides.yaml');
     expect(j.resize.limiter.min_Nm).toBeNull();
+    // One loaded station a side, instantaneous stop, no drive: the energy method is exact.
+    expect(j.resize.limiter).toMatchObject({ slip_method: 'energy method', slip_segment: null });
+    expect(j.resize.scale_side.frequency_method).toBe('energy method');
     expect(j.resize.key).toBeNull();
     expect(j.resize.running.torque_Nm).toBeNull();
   });

@@ -9,8 +9,8 @@ import { FIGURE_WIDTH } from './svg-frame.ts';
 /**
  * Repeat-incident peak torque against a torque limiter's setting, with the incident's unlimited
  * peak and the setting window (running torque × service factor to the shaft's allowable torque).
- * The points come from the resize options' limiter sweep (the energy method, or the dynamics model
- * through the same seam); nothing is computed here. Undefined when the sweep has no points.
+ * The points come from the resize options' limiter sweep (the energy method: a dynamic rerun at
+ * every setting would be too slow); nothing is computed here. Undefined when the sweep has no points.
  */
 export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeResult): ReportFigure | undefined {
   const u = results.case.units;
@@ -19,7 +19,8 @@ export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeR
   const t = (v: number) => inDisplay(v, 'torque', u);
   const label = unitLabel('torque', u);
   const points = l.sweep.map((s) => ({ x: t(s.setting), y: t(s.peakTorque) }));
-  const unlimited = t(l.slip.unlimitedTorque);
+  // The sweep is the energy method's; its own unlimited peak keeps the figure on one method.
+  const unlimited = t(l.sweep[0].unlimitedTorque);
   const yMin = points[0].y * 0.9;
   const yMax = Math.max(unlimited, ...points.map((p) => p.y)) * 1.25;
   const xEnd = points[points.length - 1].x;
@@ -51,6 +52,6 @@ export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeR
   const window = l.min === undefined ? 'the lower end is unknown (no running torque in the case)' : l.windowEmpty ? 'the window is empty' : 'shaded: the window of settings';
   const title = `Repeat-incident peak torque against the limiter's setting at "${l.station}"`;
   const caption =
-    `Both axes logarithmic. Peak torque between the limiter and the stop in a repeat of the incident against the limiter's slip torque (${l.slip.method}). Dashed red line: the incident's peak without a limiter. Blue line: the shaft's allowable torque at the design factor; ${window}.`;
+    `Both axes logarithmic. Peak torque between the limiter and the stop in a repeat of the incident against the limiter's slip torque (${l.sweep[0].method}${l.slip.slipMethod === 'dynamic model' ? "; the option's own setting is checked through the dynamic model in the text" : ''}). Dashed red line: the incident's peak without a limiter. Blue line: the shaft's allowable torque at the design factor; ${window}.`;
   return { name: 'resize-peak-torque-vs-limiter', title, caption, svg: plotToSvg(options, title, caption) };
 }

@@ -19,7 +19,7 @@ export const recommendationsSection: ReportSection = {
       e(`Each option is checked against a repeat of the recorded incident by a rerun of the changed case through the elastic energy method, and under the running torque. Present shaft: ${verdictSentence(results)}`),
       e(factorSentence(resize)),
       optionsTable(resize),
-      e("Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present, the energy method's single-mass estimate."),
+      e("Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate."),
     ];
     const part = (title: string, lines: readonly string[]) => out.push(`### ${e(title)}`, bulletList(lines.map(e)));
     part('Scale the side', [scaleSideSentence(resize)]);
