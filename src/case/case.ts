@@ -203,6 +203,8 @@ export interface Analysis {
   elements?: number;
   /** Whether the dynamic model carries the shaft's own inertia (default true). */
   shaftInertia: boolean;
+  /** Whether the dynamic model's shaft elements yield (elastic–plastic law); absent: `DEFAULT_DYNAMIC_PLASTICITY`. */
+  dynamicPlasticity?: boolean;
   /** Damping ratio of each side's lowest mode, stiffness-proportional (default `DEFAULT_DAMPING_RATIO`). */
   dampingRatio: number;
   /** Simulated time from the stop, s; absent: chosen from the lowest mode and the drive. */
@@ -217,6 +219,8 @@ export interface Analysis {
  * first peak (lowered by about ζ·π/2) and the ringing are not understated.
  */
 export const DEFAULT_DAMPING_RATIO = 0.005;
+/** Whether the dynamic model's shaft elements yield unless `analysis.dynamic_plasticity` says otherwise. */
+export const DEFAULT_DYNAMIC_PLASTICITY = false;
 
 /** What the investigator saw after the incident (`observed:` in the case file). */
 export interface Observed {

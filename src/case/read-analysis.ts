@@ -1,11 +1,12 @@
 import type { CaseReader } from './case-reader.ts';
-import { DEFAULT_DAMPING_RATIO, type Analysis, type Hardening, type Station, type YieldCriterion } from './case.ts';
+import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Analysis, type Hardening, type Station, type YieldCriterion } from './case.ts';
 
 const ANALYSIS_KEYS = [
   'criterion',
   'hardening',
   'elements',
   'shaft_inertia',
+  'dynamic_plasticity',
   'damping_ratio',
   'duration',
   'samples',
@@ -53,6 +54,7 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
     r.fail('E_RANGE', ['analysis', 'elements'], `${elements} is more than ${MAX_ELEMENTS}; give a number such as 40, or leave it out to refine automatically`);
   }
   const shaftInertia = r.boolean(['analysis', 'shaft_inertia']) ?? true;
+  const dynamicPlasticity = r.boolean(['analysis', 'dynamic_plasticity']) ?? DEFAULT_DYNAMIC_PLASTICITY;
   const damping = r.quantity(['analysis', 'damping_ratio'], 'fraction', {
     nonNegative: true,
     example: 'a damping ratio such as 0.02 or "2 %"',
@@ -69,6 +71,7 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
     criterion,
     hardening,
     shaftInertia,
+    dynamicPlasticity,
     dampingRatio: damping && damping.value < 1 ? damping.value : DEFAULT_DAMPING_RATIO,
     uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER, dynamicSamples },
     designFactor: factor('design_factor', 'a design factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.designFactor,

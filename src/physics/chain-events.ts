@@ -1,6 +1,7 @@
 import { holdingJamTorque, motorPieceValue, stuckBeltTorque } from './chain-forces.ts';
 import type { ChainStepper } from './chain-stepper.ts';
 import { setPiece, type DriveState } from './drive-state.ts';
+import { ElasticLaw } from './torque-law.ts';
 
 /** Where an event comes from: an element's law, a drive's belt, the jam, or a drive's motor curve. */
 export type EventSource = { kind: 'element'; index: number } | { kind: 'belt'; index: number } | { kind: 'jam' } | { kind: 'motor'; index: number };
@@ -14,11 +15,11 @@ export interface ChainEvent {
   what: string;
 }
 
-/** The event functions the integrator watches, for a system: elements with a non-elastic law, belts, a soft jam, motors. */
+/** The event functions the integrator watches, for a system: elements with a law other than plain elastic (limiters, pins, yielding shaft), belts, a soft jam, motors. */
 export function eventSources(st: ChainStepper): EventSource[] {
   const out: EventSource[] = [];
   st.laws.forEach((l, e) => {
-    if (l.kind !== 'shaft') out.push({ kind: 'element', index: e });
+    if (!(l instanceof ElasticLaw)) out.push({ kind: 'element', index: e });
   });
   st.drives.forEach((d, i) => {
     if (d.beltSlipTorque !== undefined) out.push({ kind: 'belt', index: i });

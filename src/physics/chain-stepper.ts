@@ -62,7 +62,8 @@ export class ChainStepper {
   dirty = true;
   readonly jeff: Float64Array;
   readonly laws: TorqueLaw[];
-  readonly nonAffine: number[];
+  /** Elements whose law is not affine on its current branch (Newton-iterated); re-read at every branch change. */
+  nonAffine: number[];
   /** 1 where the element's law is plain elastic (handled inline, no call into the law). */
   private readonly plain: Uint8Array;
   /** The dashpot acting across each element on its current branch (0 across a slipping or parted device). */
@@ -152,6 +153,7 @@ export class ChainStepper {
       this.cEff[e] = law.damped() ? this.sys.damping[e] : 0;
       this.tq[e] = law.torque(this.theta[e]);
     }
+    this.nonAffine = this.laws.flatMap((l, e) => (l.affine ? [] : [e]));
     this.dirty = true;
   }
 

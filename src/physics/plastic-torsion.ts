@@ -137,3 +137,18 @@ export function residualSurfaceStress(l: TorsionLaw, phi: number): number {
   const tau = gamma <= gy ? l.shearModulus * gamma : l.shearYield + l.hardeningModulus * (gamma - gy);
   return tau - (torqueAtTwistRate(l, phi) * l.outerRadius) / polar(l);
 }
+
+/**
+ * Tangent rigidity dT/dφ at twist per length φ ≥ 0, N·m²: from T = 2π∫τ(rφ)r²dr, dT/dφ = 2π∫τ'r³dr
+ * = G·J_core + H·J_rim, the polar moments of the still-elastic core and of the yielded rim (the
+ * terms from the moving core radius cancel, τ being continuous there). Derived here from the same
+ * section integral as `torqueAtTwistRate`.
+ */
+export function tangentRigidity(l: TorsionLaw, phi: number): number {
+  const { outerRadius: c2, innerRadius: c1, shearModulus: g, hardeningModulus: h } = l;
+  const rho = coreRadius(l, phi);
+  if (rho >= c2) return g * polar(l);
+  const a = Math.max(rho, c1);
+  const a4 = fourth(a);
+  return (Math.PI / 2) * ((rho > c1 ? g * (a4 - fourth(c1)) : 0) + h * (fourth(c2) - a4));
+}

@@ -1,9 +1,11 @@
-import { DEFAULT_DAMPING_RATIO, type Case } from '../case/case.ts';
+import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Case } from '../case/case.ts';
 import type { ShaftModel, ShaftPiece, SideName } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
 import { shearYield } from '../physics/shear-strength.ts';
 import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
+import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
+import { dynamicPermanentTwist } from './dynamic-permanent-twist.ts';
 import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
 import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
@@ -20,6 +22,8 @@ export interface DynamicPiece {
   shearStress: number;
   shearYield: number;
   yieldRatio: number;
+  /** Twist left in the piece at the end of the window, rad: elastic unloading from its peak (0 where it stayed elastic or plasticity is off). */
+  permanentTwist: number;
 }
 
 /** Energy method against dynamic model for one side. */
@@ -76,6 +80,12 @@ export interface DynamicResult {
   /** Located events in time order, as sentences (the first `MAX_EVENTS_KEPT`; `eventCount` says how many there were). */
   events: { time: number; text: string }[];
   eventCount: number;
+  /** Whether the shaft elements carried the elastic–plastic law (analysis.dynamic_plasticity). */
+  plasticity: boolean;
+  /** Whether any shaft element went past yield. */
+  yielded: boolean;
+  /** Work of plastic flow in the shaft elements, J (part of `energy.slipWork`). */
+  plasticWork: number;
   /** Energy books, J: final − initial = motor + boundary − damping − slip − released. */
   energy: { initial: number; final: number; motorWork: number; boundaryWork: number; dampingWork: number; slipWork: number; released: number };
   histories: DynamicHistories;
@@ -87,16 +97,19 @@ export interface DynamicResult {
 
 /** Events kept in the results (a belt that keeps reversing its slip can log hundreds). */
 const MAX_EVENTS_KEPT = 100;
+const QUIET_YIELD_EVENTS = new Set(['turns back', 'rejoins an earlier loading path', 'yields on']);
 
 /** Runs the dynamic model on a case and gathers what the views show. Pure: no I/O, no clock. */
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
   const solve = solveDynamics(c, model);
   const { chain, modes, run, piecePeak, pieceTime } = solve.final;
+  const permanent = dynamicPermanentTwist(c, chain, run.laws);
+  const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
   const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {
     const seg = p.piece.segment;
     const tauY = shearYield(c.materials[seg.material].yieldStrength!, c.analysis.criterion);
     const tau = seg.kt * shearStress(piecePeak[i], seg.diameter, seg.bore);
-    return { piece: p.piece, side: p.side, peakTorque: piecePeak[i], peakTime: pieceTime[i], shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY };
+    return { piece: p.piece, side: p.side, peakTorque: piecePeak[i], peakTime: pieceTime[i], shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY, permanentTwist: permanent[i] };
   });
   const governing = pieces.reduce((best, p, i) => (p.yieldRatio > pieces[best].yieldRatio ? i : best), 0);
   const sides = energy.map((s): SideComparison => {
@@ -118,7 +131,8 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     if (src.kind === 'motor') return `The motor at "${chain.drives[src.index].station}"`;
     return `The jam at "${stopName}"`;
   };
-  const shown = run.events.filter((e) => e.what !== 'passes a point of its curve');
+  // A yielding element's turns and rejoined paths are bookkeeping of its hysteresis, not news.
+  const shown = run.events.filter((e) => e.what !== 'passes a point of its curve' && !QUIET_YIELD_EVENTS.has(e.what));
   const events = shown.slice(0, MAX_EVENTS_KEPT).map((e) => ({ time: e.time, text: `${capitalise(nameOf(e.source))} ${e.what}.` }));
   return {
     elements: chain.elements.length,
@@ -146,6 +160,9 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     belts: chain.drives.flatMap((d) => (d.belt ? [{ station: d.station, slip: d.belt }] : [])),
     events,
     eventCount: shown.length,
+    plasticity: plasticLaws.length > 0,
+    yielded: plasticLaws.some((l) => l.yielded),
+    plasticWork: plasticLaws.reduce((w, l) => w + l.dissipated, 0),
     energy: run.energy,
     histories: dynamicHistories(chain, solve.final, slips),
     assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),
@@ -159,7 +176,9 @@ function capitalise(s: string): string {
 
 function assumptionsOf(c: Case, shaftInertia: boolean, drives: string[]): string[] {
   return [
-    'The shaft is a chain of lumped inertias joined by elastic torsional springs (k = G·J_p/L per element); parts count at their station as J·ratio², and gears and couplings are rigid.',
+    (c.analysis.dynamicPlasticity ?? DEFAULT_DYNAMIC_PLASTICITY)
+      ? 'The shaft is a chain of lumped inertias joined by torsional springs (k = G·J_p/L per element) that yield as the net section does, elastic–plastic at the shear yield of the criterion, with Masing\'s rule on reversals (analysis.dynamic_plasticity: true); parts count at their station as J·ratio², and gears and couplings are rigid.'
+      : 'The shaft is a chain of lumped inertias joined by elastic torsional springs (k = G·J_p/L per element); parts count at their station as J·ratio², and gears and couplings are rigid.',
     shaftInertia ? 'The shaft\'s own inertia is lumped half onto each end of every element.' : 'The shaft\'s own inertia is left out (analysis.shaft_inertia: false).',
     `Damping is stiffness-proportional, ${(100 * c.analysis.dampingRatio).toPrecision(2)} % of critical in each side's lowest mode${c.analysis.dampingRatio === DEFAULT_DAMPING_RATIO ? ' (the default, a small value typical of steel shafting: material damping of steel is a fraction of a percent, and it is taken low so that the peak and the ringing are not understated)' : ''}; the dashpots take energy but the torques reported are the elastic ones.`,
     c.stop.duration > 0 ? `The stop station's speed falls linearly to zero over ${(c.stop.duration * 1000).toPrecision(3)} ms, then stays at zero.` : 'The stop station\'s speed drops to zero at once and stays there.',

@@ -1,8 +1,9 @@
-import type { Case } from '../case/case.ts';
+import { DEFAULT_DYNAMIC_PLASTICITY, type Case } from '../case/case.ts';
 import { buildChain, type Chain } from '../model/chain.ts';
 import { sideModes, type SideMode } from '../model/chain-modes.ts';
 import type { ShaftModel, SideName } from '../model/shaft-model.ts';
 import { integrateChain, type IntegrationResult } from '../physics/integrate-chain.ts';
+import { elementBackbone } from './element-backbone.ts';
 import { systemOf } from './system-of-chain.ts';
 
 /** One solution of the chain at one element count. */
@@ -93,7 +94,8 @@ function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boo
   const modes = sideModes(chain, 12);
   const lowest: Partial<Record<SideName, number>> = {};
   for (const m of modes) lowest[m.side] ??= m.omega;
-  const sys = systemOf(chain, c.speed, c.stop, c.analysis.dampingRatio, lowest);
+  const plastic = c.analysis.dynamicPlasticity ?? DEFAULT_DYNAMIC_PLASTICITY;
+  const sys = systemOf(chain, c.speed, c.stop, c.analysis.dampingRatio, lowest, plastic ? (el) => elementBackbone(c, chain, el) : undefined);
   const omega1 = Math.min(...modes.map((m) => m.omega));
   const duration = c.analysis.duration ?? defaultDuration(c, chain, omega1);
   const steps = stepFor(modes, c.stop.duration, c.analysis.dampingRatio);

@@ -1,18 +1,27 @@
-import type { Chain } from '../model/chain.ts';
+import type { Chain, ChainElement } from '../model/chain.ts';
 import type { SideName } from '../model/shaft-model.ts';
 import type { ChainSystem } from '../physics/chain-system.ts';
+import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
+import type { SeriesBackbone } from '../physics/series-backbone.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { SlipLaw } from '../physics/slip-law.ts';
 import { ElasticLaw, type TorqueLaw } from '../physics/torque-law.ts';
 
 /**
- * The numeric system the integrator takes, from a chain: one law per element (elastic shaft, a
- * limiter's slip, a pin's parting), stiffness-proportional damping c = β·k with β = 2ζ/ω₁ per side
+ * The numeric system the integrator takes, from a chain: one law per element (elastic shaft, or
+ * yielding shaft where `backbone` gives the element's first-loading curve, a limiter's slip, a pin's parting), stiffness-proportional damping c = β·k with β = 2ζ/ω₁ per side
  * so that each side's lowest mode has the damping ratio ζ (Rayleigh damping with the mass term
  * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident), and the twist
  * of the running torque, which flows from each drive to the stop.
  */
-export function systemOf(chain: Chain, speed: number, stop: { duration: number; torqueCapacity?: number }, dampingRatio: number, lowest: Partial<Record<SideName, number>>): ChainSystem {
+export function systemOf(
+  chain: Chain,
+  speed: number,
+  stop: { duration: number; torqueCapacity?: number },
+  dampingRatio: number,
+  lowest: Partial<Record<SideName, number>>,
+  backbone?: (el: ChainElement) => SeriesBackbone | undefined,
+): ChainSystem {
   const P = chain.stopNode;
   const m = chain.elements.length;
   const torque = new Float64Array(m);
@@ -25,7 +34,8 @@ export function systemOf(chain: Chain, speed: number, stop: { duration: number; 
   const laws: TorqueLaw[] = chain.elements.map((el, e) => {
     if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e]);
     if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
-    return new ElasticLaw(el.stiffness);
+    const b = backbone?.(el);
+    return b ? new PlasticElementLaw(b, initialTwist[e]) : new ElasticLaw(el.stiffness);
   });
   const damping = Float64Array.from(chain.elements, (el) => {
     const w = lowest[el.side];

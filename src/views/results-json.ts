@@ -45,7 +45,7 @@ function dynamicJson(d: DynamicResult): Record<string, unknown> {
     duration_s: d.duration,
     time_step_s: d.timeStep,
     elements: d.elements,
-    segments: d.pieces.map((p) => ({ from_m: p.piece.start, to_m: p.piece.end, peak_torque_Nm: p.peakTorque, shear_stress_Pa: p.shearStress, yield_ratio: p.yieldRatio })),
+    segments: d.pieces.map((p) => ({ from_m: p.piece.start, to_m: p.piece.end, peak_torque_Nm: p.peakTorque, shear_stress_Pa: p.shearStress, yield_ratio: p.yieldRatio, permanent_twist_rad: p.permanentTwist })),
     slip: d.slips.map((s) => ({ element: s.element, energy_J: s.energy, angle_rad: s.angle })),
     events: d.events.map((e) => ({ time_s: e.time, event: e.text })),
   };

@@ -23,6 +23,10 @@ export function dynamicLines(r: Results): string[] {
   for (const p of d.pins) {
     out.push(`  ${p.element} (${show(p.shearTorque, 'torque', u)}) ${p.partedAt === undefined ? 'held' : `parted at ${sig(p.partedAt * 1000)} ms`}`);
   }
+  if (d.yielded) {
+    const worst = d.pieces.reduce((b, p) => (p.permanentTwist > b.permanentTwist ? p : b), d.pieces[0]);
+    out.push(`  past yield in time: permanent twist ${showSlipAngle(worst.permanentTwist, u)} in ${describePiece(worst, u)}, plastic work ${show(d.plasticWork, 'energy', u)}`);
+  }
   return out;
 }
 

@@ -26,4 +26,11 @@ describe('the analysis section', () => {
     expect(problems(dur).join('\n')).toMatch(new RegExp(`:${lineOf(dur, 'duration: 3')}:\\d+ analysis\\.duration: "3" has no unit`));
     expect(problems(base + 'analysis: { shaft_inertia: maybe }\n').join('\n')).toMatch(/analysis\.shaft_inertia: should be true or false/);
   });
+
+  it('reads dynamic_plasticity, off unless the case turns it on, and refuses a value that is not true or false, with its line', () => {
+    expect(parseCase(base).analysis.dynamicPlasticity).toBe(false);
+    expect(parseCase(base + 'analysis:\n  dynamic_plasticity: true\n').analysis.dynamicPlasticity).toBe(true);
+    const bad = base + 'analysis:\n  dynamic_plasticity: sometimes\n';
+    expect(problems(bad).join('\n')).toMatch(new RegExp(`:${lineOf(bad, 'dynamic_plasticity: sometimes')}:\\d+ analysis\\.dynamic_plasticity: should be true or false`));
+  });
 });

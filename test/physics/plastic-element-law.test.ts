@@ -1,0 +1,175 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { integrateChain, type IntegrationResult } from '../../src/physics/integrate-chain.ts';
+import { PlasticBalance } from '../../src/physics/plastic-balance.ts';
+import { PlasticElementLaw } from '../../src/physics/plastic-element-law.ts';
+import { residualTwistRate, rigidity, torqueAtTwistRate, yieldTorque, type TorsionLaw } from '../../src/physics/plastic-torsion.ts';
+import { sectionTwistRate, SeriesBackbone } from '../../src/physics/series-backbone.ts';
+import { ElasticLaw } from '../../src/physics/torque-law.ts';
+import { chain } from './chain-fixtures.ts';
+
+const law = (c2: number, tauY: number, h = 0): TorsionLaw => ({ outerRadius: c2, innerRadius: 0, shearModulus: 79.3e9, shearYield: tauY, hardeningModulus: h });
+const rel = (a: number, b: number) => Math.abs(a / b - 1);
+const rpm = (n: number) => (n * 2 * Math.PI) / 60;
+const books = (r: IntegrationResult) => {
+  const e = r.energy;
+  return e.final - (e.initial + e.motorWork + e.boundaryWork - e.dampingWork - e.slipWork - e.released);
+};
+
+/**
+ * Moves a law along a path of twists (straight legs between the given points) the way the
+ * integrator does: an event found by bisection on the leg is entered at its crossing, then the
+ * leg goes on. Returns the torque at the end of each leg.
+ */
+function drive(l: PlasticElementLaw, path: number[], steps = 400): number[] {
+  const out: number[] = [];
+  let th = 0;
+  for (const target of path) {
+    const rate = Math.sign(target - th);
+    if (l.leave(th, rate) > 0) l.enter(th);
+    const d = (target - th) / steps;
+    for (let i = 0; i < steps; i++) {
+      let next = th + d;
+      for (let guard = 0; guard < 4 && l.leave(next, rate) > 0; guard++) {
+        let a = th;
+        let b = next;
+        for (let k = 0; k < 60; k++) {
+          const m = 0.5 * (a + b);
+          if (l.leave(m, rate) > 0) b = m;
+          else a = m;
+        }
+        l.commit(a);
+        l.enter(a);
+        th = a;
+      }
+      next = th + (target - th) / (steps - i);
+      l.commit(next);
+      th = next;
+    }
+    out.push(l.torque(th));
+  }
+  return out;
+}
+
+describe('PlasticElementLaw, one inertia on one shaft stopped at once (EP5)', () => {
+  // EP5 (shared REFERENCE.md 3.3, derived): J = 0.986460 kg·m², d = 40 mm, L = 0.5 m, G = 79.3 GPa,
+  // τ_Y = 0.577·530 MPa = 305.81 MPa (AISI 1045 CD, Shigley 9th ed. Table A-20), 300 rpm:
+  // T = 4859.34 N·m, residual twist 0.041193 rad, from the energy balance REFERENCE 3.1.9.
+  const J = 0.98646;
+  const L = 0.5;
+  const tl = law(0.02, 0.577 * 530e6);
+  const k = rigidity(tl) / L;
+  const run = (speed: number) => {
+    const el = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
+    const period = 2 * Math.PI * Math.sqrt(J / k);
+    const r = integrateChain(chain({ J: [0, J], k: [k], speed, laws: [el] }), { duration: 1.5 * period, timeStep: period / 4000 });
+    return { el, r };
+  };
+
+  it('peaks at 4859.34 N·m within 1 % and agrees with PlasticBalance.stateForEnergy(½Jω²) within 0.5 %', () => {
+    const { el, r } = run(rpm(300));
+    expect(rel(r.peakTorque[0], 4859.34)).toBeLessThan(0.01);
+    const s = new PlasticBalance([{ length: L, law: tl, fractureTwistRate: Infinity }]).stateForEnergy(0.5 * J * rpm(300) ** 2);
+    expect(rel(el.peakTorque, s.torque)).toBeLessThan(0.005);
+    expect(el.yielded).toBe(true);
+  });
+
+  it('leaves a residual twist of 0.041193 rad within 3 % on elastic unloading from its peak', () => {
+    const { el } = run(rpm(300));
+    const residual = L * residualTwistRate(tl, sectionTwistRate(tl, el.peakTorque));
+    expect(rel(residual, 0.041193)).toBeLessThan(0.03);
+  });
+
+  it('closes its energy books without damping: kinetic + strain + plastic work = initial within 1e-3', () => {
+    const { r } = run(rpm(300));
+    expect(Math.abs(books(r)) / r.energy.initial).toBeLessThan(1e-3);
+  });
+
+  it('has done the plastic work of the energy balance at its peak: ½Jω² − T²/2k = 190.6 J within 1 %', () => {
+    // REFERENCE EP5: KE = 486.799 J all absorbed at θ_max, of which T²/2k (k = 3.98610e4 N·m/rad) is recoverable.
+    const { r } = run(rpm(300));
+    const el = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
+    const period = 2 * Math.PI * Math.sqrt(J / k);
+    integrateChain(chain({ J: [0, J], k: [k], speed: rpm(300), laws: [el] }), { duration: r.peakTime[0], timeStep: period / 4000 });
+    expect(rel(el.dissipated, 486.799 - 4859.34 ** 2 / (2 * 3.9861e4))).toBeLessThan(0.01);
+  });
+
+  it('at 150 rpm stays elastic and steps exactly as the elastic law (T = 3114.81 N·m, REFERENCE EP5)', () => {
+    const { el, r } = run(rpm(150));
+    const period = 2 * Math.PI * Math.sqrt(J / k);
+    const e = integrateChain(chain({ J: [0, J], k: [k], speed: rpm(150), laws: [new ElasticLaw(k)] }), { duration: 1.5 * period, timeStep: period / 4000 });
+    expect(el.yielded).toBe(false);
+    expect(r.peakTorque[0]).toBe(e.peakTorque[0]);
+    expect(rel(r.peakTorque[0], 3114.81)).toBeLessThan(0.005);
+    expect(Array.from(r.history.elementTorque[0])).toEqual(Array.from(e.history.elementTorque[0]));
+  });
+});
+
+describe('PlasticElementLaw in a ramped chain of three inertias', () => {
+  it('closes its energy books through reversals and rejoined paths within 1e-3, with and without hardening', () => {
+    for (const h of [0, 2e9]) {
+      const tl = law(0.015, 300e6, h);
+      const mk = (L: number) => new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
+      const laws = [mk(0.3), mk(0.4), mk(0.2)];
+      const k = laws.map((l) => l.stiffness);
+      const r = integrateChain(chain({ J: [0, 0.5, 0.2, 0.8], k, speed: rpm(600), ramp: 0.002, laws }), { duration: 0.1, timeStep: 2e-6 });
+      expect(laws.some((l) => l.yielded)).toBe(true);
+      expect(r.events.some((e) => e.what === 'turns back')).toBe(true);
+      expect(Math.abs(books(r)) / r.energy.initial).toBeLessThan(1e-3);
+      // Nothing carries more than the section's limit (T_P for a perfectly plastic one).
+      if (h === 0) for (const p of r.peakTorque) expect(p).toBeLessThan((4 / 3) * yieldTorque(tl) * (1 + 1e-9));
+    }
+  });
+});
+
+describe('PlasticElementLaw, Masing branches', () => {
+  const tl = law(0.02, 300e6);
+  const L = 0.5;
+  const theta = (phi: number) => phi * L;
+  const thetaY = (yieldTorque(tl) / rigidity(tl)) * L;
+
+  it('follows first loading, then the branch T_r + 2·T₀(Δθ/2) after a turn, and first loading in the other sense past −θ_r', () => {
+    // Masing's rule (Masing 1926; Iwan, J. Appl. Mech. 33 (1966); from memory, confident), written
+    // here straight from the section law.
+    const l = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
+    const t1 = 3 * thetaY;
+    const T0 = (t: number) => torqueAtTwistRate(tl, t / L);
+    const [a, b, c] = drive(l, [t1, t1 - 3 * thetaY, -4 * thetaY]);
+    expect(rel(a, T0(t1))).toBeLessThan(1e-9);
+    expect(rel(b, T0(t1) - 2 * T0((3 * thetaY) / 2))).toBeLessThan(1e-6);
+    expect(rel(c, -T0(4 * thetaY))).toBeLessThan(1e-6);
+  });
+
+  it('rejoins the earlier path after a small inner loop (memory)', () => {
+    const l = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
+    const T0 = (t: number) => torqueAtTwistRate(tl, t / L);
+    const [, , , last] = drive(l, [2 * thetaY, -1 * thetaY, 1.5 * thetaY, 3 * thetaY]);
+    expect(rel(last, T0(3 * thetaY))).toBeLessThan(1e-6);
+  });
+
+  it('is odd: loading the other way gives the opposite torque (property)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: -5, max: 5, noNaN: true }), { minLength: 1, maxLength: 5 }), (pts) => {
+        const p = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
+        const n = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
+        const a = drive(p, pts.map((x) => x * thetaY), 50);
+        const b = drive(n, pts.map((x) => -x * thetaY), 50);
+        return a.every((t, i) => Math.abs(t + b[i]) <= 1e-6 * yieldTorque(tl));
+      }),
+      { numRuns: 30 },
+    );
+  });
+
+  it('never carries more than the first-loading envelope at its largest twist so far (property)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: -5, max: 5, noNaN: true }), { minLength: 1, maxLength: 5 }), (pts) => {
+        const l = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
+        const out = drive(l, pts.map((x) => x * thetaY), 50);
+        const most = Math.max(...pts.map(Math.abs)) * thetaY;
+        return out.every((t) => Math.abs(t) <= torqueAtTwistRate(tl, most / L) * (1 + 1e-6));
+      }),
+      { numRuns: 30 },
+    );
+  });
+  void theta;
+});
