@@ -4,7 +4,7 @@ import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
 import { residualTwistRate } from '../physics/plastic-torsion.ts';
 import { sectionTwistRate } from '../physics/series-backbone.ts';
 import type { TorqueLaw } from '../physics/torque-law.ts';
-import { segmentLaw } from './element-backbone.ts';
+import { segmentLaw } from './side-balance.ts';
 
 /**
  * Permanent twist of each piece after the incident, rad: elastic unloading from the largest torque

@@ -1,10 +1,24 @@
-import type { Case } from '../case/case.ts';
+import type { Case, Segment } from '../case/case.ts';
 import type { Side } from '../model/shaft-model.ts';
 import { brittleFractureShear, fractureShearStrain, isBrittle } from '../physics/fracture.ts';
 import { PlasticBalance, type BalancePiece } from '../physics/plastic-balance.ts';
 import type { TorsionLaw } from '../physics/plastic-torsion.ts';
 import { shearYield } from '../physics/shear-strength.ts';
 import { linearHardeningModulus } from '../physics/strain-hardening.ts';
+
+/**
+ * A ductile segment's torque–twist law for the time-domain model, as the energy balance and the time-domain
+ * model both use it: the net section (no K_t), the case criterion's shear yield, linear
+ * hardening when `analysis.hardening` asks for it and the material allows. Undefined for a brittle
+ * material, which stays elastic up to fracture.
+ */
+export function segmentLaw(c: Case, seg: Segment): TorsionLaw | undefined {
+  const m = c.materials[seg.material];
+  if (isBrittle(m) || m.yieldStrength === undefined) return undefined;
+  const tauY = shearYield(m.yieldStrength, c.analysis.criterion);
+  const slope = c.analysis.hardening === 'linear' ? linearHardeningModulus(m, tauY / m.yieldStrength) : undefined;
+  return { outerRadius: seg.diameter / 2, innerRadius: seg.bore / 2, shearModulus: m.shearModulus!, shearYield: tauY, hardeningModulus: slope ?? 0 };
+}
 
 /** What the balance needs to know about a piece beyond its law, for the results and the report. */
 export interface PieceMaterialFacts {
@@ -55,17 +69,14 @@ export function sideBalance(side: Side, c: Case, sideInertia: number): SideBalan
       const law: TorsionLaw = { outerRadius: c2, innerRadius: seg.bore / 2, shearModulus: g, shearYield: Infinity, hardeningModulus: 0 };
       return { length: p.end - p.start, law, fractureTwistRate: tauF / (g * c2) };
     }
-    const tauY = shearYield(m.yieldStrength!, c.analysis.criterion);
-    let h = 0;
-    if (c.analysis.hardening === 'linear') {
-      const slope = linearHardeningModulus(m, tauY / m.yieldStrength!);
-      if (slope === undefined) warnings.push(`Material ${m.key} has no tensile strength above its yield or no elongation, so segment ${seg.index + 1} is taken as perfectly plastic.`);
-      else h = slope;
+    const law = segmentLaw(c, seg)!;
+    const h = law.hardeningModulus;
+    if (c.analysis.hardening === 'linear' && h === 0) {
+      warnings.push(`Material ${m.key} has no tensile strength above its yield or no elongation, so segment ${seg.index + 1} is taken as perfectly plastic.`);
     }
     const fs = fractureShearStrain(m);
     if (!fs) warnings.push(`Material ${m.key} has no reduction of area, elongation or fracture_strain, so no fracture check is made for segment ${seg.index + 1}.`);
     facts.push({ material: m.key, brittle, fractureStrain: fs?.value, fractureStrainBasis: fs?.basis ?? 'unknown', hardeningModulus: h });
-    const law: TorsionLaw = { outerRadius: c2, innerRadius: seg.bore / 2, shearModulus: g, shearYield: tauY, hardeningModulus: h };
     return { length: p.end - p.start, law, fractureTwistRate: fs ? fs.value / c2 : Infinity };
   });
   return { balance: new PlasticBalance(inputs), facts, inertia: sideInertia, warnings: [...new Set(warnings)] };
