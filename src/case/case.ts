@@ -220,7 +220,7 @@ export interface Analysis {
  */
 export const DEFAULT_DAMPING_RATIO = 0.005;
 /** Whether the dynamic model's shaft elements yield unless `analysis.dynamic_plasticity` says otherwise. */
-export const DEFAULT_DYNAMIC_PLASTICITY = false;
+export const DEFAULT_DYNAMIC_PLASTICITY = true;
 
 /** What the investigator saw after the incident (`observed:` in the case file). */
 export interface Observed {

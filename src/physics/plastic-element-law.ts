@@ -21,6 +21,13 @@ interface Turn {
  * sense, left when the twist turns back (a new reversal) or meets the remembered point. Strain
  * energy is the recoverable part T²/2k (elastic unloading); the rest of the work done on the
  * element, booked by the trapezoidal rule the integrator itself uses, is plastic work.
+ *
+ * Fracture: when the twist reaches the backbone's fracture twist (its first piece at its fracture
+ * shear strain, `SeriesBackbone.fractureTwist`) the element breaks and carries nothing for the rest
+ * of the incident; its stored strain energy is released at that instant (booked as dissipated). By
+ * Masing's rule the largest twist is always on first loading, where the outer-fibre strain of each
+ * piece is known, so the check is made on |θ| in either sense. Damage from repeated reversals
+ * (low-cycle fatigue) is not counted.
  */
 export class PlasticElementLaw implements TorqueLaw {
   readonly kind = 'shaft';
@@ -38,8 +45,12 @@ export class PlasticElementLaw implements TorqueLaw {
   private initialStored: number;
   /** Largest |torque| the element has carried, N·m (always on first loading, by Masing's rule). */
   peakTorque: number;
+  /** Largest |twist| the element has reached, rad (on first loading, by Masing's rule). */
+  peakTwist: number;
   /** Times the element started to yield. */
   yieldStarts = 0;
+  /** Whether the element has broken. */
+  broken = false;
 
   constructor(
     readonly backbone: SeriesBackbone,
@@ -57,17 +68,18 @@ export class PlasticElementLaw implements TorqueLaw {
     this.initialStored = this.recoverable(this.committedTorque);
     this.work = 0;
     this.peakTorque = Math.abs(this.committedTorque);
+    this.peakTwist = Math.abs(initialTwist);
   }
 
   get affine(): boolean {
-    return this.straight;
+    return this.straight || this.broken;
   }
   get dissipated(): number {
     return this.initialStored + this.work - this.recoverable(this.committedTorque);
   }
   /** Twist that stays on unloading to zero torque from the committed state, rad. */
   get offset(): number {
-    return this.committed - this.committedTorque / this.stiffness;
+    return this.broken ? 0 : this.committed - this.committedTorque / this.stiffness;
   }
   /** Whether the element has yielded at all. */
   get yielded(): boolean {
@@ -75,6 +87,7 @@ export class PlasticElementLaw implements TorqueLaw {
   }
 
   torque(theta: number): number {
+    if (this.broken) return 0;
     const top = this.turns[this.turns.length - 1];
     if (this.straight) return top ? top.torque + this.stiffness * (theta - top.theta) : this.stiffness * theta;
     if (!top) return Math.sign(theta) * this.backbone.torque(Math.abs(theta));
@@ -82,19 +95,30 @@ export class PlasticElementLaw implements TorqueLaw {
     return top.torque + 2 * Math.sign(d) * this.backbone.torque(Math.abs(d) / 2);
   }
   tangent(theta: number): number {
+    if (this.broken) return 0;
     if (this.straight) return this.stiffness;
     const top = this.turns[this.turns.length - 1];
     return this.backbone.tangent(top ? Math.abs(theta - top.theta) / 2 : Math.abs(theta));
   }
   damped(): boolean {
-    return true;
+    return !this.broken;
   }
   leave(theta: number, rate: number): number {
-    if (this.straight) return Math.max(this.lo - theta, theta - this.hi);
+    if (this.broken) return -1;
+    const breaks = Math.abs(theta) - this.backbone.fractureTwist;
+    if (this.straight) return Math.max(this.lo - theta, theta - this.hi, breaks);
     const mem = this.memory();
-    return Math.max(-this.sense * rate, mem === undefined ? -Infinity : this.sense * (theta - mem));
+    return Math.max(-this.sense * rate, mem === undefined ? -Infinity : this.sense * (theta - mem), breaks);
   }
   enter(theta: number): string {
+    if (this.broken) return 'no change';
+    if (Math.abs(theta) >= this.backbone.fractureTwist * (1 - 1e-9)) {
+      // The integrator has committed θ already. The stored energy goes with the break: the
+      // committed torque drops to zero, so the dissipated total takes up T²/2k.
+      this.broken = true;
+      this.committedTorque = 0;
+      return 'breaks';
+    }
     if (this.straight) {
       const top = this.turns[this.turns.length - 1];
       const far = top ? (this.sense > 0 ? this.hi : this.lo) : theta >= 0 ? this.hi : this.lo;
@@ -138,6 +162,11 @@ export class PlasticElementLaw implements TorqueLaw {
     return 'turns back';
   }
   commit(theta: number): void {
+    if (this.broken) {
+      this.committed = theta;
+      return;
+    }
+    if (Math.abs(theta) > this.peakTwist) this.peakTwist = Math.abs(theta);
     const T = this.torque(theta);
     this.work += 0.5 * (this.committedTorque + T) * (theta - this.committed);
     this.committed = theta;

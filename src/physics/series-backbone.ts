@@ -5,6 +5,8 @@ export interface SeriesPiece {
   law: TorsionLaw;
   /** m. */
   length: number;
+  /** Twist per length at which the piece breaks on first loading, rad/m (γ_f/c₂); Infinity or absent when unknown. */
+  fractureTwistRate?: number;
 }
 
 /**
@@ -23,6 +25,14 @@ export class SeriesBackbone {
   readonly yieldTwist: number;
   /** Highest torque the element can carry (the least fully plastic torque of perfectly plastic pieces), N·m; Infinity with hardening everywhere. */
   readonly limitTorque: number;
+  /**
+   * Element twist on first loading at which its first piece reaches its fracture strain, rad;
+   * Infinity when no piece has a fracture estimate. Under one torque each piece's twist rate grows
+   * with the torque, so the first to break is the one whose fracture torque T(φ_f) is lowest.
+   */
+  readonly fractureTwist: number;
+  /** Index of the piece that breaks first, or -1. */
+  readonly firstToBreak: number;
   private lastTheta = NaN;
   private lastTorque = 0;
 
@@ -35,6 +45,14 @@ export class SeriesBackbone {
     this.yieldTorque = Math.min(...pieces.map((p) => yieldTorque(p.law)));
     this.yieldTwist = this.yieldTorque / this.stiffness;
     this.limitTorque = Math.min(...pieces.map((p) => (p.law.hardeningModulus > 0 ? Infinity : plasticTorque(p.law))));
+    const breakTorque = pieces.map((p) => (p.fractureTwistRate !== undefined && Number.isFinite(p.fractureTwistRate) ? torqueAtTwistRate(p.law, p.fractureTwistRate) : Infinity));
+    const Tf = Math.min(...breakTorque);
+    this.firstToBreak = Number.isFinite(Tf) ? breakTorque.indexOf(Tf) : -1;
+    // A piece that breaks at the same torque is at its own fracture rate, read straight (the
+    // inverse of a nearly flat curve would lose digits there).
+    this.fractureTwist = Number.isFinite(Tf)
+      ? pieces.reduce((s, p, i) => s + p.length * (breakTorque[i] <= Tf * (1 + 1e-12) ? p.fractureTwistRate! : sectionTwistRate(p.law, Tf)), 0)
+      : Infinity;
   }
 
   /** T₀(θ), N·m, θ ≥ 0. */
@@ -55,6 +73,23 @@ export class SeriesBackbone {
   /** Each piece's twist per length at torque T ≥ 0, rad/m. */
   twistRates(torque: number): number[] {
     return this.pieces.map((p) => sectionTwistRate(p.law, torque));
+  }
+
+  /**
+   * Each piece's twist per length at element twist θ ≥ 0 on first loading, rad/m. The piece that
+   * yields most (the least fully plastic torque) takes what the others leave, θ − Σ Lᵢφᵢ: near its
+   * fully plastic torque its own curve is nearly flat, and inverting it there loses digits.
+   */
+  pieceTwistRates(theta: number): number[] {
+    if (this.pieces.length === 1) return [theta / this.pieces[0].length];
+    const rates = this.twistRates(this.torque(theta));
+    let soft = 0;
+    this.pieces.forEach((p, i) => {
+      if (plasticTorque(p.law) < plasticTorque(this.pieces[soft].law)) soft = i;
+    });
+    const others = this.pieces.reduce((s, p, i) => (i === soft ? s : s + p.length * rates[i]), 0);
+    rates[soft] = Math.max(0, theta - others) / this.pieces[soft].length;
+    return rates;
   }
 
   private solve(theta: number): number {

@@ -3,10 +3,11 @@ import type { TorqueLaw } from './torque-law.ts';
 /**
  * A shear pin or breakaway element in series with the shaft element that holds it: elastic until
  * the torque reaches the parting torque, then it carries nothing for the rest of the incident. The
- * strain energy in the element at that instant is released (booked as dissipated).
+ * strain energy in the element at that instant is released (booked as dissipated). The same law
+ * stands for a shaft element of brittle material (`kind` "shaft"), which breaks near its ultimate
+ * strength without yielding.
  */
 export class ShearPinLaw implements TorqueLaw {
-  readonly kind = 'shear pin';
   readonly affine = true;
   private parted = false;
   private released = 0;
@@ -15,6 +16,7 @@ export class ShearPinLaw implements TorqueLaw {
   constructor(
     readonly stiffness: number,
     readonly shearTorque: number,
+    readonly kind: 'shear pin' | 'shaft' = 'shear pin',
   ) {}
 
   get dissipated(): number {
@@ -44,7 +46,7 @@ export class ShearPinLaw implements TorqueLaw {
     this.parted = true;
     this.partedAt = theta;
     this.released = 0.5 * this.stiffness * theta * theta;
-    return 'parts';
+    return this.kind === 'shaft' ? 'breaks' : 'parts';
   }
   commit(): void {}
   energy(theta: number): number {

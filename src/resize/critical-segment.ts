@@ -57,7 +57,7 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
   const side = r.governing.side.side;
   const segment = r.governing.piece.piece.segment;
   const present = segment.diameter;
-  const runAt = (d: number) => analyseCase(withDiameters(c, new Map([[segment.index, d]])));
+  const runAt = (d: number) => analyseCase(withDiameters(c, new Map([[segment.index, d]])), { readBack: false });
   const target = 1 / designFactor;
   const excess = (d: number) => segmentYieldRatio(runAt(d), side, segment.index)! - target;
 

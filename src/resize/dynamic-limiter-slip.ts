@@ -30,7 +30,7 @@ export interface DynamicLimiterSlip {
 export function dynamicLimiterSlip(c: Case, station: string, side: SideName, setting: number): DynamicLimiterSlip | undefined {
   const seg = limiterSegment(c, station);
   if (!seg) return undefined;
-  const rerun = analyseCase(withLimiter(c, seg.index, setting));
+  const rerun = analyseCase(withLimiter(c, seg.index, setting), { readBack: false });
   const d = rerun.dynamic;
   const name = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
   const slip = d.slips.find((s) => s.kind === 'torque limiter' && s.element === `the torque limiter in ${name}`);

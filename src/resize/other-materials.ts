@@ -32,7 +32,7 @@ export function otherMaterials(c: Case, designFactor: number): MaterialOption[] 
       !(present.size === 1 && present.has(m.key)),
   )
     .map((material) => {
-      const rerun = analyseCase(withShaftMaterial(c, material));
+      const rerun = analyseCase(withShaftMaterial(c, material), { readBack: false });
       return { material, yieldRatio: rerun.yieldRatio, keepsFactor: rerun.yieldRatio * designFactor <= 1 + 1e-12, rerun };
     })
     .sort((a, b) => a.yieldRatio - b.yieldRatio);

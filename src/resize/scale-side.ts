@@ -55,7 +55,7 @@ export function scaleSide(c: Case, r: Results, designFactor: number, maxScale: n
     segments,
     diameters,
     stockDiameters,
-    rerun: analyseCase(withDiameters(c, map(diameters))),
-    stockRerun: analyseCase(withDiameters(c, map(stockDiameters))),
+    rerun: analyseCase(withDiameters(c, map(diameters)), { readBack: false }),
+    stockRerun: analyseCase(withDiameters(c, map(stockDiameters)), { readBack: false }),
   };
 }

@@ -5,16 +5,29 @@ import { compliance } from '../physics/torsion.ts';
 import { analysePlastic } from './analyse-plastic.ts';
 import { CAUTIONS } from './cautions.ts';
 import { dynamicResult, type DynamicResult } from './dynamic-result.ts';
-import { readFracture } from './fracture-reading.ts';
+import { dynamicTwistRelation } from './dynamic-twist-relation.ts';
+import { balanceFracturePrediction, readFracture, type FracturePrediction } from './fracture-reading.ts';
+import type { PlasticResult } from './plastic-result.ts';
 import type { ElasticVerdict, Results, Verdict } from './results.ts';
-import { readTwistBack } from './twist-findings.ts';
+import { balanceTwistRelation, readTwistBack } from './twist-findings.ts';
 import { verdictBasis } from './verdict-basis.ts';
 
 /** Share of a side's energy above which the shaft's own kinetic energy is worth a warning. */
 const SHAFT_ENERGY_WARNING = 0.05;
 
+/** What a run may leave out. */
+export interface AnalyseOptions {
+  /**
+   * false: no twist read-back (a rerun inside `resize` or the uncertainty run, which reads no
+   * observations and would otherwise pay for the dynamic model's inversion).
+   */
+  readBack?: boolean;
+}
+
+const LOCAL_YIELD = 'The net section stays elastic, but the stress at a stress raiser (kt) passes yield: local yielding there, no measurable permanent twist; the spot matters for fatigue.';
+
 /** Runs the engine on a checked case. Pure: no I/O, no clock. */
-export function analyseCase(c: Case): Results {
+export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
   const model = buildShaftModel(c);
   const warnings: string[] = [];
   const sides = model.sides.map((side) => energyMethodSide(side, c.speed, c.materials, c.analysis.criterion));
@@ -63,8 +76,18 @@ export function analyseCase(c: Case): Results {
 
   const { plastic, balances, warnings: plasticWarnings } = analysePlastic(c, model, sides);
   warnings.push(...plasticWarnings);
+  // Where the verdict stands on the dynamic model and its shaft elements yield and break, the
+  // verdict past yield is the dynamic model's too; otherwise the energy balance's.
+  const pastYieldInTime = basis.basis === 'dynamic model' && dynamic.plasticity;
   let verdict: Verdict;
-  if (basis.basis === 'dynamic model' && basisVerdict === 'elastic') {
+  if (pastYieldInTime) {
+    verdict = dynamic.fractured ? 'fracture predicted' : dynamic.yielded || basisVerdict === 'yielded' ? 'yielded' : 'elastic';
+    if (basisVerdict === 'yielded' && !dynamic.yielded && !dynamic.fractured) warnings.push(LOCAL_YIELD);
+    const netSection = dynamic.fractured ? 'fracture predicted' : dynamic.yielded ? 'yielded' : 'elastic';
+    if (plastic.verdict !== netSection) {
+      warnings.push(`The energy balance past yield, which puts all of each side's energy into its shaft with nothing else acting, gives "${plastic.verdict}"; the verdict follows the dynamic model, which follows the slip, the drive and the stop in time with the same elastic–plastic law, and the balance's figures are shown for comparison only.`);
+    }
+  } else if (basis.basis === 'dynamic model' && basisVerdict === 'elastic') {
     // The dynamic model (slip, drive, ramp, several masses) keeps every segment below yield; the
     // energy balance past yield puts all the energy into the shaft and does not apply.
     verdict = 'elastic';
@@ -72,15 +95,19 @@ export function analyseCase(c: Case): Results {
       warnings.push('The energy balance past yield (all the energy into the shaft) predicts yield, but the dynamic model, which follows the slip, the drive and the stop in time, keeps every segment elastic; the verdict follows the dynamic model, and the past-yield figures are an upper bound.');
     }
   } else {
-    if (basisVerdict === 'yielded' && plastic.verdict === 'elastic') {
-      warnings.push('The net section stays elastic, but the stress at a stress raiser (kt) passes yield: local yielding there, no measurable permanent twist; the spot matters for fatigue.');
-    }
+    if (basisVerdict === 'yielded' && plastic.verdict === 'elastic') warnings.push(LOCAL_YIELD);
     verdict = plastic.verdict === 'elastic' ? basisVerdict : plastic.verdict;
     if (basis.basis === 'dynamic model' && plastic.verdict !== 'elastic') {
-      warnings.push('Past yield, the permanent twist and fracture come from the energy balance (all of a side\'s energy into its shaft); the dynamic model is elastic, so where slip or the drive matter these figures are approximate.');
+      warnings.push('Past yield, the permanent twist and fracture come from the energy balance (all of a side\'s energy into its shaft); the dynamic model is elastic here (analysis.dynamic_plasticity: false), so where slip or the drive matter these figures are approximate.');
     }
   }
-  const observedFindings = { twist: readTwistBack(c, model.sides, balances), fracture: readFracture(c, plastic) };
+  const inertias = balances.map((b) => b.inertia);
+  const relation = (x1: number, x2: number) =>
+    pastYieldInTime ? dynamicTwistRelation(c, model, inertias, dynamic.elementTarget, x1, x2) : balanceTwistRelation(model.sides, balances, x1, x2);
+  const observedFindings = {
+    twist: opts.readBack === false ? [] : readTwistBack(c, relation),
+    fracture: readFracture(c, pastYieldInTime ? dynamicFracturePrediction(dynamic, plastic, verdict) : balanceFracturePrediction(plastic)),
+  };
 
   let reason = basis.reason;
   if (basis.basis === 'energy method') {
@@ -99,6 +126,7 @@ export function analyseCase(c: Case): Results {
     verdict,
     elasticVerdict,
     plastic,
+    pastYieldBasis: pastYieldInTime ? 'dynamic model' : 'energy balance',
     observedFindings,
     verdictGoverning,
     verdictYieldRatio: verdictGoverning.piece.yieldRatio,
@@ -108,6 +136,14 @@ export function analyseCase(c: Case): Results {
     warnings,
     cautions: CAUTIONS,
   };
+}
+
+/** The dynamic model's fracture prediction, named by the energy balance's piece where it broke first. */
+function dynamicFracturePrediction(d: DynamicResult, plastic: PlasticResult, verdict: Verdict): FracturePrediction {
+  const first = d.pieces.filter((p) => p.broken).sort((a, b) => (a.breakTime ?? 0) - (b.breakTime ?? 0))[0];
+  const side = first && plastic.sides.find((s) => s.side === first.side);
+  const piece = side?.pieces.find((p) => p.piece.start === first.piece.start && p.piece.end === first.piece.end);
+  return { verdict, ...(side && piece ? { predictedAt: { side: side.side, piece } } : {}) };
 }
 
 /** The dynamic model's governing piece in the energy method's shape, so the views read one type. */

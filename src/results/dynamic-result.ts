@@ -1,11 +1,12 @@
 import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Case } from '../case/case.ts';
+import type { Chain } from '../model/chain.ts';
 import type { ShaftModel, ShaftPiece, SideName } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
 import { shearYield } from '../physics/shear-strength.ts';
 import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
-import { dynamicPermanentTwist } from './dynamic-permanent-twist.ts';
+import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
 import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
 import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
@@ -22,8 +23,14 @@ export interface DynamicPiece {
   shearStress: number;
   shearYield: number;
   yieldRatio: number;
-  /** Twist left in the piece at the end of the window, rad: elastic unloading from its peak (0 where it stayed elastic or plasticity is off). */
+  /** Twist left in the piece at the end of the window, rad: elastic unloading from its peak (0 where it stayed elastic, broke, or plasticity is off). */
   permanentTwist: number;
+  /** Largest outer-fibre shear strain of the net section, rad (0 where plasticity is off). */
+  maxShearStrain: number;
+  /** Whether the piece broke in the incident (its fracture strain, or a brittle piece's fracture torque, reached). */
+  broken: boolean;
+  /** When it broke, s from the stop's start. */
+  breakTime?: number;
 }
 
 /** Energy method against dynamic model for one side. */
@@ -50,6 +57,8 @@ export interface DynamicMode {
 export interface DynamicResult {
   /** Shaft elements in the chain (springs between nodes). */
   elements: number;
+  /** The element count aimed at (`analysis.elements` set to it gives the same chain), for reruns. */
+  elementTarget: number;
   shaftInertia: boolean;
   dampingRatio: number;
   /** Simulated window from the stop's start, s, and the regular time step, s. */
@@ -84,6 +93,8 @@ export interface DynamicResult {
   plasticity: boolean;
   /** Whether any shaft element went past yield. */
   yielded: boolean;
+  /** Whether any shaft element broke. */
+  fractured: boolean;
   /** Work of plastic flow in the shaft elements, J (part of `energy.slipWork`). */
   plasticWork: number;
   /** Energy books, J: final − initial = motor + boundary − damping − slip − released. */
@@ -103,13 +114,16 @@ const QUIET_YIELD_EVENTS = new Set(['turns back', 'rejoins an earlier loading pa
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
   const solve = solveDynamics(c, model);
   const { chain, modes, run, piecePeak, pieceTime } = solve.final;
-  const permanent = dynamicPermanentTwist(c, chain, run.laws);
+  const damage = dynamicPieceDamage(chain, run.laws);
+  const breakTime = (i: number) => run.events.find((e) => e.what === 'breaks' && e.source.kind === 'element' && chain.elements[e.source.index].pieces.includes(i))?.time;
   const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
   const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {
     const seg = p.piece.segment;
     const tauY = shearYield(c.materials[seg.material].yieldStrength!, c.analysis.criterion);
     const tau = seg.kt * shearStress(piecePeak[i], seg.diameter, seg.bore);
-    return { piece: p.piece, side: p.side, peakTorque: piecePeak[i], peakTime: pieceTime[i], shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY, permanentTwist: permanent[i] };
+    const d = damage[i];
+    const broke = d.broken ? { breakTime: breakTime(i) } : {};
+    return { piece: p.piece, side: p.side, peakTorque: piecePeak[i], peakTime: pieceTime[i], shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY, ...d, ...broke };
   });
   const governing = pieces.reduce((best, p, i) => (p.yieldRatio > pieces[best].yieldRatio ? i : best), 0);
   const sides = energy.map((s): SideComparison => {
@@ -126,7 +140,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
   const P = chain.stopNode;
   const stopName = c.stop.at;
   const nameOf = (src: (typeof run.events)[number]['source']): string => {
-    if (src.kind === 'element') return slips.find((s) => s.elementIndex === src.index)?.element ?? pins.find((p) => p.elementIndex === src.index)?.element ?? `element ${src.index + 1}`;
+    if (src.kind === 'element') return slips.find((s) => s.elementIndex === src.index)?.element ?? pins.find((p) => p.elementIndex === src.index)?.element ?? shaftElementName(chain, src.index);
     if (src.kind === 'belt') return `The belt at "${chain.drives[src.index].station}"`;
     if (src.kind === 'motor') return `The motor at "${chain.drives[src.index].station}"`;
     return `The jam at "${stopName}"`;
@@ -136,6 +150,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
   const events = shown.slice(0, MAX_EVENTS_KEPT).map((e) => ({ time: e.time, text: `${capitalise(nameOf(e.source))} ${e.what}.` }));
   return {
     elements: chain.elements.length,
+    elementTarget: solve.target,
     shaftInertia: chain.shaftInertia,
     dampingRatio: c.analysis.dampingRatio,
     duration: run.duration,
@@ -162,12 +177,22 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     eventCount: shown.length,
     plasticity: plasticLaws.length > 0,
     yielded: plasticLaws.some((l) => l.yielded),
+    fractured: damage.some((d) => d.broken),
     plasticWork: plasticLaws.reduce((w, l) => w + l.dissipated, 0),
     energy: run.energy,
     histories: dynamicHistories(chain, solve.final, slips),
     assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),
     notes: [...runningChecks(chain, c.speed), ...solve.notes],
   };
+}
+
+/** "the shaft in "rotor body" (120 mm to 180 mm)": a plain shaft element named by its segment and place. */
+function shaftElementName(chain: Chain, e: number): string {
+  const el = chain.elements[e];
+  const seg = chain.pieces[el.pieces[0]].piece.segment;
+  const where = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
+  const mm = (x: number) => `${Number((x * 1000).toPrecision(4))} mm`;
+  return `the shaft in ${where} (${mm(el.start)} to ${mm(el.end)})`;
 }
 
 function capitalise(s: string): string {

@@ -3,7 +3,7 @@ import { buildChain, type Chain } from '../model/chain.ts';
 import { sideModes, type SideMode } from '../model/chain-modes.ts';
 import type { ShaftModel, SideName } from '../model/shaft-model.ts';
 import { integrateChain, type IntegrationResult } from '../physics/integrate-chain.ts';
-import { elementBackbone } from './element-backbone.ts';
+import { shaftElementLaw } from './shaft-element-law.ts';
 import { systemOf } from './system-of-chain.ts';
 
 /** One solution of the chain at one element count. */
@@ -20,6 +20,8 @@ export interface ChainSolution {
 
 export interface DynamicSolve {
   final: ChainSolution;
+  /** The element count aimed at for `final` (`analysis.elements` set to it gives the same chain). */
+  target: number;
   /** Peak torque (max over pieces) at each element count tried. */
   refinement: { elements: number; peakTorque: number }[];
   /** Whether the last refinement changed every piece's peak by less than REFINE_TOLERANCE of the largest. */
@@ -60,6 +62,7 @@ export function solveDynamics(c: Case, model: ShaftModel): DynamicSolve {
   const fixed = !shaftInertiaOn ? pieceCount : c.analysis.elements;
   const refinement: DynamicSolve['refinement'] = [];
   let prev: ChainSolution | undefined;
+  let prevTarget = 0;
   let lastChange = Infinity;
   let work = 0;
   for (let target = fixed ?? pieceCount; ; target *= 2) {
@@ -71,6 +74,7 @@ export function solveDynamics(c: Case, model: ShaftModel): DynamicSolve {
       lastChange = Math.max(...sol.piecePeak.map((p, i) => Math.abs(p - prev!.piecePeak[i]) / top));
     }
     prev = sol;
+    prevTarget = target;
     if (fixed !== undefined || lastChange < REFINE_TOLERANCE) break;
     // The next level has twice the elements, so about twice this level's work.
     const nextWork = 2 * sol.run.steps * sol.chain.elements.length;
@@ -80,7 +84,7 @@ export function solveDynamics(c: Case, model: ShaftModel): DynamicSolve {
   if (!converged) {
     notes.push(`The peak torques were still changing by ${(100 * lastChange).toFixed(1)} % at ${prev!.chain.elements.length} shaft elements when refinement stopped; set analysis.elements higher for a closer result.`);
   }
-  return { final: prev!, refinement, converged, lastChange: Number.isFinite(lastChange) ? lastChange : 0, notes: [...new Set(notes)] };
+  return { final: prev!, target: prevTarget, refinement, converged, lastChange: Number.isFinite(lastChange) ? lastChange : 0, notes: [...new Set(notes)] };
 }
 
 function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boolean, notes: string[]): ChainSolution {
@@ -95,7 +99,7 @@ function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boo
   const lowest: Partial<Record<SideName, number>> = {};
   for (const m of modes) lowest[m.side] ??= m.omega;
   const plastic = c.analysis.dynamicPlasticity ?? DEFAULT_DYNAMIC_PLASTICITY;
-  const sys = systemOf(chain, c.speed, c.stop, c.analysis.dampingRatio, lowest, plastic ? (el) => elementBackbone(c, chain, el) : undefined);
+  const sys = systemOf(chain, c.speed, c.stop, c.analysis.dampingRatio, lowest, plastic ? (el, twist) => shaftElementLaw(c, chain, el, twist) : undefined);
   const omega1 = Math.min(...modes.map((m) => m.omega));
   const duration = c.analysis.duration ?? defaultDuration(c, chain, omega1);
   const steps = stepFor(modes, c.stop.duration, c.analysis.dampingRatio);

@@ -1,5 +1,6 @@
 import type { Case, FractureObservation, FractureType } from '../case/case.ts';
-import type { PlasticPieceResult, PlasticResult } from './plastic-result.ts';
+import type { SideName } from '../model/shaft-model.ts';
+import type { PlasticPieceResult, PlasticResult, PlasticVerdict } from './plastic-result.ts';
 
 /** The published source for what each fracture surface usually means. */
 export const FRACTOGRAPHY_SOURCE =
@@ -35,12 +36,25 @@ const MEANINGS: Record<FractureType, string> = {
   unknown: 'The surface type is not recorded; have the fracture surface examined before drawing conclusions.',
 };
 
+/** What a model predicts about fracture, for the comparison with what was found. */
+export interface FracturePrediction {
+  verdict: PlasticVerdict;
+  /** The piece predicted to break first, in the energy balance's terms. */
+  predictedAt?: { side: SideName; piece: PlasticPieceResult };
+}
+
+/** The energy balance's fracture prediction: the first piece to break on the first side that breaks. */
+export function balanceFracturePrediction(plastic: PlasticResult): FracturePrediction {
+  const side = plastic.sides.find((s) => s.firstToBreak !== undefined && s.verdict === 'fracture predicted');
+  return { verdict: plastic.verdict, ...(side ? { predictedAt: { side: side.side, piece: side.pieces[side.firstToBreak!] } } : {}) };
+}
+
 /** Compares the recorded fracture (if any) with the predicted verdict and says what the surface usually means. */
-export function readFracture(c: Case, plastic: PlasticResult): FractureFinding | undefined {
+export function readFracture(c: Case, prediction: FracturePrediction): FractureFinding | undefined {
   const obs = c.observed.fracture;
   if (!obs) return undefined;
-  const side = plastic.sides.find((s) => s.firstToBreak !== undefined && s.verdict === 'fracture predicted');
-  const predictedAt = side ? { side: side.side, piece: side.pieces[side.firstToBreak!] } : undefined;
+  const plastic = prediction;
+  const predictedAt = prediction.predictedAt;
   const predicted = plastic.verdict === 'fracture predicted';
   const brittleBreak = predictedAt?.piece.brittle ?? false;
   let agreement: FractureAgreement;

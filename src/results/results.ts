@@ -49,6 +49,12 @@ export interface Results {
   elasticVerdict: ElasticVerdict;
   /** The energy balance past yield: peak torque capped by plasticity, permanent twist, fracture. */
   plastic: PlasticResult;
+  /**
+   * Which model the verdict past yield (permanent twist, fracture, the twist read-back) stands on:
+   * the dynamic model where the verdict's basis is the dynamic model and its shaft elements carry
+   * the elastic–plastic law; the energy balance otherwise.
+   */
+  pastYieldBasis: 'energy balance' | 'dynamic model';
   /** The damage recorded in the case read back to the incident. */
   observedFindings: ObservedFindings;
   /** Which result the verdict's elastic check stands on. */

@@ -1,15 +1,13 @@
 import type { Chain, ChainElement } from '../model/chain.ts';
 import type { SideName } from '../model/shaft-model.ts';
 import type { ChainSystem } from '../physics/chain-system.ts';
-import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
-import type { SeriesBackbone } from '../physics/series-backbone.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { SlipLaw } from '../physics/slip-law.ts';
 import { ElasticLaw, type TorqueLaw } from '../physics/torque-law.ts';
 
 /**
  * The numeric system the integrator takes, from a chain: one law per element (elastic shaft, or
- * yielding shaft where `backbone` gives the element's first-loading curve, a limiter's slip, a pin's parting), stiffness-proportional damping c = β·k with β = 2ζ/ω₁ per side
+ * the law `shaftLaw` gives a plain shaft element — yielding, breaking —, a limiter's slip, a pin's parting), stiffness-proportional damping c = β·k with β = 2ζ/ω₁ per side
  * so that each side's lowest mode has the damping ratio ζ (Rayleigh damping with the mass term
  * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident), and the twist
  * of the running torque, which flows from each drive to the stop.
@@ -20,7 +18,7 @@ export function systemOf(
   stop: { duration: number; torqueCapacity?: number },
   dampingRatio: number,
   lowest: Partial<Record<SideName, number>>,
-  backbone?: (el: ChainElement) => SeriesBackbone | undefined,
+  shaftLaw?: (el: ChainElement, initialTwist: number) => TorqueLaw | undefined,
 ): ChainSystem {
   const P = chain.stopNode;
   const m = chain.elements.length;
@@ -34,8 +32,7 @@ export function systemOf(
   const laws: TorqueLaw[] = chain.elements.map((el, e) => {
     if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e]);
     if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
-    const b = backbone?.(el);
-    return b ? new PlasticElementLaw(b, initialTwist[e]) : new ElasticLaw(el.stiffness);
+    return shaftLaw?.(el, initialTwist[e]) ?? new ElasticLaw(el.stiffness);
   });
   const damping = Float64Array.from(chain.elements, (el) => {
     const w = lowest[el.side];

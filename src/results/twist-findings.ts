@@ -31,6 +31,8 @@ export interface SpeedBand {
 /** A measured permanent twist read back to the incident. */
 export interface TwistFinding {
   measurement: TwistMeasurement;
+  /** Which model the prediction and the read-back come from. */
+  model: TwistRelation['model'];
   /** ± band stated on the measured angle, rad; 0 when none. */
   angleTolerance: number;
   /** Permanent twist between the stations predicted at the recorded speed, rad. */
@@ -62,50 +64,88 @@ const MEANINGS: Record<TwistFindingCode, string> = {
   unexplained: 'No speed leaves this much twist between these stations: a weaker piece elsewhere yields first and shields them (or they never yield). Check the measurement, the stations, and for slip at a fit.',
 };
 
-/** Reads every measured permanent twist back to the speed and energy of the stop. */
-export function readTwistBack(c: Case, sides: readonly Side[], balances: readonly SideBalance[]): TwistFinding[] {
+/**
+ * The speed at the stop → permanent twist between two stations, as one model gives it: the energy
+ * balance past yield (`balanceTwistRelation`) or the dynamic model (`dynamicTwistRelation`).
+ */
+export interface TwistRelation {
+  model: 'energy balance' | 'dynamic model';
+  /** Permanent twist between the stations after a stop from speed ω, rad. */
+  permanentAt(speed: number): number;
+  /** The speed that leaves exactly `twist`, rad/s; for a zero twist the onset speed; undefined when no speed does. */
+  speedFor(twist: number): number | undefined;
+  /** Highest speed that leaves no permanent twist between the stations, rad/s; Infinity when none ever does. */
+  onset(): number;
+  /** Kinetic energy at speed ω of what loads the stations, J. */
+  energyAt(speed: number): number;
+  /** Whether the model predicts fracture after a stop from speed ω. */
+  breaksAt(speed: number): boolean;
+  /** Points of the curve kept for the figure. */
+  curvePoints: number;
+}
+
+/**
+ * Reads every measured permanent twist back to the speed and energy of the stop. `relation` gives
+ * the model's speed → permanent-twist relation between two positions, or undefined when no shaft
+ * between them carries torque.
+ */
+export function readTwistBack(c: Case, relation: (x1: number, x2: number) => TwistRelation | undefined): TwistFinding[] {
   const band = speedBand(c);
   return c.observed.permanentTwist.map((m, k) => {
     const at = m.between.map((name) => c.stations.find((s) => s.name === name)!.at);
-    const [x1, x2] = [Math.min(...at), Math.max(...at)];
-    const rb: ReadBackSide[] = sides.map((side, i) => ({
-      balance: balances[i].balance,
-      inertia: balances[i].inertia,
-      between: side.pieces.flatMap((p, j) => (p.start >= x1 - EPS && p.end <= x2 + EPS ? [j] : [])),
-    }));
-    const involved = rb.filter((s) => s.between.length > 0);
+    const rel = relation(Math.min(...at), Math.max(...at));
     const tol = angleTolerance(c, k, m.angle);
     const base = { measurement: m, angleTolerance: tol, recordedSpeed: c.speed, band };
-    if (involved.length === 0) {
+    if (!rel) {
       const finding: TwistFindingCode = m.angle - tol <= 0 ? 'consistent' : 'no_loaded_shaft';
-      return { ...base, predicted: 0, yieldOnsetSpeed: Infinity, speedForMeasured: undefined, speedRange: [undefined, undefined], energyForMeasured: undefined, beyondFracture: false, finding, meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft, curve: [] };
+      return { ...base, model: 'energy balance' as const, predicted: 0, yieldOnsetSpeed: Infinity, speedForMeasured: undefined, speedRange: [undefined, undefined] as [undefined, undefined], energyForMeasured: undefined, beyondFracture: false, finding, meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft, curve: [] };
     }
-    const speed = speedForPermanentTwist(involved, m.angle);
-    const low = m.angle - tol <= 0 ? 0 : speedForPermanentTwist(involved, m.angle - tol);
-    const high = tol > 0 ? speedForPermanentTwist(involved, m.angle + tol) : speed;
-    const onset = onsetSpeed(involved);
+    const speed = rel.speedFor(m.angle);
+    const low = m.angle - tol <= 0 ? 0 : rel.speedFor(m.angle - tol);
+    const high = tol > 0 ? rel.speedFor(m.angle + tol) : speed;
+    const onset = rel.onset();
     let finding: TwistFindingCode;
     if (speed === undefined && m.angle - tol > 0) finding = 'unexplained';
     else if (low !== undefined && low > band.high) finding = 'more';
     else if (high !== undefined && high < band.low) finding = 'less';
     else finding = 'consistent';
-    const energy = speed === undefined ? undefined : energyAtSpeed(involved, speed);
-    const beyondFracture = speed !== undefined && involved.some((s) => 0.5 * s.inertia * speed ** 2 >= s.balance.fractureLimit().energy);
     const top = 1.3 * Math.max(c.speed, band.high, Number.isFinite(onset) ? onset : 0, speed ?? 0);
-    const speeds = [...Array.from({ length: CURVE_POINTS + 1 }, (_, i) => (top * i) / CURVE_POINTS), c.speed, ...(speed === undefined ? [] : [speed]), ...(Number.isFinite(onset) && onset < top ? [onset] : [])].sort((a, b) => a - b);
+    const n = rel.curvePoints;
+    const speeds = [...Array.from({ length: n + 1 }, (_, i) => (top * i) / n), c.speed, ...(speed === undefined ? [] : [speed]), ...(Number.isFinite(onset) && onset < top ? [onset] : [])].sort((a, b) => a - b);
     return {
       ...base,
-      predicted: permanentTwistAtSpeed(involved, c.speed),
+      model: rel.model,
+      predicted: rel.permanentAt(c.speed),
       yieldOnsetSpeed: onset,
       speedForMeasured: speed,
-      speedRange: [low, high],
-      energyForMeasured: energy,
-      beyondFracture,
+      speedRange: [low, high] as [number | undefined, number | undefined],
+      energyForMeasured: speed === undefined ? undefined : rel.energyAt(speed),
+      beyondFracture: speed !== undefined && rel.breaksAt(speed),
       finding,
       meaning: MEANINGS[finding],
-      curve: speeds.map((w) => ({ speed: w, permanentTwist: permanentTwistAtSpeed(involved, w) })),
+      curve: speeds.map((w) => ({ speed: w, permanentTwist: rel.permanentAt(w) })),
     };
   });
+}
+
+/** The energy balance's relation between two positions: each side's energy ½·J·ω² into its run of shaft. */
+export function balanceTwistRelation(sides: readonly Side[], balances: readonly SideBalance[], x1: number, x2: number): TwistRelation | undefined {
+  const rb: ReadBackSide[] = sides.map((side, i) => ({
+    balance: balances[i].balance,
+    inertia: balances[i].inertia,
+    between: side.pieces.flatMap((p, j) => (p.start >= x1 - EPS && p.end <= x2 + EPS ? [j] : [])),
+  }));
+  const involved = rb.filter((s) => s.between.length > 0);
+  if (involved.length === 0) return undefined;
+  return {
+    model: 'energy balance',
+    permanentAt: (w) => permanentTwistAtSpeed(involved, w),
+    speedFor: (t) => speedForPermanentTwist(involved, t),
+    onset: () => onsetSpeed(involved),
+    energyAt: (w) => energyAtSpeed(involved, w),
+    breaksAt: (w) => involved.some((s) => 0.5 * s.inertia * w ** 2 >= s.balance.fractureLimit().energy),
+    curvePoints: CURVE_POINTS,
+  };
 }
 
 /** The case's ± on `speed`, or the default ±10 %. */
@@ -128,7 +168,8 @@ function angleTolerance(c: Case, index: number, angle: number): number {
  * it, `more` when the whole interval lies above the recorded speed, `less` when below.
  */
 export function judgeByInterval(f: TwistFinding, interval: [number, number] | null): TwistFinding {
-  if (interval === null || f.finding === 'no_loaded_shaft' || f.finding === 'unexplained') return f;
+  // The uncertainty run samples the energy balance; a finding read through the dynamic model keeps its own band.
+  if (interval === null || f.model !== 'energy balance' || f.finding === 'no_loaded_shaft' || f.finding === 'unexplained') return f;
   const finding: TwistFindingCode = f.recordedSpeed < interval[0] ? 'more' : f.recordedSpeed > interval[1] ? 'less' : 'consistent';
   return { ...f, finding, meaning: MEANINGS[finding], speedRange: [interval[0], interval[1]], band: { low: f.recordedSpeed, high: f.recordedSpeed, basis: 'monte-carlo' } };
 }

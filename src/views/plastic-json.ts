@@ -70,6 +70,7 @@ export function observedToJson(o: ObservedFindings): Record<string, unknown>[] {
     speed_band_basis: f.band.basis,
     beyond_fracture: f.beyondFracture,
     finding: f.finding,
+    model: f.model,
     finding_text: f.meaning,
   }));
 }

@@ -2,6 +2,7 @@ import type { Results } from '../results/results.ts';
 import type { PlasticPieceResult } from '../results/plastic-result.ts';
 import type { TwistFinding } from '../results/twist-findings.ts';
 import { show, sig } from './display-units.ts';
+import { dynamicPastYieldLines, dynamicVerdictSentence } from './dynamic-past-yield.ts';
 
 type Units = Results['case']['units'];
 
@@ -14,6 +15,7 @@ export function describePlasticPiece(p: PlasticPieceResult, u: Units, text: (s: 
 
 /** The overall verdict in one sentence, from the plastic balance and the elastic method; `text` escapes user text (labels) for the output format. */
 export function overallVerdictSentence(r: Results, text: (s: string) => string = (s) => s): string {
+  if (r.pastYieldBasis === 'dynamic model') return dynamicVerdictSentence(r, text);
   const u = r.case.units;
   const p = r.plastic;
   if (r.verdict === 'fracture predicted') {
@@ -32,11 +34,20 @@ export function overallVerdictSentence(r: Results, text: (s: string) => string =
   return 'ELASTIC: no yield is predicted.';
 }
 
-/** The plastic result for `check`, shown when the elastic yield ratio is at or above 1. */
+/**
+ * The result past yield for `check`, shown when the elastic yield ratio is at or above 1: the
+ * dynamic model's where the verdict stands on it, then the energy balance (for comparison there).
+ */
 export function plasticLines(r: Results): string[] {
   const u = r.case.units;
   const p = r.plastic;
-  const out: string[] = ['', `Past yield (energy balance, ${r.case.analysis.hardening === 'linear' ? 'linear strain hardening' : 'elastic–perfectly plastic'}):`];
+  const law = r.case.analysis.hardening === 'linear' ? 'linear strain hardening' : 'elastic–perfectly plastic';
+  const dynamic = r.pastYieldBasis === 'dynamic model';
+  const out: string[] = [
+    ...(dynamic ? dynamicPastYieldLines(r) : []),
+    '',
+    dynamic ? `Past yield by the energy balance, for comparison (${law}; all of each side's energy into its shaft, nothing else acting):` : `Past yield (energy balance, ${law}):`,
+  ];
   for (const s of p.sides) {
     const at = s.verdict === 'fracture predicted' ? ' at the break' : '';
     out.push(`  Side ${s.side}  peak torque${at} ${show(s.peakTorque, 'torque', u)}, twist ${show(s.totalTwist, 'angle', u)}, permanent twist ${show(s.permanentTwist, 'angle', u)}, highest shear strain ${sig(s.maxShearStrain)}`);

@@ -173,3 +173,77 @@ describe('PlasticElementLaw, Masing branches', () => {
   });
   void theta;
 });
+
+describe('PlasticElementLaw, fracture in time', () => {
+  // One inertia on a ductile shaft stopped at once, hard enough to break it: the element breaks
+  // when its twist reaches φ_f·L, having absorbed the energy under the torque–twist curve up to
+  // there, and carries nothing afterwards, so the inertia spins on with what is left.
+  const J = 0.5;
+  const L = 0.4;
+  const tl = law(0.015, 300e6);
+  const gammaF = 0.6;
+  const phiF = gammaF / 0.015;
+  const k = rigidity(tl) / L;
+  /** Energy to break, J: ∫T dθ up to φ_f·L by the trapezoidal rule on a fine geometric grid (independent of energyPerLength). */
+  const breakEnergy = (() => {
+    const phiY = yieldTorque(tl) / rigidity(tl);
+    let e = 0.5 * yieldTorque(tl) * phiY * L;
+    const n = 20000;
+    for (let i = 0; i < n; i++) {
+      const a = phiY * (phiF / phiY) ** (i / n);
+      const b = phiY * (phiF / phiY) ** ((i + 1) / n);
+      e += 0.5 * (torqueAtTwistRate(tl, a) + torqueAtTwistRate(tl, b)) * (b - a) * L;
+    }
+    return e;
+  })();
+  const run = (speed: number) => {
+    const el = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L, fractureTwistRate: phiF }]));
+    const period = 2 * Math.PI * Math.sqrt(J / k);
+    const r = integrateChain(chain({ J: [0, J], k: [k], speed, laws: [el] }), { duration: 40 * period, timeStep: period / 2000 });
+    return { el, r };
+  };
+
+  it('the backbone breaks at φ_f·L on first loading for one piece', () => {
+    const b = new SeriesBackbone([{ law: tl, length: L, fractureTwistRate: phiF }]);
+    expect(rel(b.fractureTwist, phiF * L)).toBeLessThan(1e-12);
+    expect(b.firstToBreak).toBe(0);
+    expect(new SeriesBackbone([{ law: tl, length: L }]).fractureTwist).toBe(Infinity);
+  });
+
+  it('breaks once above the energy to break, and the inertia keeps ½Jω² less that energy within 0.5 %', () => {
+    const w0 = Math.sqrt((2 * 1.5 * breakEnergy) / J);
+    const { el, r } = run(w0);
+    expect(el.broken).toBe(true);
+    expect(r.events.filter((e) => e.what === 'breaks')).toHaveLength(1);
+    const left = r.energy.final;
+    expect(rel(left, 0.5 * J * w0 ** 2 - breakEnergy)).toBeLessThan(0.005);
+    expect(Math.abs(books(r)) / r.energy.initial).toBeLessThan(1e-3);
+    expect(el.torque(1)).toBe(0);
+  });
+
+  it('does not break just below the energy to break (0.97 of it), and yields', () => {
+    const { el, r } = run(Math.sqrt((2 * 0.97 * breakEnergy) / J));
+    expect(el.broken).toBe(false);
+    expect(el.yielded).toBe(true);
+    expect(r.events.some((e) => e.what === 'breaks')).toBe(false);
+  });
+
+  it('in two pieces in series the piece whose fracture torque is lower breaks first, at the twist where its own rate reaches φ_f', () => {
+    const thin = law(0.012, 300e6);
+    const thick = law(0.016, 300e6);
+    const b = new SeriesBackbone([
+      { law: thick, length: 0.3, fractureTwistRate: 0.6 / 0.016 },
+      { law: thin, length: 0.2, fractureTwistRate: 0.6 / 0.012 },
+    ]);
+    expect(b.firstToBreak).toBe(1);
+    // Independently: bisect the element twist until the thin piece's rate is at its fracture rate.
+    let lo = b.yieldTwist;
+    let hi = 10;
+    for (let i = 0; i < 200; i++) {
+      const m = 0.5 * (lo + hi);
+      if (b.pieceTwistRates(m)[1] < 0.6 / 0.012) lo = m;
+      else hi = m;
+    }
+    expect(rel(b.fractureTwist, lo)).toBeLessThan(1e-6);
+  });
+});

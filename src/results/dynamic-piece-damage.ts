@@ -1,0 +1,46 @@
+import type { Chain } from '../model/chain.ts';
+import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
+import { residualTwistRate } from '../physics/plastic-torsion.ts';
+import { ShearPinLaw } from '../physics/shear-pin-law.ts';
+import type { TorqueLaw } from '../physics/torque-law.ts';
+
+/** What the incident left in one piece of shaft, by the dynamic model. */
+export interface PieceDamage {
+  /** Twist left after the incident, rad (0 where it stayed elastic, broke, or plasticity is off). */
+  permanentTwist: number;
+  /** Largest outer-fibre shear strain it reached (net section), rad; 0 where plasticity is off. */
+  maxShearStrain: number;
+  /** Whether an element in the piece broke. */
+  broken: boolean;
+}
+
+/**
+ * The damage of each piece after the incident. Permanent twist: elastic unloading from the largest
+ * twist each of its elements reached (by Masing's rule always a point of first loading),
+ * φ_p = φ − T/GJ_p per length (shared REFERENCE 3.1.6, `residualTwistRate`), over the part of the
+ * piece in the element; each piece's share of the element's twist from
+ * `SeriesBackbone.pieceTwistRates`. A broken element leaves no measurable twist (the parts have
+ * separated); its piece is marked broken.
+ */
+export function dynamicPieceDamage(chain: Chain, laws: readonly TorqueLaw[]): PieceDamage[] {
+  const out: PieceDamage[] = chain.pieces.map(() => ({ permanentTwist: 0, maxShearStrain: 0, broken: false }));
+  chain.elements.forEach((el, e) => {
+    const law = laws[e];
+    if (law instanceof ShearPinLaw && law.kind === 'shaft' && law.isParted) {
+      for (const i of el.pieces) out[i].broken = true;
+      return;
+    }
+    if (!(law instanceof PlasticElementLaw)) return;
+    const b = law.backbone;
+    const rates = b.pieceTwistRates(law.peakTwist);
+    // The backbone's pieces are the element's pieces of positive length, in order.
+    const inside = el.pieces.filter((i) => Math.min(el.end, chain.pieces[i].piece.end) - Math.max(el.start, chain.pieces[i].piece.start) > 0);
+    inside.forEach((i, k) => {
+      const { law: tl, length } = b.pieces[k];
+      out[i].maxShearStrain = Math.max(out[i].maxShearStrain, tl.outerRadius * rates[k]);
+      if (law.broken && k === b.firstToBreak) out[i].broken = true;
+      else if (law.yielded) out[i].permanentTwist += length * residualTwistRate(tl, rates[k]);
+    });
+  });
+  return out;
+}

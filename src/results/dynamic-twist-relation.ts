@@ -1,0 +1,97 @@
+import type { Case } from '../case/case.ts';
+import type { ShaftModel } from '../model/shaft-model.ts';
+import { bracketedRoot } from '../physics/root-find.ts';
+import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
+import { solveDynamics } from './dynamic-solve.ts';
+import type { TwistRelation } from './twist-findings.ts';
+
+/** Points of the figure's curve: each is one run of the dynamic model. */
+const CURVE_POINTS = 12;
+/** Relative width in speed to which the inversions are carried. */
+const SPEED_TOLERANCE = 1e-5;
+/** The onset of yield is found to this share of its speed (it only sets the figure's range and the zero-twist reading). */
+const ONSET_TOLERANCE = 0.01;
+/** Permanent twist below this is taken as none, rad (about 0.00006°, far below any measurement). */
+const NONE = 1e-6;
+/** Speed steps upward when looking for a speed that leaves a twist: ×1.5, this many times. */
+const MAX_GROWTH = 24;
+const EPS = 1e-9;
+
+/**
+ * The dynamic model's speed → permanent-twist relation between two positions: the case rerun at
+ * each trial speed (everything else, including the element count of the first solution, kept),
+ * its shaft elements elastic–plastic, and the permanent twists of the pieces between the positions
+ * summed. Inverted by a bracketed root (Brent) on the runs, kept in a cache. The relation is
+ * monotone wherever what absorbs the energy is (the shaft, a slipping belt or limiter); it is not
+ * assumed, the root is bracketed. The energy named beside a speed is the parts' ½·J·ω² on the
+ * sides that load the positions (`sideInertia`, per side of `model`), as the energy balance names
+ * it. Undefined when no piece lies between the positions.
+ */
+export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: readonly number[], elementTarget: number, x1: number, x2: number): TwistRelation | undefined {
+  const inside = (p: { start: number; end: number }) => p.start >= x1 - EPS && p.end <= x2 + EPS;
+  const involved = model.sides.flatMap((s, i) => (s.pieces.some(inside) ? [sideInertia[i]] : []));
+  if (involved.length === 0) return undefined;
+  const inertia = involved.reduce((a, b) => a + b, 0);
+  const fixed: Case = { ...c, analysis: { ...c.analysis, elements: elementTarget, dynamicPlasticity: true } };
+  const runs = new Map<number, { twist: number; broken: boolean }>();
+  const run = (w: number) => {
+    const hit = runs.get(w);
+    if (hit) return hit;
+    let out = { twist: 0, broken: false };
+    if (w > 0) {
+      const sol = solveDynamics({ ...fixed, speed: w }, model).final;
+      const damage = dynamicPieceDamage(sol.chain, sol.run.laws);
+      let twist = 0;
+      sol.chain.pieces.forEach((p, i) => {
+        if (inside(p.piece)) twist += damage[i].permanentTwist;
+      });
+      out = { twist, broken: damage.some((d) => d.broken) };
+    }
+    runs.set(w, out);
+    return out;
+  };
+  const permanentAt = (w: number) => run(w).twist;
+  /** A bracket [lo, hi] with twist(lo) ≤ t < twist(hi) from the runs so far, growing upward from the recorded speed. */
+  const bracket = (t: number): [number, number] | undefined => {
+    let w = c.speed;
+    for (let k = 0; permanentAt(w) <= t; k++) {
+      if (k >= MAX_GROWTH) return undefined;
+      w *= 1.5;
+    }
+    const known = [...runs.entries()].sort((a, b) => a[0] - b[0]);
+    const lo = known.filter(([, r]) => r.twist <= t).map(([x]) => x).filter((x) => x < w);
+    const hi = known.filter(([x, r]) => r.twist > t && x > Math.max(0, ...lo)).map(([x]) => x);
+    return [Math.max(0, ...lo), Math.min(w, ...hi)];
+  };
+  let onsetSpeed: number | undefined;
+  const onset = (): number => {
+    if (onsetSpeed !== undefined) return onsetSpeed;
+    const b = bracket(NONE);
+    onsetSpeed = b === undefined ? Infinity : bisect((w) => permanentAt(w) > NONE, b[0], b[1], ONSET_TOLERANCE);
+    return onsetSpeed;
+  };
+  return {
+    model: 'dynamic model',
+    permanentAt,
+    speedFor: (t) => {
+      if (t <= 0) return onset();
+      const b = bracket(t);
+      if (b === undefined) return undefined;
+      return bracketedRoot((w) => permanentAt(w) - t, b[0], b[1], SPEED_TOLERANCE * b[1]);
+    },
+    onset,
+    energyAt: (w) => 0.5 * inertia * w * w,
+    breaksAt: (w) => run(w).broken,
+    curvePoints: CURVE_POINTS,
+  };
+}
+
+/** The edge of `yes` between lo (no) and hi (yes) to a relative width `tol`, by bisection. */
+function bisect(yes: (w: number) => boolean, lo: number, hi: number, tol: number): number {
+  while (hi - lo > tol * hi) {
+    const mid = 0.5 * (lo + hi);
+    if (yes(mid)) hi = mid;
+    else lo = mid;
+  }
+  return lo;
+}

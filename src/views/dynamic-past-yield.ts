@@ -1,0 +1,60 @@
+import type { DynamicPiece } from '../results/dynamic-result.ts';
+import type { Results } from '../results/results.ts';
+import { show, sig } from './display-units.ts';
+
+type Units = Results['case']['units'];
+
+/** '"sheave seat" 60 mm to 120 mm, Ø55 mm' for a piece of the dynamic model, in the case's units; `text` escapes the label. */
+export function describeDynamicPiece(p: DynamicPiece, u: Units, text: (s: string) => string = (s) => s): string {
+  const seg = p.piece.segment;
+  const name = seg.label ? `"${text(seg.label)}"` : `segment ${seg.index + 1}`;
+  return `${name} ${show(p.piece.start, 'length', u)} to ${show(p.piece.end, 'length', u)}, Ø${show(seg.diameter, 'length', u)}${seg.bore > 0 ? ` bore ${show(seg.bore, 'length', u)}` : ''}`;
+}
+
+/** The piece that broke first in the dynamic model, if any. */
+export function firstBroken(r: Results): DynamicPiece | undefined {
+  return r.dynamic.pieces.filter((p) => p.broken).sort((a, b) => (a.breakTime ?? 0) - (b.breakTime ?? 0))[0];
+}
+
+/** The piece with the largest permanent twist in the dynamic model. */
+export function mostTwisted(r: Results): DynamicPiece {
+  return r.dynamic.pieces.reduce((b, p) => (p.permanentTwist > b.permanentTwist ? p : b), r.dynamic.pieces[0]);
+}
+
+/** The overall verdict in one sentence where it stands on the dynamic model past yield. */
+export function dynamicVerdictSentence(r: Results, text: (s: string) => string = (s) => s): string {
+  const u = r.case.units;
+  const broke = firstBroken(r);
+  if (r.verdict === 'fracture predicted' && broke) {
+    const when = broke.breakTime === undefined ? '' : ` ${sig(broke.breakTime * 1000)} ms after the stop began`;
+    return `FRACTURE PREDICTED (dynamic model): ${describeDynamicPiece(broke, u, text)} breaks${when}, at its fracture ${r.plastic.sides.flatMap((s) => s.pieces).find((p) => p.piece.start === broke.piece.start && p.piece.end === broke.piece.end)?.brittle ? 'stress' : 'strain'}.`;
+  }
+  if (r.verdict === 'yielded' && r.dynamic.yielded) {
+    const p = mostTwisted(r);
+    const total = r.dynamic.pieces.reduce((s, x) => s + x.permanentTwist, 0);
+    const rest = Math.abs(total - p.permanentTwist) > 1e-3 * total ? ` (${show(total, 'angle', u)} along the whole shaft)` : '';
+    return `YIELDED (dynamic model): the torque in ${describeDynamicPiece(p, u, text)} is capped by plasticity at ${show(p.peakTorque, 'torque', u)}; a permanent twist of ${show(p.permanentTwist, 'angle', u)} is predicted there${rest}; no fracture is predicted.`;
+  }
+  if (r.verdict === 'yielded') {
+    return 'YIELDED (locally): the net section stays elastic, but the stress at a stress raiser passes yield; no measurable permanent twist is predicted.';
+  }
+  return 'ELASTIC: no yield is predicted.';
+}
+
+/** The dynamic model's result past yield for `check`: each piece that yielded or broke. */
+export function dynamicPastYieldLines(r: Results): string[] {
+  const u = r.case.units;
+  const d = r.dynamic;
+  const out = ['', 'Past yield in time (dynamic model, its shaft elements elastic–perfectly plastic on the net section, Masing\'s rule on reversals):'];
+  const facts = r.plastic.sides.flatMap((s) => s.pieces);
+  const hit = d.pieces.filter((p) => p.permanentTwist > 0 || p.broken);
+  if (hit.length === 0) out.push('  No piece yields through its net section.');
+  for (const p of hit) {
+    const f = facts.find((x) => x.piece.start === p.piece.start && x.piece.end === p.piece.end);
+    const fs = f?.fractureStrain === undefined ? 'fracture strain unknown' : `fracture at ${sig(f.fractureStrain)}`;
+    const state = p.broken ? `BREAKS at ${sig((p.breakTime ?? 0) * 1000)} ms` : `permanent ${show(p.permanentTwist, 'angle', u)}, shear strain ${sig(p.maxShearStrain)} (${fs})`;
+    out.push(`  Side ${p.side}, ${describeDynamicPiece(p, u)}: peak torque ${show(p.peakTorque, 'torque', u)}, ${state}`);
+  }
+  if (d.yielded) out.push(`  plastic work in the shaft ${show(d.plasticWork, 'energy', u)}`);
+  return out;
+}
