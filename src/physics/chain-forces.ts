@@ -54,16 +54,19 @@ export function motorPieceValue(st: ChainStepper, d: DriveState): number {
 }
 
 /**
- * Node accelerations from the forces at the committed state: elastic torques, dashpots at the
- * last step's mean rate, motors, slipping belts and a slipping jam, over the node's inertia.
+ * Node accelerations the recorder's end-face torques take, at the committed state: from the
+ * elements' law torques, motors, slipping belts and a slipping jam, over the node's inertia. The
+ * dashpots are left out, as they are from every reported torque (see `ChainRecorder.elementTorque`):
+ * with them, T ∓ ½j·a at a face would carry half the difference of the neighbouring dashpot torques,
+ * and next to an instantaneously stopped node or a slipping device (no dashpot) that difference is
+ * c·Δω, which grows as the shaft is split finer (c = β·k) and the step is shortened.
  */
 export function updateAccelerations(st: ChainStepper, h: number): void {
-  const { n, m, tq, cEff, acc, jeff, dphi, P } = st;
+  const { n, m, tq, acc, jeff, P } = st;
   acc.fill(0);
   for (let e = 0; e < m; e++) {
-    const T = tq[e] + (h > 0 ? (cEff[e] * (dphi[e + 1] - dphi[e])) / h : 0);
-    acc[e] += T;
-    acc[e + 1] -= T;
+    acc[e] += tq[e];
+    acc[e + 1] -= tq[e];
   }
   for (let j = 0; j < st.drives.length; j++) {
     const d = st.drives[j];

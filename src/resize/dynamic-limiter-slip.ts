@@ -1,6 +1,8 @@
 import type { Case } from '../case/case.ts';
 import type { SideName } from '../model/shaft-model.ts';
+import { stopWaveTorque } from '../physics/stop-wave.ts';
 import { analyseCase } from '../results/analyse-case.ts';
+import type { DynamicPiece } from '../results/dynamic-result.ts';
 import type { Results } from '../results/results.ts';
 import { limiterSegment, withLimiter } from './limiter-segment.ts';
 
@@ -19,7 +21,20 @@ export interface DynamicLimiterSlip {
   yieldRatio: number;
   /** The rerun's result. */
   rerun: Results;
+  /** Where the stop is instantaneous and the peak stands well above the setting: the stop's own stress wave in the piece that carries the peak (see `stopWaveAbove`). */
+  stopWave?: StopWave;
 }
+
+/** The torsional stress wave of an instantaneous stop in one piece of shaft. */
+export interface StopWave {
+  /** ω·J_p·√(G·ρ), N·m. */
+  torque: number;
+  /** The piece, in words: '"rotor body"' or 'segment 4'. */
+  piece: string;
+}
+
+/** A peak above the setting by more than this share is explained by the stop's wave, where the stop is instantaneous. */
+const ABOVE_SETTING = 0.1;
 
 /**
  * The limiter put into the case as a slip element (`slip_torque` on the segment that
@@ -38,14 +53,34 @@ export function dynamicLimiterSlip(c: Case, station: string, side: SideName, set
   const stop = c.stations.find((s) => s.name === c.stop.at)!.at;
   const reach = Math.abs(c.stations.find((s) => s.name === station)!.at - stop) + 1e-9;
   const run = d.pieces.filter((p) => p.side === side && Math.max(Math.abs(p.piece.start - stop), Math.abs(p.piece.end - stop)) <= reach);
+  const peakTorque = Math.max(0, ...run.map((p) => p.peakTorque));
+  const wave = stopWaveAbove(c, run, setting, peakTorque);
   return {
     segment: seg.index,
-    peakTorque: Math.max(0, ...run.map((p) => p.peakTorque)),
+    peakTorque,
     slipEnergy: slip.energy,
     slipAngle: slip.angle,
     energyLeft: d.energy.final,
     dampingWork: d.energy.dampingWork,
     yieldRatio: d.sides.find((s) => s.side === side)?.dynamicYieldRatio ?? d.yieldRatio,
     rerun,
+    ...(wave ? { stopWave: wave } : {}),
   };
+}
+
+/**
+ * Why the run between a slipping limiter and the stop can peak far above the setting: an
+ * instantaneous stop sends its stress wave, ω·J_p·√(G·ρ) on top of the running torque, into the
+ * shaft next to the stop at once, before the limiter farther along feels anything (the wave needs
+ * the run's length over √(G/ρ) to reach it), so no limiter cuts it. Given for the piece that carries
+ * the peak, where the stop is instantaneous, the peak exceeds the setting by more than 10 % and the
+ * shaft's density is known (without it the model leaves the shaft's inertia, and the wave, out).
+ */
+function stopWaveAbove(c: Case, run: readonly DynamicPiece[], setting: number, peakTorque: number): StopWave | undefined {
+  if (c.stop.duration > 0 || peakTorque <= (1 + ABOVE_SETTING) * setting || run.length === 0) return undefined;
+  const top = run.reduce((best, p) => (p.peakTorque > best.peakTorque ? p : best));
+  const seg = top.piece.segment;
+  const m = c.materials[seg.material];
+  if (m.density === undefined || m.shearModulus === undefined) return undefined;
+  return { torque: stopWaveTorque(c.speed, m.shearModulus, m.density, seg.diameter, seg.bore), piece: seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}` };
 }

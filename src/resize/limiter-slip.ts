@@ -1,6 +1,6 @@
 import type { SideName } from '../model/shaft-model.ts';
 import type { Results } from '../results/results.ts';
-import { dynamicLimiterSlip } from './dynamic-limiter-slip.ts';
+import { dynamicLimiterSlip, type StopWave } from './dynamic-limiter-slip.ts';
 
 export type SlipMethod = 'energy method' | 'dynamic model';
 
@@ -35,6 +35,8 @@ export interface LimiterSlip {
   dampingWork?: number;
   /** Why the energy method was kept where the verdict stands on the dynamic model. */
   note?: string;
+  /** Dynamic model, instantaneous stop, peak well above the setting: the stop's own stress wave that explains it. */
+  stopWave?: StopWave;
 }
 
 /**
@@ -87,6 +89,7 @@ export function limiterSlip(r: Results, place: LimiterPlace, setting: number, en
     segment: d.segment,
     yieldRatio: d.yieldRatio,
     dampingWork: d.dampingWork,
+    ...(d.stopWave ? { stopWave: d.stopWave } : {}),
   };
 }
 

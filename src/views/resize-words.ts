@@ -89,6 +89,11 @@ export function limiterSentences(z: ResizeResult): string[] {
       : `At ${show(s.setting, 'torque', u)} the limiter would not slip in a repeat of this incident: the peak torque ${show(s.peakTorque, 'torque', u)} stays below the setting (${s.method}).`,
   );
   if (s.note) out.push(s.note);
+  if (s.stopWave) {
+    out.push(
+      `That peak is above the setting because the stop is taken as instantaneous: it sends a torsional stress wave into the shaft next to it, ω·J_p·√(G·ρ) = ${show(s.stopWave.torque, 'torque', u)} in ${s.stopWave.piece} on top of the running torque, before the limiter can feel the stop, and no limiter cuts it. It belongs to the idealised stop: a stop spread over a few milliseconds (stop.duration) brings the peak there close to the setting.`,
+    );
+  }
   if (o.unlimitedStations.length > 0) out.push(`The parts at ${o.unlimitedStations.map((n) => `"${n}"`).join(', ')} lie between the limiter and the stop and still drive the shaft unlimited.`);
   for (const s2 of o.otherSides) if (s2.yieldRatio * z.designFactor > 1) out.push(`Side ${s2.side} (yield ratio ${sig(s2.yieldRatio)}) is not protected by this limiter; it needs its own.`);
   return out;
