@@ -38,6 +38,8 @@ export class ChainRecorder {
   private readonly h: ChainHistory;
   /** Half of each element's own inertia, kg·m². */
   private readonly halfInertia: Float64Array;
+  /** Each element's torque limit (`TorqueLaw.torqueLimit`), N·m. */
+  private readonly limit: Float64Array;
 
   constructor(
     private readonly st: ChainStepper,
@@ -49,6 +51,7 @@ export class ChainRecorder {
     this.peakTime = new Float64Array(m);
     this.peakBelt = new Float64Array(st.drives.length);
     this.halfInertia = Float64Array.from(st.sys.elementInertia ?? new Float64Array(m), (j) => j / 2);
+    this.limit = Float64Array.from(st.laws, (l) => l.torqueLimit ?? Infinity);
     this.a = new Float64Array(m);
     this.b = new Float64Array(m);
     this.spacing = duration / Math.max(samples - 1, 1);
@@ -93,12 +96,14 @@ export class ChainRecorder {
       // its own inertia, the section torque is largest at a face, and this makes the peak torque
       // converge as 1/n² with the element count, like the frequencies (not as 1/n).
       const T = st.tq[e];
-      const c = Math.max(Math.abs(T - J[e] * acc[e]), Math.abs(T + J[e] * acc[e + 1]), Math.abs(T));
+      // No section carries more than its fully plastic torque: the slab correction is an elastic
+      // estimate and does not hold across a yielded section.
+      const c = Math.min(Math.max(Math.abs(T - J[e] * acc[e]), Math.abs(T + J[e] * acc[e + 1]), Math.abs(T)), this.limit[e]);
       const a = this.a[e];
       const b = this.b[e];
       if (equal && b >= a && b > c) {
         const curv = 2 * b - a - c;
-        const top = b + ((c - a) * (c - a)) / (8 * curv);
+        const top = Math.min(b + ((c - a) * (c - a)) / (8 * curv), this.limit[e]);
         if (top > this.peak[e]) {
           this.peak[e] = top;
           this.peakTime[e] = st.t - step + (step * (a - c)) / (2 * (a - 2 * b + c));

@@ -64,7 +64,7 @@ export class ChainStepper {
   readonly laws: TorqueLaw[];
   /** Elements whose law is not affine on its current branch (Newton-iterated); re-read at every branch change. */
   nonAffine: number[];
-  /** 1 where the element's law is plain elastic (handled inline, no call into the law). */
+  /** 1 where the element's law is plain elastic, or elastic until its next event (handled inline, no call into the law). */
   private readonly plain: Uint8Array;
   /** The dashpot acting across each element on its current branch (0 across a slipping or parted device). */
   readonly cEff: Float64Array;
@@ -106,7 +106,7 @@ export class ChainStepper {
     this.solver = new TridiagonalSolver(n);
     this.laws = sys.laws;
     this.nonAffine = sys.laws.flatMap((l, e) => (l.affine ? [] : [e]));
-    this.plain = Uint8Array.from(sys.laws, (l) => (l instanceof ElasticLaw ? 1 : 0));
+    this.plain = new Uint8Array(sys.laws.length);
     this.cEff = new Float64Array(Math.max(n - 1, 1));
     this.P = sys.stop.node;
     this.motion = new StopMotion(sys.speed, sys.stop.duration);
@@ -152,6 +152,7 @@ export class ChainStepper {
       this.kt[e] = law.tangent(this.theta[e]);
       this.cEff[e] = law.damped() ? this.sys.damping[e] : 0;
       this.tq[e] = law.torque(this.theta[e]);
+      this.plain[e] = law instanceof ElasticLaw || law.elasticUntilEvent === true ? 1 : 0;
     }
     this.nonAffine = this.laws.flatMap((l, e) => (l.affine ? [] : [e]));
     this.dirty = true;

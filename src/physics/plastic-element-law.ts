@@ -59,16 +59,29 @@ export class PlasticElementLaw implements TorqueLaw {
     this.stiffness = backbone.stiffness;
     this.lo = -backbone.yieldTwist;
     this.hi = backbone.yieldTwist;
-    this.committed = initialTwist;
+    this.committed = NaN;
     if (Math.abs(initialTwist) > backbone.yieldTwist) {
       this.straight = false;
       this.sense = initialTwist > 0 ? 1 : -1;
     }
     this.committedTorque = this.torque(initialTwist);
+    this.committed = initialTwist;
     this.initialStored = this.recoverable(this.committedTorque);
     this.work = 0;
     this.peakTorque = Math.abs(this.committedTorque);
     this.peakTwist = Math.abs(initialTwist);
+  }
+
+  /**
+   * Not yet yielded, from an untwisted start: T = k·θ, and the stepper need not commit it step by
+   * step (`enter` catches up, see `catchUp`). A start past yield or with a running twist is left out.
+   */
+  get elasticUntilEvent(): boolean {
+    return this.straight && this.turns.length === 0 && !this.broken && this.yieldStarts === 0 && this.initialStored === 0;
+  }
+
+  get torqueLimit(): number {
+    return this.backbone.limitTorque;
   }
 
   get affine(): boolean {
@@ -88,6 +101,8 @@ export class PlasticElementLaw implements TorqueLaw {
 
   torque(theta: number): number {
     if (this.broken) return 0;
+    // The stepper asks again for the torque it has just committed.
+    if (theta === this.committed) return this.committedTorque;
     const top = this.turns[this.turns.length - 1];
     if (this.straight) return top ? top.torque + this.stiffness * (theta - top.theta) : this.stiffness * theta;
     if (!top) return Math.sign(theta) * this.backbone.torque(Math.abs(theta));
@@ -112,6 +127,7 @@ export class PlasticElementLaw implements TorqueLaw {
   }
   enter(theta: number): string {
     if (this.broken) return 'no change';
+    if (this.elasticUntilEvent) this.catchUp(theta);
     if (Math.abs(theta) >= this.backbone.fractureTwist * (1 - 1e-9)) {
       // The integrator has committed θ already. The stored energy goes with the break: the
       // committed torque drops to zero, so the dissipated total takes up T²/2k.
@@ -175,6 +191,20 @@ export class PlasticElementLaw implements TorqueLaw {
   }
   energy(theta: number): number {
     return this.recoverable(this.torque(theta));
+  }
+
+  /**
+   * The state an elastic element committed step by step would have at θ: the work done on it is
+   * its strain energy (the trapezoidal book is exact for T = k·θ), and its largest twist is taken
+   * as θ (the event that calls this is the first one, on the way to yield).
+   */
+  private catchUp(theta: number): void {
+    const T = this.stiffness * theta;
+    this.work = this.recoverable(T);
+    this.committed = theta;
+    this.committedTorque = T;
+    this.peakTorque = Math.max(this.peakTorque, Math.abs(T));
+    this.peakTwist = Math.max(this.peakTwist, Math.abs(theta));
   }
 
   /** The twist where the yielding branch meets its remembered path, or undefined on first loading. */

@@ -63,12 +63,17 @@ function coreRadius(l: TorsionLaw, phi: number): number {
  */
 export function torqueAtTwistRate(l: TorsionLaw, phi: number): number {
   const { outerRadius: c2, innerRadius: c1, shearModulus: g, hardeningModulus: h } = l;
-  const rho = coreRadius(l, phi);
-  if (rho >= c2) return g * polar(l) * phi;
-  const a = Math.max(rho, c1);
-  const core = rho > c1 ? (Math.PI / 2) * g * phi * (a ** 4 - c1 ** 4) : 0;
-  const rim = ((2 * Math.PI) / 3) * l.shearYield * (c2 ** 3 - a ** 3);
-  const hardening = h > 0 ? 2 * Math.PI * h * ((phi * (c2 ** 4 - a ** 4)) / 4 - (yieldStrain(l) * (c2 ** 3 - a ** 3)) / 3) : 0;
+  const gy = l.shearYield / g;
+  const rho = Math.min(c2, gy / phi);
+  const c2sq = c2 * c2;
+  const c14 = c1 * c1 * c1 * c1;
+  if (rho >= c2) return (Math.PI / 2) * g * (c2sq * c2sq - c14) * phi;
+  const a = rho > c1 ? rho : c1;
+  const a3 = a * a * a;
+  const c23 = c2sq * c2;
+  const core = rho > c1 ? (Math.PI / 2) * g * phi * (a3 * a - c14) : 0;
+  const rim = ((2 * Math.PI) / 3) * l.shearYield * (c23 - a3);
+  const hardening = h > 0 ? 2 * Math.PI * h * ((phi * (c2sq * c2sq - a3 * a)) / 4 - (gy * (c23 - a3)) / 3) : 0;
   return core + rim + hardening;
 }
 

@@ -37,6 +37,14 @@ export interface TorqueLaw {
   readonly dissipated: number;
   /** Twist taken up by slip or flow so far, rad (signed). */
   readonly offset: number;
+  /**
+   * True while the law is T = k·θ and needs no `commit` until its next `enter` (a yielding shaft
+   * element that has not yet yielded: it catches up at `enter`). The stepper then handles it
+   * inline like a plain elastic element, which most elements of a long shaft stay.
+   */
+  readonly elasticUntilEvent?: boolean;
+  /** Most torque any section of the element can carry, N·m (a perfectly plastic element's fully plastic torque); absent: no limit. */
+  readonly torqueLimit?: number;
 }
 
 /** Linear elastic shaft: T = k·θ (Shigley 9th ed. Sec. 3-12, θ = TL/GJ; from memory, confident). */

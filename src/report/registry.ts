@@ -37,6 +37,7 @@ import { sidesTable } from './tables/sides-table.ts';
 import { piecesTable } from './tables/pieces-table.ts';
 import { materialTable } from './tables/material-table.ts';
 import { plasticSidesTable } from './tables/plastic-sides-table.ts';
+import { dynamicDamageTable } from './tables/dynamic-damage-table.ts';
 import { plasticPiecesTable } from './tables/plastic-pieces-table.ts';
 import { uncertaintyInputsTable } from './tables/uncertainty-inputs-table.ts';
 import { uncertaintyPercentilesTable } from './tables/uncertainty-percentiles-table.ts';
@@ -87,6 +88,7 @@ export const REPORT_TABLES: readonly ((r: Results) => ReportTable | undefined)[]
   sidesTable,
   piecesTable,
   materialTable,
+  dynamicDamageTable,
   plasticSidesTable,
   plasticPiecesTable,
   uncertaintyInputsTable,

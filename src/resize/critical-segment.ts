@@ -1,6 +1,6 @@
 import type { Case, Segment } from '../case/case.ts';
 import type { SideName } from '../model/shaft-model.ts';
-import { analyseCase } from '../results/analyse-case.ts';
+import { designRun } from './design-run.ts';
 import type { Results } from '../results/results.ts';
 import { bisect } from './bisect.ts';
 import { withDiameters } from './change-case.ts';
@@ -57,7 +57,7 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
   const side = r.governing.side.side;
   const segment = r.governing.piece.piece.segment;
   const present = segment.diameter;
-  const runAt = (d: number) => analyseCase(withDiameters(c, new Map([[segment.index, d]])), { readBack: false });
+  const runAt = (d: number) => designRun(withDiameters(c, new Map([[segment.index, d]])));
   const target = 1 / designFactor;
   const excess = (d: number) => segmentYieldRatio(runAt(d), side, segment.index)! - target;
 

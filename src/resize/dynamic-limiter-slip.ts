@@ -1,7 +1,7 @@
 import type { Case } from '../case/case.ts';
 import type { SideName } from '../model/shaft-model.ts';
 import { stopWaveTorque } from '../physics/stop-wave.ts';
-import { analyseCase } from '../results/analyse-case.ts';
+import { designRun } from './design-run.ts';
 import type { DynamicPiece } from '../results/dynamic-result.ts';
 import type { Results } from '../results/results.ts';
 import { limiterSegment, withLimiter } from './limiter-segment.ts';
@@ -45,7 +45,7 @@ const ABOVE_SETTING = 0.1;
 export function dynamicLimiterSlip(c: Case, station: string, side: SideName, setting: number): DynamicLimiterSlip | undefined {
   const seg = limiterSegment(c, station);
   if (!seg) return undefined;
-  const rerun = analyseCase(withLimiter(c, seg.index, setting), { readBack: false });
+  const rerun = designRun(withLimiter(c, seg.index, setting));
   const d = rerun.dynamic;
   const name = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
   const slip = d.slips.find((s) => s.kind === 'torque limiter' && s.element === `the torque limiter in ${name}`);

@@ -1,7 +1,7 @@
 import type { Case } from '../case/case.ts';
 import { MATERIAL_LIBRARY } from '../materials/library.ts';
 import type { Material } from '../materials/material.ts';
-import { analyseCase } from '../results/analyse-case.ts';
+import { designRun } from './design-run.ts';
 import type { Results } from '../results/results.ts';
 import { withShaftMaterial } from './change-case.ts';
 
@@ -32,7 +32,7 @@ export function otherMaterials(c: Case, designFactor: number): MaterialOption[] 
       !(present.size === 1 && present.has(m.key)),
   )
     .map((material) => {
-      const rerun = analyseCase(withShaftMaterial(c, material), { readBack: false });
+      const rerun = designRun(withShaftMaterial(c, material));
       return { material, yieldRatio: rerun.yieldRatio, keepsFactor: rerun.yieldRatio * designFactor <= 1 + 1e-12, rerun };
     })
     .sort((a, b) => a.yieldRatio - b.yieldRatio);

@@ -1,6 +1,6 @@
 import type { Case, Segment } from '../case/case.ts';
 import type { SideName } from '../model/shaft-model.ts';
-import { analyseCase } from '../results/analyse-case.ts';
+import { designRun } from './design-run.ts';
 import type { Results } from '../results/results.ts';
 import { withDiameters } from './change-case.ts';
 import { sideOf, sideSegments } from './side-ratio.ts';
@@ -55,7 +55,7 @@ export function scaleSide(c: Case, r: Results, designFactor: number, maxScale: n
     segments,
     diameters,
     stockDiameters,
-    rerun: analyseCase(withDiameters(c, map(diameters)), { readBack: false }),
-    stockRerun: analyseCase(withDiameters(c, map(stockDiameters)), { readBack: false }),
+    rerun: designRun(withDiameters(c, map(diameters))),
+    stockRerun: designRun(withDiameters(c, map(stockDiameters))),
   };
 }

@@ -238,7 +238,7 @@ describe('PlasticElementLaw, fracture in time', () => {
     expect(b.firstToBreak).toBe(1);
     // Independently: bisect the element twist until the thin piece's rate is at its fracture rate.
     let lo = b.yieldTwist;
-    let hi = 10;
+    let hi = 1000;
     for (let i = 0; i < 200; i++) {
       const m = 0.5 * (lo + hi);
       if (b.pieceTwistRates(m)[1] < 0.6 / 0.012) lo = m;

@@ -1,10 +1,12 @@
 import type { Results } from '../../results/results.ts';
 import type { TwistFinding } from '../../results/twist-findings.ts';
 import { show } from '../../views/display-units.ts';
+import { describeDynamicPiece, mostTwisted } from '../../views/dynamic-past-yield.ts';
 import { bandText, overallVerdictSentence } from '../../views/plastic-lines.ts';
 import { describePiece, verdictSentence } from '../../views/summary.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
+import { dynamicDamageTable } from '../tables/dynamic-damage-table.ts';
 import { plasticPiecesTable } from '../tables/plastic-pieces-table.ts';
 import { plasticSidesTable } from '../tables/plastic-sides-table.ts';
 import { markdownTable } from '../tables/report-table.ts';
@@ -39,9 +41,12 @@ function verdicts(r: Results): string {
       const worst = s.pieces.reduce((a, b) => (b.yieldRatio > a.yieldRatio ? b : a));
       return `Side ${s.side} (${s.stations.join(', ')}): elastic peak torque ${show(s.peakTorque, 'torque', u)}; the most stressed piece on this side is ${describePiece(worst, u)} at ${show(worst.shearStress, 'stress', u)}.`;
     }),
+    ...(r.pastYieldBasis === 'dynamic model' && r.dynamic.yielded
+      ? [`Past yield in time, the dynamic model caps the torque in ${describeDynamicPiece(mostTwisted(r), u)} at ${show(mostTwisted(r).peakTorque, 'torque', u)} and leaves a permanent twist of ${show(mostTwisted(r).permanentTwist, 'angle', u)} there.`]
+      : []),
     ...(r.plastic.verdict === 'elastic'
       ? []
-      : [`Past yield, the energy balance caps the peak torque at ${show(r.plastic.peakTorque, 'torque', u)}${r.plastic.verdict === 'fracture predicted' ? ' (at the break)' : ''}: the torque every key, hub and coupling between the stop and the loaded stations had to carry.`]),
+      : [`Past yield${r.pastYieldBasis === 'dynamic model' ? ', for comparison,' : ','} the energy balance caps the peak torque at ${show(r.plastic.peakTorque, 'torque', u)}${r.plastic.verdict === 'fracture predicted' ? ' (at the break)' : ''}: the torque every key, hub and coupling between the stop and the loaded stations had to carry.`]),
     r.warnings.length > 0
       ? `The engine raised ${r.warnings.length} warning${r.warnings.length === 1 ? '' : 's'} about the model's fit to this case (listed under the method); weigh the numbers with them.`
       : "The engine raised no warning about the model's fit to this case.",
@@ -52,11 +57,18 @@ function verdicts(r: Results): string {
 function pastYield(r: Results): string {
   const p = r.plastic;
   const law = r.case.analysis.hardening === 'linear' ? 'linear strain hardening' : 'elastic–perfectly plastic';
-  const out = [
-    '### Past yield',
-    escapeMarkdown(`The energy balance past yield (${law}, net section, no kt): each side's kinetic energy is taken up by its run of shaft with the torque capped by plasticity.`),
-    markdownTable(plasticSidesTable(r)),
-  ];
+  const out = ['### Past yield'];
+  if (r.pastYieldBasis === 'dynamic model') {
+    const inTime = dynamicDamageTable(r);
+    out.push(
+      escapeMarkdown(`The verdict past yield stands on the dynamic model: its shaft elements yield as the net section does (${law}, no kt, Masing's rule on reversals) and break at their fracture strain, with the slip, the drive and the stop followed in time.`),
+      inTime ? markdownTable(inTime) : escapeMarkdown('In the dynamic model no piece of shaft passes yield over its net section.'),
+      escapeMarkdown("For comparison, the energy balance past yield puts all of each side's kinetic energy into its run of shaft with nothing else acting:"),
+    );
+  } else {
+    out.push(escapeMarkdown(`The energy balance past yield (${law}, net section, no kt): each side's kinetic energy is taken up by its run of shaft with the torque capped by plasticity.`));
+  }
+  out.push(markdownTable(plasticSidesTable(r)));
   const pieces = plasticPiecesTable(r);
   if (!pieces) {
     out.push(escapeMarkdown('No piece of shaft passes yield over its net section: no permanent twist is predicted.'));

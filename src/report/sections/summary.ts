@@ -1,5 +1,6 @@
 import type { Results } from '../../results/results.ts';
 import { show, sig } from '../../views/display-units.ts';
+import { describeDynamicPiece, firstBroken, mostTwisted } from '../../views/dynamic-past-yield.ts';
 import { describePlasticPiece, overallVerdictSentence } from '../../views/plastic-lines.ts';
 import { describePiece, verdictSentence } from '../../views/summary.ts';
 import { chanceOfYieldWords } from '../../views/uncertainty-summary.ts';
@@ -11,6 +12,15 @@ export function verdictInPlainWords(r: Results): string {
   const u = r.case.units;
   const p = r.plastic;
   const inspect = 'Inspect it, and every key, hub and coupling between the stop and the loaded parts, before anything goes back into service.';
+  if (r.pastYieldBasis === 'dynamic model' && (r.dynamic.fractured || r.dynamic.yielded)) {
+    const broke = firstBroken(r);
+    if (r.verdict === 'fracture predicted' && broke) {
+      return `The shaft is predicted to break: in the dynamic model ${describeDynamicPiece(broke, u)} reaches its fracture limit ${sig((broke.breakTime ?? 0) * 1000)} ms after the stop began. ${inspect}`;
+    }
+    const most = mostTwisted(r);
+    const total = r.dynamic.pieces.reduce((sum, x) => sum + x.permanentTwist, 0);
+    return `The shaft cannot have stayed elastic: the calculated elastic stress is ${sig(r.verdictYieldRatio)} times what its material takes before it yields. Past yield the torque in ${describeDynamicPiece(most, u)} is capped at ${show(most.peakTorque, 'torque', u)}, and the shaft is left with a permanent twist of ${show(total, 'angle', u)}, most of it there; no fracture is predicted. ${inspect}`;
+  }
   if (r.verdict === 'fracture predicted') {
     const side = p.sides.find((s) => s.verdict === 'fracture predicted')!;
     const first = side.firstToBreak === undefined ? undefined : side.pieces[side.firstToBreak];
