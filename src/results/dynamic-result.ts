@@ -186,13 +186,12 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
   };
 }
 
-/** "the shaft in "rotor body" (120 mm to 180 mm)": a plain shaft element named by its segment and place. */
+/** "the shaft in "rotor body" (element 2 of 3 there)": a plain shaft element named by its segment (no units in the core's words). */
 function shaftElementName(chain: Chain, e: number): string {
-  const el = chain.elements[e];
-  const seg = chain.pieces[el.pieces[0]].piece.segment;
+  const seg = chain.pieces[chain.elements[e].pieces[0]].piece.segment;
+  const same = chain.elements.flatMap((el, k) => (chain.pieces[el.pieces[0]].piece.segment === seg ? [k] : []));
   const where = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
-  const mm = (x: number) => `${Number((x * 1000).toPrecision(4))} mm`;
-  return `the shaft in ${where} (${mm(el.start)} to ${mm(el.end)})`;
+  return same.length > 1 ? `the shaft in ${where} (element ${same.indexOf(e) + 1} of ${same.length} there, from the shaft's start)` : `the shaft in ${where}`;
 }
 
 function capitalise(s: string): string {

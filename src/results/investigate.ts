@@ -46,6 +46,13 @@ export function investigate(c: Case, opts: InvestigateOptions = {}): Results {
   if (results.verdictBasis === 'dynamic model' && u.dynamicSamples > 0) {
     uncertainty.dynamic = runDynamicUncertainty(c, dynamicMetrics, { ...settings, samples: u.dynamicSamples }, opts.onDynamicProgress);
   }
+  if (results.pastYieldBasis === 'dynamic model' && uncertainty.observed.length > 0) {
+    // The sampler runs the energy balance; its speeds behind a measured twist are not the dynamic
+    // model's read-back, so they are left out rather than shown beside it.
+    uncertainty.observed = [];
+    const warnings = [...results.warnings, 'The uncertainty run samples the energy balance, not the dynamic model the twist read-back stands on, so each measured twist is judged against the band on the recorded speed and its own tolerance, not by a Monte Carlo interval.'];
+    return { ...results, uncertainty, warnings };
+  }
   const twist = results.observedFindings.twist.map((f, k) => judgeByInterval(f, uncertainty.observed[k]?.speedInterval ?? null));
   return { ...results, uncertainty, observedFindings: { ...results.observedFindings, twist } };
 }

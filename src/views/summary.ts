@@ -27,6 +27,9 @@ export function dynamicLines(r: Results): string[] {
     const worst = d.pieces.reduce((b, p) => (p.permanentTwist > b.permanentTwist ? p : b), d.pieces[0]);
     out.push(`  past yield in time: permanent twist ${showSlipAngle(worst.permanentTwist, u)} in ${describePiece(worst, u)}, plastic work ${show(d.plasticWork, 'energy', u)}`);
   }
+  for (const p of d.pieces.filter((x) => x.broken)) {
+    out.push(`  breaks in time: ${describePiece(p, u)} at ${sig((p.breakTime ?? 0) * 1000)} ms`);
+  }
   return out;
 }
 

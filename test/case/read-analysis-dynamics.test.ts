@@ -27,9 +27,9 @@ describe('the analysis section', () => {
     expect(problems(base + 'analysis: { shaft_inertia: maybe }\n').join('\n')).toMatch(/analysis\.shaft_inertia: should be true or false/);
   });
 
-  it('reads dynamic_plasticity, off unless the case turns it on, and refuses a value that is not true or false, with its line', () => {
-    expect(parseCase(base).analysis.dynamicPlasticity).toBe(false);
-    expect(parseCase(base + 'analysis:\n  dynamic_plasticity: true\n').analysis.dynamicPlasticity).toBe(true);
+  it('reads dynamic_plasticity, on unless the case turns it off, and refuses a value that is not true or false, with its line', () => {
+    expect(parseCase(base).analysis.dynamicPlasticity).toBe(true);
+    expect(parseCase(base + 'analysis:\n  dynamic_plasticity: false\n').analysis.dynamicPlasticity).toBe(false);
     const bad = base + 'analysis:\n  dynamic_plasticity: sometimes\n';
     expect(problems(bad).join('\n')).toMatch(new RegExp(`:${lineOf(bad, 'dynamic_plasticity: sometimes')}:\\d+ analysis\\.dynamic_plasticity: should be true or false`));
   });

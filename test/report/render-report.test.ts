@@ -7,6 +7,7 @@ import { plasticPiecesTable } from '../../src/report/tables/plastic-pieces-table
 import { plasticSidesTable } from '../../src/report/tables/plastic-sides-table.ts';
 import { markdownTable } from '../../src/report/tables/report-table.ts';
 import { show, sig } from '../../src/views/display-units.ts';
+import { describeDynamicPiece } from '../../src/views/dynamic-past-yield.ts';
 import { describePlasticPiece } from '../../src/views/plastic-lines.ts';
 import { describePiece } from '../../src/views/summary.ts';
 import { defaultTemplate, fixture, RUN } from './report-fixtures.ts';
@@ -61,15 +62,19 @@ describe('renderReport', () => {
       // Conversely, every number in the summary comes from those values, the plastic result, the
       // uncertainty run, the incident's date, the machine's or the material's name.
       const plastic = p.sides.flatMap((s) => [show(s.energy, 'energy', u), show(s.fractureEnergy, 'energy', u), show(s.peakTorque, 'torque', u), show(s.permanentTwist, 'angle', u), ...s.pieces.map((x) => describePlasticPiece(x, u))]);
+      // Past yield in time (where the verdict stands on it): the dynamic model's pieces.
+      const inTime = r.dynamic.pieces.flatMap((x) => [describeDynamicPiece(x, u), show(x.peakTorque, 'torque', u), show(x.permanentTwist, 'angle', u), sig((x.breakTime ?? 0) * 1000)]);
+      inTime.push(show(r.dynamic.pieces.reduce((s, x) => s + x.permanentTwist, 0), 'angle', u));
       const sure = r.uncertainty ? [String(r.uncertainty.samples), sig(100 * r.uncertainty.yieldProbability, 3)] : [];
       const context = [r.verdictReason, r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[g.piece.segment.material].name, String(r.warnings.length), show(p.peakTorque, 'torque', u)];
-      const allowed = new Set([...expected, ...plastic, ...sure, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
+      const allowed = new Set([...expected, ...plastic, ...inTime, ...sure, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
       for (const n of summary.replace(/side [AB]/g, '').replace(/a yield ratio of 1\b/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the summary`).toContain(n);
     }
   });
 
   it('the summary states the overall verdict in plain words for each verdict, the elastic method\'s beside it', () => {
-    expect(section(report('sample').md, 'Summary')).toMatch(/> \*\*Verdict: YIELDED: the peak torque is capped by plasticity at .*\*\*\n>\n> The shaft cannot have stayed elastic: .* permanent twist of .*; no fracture is predicted\. .*\n>\n> Elastic energy method: YIELDED: /);
+    expect(section(report('sample').md, 'Summary')).toMatch(/> \*\*Verdict: YIELDED \(dynamic model\): the torque in .* is capped by plasticity at .*\*\*\n>\n> The shaft cannot have stayed elastic: .* permanent twist of .*; no fracture is predicted\. .*\n>\n> Elastic energy method: YIELDED: /);
+    expect(section(report('edger-arbor-two-sides.yaml').md, 'Summary')).toMatch(/> \*\*Verdict: YIELDED: the peak torque is capped by plasticity at .*\*\*\n>\n> The shaft cannot have stayed elastic: .* permanent twist of .*; no fracture is predicted\. .*\n>\n> Elastic energy method: YIELDED: /);
     expect(section(report('elastic-fan.yaml').md, 'Summary')).toMatch(/> \*\*Verdict: ELASTIC: no yield is predicted\.\*\*\n>\n> The shaft can have stayed elastic/);
     expect(section(report('exhaust-fan-seized-impeller.yaml').md, 'Summary')).toMatch(/> \*\*Verdict: FRACTURE PREDICTED: .*\*\*\n>\n> The shaft is predicted to break: side A had .* and it can absorb only .* before .* reaches its fracture strain\./);
   });

@@ -39,7 +39,7 @@ describe('report tables as CSV', () => {
     const r = fixture('sample').results;
     const tables = reportTablesCsv(r);
     // The granulator yields and states no tolerances: the past-yield tables, no uncertainty tables.
-    expect(tables.map((t) => t.name)).toEqual(['parts', 'segments', 'sides', 'pieces', 'material', 'past-yield-sides', 'past-yield-pieces']);
+    expect(tables.map((t) => t.name)).toEqual(['parts', 'segments', 'sides', 'pieces', 'material', 'past-yield-in-time', 'past-yield-sides', 'past-yield-pieces']);
     expect(readCsv(tables.find((t) => t.name === 'segments')!.csv)).toHaveLength(1 + r.case.shaft.segments.length);
     const elastic = reportTablesCsv(fixture('elastic-fan.yaml').results).map((t) => t.name);
     expect(elastic).toContain('past-yield-sides');

@@ -46,3 +46,61 @@ describe('the dynamic model past yield, through analyseCase (EP5)', () => {
     expect(dynamicLines(a).some((l) => /past yield in time/.test(l))).toBe(false);
   });
 });
+
+describe('fracture in time, through analyseCase', () => {
+  const J = 0.98646;
+  const shaft = (material: string, speed: number, extra = '') => `case: { id: F }
+speed: ${speed} rad/s
+stop: { at: jam${extra} }
+shaft:
+  material: ${material}
+  segments:
+    - { length: 500 mm, diameter: 40 mm }
+stations:
+  - { name: disc, at: 0 mm, parts: [{ shape: inertia, inertia: ${J} kg*m^2 }] }
+  - { name: jam, at: 500 mm }
+analysis: { shaft_inertia: false, damping_ratio: 0 }
+`;
+
+  it('a ductile shaft breaks in time just above the speed whose energy the energy balance says breaks it, and not just below (±3 %)', () => {
+    // The balance's energy to the first break (the area under the torque–twist curve to the
+    // fracture strain, checked in plastic-balance's tests) gives the speed √(2E/J).
+    const probe = analyseCase(parseCase(shaft('aisi-1045-cd', 10)));
+    const wf = Math.sqrt((2 * probe.plastic.sides[0].fractureEnergy) / J);
+    const above = analyseCase(parseCase(shaft('aisi-1045-cd', 1.03 * wf)));
+    const below = analyseCase(parseCase(shaft('aisi-1045-cd', 0.97 * wf)));
+    expect(above.dynamic.fractured).toBe(true);
+    expect(above.dynamic.pieces[0].broken).toBe(true);
+    expect(above.dynamic.pieces[0].breakTime).toBeGreaterThan(0);
+    expect(above.dynamic.events.some((e) => /breaks\.$/.test(e.text))).toBe(true);
+    expect(below.dynamic.fractured).toBe(false);
+    expect(below.dynamic.yielded).toBe(true);
+  });
+
+  it('where the verdict stands on the dynamic model, a break in time makes the verdict "fracture predicted" and the JSON marks the segment', () => {
+    const probe = analyseCase(parseCase(shaft('aisi-1045-cd', 10)));
+    const wf = Math.sqrt((2 * probe.plastic.sides[0].fractureEnergy) / J);
+    const r = analyseCase(parseCase(shaft('aisi-1045-cd', 1.2 * wf, ', duration: 0.2 ms')));
+    expect(r.pastYieldBasis).toBe('dynamic model');
+    expect(r.verdict).toBe('fracture predicted');
+    const j = resultsToJson(r) as any;
+    expect(j.dynamic.segments[0].broken).toBe(true);
+    expect(j.dynamic.segments[0].break_time_s).toBeGreaterThan(0);
+    expect(j.past_yield_basis).toBe('dynamic model');
+  });
+
+  it('a brittle shaft (gray iron) breaks when its elastic torque reaches S_ut·J_p/c, and not below (±3 %), with no permanent twist', () => {
+    // Brittle torsion: fracture when the outer-fibre shear reaches S_ut (Shigley 9th ed. Sec. 5-9;
+    // from memory, confident); below it the elastic stop gives T ∝ ω (energy method).
+    const probe = analyseCase(parseCase(shaft('gray-iron-30', 10)));
+    const m = probe.case.materials['gray-iron-30'];
+    const Tf = (m.tensileStrength! * Math.PI * 0.04 ** 3) / 16;
+    const w = (10 * Tf) / probe.sides[0].peakTorque;
+    const above = analyseCase(parseCase(shaft('gray-iron-30', 1.03 * w)));
+    const below = analyseCase(parseCase(shaft('gray-iron-30', 0.97 * w)));
+    expect(above.dynamic.fractured).toBe(true);
+    expect(below.dynamic.fractured).toBe(false);
+    expect(above.dynamic.pieces[0].permanentTwist).toBe(0);
+    expect(below.dynamic.yielded).toBe(false);
+  });
+});

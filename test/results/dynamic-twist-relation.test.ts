@@ -1,0 +1,91 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { parseCase } from '../../src/case/parse-case.ts';
+import { buildShaftModel } from '../../src/model/shaft-model.ts';
+import { analyseCase } from '../../src/results/analyse-case.ts';
+import { dynamicTwistRelation } from '../../src/results/dynamic-twist-relation.ts';
+import { analysePlastic } from '../../src/results/analyse-plastic.ts';
+import { balanceTwistRelation } from '../../src/results/twist-findings.ts';
+
+const rpm = (n: number) => (n * 2 * Math.PI) / 60;
+const rel = (a: number, b: number) => Math.abs(a / b - 1);
+
+// REFERENCE EP5 (shared REFERENCE.md 3.3, derived): J = 0.986460 kg·m² on a d = 40 mm × L = 0.5 m
+// shaft of AISI 1045 CD (S_y = 530 MPa, Shigley 9th ed. Table A-20), τ_Y = 0.577·S_y, stopped at
+// once from 300 rpm: residual twist 0.041193 rad. `extra` adds to the case.
+const ep5 = (speed: string, extra = '') => `case: { id: EP5 }
+speed: ${speed}
+stop: { at: jam${extra.includes('duration') ? ', duration: 0.5 ms' : ''} }
+shaft:
+  material: aisi-1045-cd
+  segments:
+    - { length: 500 mm, diameter: 40 mm }
+stations:
+  - { name: disc, at: 0 mm, parts: [{ shape: inertia, inertia: 0.98646 kg*m^2 }] }
+  - { name: jam, at: 500 mm }
+observed:
+  permanent_twist:
+    - { between: [disc, jam], angle: 2 deg, method: test }
+analysis: { shaft_inertia: false, damping_ratio: 0 }
+`;
+
+function relations(text: string) {
+  const c = parseCase(text);
+  const r = analyseCase(c, { readBack: false });
+  const model = buildShaftModel(c);
+  const { balances } = analysePlastic(c, model, r.sides);
+  return {
+    c,
+    dynamic: dynamicTwistRelation(c, model, balances.map((b) => b.inertia), r.dynamic.elementTarget, 0, 0.5)!,
+    balance: balanceTwistRelation(model.sides, balances, 0, 0.5)!,
+  };
+}
+
+describe('dynamicTwistRelation: the speed → permanent twist relation through the dynamic model', () => {
+  it('for one mass stopped at once agrees with the closed-form energy balance: 0.041193 rad at 300 rpm within 0.5 %, and the speed for 2° within 0.5 %', () => {
+    const { dynamic, balance } = relations(ep5('300 rpm'));
+    expect(rel(balance.permanentAt(rpm(300)), 0.041193)).toBeLessThan(0.005);
+    expect(rel(dynamic.permanentAt(rpm(300)), 0.041193)).toBeLessThan(0.005);
+    const t = (2 * Math.PI) / 180;
+    expect(rel(dynamic.speedFor(t)!, balance.speedFor(t)!)).toBeLessThan(0.005);
+  });
+
+  it('round trip: the speed found for the twist the model leaves at a speed is that speed, within 1e-4', () => {
+    const { dynamic } = relations(ep5('300 rpm', 'duration'));
+    for (const n of [260, 330, 420]) {
+      const t = dynamic.permanentAt(rpm(n));
+      expect(t).toBeGreaterThan(0);
+      expect(rel(dynamic.speedFor(t)!, rpm(n))).toBeLessThan(1e-4);
+    }
+  });
+
+  it('leaves no twist below the onset of yield and more with more speed (property)', () => {
+    const { dynamic } = relations(ep5('300 rpm', 'duration'));
+    const onset = dynamic.onset();
+    // Elastic limit of EP5 for an instant stop: T_Y = τ_Y·J_p/c = 3843 N·m reached at 185 rpm (REFERENCE EP5: 3114.81 N·m at 150 rpm, linear).
+    expect(onset).toBeGreaterThan(rpm(150));
+    expect(dynamic.permanentAt(0.95 * onset)).toBe(0);
+    fc.assert(
+      fc.property(fc.double({ min: 200, max: 500, noNaN: true }), fc.double({ min: 1.02, max: 1.5, noNaN: true }), (n, k) => dynamic.permanentAt(rpm(n * k)) >= dynamic.permanentAt(rpm(n))),
+      { numRuns: 8 },
+    );
+  });
+});
+
+describe('the read-back through analyseCase', () => {
+  it('stands on the dynamic model where the verdict does, and its prediction is the dynamic model\'s permanent twist between the stations', () => {
+    const r = analyseCase(parseCase(ep5('300 rpm', 'duration')));
+    expect(r.verdictBasis).toBe('dynamic model');
+    expect(r.pastYieldBasis).toBe('dynamic model');
+    const f = r.observedFindings.twist[0];
+    expect(f.model).toBe('dynamic model');
+    expect(rel(f.predicted, r.dynamic.pieces[0].permanentTwist)).toBeLessThan(1e-9);
+    expect(f.speedForMeasured).toBeLessThan(rpm(300));
+  });
+
+  it('stands on the energy balance where the verdict stands on the energy method', () => {
+    const r = analyseCase(parseCase(ep5('300 rpm')));
+    expect(r.pastYieldBasis).toBe('energy balance');
+    expect(r.observedFindings.twist[0].model).toBe('energy balance');
+  });
+});
