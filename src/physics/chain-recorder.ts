@@ -10,6 +10,8 @@ export interface ChainHistory {
   rotorSpeed: Float64Array[];
   /** Torque in every element (its law's, without the dashpot), N·m, signed (positive when the node toward the shaft's end is ahead). */
   elementTorque: Float64Array[];
+  /** Twist of every element, rad, signed as its torque. */
+  elementTwist: Float64Array[];
   /** Torque each drive's belt carries, N·m at the shaft (NaN without a belt). */
   beltTorque: Float64Array[];
   /** Torque the shaft puts on the jam, N·m. */
@@ -61,6 +63,7 @@ export class ChainRecorder {
       nodeSpeed: Array.from({ length: st.n }, f),
       rotorSpeed: st.drives.map(f),
       elementTorque: Array.from({ length: m }, f),
+      elementTwist: Array.from({ length: m }, f),
       beltTorque: st.drives.map(f),
       jamTorque: f(),
     };
@@ -129,7 +132,10 @@ export class ChainRecorder {
     h.time[k] = st.t;
     for (let i = 0; i < st.n; i++) h.nodeSpeed[i][k] = st.v[i];
     for (let i = 0; i < st.drives.length; i++) h.rotorSpeed[i][k] = st.motorSpeed(st.drives[i], false);
-    for (let e = 0; e < st.m; e++) h.elementTorque[e][k] = this.elementTorque(e);
+    for (let e = 0; e < st.m; e++) {
+      h.elementTorque[e][k] = this.elementTorque(e);
+      h.elementTwist[e][k] = st.theta[e];
+    }
     for (let i = 0; i < belt.length; i++) h.beltTorque[i][k] = belt[i];
     h.jamTorque[k] = jam;
     while (this.next <= st.t + 1e-6 * this.spacing) this.next += this.spacing;
@@ -145,6 +151,7 @@ export class ChainRecorder {
       nodeSpeed: h.nodeSpeed.map(cut),
       rotorSpeed: h.rotorSpeed.map(cut),
       elementTorque: h.elementTorque.map(cut),
+      elementTwist: h.elementTwist.map(cut),
       beltTorque: h.beltTorque.map(cut),
       jamTorque: cut(h.jamTorque),
     };

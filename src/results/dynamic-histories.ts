@@ -1,4 +1,5 @@
 import type { Chain } from '../model/chain.ts';
+import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
 import type { ChainSolution } from './dynamic-solve.ts';
 import type { SlipOutcome } from './dynamic-slips.ts';
 
@@ -40,7 +41,7 @@ export function dynamicHistories(chain: Chain, sol: ChainSolution, slips: readon
   if (gov >= 0) {
     const p = chain.pieces[top].piece;
     const label = p.segment.label ? ` "${p.segment.label}"` : ` segment ${p.segment.index + 1}`;
-    torques.push({ name: `shaft${label}, ${(p.start * 1000).toPrecision(4)}–${(p.end * 1000).toPrecision(4)} mm (most loaded)`, values: elementSeries(gov) });
+    torques.push({ name: `shaft${label} (most loaded)`, values: elementSeries(gov) });
   }
   for (const s of slips) {
     if (s.kind === 'torque limiter') torques.push({ name: s.element, values: elementSeries(s.elementIndex!) });
@@ -50,4 +51,45 @@ export function dynamicHistories(chain: Chain, sol: ChainSolution, slips: readon
     } else torques.push({ name: s.element, values: h.jamTorque });
   }
   return { time: h.time, speeds, torques };
+}
+
+/** The torque–twist path of one piece over the window, sampled as the histories are. */
+export interface YieldPath {
+  /** Index into `DynamicResult.pieces`. */
+  piece: number;
+  /** Twist of the piece, rad, and its torque, N·m, both in the sense that resists the stop. */
+  twist: Float64Array;
+  torque: Float64Array;
+}
+
+/**
+ * The path of the piece with the largest permanent twist: its twist is the sum of its elements'
+ * (an element that spans several pieces, with shaft inertia off, gives the piece the share of its
+ * twist the piece had at the element's largest twist), its torque the torque of its element that
+ * twisted most. Undefined when no piece took a permanent twist.
+ */
+export function yieldPath(chain: Chain, sol: ChainSolution, permanent: readonly number[]): YieldPath | undefined {
+  const piece = permanent.reduce((best, p, i) => (p > permanent[best] ? i : best), 0);
+  if (!(permanent[piece] > 0)) return undefined;
+  const h = sol.run.history;
+  const sense = chain.pieces[piece].side === 'A' ? -1 : 1;
+  const twist = new Float64Array(h.time.length);
+  let most = -1;
+  let mostTwist = -1;
+  chain.elements.forEach((el, e) => {
+    if (!el.pieces.includes(piece)) return;
+    const law = sol.run.laws[e];
+    const peak = law instanceof PlasticElementLaw ? law.peakTwist : 0;
+    let share = 1;
+    if (el.pieces.length > 1 && law instanceof PlasticElementLaw && peak > 0) {
+      const k = el.pieces.indexOf(piece);
+      share = (law.backbone.pieceTwistRates(peak)[k] * law.backbone.pieces[k].length) / peak;
+    }
+    for (let s = 0; s < twist.length; s++) twist[s] += sense * share * h.elementTwist[e][s];
+    if (peak > mostTwist) {
+      mostTwist = peak;
+      most = e;
+    }
+  });
+  return { piece, twist, torque: h.elementTorque[most].map((t) => sense * t) };
 }

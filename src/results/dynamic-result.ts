@@ -7,7 +7,7 @@ import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
-import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
+import { dynamicHistories, yieldPath, type DynamicHistories, type YieldPath } from './dynamic-histories.ts';
 import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
 import { solveDynamics } from './dynamic-solve.ts';
@@ -100,6 +100,8 @@ export interface DynamicResult {
   /** Energy books, J: final − initial = motor + boundary − damping − slip − released. */
   energy: { initial: number; final: number; motorWork: number; boundaryWork: number; dampingWork: number; slipWork: number; released: number };
   histories: DynamicHistories;
+  /** The torque–twist path of the piece with the largest permanent twist, when one took any. */
+  yieldPath?: YieldPath;
   /** The model's assumptions, as sentences for the report. */
   assumptions: string[];
   /** Remarks on this case's solution (refinement, window), as sentences. */
@@ -181,6 +183,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     plasticWork: plasticLaws.reduce((w, l) => w + l.dissipated, 0),
     energy: run.energy,
     histories: dynamicHistories(chain, solve.final, slips),
+    ...optional('yieldPath', yieldPath(chain, solve.final, pieces.map((p) => p.permanentTwist))),
     assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),
     notes: [...runningChecks(chain, c.speed), ...solve.notes],
   };
@@ -192,6 +195,10 @@ function shaftElementName(chain: Chain, e: number): string {
   const same = chain.elements.flatMap((el, k) => (chain.pieces[el.pieces[0]].piece.segment === seg ? [k] : []));
   const where = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
   return same.length > 1 ? `the shaft in ${where} (element ${same.indexOf(e) + 1} of ${same.length} there, from the shaft's start)` : `the shaft in ${where}`;
+}
+
+function optional<K extends string, V>(key: K, value: V | undefined): Partial<Record<K, V>> {
+  return value === undefined ? {} : ({ [key]: value } as Record<K, V>);
 }
 
 function capitalise(s: string): string {

@@ -5,14 +5,18 @@ import { describePlasticPiece } from '../../views/plastic-lines.ts';
 import { plotToSvg } from './plot-svg.ts';
 import type { ReportFigure } from './report-figure.ts';
 import { FIGURE_WIDTH } from './svg-frame.ts';
+import { torqueTwistInTimeFigure } from './torque-twist-in-time.ts';
 
 /**
  * Torque against twist of the most strained piece during the stop: the loading path to the peak,
  * the elastic unloading line down to the permanent twist, and the energy the piece absorbed
  * shaded under the loading path. Every number comes from `results.plastic`. Drawn only when the
  * shaft went past yield (an elastic stop's curve is a straight line with no permanent twist).
+ * Where the verdict past yield stands on the dynamic model, its piece's path in time instead
+ * (`torqueTwistInTimeFigure`).
  */
 export function torqueTwistFigure(r: Results): ReportFigure | undefined {
+  if (r.pastYieldBasis === 'dynamic model') return torqueTwistInTimeFigure(r);
   const u = r.case.units;
   const ms = r.plastic.mostStrained;
   if (r.plastic.verdict === 'elastic' || ms.curve.length < 2) return undefined;
