@@ -60,6 +60,8 @@ export interface YieldPath {
   /** Twist of the piece, rad, and its torque, N·m, both in the sense that resists the stop. */
   twist: Float64Array;
   torque: Float64Array;
+  /** Work of plastic flow in the piece's elements over the window, J. */
+  plasticWork: number;
 }
 
 /**
@@ -76,6 +78,7 @@ export function yieldPath(chain: Chain, sol: ChainSolution, permanent: readonly 
   const twist = new Float64Array(h.time.length);
   let most = -1;
   let mostTwist = -1;
+  let plasticWork = 0;
   chain.elements.forEach((el, e) => {
     if (!el.pieces.includes(piece)) return;
     const law = sol.run.laws[e];
@@ -86,10 +89,11 @@ export function yieldPath(chain: Chain, sol: ChainSolution, permanent: readonly 
       share = (law.backbone.pieceTwistRates(peak)[k] * law.backbone.pieces[k].length) / peak;
     }
     for (let s = 0; s < twist.length; s++) twist[s] += sense * share * h.elementTwist[e][s];
+    if (law instanceof PlasticElementLaw && el.pieces.length === 1) plasticWork += law.dissipated;
     if (peak > mostTwist) {
       mostTwist = peak;
       most = e;
     }
   });
-  return { piece, twist, torque: h.elementTorque[most].map((t) => sense * t) };
+  return { piece, twist, torque: h.elementTorque[most].map((t) => sense * t), plasticWork };
 }

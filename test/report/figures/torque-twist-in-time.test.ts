@@ -22,6 +22,10 @@ describe('torqueTwistFigure where the verdict past yield stands on the dynamic m
     expect(marks(parseSvg(fig.svg))).toEqual(expect.arrayContaining(['path in time', 'permanent twist', 'peak torque']));
     expect(fig.caption).toContain(`permanent twist of ${show(p.permanentTwist, 'angle', 'metric')}`);
     expect(fig.caption).toContain(`capped by plasticity at ${show(p.peakTorque, 'torque', 'metric')}`);
+    // The piece's plastic work is part of the shaft's, which closes the energy books (dynamic-result tests).
+    expect(path.plasticWork).toBeGreaterThan(0);
+    expect(path.plasticWork).toBeLessThanOrEqual(r.dynamic.plasticWork * (1 + 1e-12));
+    expect(fig.caption).toContain(`turned ${show(path.plasticWork, 'energy', 'metric')} into heat by plastic flow`);
   });
 
   it('its path stays within the piece\'s fully plastic torque, and it ends twisted about the permanent twist (the elastic ringing around it)', () => {
