@@ -120,7 +120,7 @@ const QUIET_YIELD_EVENTS = new Set(['turns back', 'rejoins an earlier loading pa
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
   const solve = solveDynamics(c, model);
   const { chain, modes, run, piecePeak, pieceTime } = solve.final;
-  const damage = dynamicPieceDamage(chain, run.laws);
+  const damage = dynamicPieceDamage(chain, run.laws, piecePeak);
   const breakTime = (i: number) => run.events.find((e) => e.what === 'breaks' && e.source.kind === 'element' && chain.elements[e.source.index].pieces.includes(i))?.time;
   const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
   const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {

@@ -118,3 +118,14 @@ analysis: { shaft_inertia: false, damping_ratio: 0 }
     expect(r.warnings.join(' ')).not.toMatch(/dynamic_plasticity: false/);
   });
 });
+
+describe('the largest shear strain of a piece that stays elastic', () => {
+  it('is the elastic strain of its peak torque, T·c/(G·J_p) (EP5 at 150 rpm: T = 3114.81 N·m), not zero', () => {
+    // Elastic torsion γ = τ/G = T·c/(G·J_p) (Shigley 9th ed. Sec. 3-12; from memory, confident).
+    const r = analyseCase(parseCase(ep5('150 rpm', true)));
+    const gamma = (3114.81 * 0.02) / (79.3e9 * ((Math.PI * 0.04 ** 4) / 32));
+    expect(r.dynamic.yielded).toBe(false);
+    expect(rel(r.dynamic.pieces[0].maxShearStrain, gamma)).toBeLessThan(0.01);
+    expect((resultsToJson(r) as any).dynamic.segments[0].max_shear_strain).toBe(r.dynamic.pieces[0].maxShearStrain);
+  });
+});
