@@ -1,6 +1,6 @@
 import type { Chain } from '../model/chain.ts';
 import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
-import { residualTwistRate } from '../physics/plastic-torsion.ts';
+import { residualTwistRate, rigidity } from '../physics/plastic-torsion.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import type { TorqueLaw } from '../physics/torque-law.ts';
 
@@ -20,9 +20,11 @@ export interface PieceDamage {
  * φ_p = φ − T/GJ_p per length (shared REFERENCE 3.1.6, `residualTwistRate`), over the part of the
  * piece in the element; each piece's share of the element's twist from
  * `SeriesBackbone.pieceTwistRates`. A broken element leaves no measurable twist (the parts have
- * separated); its piece is marked broken.
+ * separated); its piece is marked broken. An element that never yielded was stepped as elastic
+ * without its largest twist kept (`TorqueLaw.elasticUntilEvent`): its pieces' strain is the elastic
+ * one of their peak torque, T·c/(G·J_p), from `piecePeak` (N·m, per piece) where it is given.
  */
-export function dynamicPieceDamage(chain: Chain, laws: readonly TorqueLaw[]): PieceDamage[] {
+export function dynamicPieceDamage(chain: Chain, laws: readonly TorqueLaw[], piecePeak?: readonly number[]): PieceDamage[] {
   const out: PieceDamage[] = chain.pieces.map(() => ({ permanentTwist: 0, maxShearStrain: 0, broken: false }));
   chain.elements.forEach((el, e) => {
     const law = laws[e];
@@ -37,7 +39,8 @@ export function dynamicPieceDamage(chain: Chain, laws: readonly TorqueLaw[]): Pi
     const inside = el.pieces.filter((i) => Math.min(el.end, chain.pieces[i].piece.end) - Math.max(el.start, chain.pieces[i].piece.start) > 0);
     inside.forEach((i, k) => {
       const { law: tl, length } = b.pieces[k];
-      out[i].maxShearStrain = Math.max(out[i].maxShearStrain, tl.outerRadius * rates[k]);
+      const rate = law.yielded || !piecePeak ? rates[k] : piecePeak[i] / rigidity(tl);
+      out[i].maxShearStrain = Math.max(out[i].maxShearStrain, tl.outerRadius * rate);
       if (law.broken && k === b.firstToBreak) out[i].broken = true;
       else if (law.yielded) out[i].permanentTwist += length * residualTwistRate(tl, rates[k]);
     });

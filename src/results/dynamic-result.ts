@@ -6,6 +6,7 @@ import { shearYield } from '../physics/shear-strength.ts';
 import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
+import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
 import { dynamicHistories, yieldPath, type DynamicHistories, type YieldPath } from './dynamic-histories.ts';
 import { runningChecks } from './running-checks.ts';
@@ -89,7 +90,10 @@ export interface DynamicResult {
   /** Located events in time order, as sentences (the first `MAX_EVENTS_KEPT`; `eventCount` says how many there were). */
   events: { time: number; text: string }[];
   eventCount: number;
-  /** Whether the shaft elements carried the elastic–plastic law (analysis.dynamic_plasticity). */
+  /**
+   * Whether the shaft elements carried their law past yield (analysis.dynamic_plasticity): the
+   * elastic–plastic law of ductile material, or the brittle element's break at its fracture torque.
+   */
   plasticity: boolean;
   /** Whether any shaft element went past yield. */
   yielded: boolean;
@@ -116,7 +120,7 @@ const QUIET_YIELD_EVENTS = new Set(['turns back', 'rejoins an earlier loading pa
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
   const solve = solveDynamics(c, model);
   const { chain, modes, run, piecePeak, pieceTime } = solve.final;
-  const damage = dynamicPieceDamage(chain, run.laws);
+  const damage = dynamicPieceDamage(chain, run.laws, piecePeak);
   const breakTime = (i: number) => run.events.find((e) => e.what === 'breaks' && e.source.kind === 'element' && chain.elements[e.source.index].pieces.includes(i))?.time;
   const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
   const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {
@@ -177,7 +181,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     belts: chain.drives.flatMap((d) => (d.belt ? [{ station: d.station, slip: d.belt }] : [])),
     events,
     eventCount: shown.length,
-    plasticity: plasticLaws.length > 0,
+    plasticity: plasticLaws.length > 0 || run.laws.some((l) => l instanceof ShearPinLaw && l.kind === 'shaft'),
     yielded: plasticLaws.some((l) => l.yielded),
     fractured: damage.some((d) => d.broken),
     plasticWork: plasticLaws.reduce((w, l) => w + l.dissipated, 0),

@@ -74,7 +74,10 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
     model: 'dynamic model',
     permanentAt,
     speedFor: (t) => {
-      if (t <= 0) return onset();
+      if (t <= 0) {
+        const o = onset();
+        return Number.isFinite(o) ? o : undefined;
+      }
       const b = bracket(t);
       if (b === undefined) return undefined;
       return bracketedRoot((w) => permanentAt(w) - t, b[0], b[1], SPEED_TOLERANCE * b[1]);
@@ -82,6 +85,8 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
     onset,
     energyAt: (w) => 0.5 * inertia * w * w,
     breaksAt: (w) => run(w).broken,
+    // Asked where no speed was found: the runs made while looking went as far as the search does.
+    breaksBefore: (t) => bracket(t) === undefined && [...runs.values()].some((r) => r.broken),
     curvePoints: CURVE_POINTS,
   };
 }

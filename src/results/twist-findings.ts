@@ -64,6 +64,15 @@ const MEANINGS: Record<TwistFindingCode, string> = {
   unexplained: 'No speed leaves this much twist between these stations: a weaker piece elsewhere yields first and shields them (or they never yield). Check the measurement, the stations, and for slip at a fit.',
 };
 
+/** Where the dynamic model, which follows the drive, the slip and the breaks in time, says otherwise. */
+const DYNAMIC_MEANINGS: Partial<Record<TwistFindingCode, string>> = {
+  more: 'The shaft took more energy than the recorded speed gives: the speed may have been higher than recorded, the drive may have pushed harder or longer than the case describes, the shaft may already have been twisted in an earlier event, or the material is weaker than the value used.',
+};
+
+/** A twist no speed leaves because the model breaks the shaft before the stations are twisted that far. */
+const PAST_FRACTURE =
+  'No speed leaves this much twist between these stations: the dynamic model breaks the shaft first (the measured twist is past the fracture estimate, or another piece breaks and unloads them). Check the measurement, the fracture strain and the stations, and for slip at a fit.';
+
 /**
  * The speed at the stop → permanent twist between two stations, as one model gives it: the energy
  * balance past yield (`balanceTwistRelation`) or the dynamic model (`dynamicTwistRelation`).
@@ -74,6 +83,8 @@ export interface TwistRelation {
   permanentAt(speed: number): number;
   /** The speed that leaves exactly `twist`, rad/s; for a zero twist the onset speed; undefined when no speed does. */
   speedFor(twist: number): number | undefined;
+  /** Where `speedFor(twist)` finds no speed: whether that is because the model breaks the shaft before the stations are left with that much. */
+  breaksBefore(twist: number): boolean;
   /** Highest speed that leaves no permanent twist between the stations, rad/s; Infinity when none ever does. */
   onset(): number;
   /** Kinetic energy at speed ω of what loads the stations, J. */
@@ -120,9 +131,10 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
       speedForMeasured: speed,
       speedRange: [low, high] as [number | undefined, number | undefined],
       energyForMeasured: speed === undefined ? undefined : rel.energyAt(speed),
-      beyondFracture: speed !== undefined && rel.breaksAt(speed),
+      // A zero twist's speed is the most that leaves none: no twist to be past the fracture estimate.
+      beyondFracture: speed !== undefined && m.angle > 0 && rel.breaksAt(speed),
       finding,
-      meaning: MEANINGS[finding],
+      meaning: finding === 'unexplained' && rel.breaksBefore(m.angle) ? PAST_FRACTURE : ((rel.model === 'dynamic model' ? DYNAMIC_MEANINGS[finding] : undefined) ?? MEANINGS[finding]),
       curve: speeds.map((w) => ({ speed: w, permanentTwist: rel.permanentAt(w) })),
     };
   });
@@ -144,6 +156,8 @@ export function balanceTwistRelation(sides: readonly Side[], balances: readonly 
     onset: () => onsetSpeed(involved),
     energyAt: (w) => energyAtSpeed(involved, w),
     breaksAt: (w) => involved.some((s) => 0.5 * s.inertia * w ** 2 >= s.balance.fractureLimit().energy),
+    // The balance carries on past the fracture estimate (`breaksAt` says so there): a twist it finds no speed for is shielded.
+    breaksBefore: () => false,
     curvePoints: CURVE_POINTS,
   };
 }

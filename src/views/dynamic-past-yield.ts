@@ -41,11 +41,26 @@ export function dynamicVerdictSentence(r: Results, text: (s: string) => string =
   return 'ELASTIC: no yield is predicted.';
 }
 
+/**
+ * The law the dynamic model's shaft elements carry past yield, in words: ductile pieces on the net
+ * section with the case's hardening and Masing's rule, brittle pieces up to their fracture stress.
+ */
+export function dynamicLawWords(r: Results): string {
+  const facts = r.plastic.sides.flatMap((s) => s.pieces);
+  const law = r.case.analysis.hardening === 'linear' ? 'linear strain hardening' : 'elastic–perfectly plastic';
+  const ductile = facts.length === 0 || facts.some((p) => !p.brittle);
+  const brittle = facts.some((p) => p.brittle);
+  return [
+    ...(ductile ? [`${brittle ? 'ductile pieces' : 'its shaft elements'} ${law} on the net section, Masing's rule on reversals${brittle ? ', breaking at their fracture strain' : ''}`] : []),
+    ...(brittle ? ['brittle pieces elastic up to their fracture stress (kt applied), then broken'] : []),
+  ].join('; ');
+}
+
 /** The dynamic model's result past yield for `check`: each piece that yielded or broke. */
 export function dynamicPastYieldLines(r: Results): string[] {
   const u = r.case.units;
   const d = r.dynamic;
-  const out = ['', 'Past yield in time (dynamic model, its shaft elements elastic–perfectly plastic on the net section, Masing\'s rule on reversals):'];
+  const out = ['', `Past yield in time (dynamic model, ${dynamicLawWords(r)}):`];
   const facts = r.plastic.sides.flatMap((s) => s.pieces);
   const hit = d.pieces.filter((p) => p.permanentTwist > 0 || p.broken);
   if (hit.length === 0) out.push('  No piece yields through its net section.');

@@ -103,4 +103,29 @@ analysis: { shaft_inertia: false, damping_ratio: 0 }
     expect(above.dynamic.pieces[0].permanentTwist).toBe(0);
     expect(below.dynamic.yielded).toBe(false);
   });
+
+  it('where the verdict stands on the dynamic model, a brittle shaft that breaks in time makes the verdict "fracture predicted" from the dynamic model, with no word of dynamic_plasticity being off', () => {
+    // Same S_ut·J_p/c as above; a ramped stop puts the verdict on the dynamic model.
+    const probe = analyseCase(parseCase(shaft('gray-iron-30', 10, ', duration: 0.2 ms')));
+    const m = probe.case.materials['gray-iron-30'];
+    const Tf = (m.tensileStrength! * Math.PI * 0.04 ** 3) / 16;
+    const w = (10 * Tf) / probe.dynamic.peakTorque;
+    const r = analyseCase(parseCase(shaft('gray-iron-30', 1.5 * w, ', duration: 0.2 ms')));
+    expect(r.verdictBasis).toBe('dynamic model');
+    expect(r.dynamic.fractured).toBe(true);
+    expect(r.pastYieldBasis).toBe('dynamic model');
+    expect(r.verdict).toBe('fracture predicted');
+    expect(r.warnings.join(' ')).not.toMatch(/dynamic_plasticity: false/);
+  });
+});
+
+describe('the largest shear strain of a piece that stays elastic', () => {
+  it('is the elastic strain of its peak torque, T·c/(G·J_p) (EP5 at 150 rpm: T = 3114.81 N·m), not zero', () => {
+    // Elastic torsion γ = τ/G = T·c/(G·J_p) (Shigley 9th ed. Sec. 3-12; from memory, confident).
+    const r = analyseCase(parseCase(ep5('150 rpm', true)));
+    const gamma = (3114.81 * 0.02) / (79.3e9 * ((Math.PI * 0.04 ** 4) / 32));
+    expect(r.dynamic.yielded).toBe(false);
+    expect(rel(r.dynamic.pieces[0].maxShearStrain, gamma)).toBeLessThan(0.01);
+    expect((resultsToJson(r) as any).dynamic.segments[0].max_shear_strain).toBe(r.dynamic.pieces[0].maxShearStrain);
+  });
 });

@@ -89,3 +89,58 @@ describe('the read-back through analyseCase', () => {
     expect(r.observedFindings.twist[0].model).toBe('energy balance');
   });
 });
+
+describe('the read-back through the dynamic model at its edges', () => {
+  // A 30 mm neck next to the disc caps the torque at its fully plastic torque, (2π/3)·τ_Y·c³ =
+  // 1.72 kN·m, below the 60 mm body's first yield, (π/2)·τ_Y·c³ = 10.4 kN·m (Beer & Johnston,
+  // Mechanics of Materials, Sec. 3.9; from memory, confident): the body never yields.
+  const shielded = (angle: string) => `case: { id: SH }
+speed: 300 rpm
+stop: { at: jam, duration: 0.5 ms }
+shaft:
+  material: aisi-1045-cd
+  segments:
+    - { length: 200 mm, diameter: 30 mm }
+    - { length: 300 mm, diameter: 60 mm }
+stations:
+  - { name: disc, at: 0 mm, parts: [{ shape: inertia, inertia: 0.98646 kg*m^2 }] }
+  - { name: joint, at: 200 mm }
+  - { name: jam, at: 500 mm }
+observed:
+  permanent_twist:
+    - { between: [joint, jam], angle: ${angle}, method: test }
+analysis: { shaft_inertia: false, damping_ratio: 0 }
+`;
+
+  it('a zero twist between stations whose shaft never yields has no speed (not an infinite one), as through the energy balance', () => {
+    const r = analyseCase(parseCase(shielded('0 deg')));
+    expect(r.pastYieldBasis).toBe('dynamic model');
+    const f = r.observedFindings.twist[0];
+    expect(f.yieldOnsetSpeed).toBe(Infinity);
+    expect(f.speedForMeasured).toBeUndefined();
+    expect(f.energyForMeasured).toBeUndefined();
+    expect(f.beyondFracture).toBe(false);
+    expect(f.curve.every((p) => Number.isFinite(p.speed) && Number.isFinite(p.permanentTwist))).toBe(true);
+    const e = analyseCase(parseCase(shielded('0 deg').replace('damping_ratio: 0', 'damping_ratio: 0, dynamic_plasticity: false'))).observedFindings.twist[0];
+    expect(e.model).toBe('energy balance');
+    expect(e.speedForMeasured).toBeUndefined();
+  });
+
+  it('a twist past what the shaft takes before it breaks is put down to the break, not to a weaker piece that shields the stations', () => {
+    // EP5's 40 mm × 500 mm shaft: 30 rad of twist is an outer-fibre shear strain of c·θ/L = 1.2,
+    // past the fracture strain √3·ln(1/(1 − RA)) of 1045 CD (RA 40 %: 0.88).
+    const r = analyseCase(parseCase(ep5('300 rpm', 'duration').replace('angle: 2 deg', 'angle: 30 rad')));
+    const f = r.observedFindings.twist[0];
+    expect(f.model).toBe('dynamic model');
+    expect(f.finding).toBe('unexplained');
+    expect(f.meaning).toMatch(/breaks/);
+    expect(f.meaning).not.toMatch(/weaker piece elsewhere yields first/);
+  });
+
+  it('the finding read through the dynamic model does not say the drive\'s torque is left out of it', () => {
+    const r = analyseCase(parseCase(ep5('300 rpm', 'duration').replace('angle: 2 deg', 'angle: 60 deg')));
+    const f = r.observedFindings.twist[0];
+    expect(f.finding).toBe('more');
+    expect(f.meaning).not.toMatch(/not in the energy balance/);
+  });
+});

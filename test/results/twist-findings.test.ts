@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseCase } from '../../src/results/analyse-case.ts';
-import { DEFAULT_SPEED_BAND } from '../../src/results/twist-findings.ts';
+import { DEFAULT_SPEED_BAND, readTwistBack, type TwistRelation } from '../../src/results/twist-findings.ts';
 import { ep5Case } from '../data/ep5-case.ts';
 
 const rpm = (n: number) => (n * 2 * Math.PI) / 60;
@@ -125,5 +125,25 @@ describe('reading a measured permanent twist back (Results.observedFindings.twis
     for (let i = 1; i < f.curve.length; i++) expect(f.curve[i].permanentTwist).toBeGreaterThanOrEqual(f.curve[i - 1].permanentTwist - 1e-15);
     const hit = f.curve.find((p) => p.speed === f.speedForMeasured)!;
     expect(hit.permanentTwist).toBeCloseTo((3 * Math.PI) / 180, 9);
+  });
+});
+
+describe('readTwistBack on any model\'s relation', () => {
+  it('never calls a zero measured twist past fracture, even where the model breaks at the most speed that leaves none', () => {
+    // A relation that breaks at every speed: the zero twist's "at most" speed is not a twist past fracture.
+    const c = ep5Case({ observed: between(0) });
+    const rel: TwistRelation = {
+      model: 'dynamic model',
+      permanentAt: (w) => Math.max(0, w - 10) * 0.01,
+      speedFor: (t) => 10 + t / 0.01,
+      onset: () => 10,
+      energyAt: (w) => 0.5 * w * w,
+      breaksAt: () => true,
+      breaksBefore: () => false,
+      curvePoints: 4,
+    };
+    const [f] = readTwistBack(c, () => rel);
+    expect(f.speedForMeasured).toBe(10);
+    expect(f.beyondFracture).toBe(false);
   });
 });

@@ -45,6 +45,6 @@ export function torqueTwistInTimeFigure(r: Results): ReportFigure | undefined {
   const title = `Torque against twist of the most twisted piece in time (side ${p.side}, dynamic model)`;
   const caption =
     `${describeDynamicPiece(p, u)}: the path through the incident, sampled in time (${r.dynamic.histories.time.length} samples over ${sig(r.dynamic.duration * 1000)} ms), ` +
-    `with the torque capped by plasticity at ${show(p.peakTorque, 'torque', u)} and a permanent twist of ${show(p.permanentTwist, 'angle', u)} once unloaded${path.plasticWork > 0 ? `; the piece turned ${show(path.plasticWork, 'energy', u)} into heat by plastic flow (the area inside the path)` : ''}. Elastic–perfectly plastic on the net section, no kt; Masing's rule on reversals.`;
+    `with the torque capped by plasticity at ${show(p.peakTorque, 'torque', u)} and a permanent twist of ${show(p.permanentTwist, 'angle', u)} once unloaded${path.plasticWork > 0 ? `; the piece turned ${show(path.plasticWork, 'energy', u)} into heat by plastic flow (the area inside the path)` : ''}. ${r.case.analysis.hardening === 'linear' ? 'Linear strain hardening' : 'Elastic–perfectly plastic'} on the net section, no kt; Masing's rule on reversals.`;
   return { name: 'torque-twist', title, caption, svg: plotToSvg(options, title, caption) };
 }

@@ -1,7 +1,7 @@
 import type { Results } from '../../results/results.ts';
 import type { TwistFinding } from '../../results/twist-findings.ts';
 import { show } from '../../views/display-units.ts';
-import { describeDynamicPiece, mostTwisted } from '../../views/dynamic-past-yield.ts';
+import { describeDynamicPiece, dynamicLawWords, mostTwisted } from '../../views/dynamic-past-yield.ts';
 import { bandText, overallVerdictSentence } from '../../views/plastic-lines.ts';
 import { describePiece, verdictSentence } from '../../views/summary.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
@@ -61,7 +61,11 @@ function pastYield(r: Results): string {
   if (r.pastYieldBasis === 'dynamic model') {
     const inTime = dynamicDamageTable(r);
     out.push(
-      escapeMarkdown(`The verdict past yield stands on the dynamic model: its shaft elements yield as the net section does (${law}, no kt, Masing's rule on reversals) and break at their fracture strain, with the slip, the drive and the stop followed in time.`),
+      escapeMarkdown(
+        r.plastic.sides.some((s) => s.pieces.some((x) => x.brittle))
+          ? `The verdict past yield stands on the dynamic model (${dynamicLawWords(r)}), with the slip, the drive and the stop followed in time.`
+          : `The verdict past yield stands on the dynamic model: its shaft elements yield as the net section does (${law}, no kt, Masing's rule on reversals) and break at their fracture strain, with the slip, the drive and the stop followed in time.`,
+      ),
       inTime ? markdownTable(inTime) : escapeMarkdown('In the dynamic model no piece of shaft passes yield over its net section.'),
       escapeMarkdown("For comparison, the energy balance past yield puts all of each side's kinetic energy into its run of shaft with nothing else acting:"),
     );

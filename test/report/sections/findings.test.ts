@@ -65,3 +65,14 @@ describe('findingsSection', () => {
     expect(elastic.text).not.toContain('### Fracture');
   });
 });
+
+describe('findingsSection on a brittle shaft whose verdict past yield stands on the dynamic model', () => {
+  it('says its pieces break at their fracture stress, not that they yield', () => {
+    const c = ep5Case({ material: ['shear_modulus: 41.4 GPa', 'yield_strength: 207 MPa', 'tensile_strength: 207 MPa', 'elongation: 0.5 %', 'density: 7197 kg/m^3'] });
+    const data = buildReportData({ ...c, stop: { ...c.stop, duration: 0.0005 } });
+    const text = findingsSection.render({ ...data, run: RUN, source: { file: 'gray.yaml', text: '', sha256: '0'.repeat(64) } })!;
+    expect(data.results.pastYieldBasis).toBe('dynamic model');
+    expect(text).toMatch(/brittle pieces elastic up to their fracture stress/);
+    expect(text).not.toMatch(/its shaft elements yield as the net section does/);
+  });
+});
