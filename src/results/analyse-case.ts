@@ -152,10 +152,10 @@ function dynamicGoverning(c: Case, sides: SideResult[], d: DynamicResult): Resul
   const seg = p.piece.segment;
   const piece: PieceResult = {
     piece: p.piece,
-    torque: p.peakTorque,
+    torque: p.elasticPeakTorque,
     shearStress: p.shearStress,
     shearYield: p.shearYield,
-    twist: p.peakTorque * compliance(p.piece.end - p.piece.start, c.materials[seg.material].shearModulus!, seg.diameter, seg.bore),
+    twist: p.elasticPeakTorque * compliance(p.piece.end - p.piece.start, c.materials[seg.material].shearModulus!, seg.diameter, seg.bore),
     yieldRatio: p.yieldRatio,
   };
   return { side: sides.find((s) => s.side === p.side) ?? sides[0], piece };

@@ -17,10 +17,17 @@ import { solveDynamics } from './dynamic-solve.ts';
 export interface DynamicPiece {
   piece: ShaftPiece;
   side: SideName;
-  /** Largest |torque| over the window and along the piece, N·m, and when, s. */
+  /** Largest |torque| over the window and along the piece, N·m, and when, s (capped by plasticity where the piece yields). */
   peakTorque: number;
   peakTime: number;
-  /** kt times the outer-fibre stress at the peak torque, Pa. */
+  /**
+   * The peak the piece would have carried had the shaft stayed elastic, N·m: the same chain solved
+   * with elastic elements where the yielding run yielded or broke (else `peakTorque`). The elastic
+   * check (stress, yield ratio) stands on it, as the energy method's does, so that the ratio says how
+   * far past yield the incident went instead of stopping at the fully plastic torque.
+   */
+  elasticPeakTorque: number;
+  /** kt times the outer-fibre stress at the elastic peak torque, Pa. */
   shearStress: number;
   shearYield: number;
   yieldRatio: number;
@@ -123,13 +130,15 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
   const damage = dynamicPieceDamage(chain, run.laws, piecePeak);
   const breakTime = (i: number) => run.events.find((e) => e.what === 'breaks' && e.source.kind === 'element' && chain.elements[e.source.index].pieces.includes(i))?.time;
   const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
+  const pastYield = plasticLaws.some((l) => l.yielded) || damage.some((d) => d.broken);
+  const elasticPeak = pastYield ? elasticPeaks(c, model, solve.target) : piecePeak;
   const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {
     const seg = p.piece.segment;
     const tauY = shearYield(c.materials[seg.material].yieldStrength!, c.analysis.criterion);
-    const tau = seg.kt * shearStress(piecePeak[i], seg.diameter, seg.bore);
+    const tau = seg.kt * shearStress(elasticPeak[i], seg.diameter, seg.bore);
     const d = damage[i];
     const broke = d.broken ? { breakTime: breakTime(i) } : {};
-    return { piece: p.piece, side: p.side, peakTorque: piecePeak[i], peakTime: pieceTime[i], shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY, ...d, ...broke };
+    return { piece: p.piece, side: p.side, peakTorque: piecePeak[i], peakTime: pieceTime[i], elasticPeakTorque: elasticPeak[i], shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY, ...d, ...broke };
   });
   const governing = pieces.reduce((best, p, i) => (p.yieldRatio > pieces[best].yieldRatio ? i : best), 0);
   const sides = energy.map((s): SideComparison => {
@@ -199,6 +208,11 @@ function shaftElementName(chain: Chain, e: number): string {
   const same = chain.elements.flatMap((el, k) => (chain.pieces[el.pieces[0]].piece.segment === seg ? [k] : []));
   const where = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
   return same.length > 1 ? `the shaft in ${where} (element ${same.indexOf(e) + 1} of ${same.length} there, from the shaft's start)` : `the shaft in ${where}`;
+}
+
+/** Each piece's peak torque with the shaft elements elastic, the same chain (element count) otherwise, N·m. */
+function elasticPeaks(c: Case, model: ShaftModel, target: number): number[] {
+  return solveDynamics({ ...c, analysis: { ...c.analysis, dynamicPlasticity: false, elements: target } }, model).final.piecePeak;
 }
 
 function optional<K extends string, V>(key: K, value: V | undefined): Partial<Record<K, V>> {

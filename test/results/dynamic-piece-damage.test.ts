@@ -129,3 +129,17 @@ describe('the largest shear strain of a piece that stays elastic', () => {
     expect((resultsToJson(r) as any).dynamic.segments[0].max_shear_strain).toBe(r.dynamic.pieces[0].maxShearStrain);
   });
 });
+
+describe('the elastic check of a yielding dynamic model', () => {
+  it('takes its stress and yield ratio from the same chain kept elastic, while the peak torque stays capped at T_P', () => {
+    const yielding = analyseCase(parseCase(ep5('300 rpm', true)));
+    const elastic = analyseCase(parseCase(ep5('300 rpm', false)));
+    expect(yielding.dynamic.yielded).toBe(true);
+    expect(yielding.dynamic.pieces[0].yieldRatio).toBe(elastic.dynamic.pieces[0].yieldRatio);
+    expect(yielding.dynamic.pieces[0].elasticPeakTorque).toBe(elastic.dynamic.pieces[0].peakTorque);
+    // T_P = (4/3)·T_Y = (4/3)·τ_Y·π·c³/2 for the 40 mm bar (REFERENCE 3.1.5), τ_Y = 0.577·530 MPa.
+    const tp = (4 / 3) * ((0.577 * 530e6 * Math.PI * 0.02 ** 3) / 2);
+    expect(yielding.dynamic.pieces[0].peakTorque).toBeLessThanOrEqual(tp * (1 + 1e-9));
+    expect(yielding.dynamic.pieces[0].elasticPeakTorque).toBeGreaterThan(tp);
+  });
+});

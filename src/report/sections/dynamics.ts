@@ -31,17 +31,21 @@ export function renderDynamicsSection(r: Results): string {
   }
   out.push('', `The verdict (${r.verdict}) uses the ${r.verdictBasis}.`, '');
 
+  const capped = d.pieces.some((p) => p.elasticPeakTorque > p.peakTorque * (1 + 1e-6));
   out.push('### Peak torque along the shaft, dynamic model', '');
-  out.push('| side | piece | from | to | peak torque | at | shear stress with kt | yield ratio |');
-  out.push('|---|---|---|---|---|---|---|---|');
+  out.push(`| side | piece | from | to | peak torque | at |${capped ? ' peak torque had it stayed elastic |' : ''} shear stress with kt | yield ratio |`);
+  out.push(`|---|---|---|---|---|---|${capped ? '---|' : ''}---|---|`);
   for (const p of d.pieces) {
     const seg = p.piece.segment;
     const name = seg.label ? escapeMarkdown(seg.label) : `segment ${seg.index + 1}`;
     out.push(
-      `| ${p.side} | ${name} | ${show(p.piece.start, 'length', u)} | ${show(p.piece.end, 'length', u)} | ${show(p.peakTorque, 'torque', u)} | ${sig(p.peakTime * 1000)} ms | ${show(p.shearStress, 'stress', u)} | ${sig(p.yieldRatio)} |`,
+      `| ${p.side} | ${name} | ${show(p.piece.start, 'length', u)} | ${show(p.piece.end, 'length', u)} | ${show(p.peakTorque, 'torque', u)} | ${sig(p.peakTime * 1000)} ms |${capped ? ` ${show(p.elasticPeakTorque, 'torque', u)} |` : ''} ${show(p.shearStress, 'stress', u)} | ${sig(p.yieldRatio)} |`,
     );
   }
   out.push('');
+  if (capped) {
+    out.push(escapeMarkdown('Past yield the shaft elements carry at most their fully plastic torque; the shear stress and yield ratio are those of the same chain solved with the shaft kept elastic (the elastic check, like the energy method\'s), which says how far past yield the incident went.'), '');
+  }
 
   out.push(...protectionLines(r, d));
   out.push(...frequencyLines(r, d));
