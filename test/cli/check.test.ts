@@ -55,7 +55,7 @@ describe('shaftcase check', () => {
     const sample = fileURLToPath(new URL('../../sample-cases/roll-line-limiter-two-sides.yaml', import.meta.url));
     const r = await cli('check', sample);
     expect(r.out).toMatch(/Dynamic model \(torsional chain, \d+ shaft elements, [\d.]+ ms from the stop\)/);
-    expect(r.out).toMatch(/side A {2}peak torque .* \(energy method .*\), yield ratio [\d.]+ \([\d.]+\)/);
+    expect(r.out).toMatch(/side A {2}peak torque .* \(energy method .*\), elastic yield ratio [\d.]+ \([\d.]+\)/);
     expect(r.out).toMatch(/the torque limiter in "limiter hub seat" \(slip torque 9000 N·m\) slipped/);
     expect(r.out).toMatch(/Verdict \(dynamic model\): (ELASTIC|YIELDED)/);
     expect(r.out).toMatch(/The verdict uses the dynamic model because the stop took 6\.00 ms/);
