@@ -51,6 +51,8 @@ export class PlasticElementLaw implements TorqueLaw {
   yieldStarts = 0;
   /** Whether the element has broken. */
   broken = false;
+  /** Strain energy let go at the break, J (part of `dissipated`; the rest of it is plastic work). */
+  released = 0;
 
   constructor(
     readonly backbone: SeriesBackbone,
@@ -132,6 +134,7 @@ export class PlasticElementLaw implements TorqueLaw {
       // The integrator has committed θ already. The stored energy goes with the break: the
       // committed torque drops to zero, so the dissipated total takes up T²/2k.
       this.broken = true;
+      this.released = this.recoverable(this.committedTorque);
       this.committedTorque = 0;
       return 'breaks';
     }

@@ -89,7 +89,7 @@ export function yieldPath(chain: Chain, sol: ChainSolution, permanent: readonly 
       share = (law.backbone.pieceTwistRates(peak)[k] * law.backbone.pieces[k].length) / peak;
     }
     for (let s = 0; s < twist.length; s++) twist[s] += sense * share * h.elementTwist[e][s];
-    if (law instanceof PlasticElementLaw && el.pieces.length === 1) plasticWork += law.dissipated;
+    if (law instanceof PlasticElementLaw && el.pieces.length === 1) plasticWork += law.dissipated - law.released;
     if (peak > mostTwist) {
       mostTwist = peak;
       most = e;

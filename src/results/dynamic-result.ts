@@ -193,7 +193,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     plasticity: plasticLaws.length > 0 || run.laws.some((l) => l instanceof ShearPinLaw && l.kind === 'shaft'),
     yielded: plasticLaws.some((l) => l.yielded),
     fractured: damage.some((d) => d.broken),
-    plasticWork: plasticLaws.reduce((w, l) => w + l.dissipated, 0),
+    plasticWork: plasticLaws.reduce((w, l) => w + l.dissipated - l.released, 0),
     energy: run.energy,
     histories: dynamicHistories(chain, solve.final, slips),
     ...optional('yieldPath', yieldPath(chain, solve.final, pieces.map((p) => p.permanentTwist))),

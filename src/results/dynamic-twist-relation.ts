@@ -9,8 +9,8 @@ import type { TwistRelation } from './twist-findings.ts';
 const CURVE_POINTS = 12;
 /** Relative width in speed to which the inversions are carried. */
 const SPEED_TOLERANCE = 1e-5;
-/** The onset of yield is found to this share of its speed (it only sets the figure's range and the zero-twist reading). */
-const ONSET_TOLERANCE = 0.01;
+/** The onset of yield is found to this share of its speed (it sets the figure's range and the zero-twist reading, shown to 4 figures). */
+const ONSET_TOLERANCE = 1e-3;
 /** Permanent twist below this is taken as none, rad (about 0.00006°, far below any measurement). */
 const NONE = 1e-6;
 /** Speed steps upward when looking for a speed that leaves a twist: ×1.5, this many times. */

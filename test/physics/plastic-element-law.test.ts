@@ -219,6 +219,10 @@ describe('PlasticElementLaw, fracture in time', () => {
     expect(rel(left, 0.5 * J * w0 ** 2 - breakEnergy)).toBeLessThan(0.005);
     expect(Math.abs(books(r)) / r.energy.initial).toBeLessThan(1e-3);
     expect(el.torque(1)).toBe(0);
+    // All the work done on it is gone: the plastic work, and the strain energy T_f²/2k let go at the break.
+    const Tf = torqueAtTwistRate(tl, phiF);
+    expect(rel(el.dissipated, breakEnergy)).toBeLessThan(0.005);
+    expect(rel(el.released, (Tf * Tf) / (2 * k))).toBeLessThan(1e-6);
   });
 
   it('does not break just below the energy to break (0.97 of it), and yields', () => {
