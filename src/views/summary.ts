@@ -1,4 +1,5 @@
 import type { PieceResult } from '../physics/energy-method.ts';
+import { isBrittle } from '../physics/fracture.ts';
 import type { ElasticVerdict, Results } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
 import { renderUncertaintyLines } from './uncertainty-summary.ts';
@@ -43,9 +44,14 @@ export function verdictSentence(r: Results, basis = false): string {
   const g = basis ? r.verdictGoverning : r.governing;
   const where = describePiece(g.piece, r.case.units);
   const ratio = sig(g.piece.yieldRatio, 3);
+  // Brittle material (gray iron) has no yield point: its limit is its strength, and past it the
+  // shaft cracks rather than twists.
+  const brittle = isBrittle(r.case.materials[g.piece.piece.segment.material]);
   const words: Record<ElasticVerdict, string> = {
-    elastic: `ELASTIC: the highest stress is ${ratio} of shear yield (side ${g.side.side}, ${where}); no yield is predicted.`,
-    yielded: `YIELDED: the elastic stress reaches ${ratio} × shear yield (side ${g.side.side}, ${where}); the shaft may have taken a permanent twist.`,
+    elastic: `ELASTIC: the highest stress is ${ratio} of shear ${brittle ? 'strength' : 'yield'} (side ${g.side.side}, ${where}); no ${brittle ? 'fracture' : 'yield'} is predicted.`,
+    yielded: brittle
+      ? `OVER ITS STRENGTH: the elastic stress reaches ${ratio} × the shear limit of a brittle material (side ${g.side.side}, ${where}); it cracks or breaks rather than taking a permanent twist.`
+      : `YIELDED: the elastic stress reaches ${ratio} × shear yield (side ${g.side.side}, ${where}); the shaft may have taken a permanent twist.`,
   };
   return words[g.piece.yieldRatio < 1 ? 'elastic' : 'yielded'];
 }

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { show, sig } from '../../src/views/display-units.ts';
-import { dynamicLines, renderSummary } from '../../src/views/summary.ts';
+import { dynamicLines, renderSummary, verdictSentence } from '../../src/views/summary.ts';
 
 const sample = (f: string) => analyseCase(parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8')));
 
@@ -30,5 +30,25 @@ describe('the summary with the dynamic model', () => {
 
   it('shows US units in a US case', () => {
     expect(dynamicLines(sample('screw-conveyor-jam-us.yaml')).join('\n')).toMatch(/peak torque [\d.]+ lbf·ft(, [\d.]+ lbf·ft had it stayed elastic)? \(energy method [\d.]+ lbf·ft\)/);
+  });
+});
+
+describe('the elastic verdict in words for a brittle shaft', () => {
+  it('says a gray-iron shaft over its strength cracks rather than twists, not that it yielded', () => {
+    const text = `case: { id: B }
+speed: 600 rpm
+stop: { at: jam }
+shaft:
+  material: gray-iron-30
+  segments:
+    - { length: 500 mm, diameter: 40 mm }
+stations:
+  - { name: disc, at: 0 mm, parts: [{ shape: inertia, inertia: 1 kg*m^2 }] }
+  - { name: jam, at: 500 mm }
+`;
+    const r = analyseCase(parseCase(text));
+    expect(r.yieldRatio).toBeGreaterThan(1);
+    expect(verdictSentence(r)).toMatch(/^OVER ITS STRENGTH: .* brittle material .* cracks or breaks rather than taking a permanent twist\.$/);
+    expect(verdictSentence(r)).not.toMatch(/YIELDED/);
   });
 });
