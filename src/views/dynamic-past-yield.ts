@@ -1,14 +1,13 @@
 import type { DynamicPiece } from '../results/dynamic-result.ts';
 import type { Results } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
+import { describePlasticPiece } from './piece-span.ts';
 
 type Units = Results['case']['units'];
 
 /** '"sheave seat" 60 mm to 120 mm, Ø55 mm' for a piece of the dynamic model, in the case's units; `text` escapes the label. */
 export function describeDynamicPiece(p: DynamicPiece, u: Units, text: (s: string) => string = (s) => s): string {
-  const seg = p.piece.segment;
-  const name = seg.label ? `"${text(seg.label)}"` : `segment ${seg.index + 1}`;
-  return `${name} ${show(p.piece.start, 'length', u)} to ${show(p.piece.end, 'length', u)}, Ø${show(seg.diameter, 'length', u)}${seg.bore > 0 ? ` bore ${show(seg.bore, 'length', u)}` : ''}`;
+  return describePlasticPiece(p, u, text);
 }
 
 /** The piece that broke first in the dynamic model, if any. */

@@ -2,16 +2,12 @@ import type { Results } from '../results/results.ts';
 import type { PlasticPieceResult } from '../results/plastic-result.ts';
 import type { TwistFinding } from '../results/twist-findings.ts';
 import { show, sig } from './display-units.ts';
+import { describePlasticPiece } from './piece-span.ts';
+
+export { describePlasticPiece };
 import { dynamicPastYieldLines, dynamicVerdictSentence } from './dynamic-past-yield.ts';
 
 type Units = Results['case']['units'];
-
-/** '"sheave seat" 60 mm to 120 mm, Ø55 mm' for a plastic piece, in the case's units. */
-export function describePlasticPiece(p: PlasticPieceResult, u: Units, text: (s: string) => string = (s) => s): string {
-  const seg = p.piece.segment;
-  const name = seg.label ? `"${text(seg.label)}"` : `segment ${seg.index + 1}`;
-  return `${name} ${show(p.piece.start, 'length', u)} to ${show(p.piece.end, 'length', u)}, Ø${show(seg.diameter, 'length', u)}${seg.bore > 0 ? ` bore ${show(seg.bore, 'length', u)}` : ''}`;
-}
 
 /** The overall verdict in one sentence, from the plastic balance and the elastic method; `text` escapes user text (labels) for the output format. */
 export function overallVerdictSentence(r: Results, text: (s: string) => string = (s) => s): string {
