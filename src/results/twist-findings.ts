@@ -67,6 +67,7 @@ const MEANINGS: Record<TwistFindingCode, string> = {
 /** Where the dynamic model, which follows the drive, the slip and the breaks in time, says otherwise. */
 const DYNAMIC_MEANINGS: Partial<Record<TwistFindingCode, string>> = {
   more: 'The shaft took more energy than the recorded speed gives: the speed may have been higher than recorded, the drive may have pushed harder or longer than the case describes, the shaft may already have been twisted in an earlier event, or the material is weaker than the value used.',
+  less: 'The shaft took less energy than the recorded speed gives, even with the slip and the drive the case describes followed in time: energy was taken somewhere the case does not describe (a hub or key slipping, the jam giving way, a belt or limiter slipping sooner than stated), or the bar is stronger than the published minimum strength used, as a real bar usually is.',
 };
 
 /** A twist no speed leaves because the model breaks the shaft before the stations are twisted that far. */
