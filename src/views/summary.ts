@@ -28,7 +28,9 @@ export function dynamicLines(r: Results): string[] {
   }
   if (d.yielded) {
     const worst = d.pieces.reduce((b, p) => (p.permanentTwist > b.permanentTwist ? p : b), d.pieces[0]);
-    out.push(`  past yield in time: permanent twist ${showSlipAngle(worst.permanentTwist, u)} in ${describePiece(worst, u)}, plastic work ${show(d.plasticWork, 'energy', u)}`);
+    // A piece that broke keeps no measurable twist; name the twist only where one is left.
+    const twist = worst.permanentTwist > 0 ? `permanent twist ${showSlipAngle(worst.permanentTwist, u)} in ${describePiece(worst, u)}, ` : '';
+    out.push(`  past yield in time: ${twist}plastic work ${show(d.plasticWork, 'energy', u)}`);
   }
   for (const p of d.pieces.filter((x) => x.broken)) {
     out.push(`  breaks in time: ${describePiece(p, u)} at ${sig((p.breakTime ?? 0) * 1000)} ms`);
