@@ -4,10 +4,10 @@ import { energyMethodSide, type PieceResult, type SideResult } from '../physics/
 import { compliance } from '../physics/torsion.ts';
 import { analysePlastic } from './analyse-plastic.ts';
 import { CAUTIONS } from './cautions.ts';
-import { dynamicResult, type DynamicResult } from './dynamic-result.ts';
+import { dynamicResult, firstBrokenPiece, type DynamicResult } from './dynamic-result.ts';
 import { dynamicTwistRelation } from './dynamic-twist-relation.ts';
 import { balanceFracturePrediction, readFracture, type FracturePrediction } from './fracture-reading.ts';
-import type { PlasticResult } from './plastic-result.ts';
+import { balancePieceOf, type PlasticResult } from './plastic-result.ts';
 import type { ElasticVerdict, Results, Verdict } from './results.ts';
 import { balanceTwistRelation, readTwistBack } from './twist-findings.ts';
 import { verdictBasis } from './verdict-basis.ts';
@@ -140,10 +140,9 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
 
 /** The dynamic model's fracture prediction, named by the energy balance's piece where it broke first. */
 function dynamicFracturePrediction(d: DynamicResult, plastic: PlasticResult, verdict: Verdict): FracturePrediction {
-  const first = d.pieces.filter((p) => p.broken).sort((a, b) => (a.breakTime ?? 0) - (b.breakTime ?? 0))[0];
-  const side = first && plastic.sides.find((s) => s.side === first.side);
-  const piece = side?.pieces.find((p) => p.piece.start === first.piece.start && p.piece.end === first.piece.end);
-  return { verdict, ...(side && piece ? { predictedAt: { side: side.side, piece } } : {}) };
+  const first = firstBrokenPiece(d);
+  const at = first && balancePieceOf(plastic, first);
+  return { verdict, ...(at ? { predictedAt: { side: at.side.side, piece: at.piece } } : {}) };
 }
 
 /** The dynamic model's governing piece in the energy method's shape, so the views read one type. */

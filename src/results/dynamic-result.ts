@@ -8,7 +8,8 @@ import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
-import { dynamicHistories, yieldPath, type DynamicHistories, type YieldPath } from './dynamic-histories.ts';
+import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
+import { yieldPath, type YieldPath } from './yield-path.ts';
 import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
 import { solveDynamics } from './dynamic-solve.ts';
@@ -122,6 +123,11 @@ export interface DynamicResult {
 /** Events kept in the results (a belt that keeps reversing its slip can log hundreds). */
 const MAX_EVENTS_KEPT = 100;
 const QUIET_YIELD_EVENTS = new Set(['turns back', 'rejoins an earlier loading path', 'yields on']);
+
+/** The piece that broke first in the dynamic model, if any. */
+export function firstBrokenPiece(d: Pick<DynamicResult, 'pieces'>): DynamicPiece | undefined {
+  return d.pieces.filter((p) => p.broken).sort((a, b) => (a.breakTime ?? 0) - (b.breakTime ?? 0))[0];
+}
 
 /** Runs the dynamic model on a case and gathers what the views show. Pure: no I/O, no clock. */
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {

@@ -77,3 +77,14 @@ export interface PlasticResult {
   /** Statements about brittle pieces (gray iron): they break near their ultimate strength without plastic twist. */
   brittleNotes: string[];
 }
+
+/**
+ * The energy balance's piece and side for a piece of shaft (the same span of the same side), so
+ * that the dynamic model's results can be named with the balance's facts (fracture strain,
+ * brittleness). Undefined when the balance has no such piece.
+ */
+export function balancePieceOf(plastic: PlasticResult, p: { side: SideName; piece: ShaftPiece }): { side: PlasticSideResult; piece: PlasticPieceResult } | undefined {
+  const side = plastic.sides.find((s) => s.side === p.side);
+  const piece = side?.pieces.find((x) => x.piece.start === p.piece.start && x.piece.end === p.piece.end);
+  return side && piece ? { side, piece } : undefined;
+}

@@ -1,4 +1,5 @@
-import type { DynamicPiece } from '../results/dynamic-result.ts';
+import { firstBrokenPiece, type DynamicPiece } from '../results/dynamic-result.ts';
+import { balancePieceOf } from '../results/plastic-result.ts';
 import type { Results } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
 import { describePlasticPiece } from './piece-span.ts';
@@ -10,11 +11,6 @@ export function describeDynamicPiece(p: DynamicPiece, u: Units, text: (s: string
   return describePlasticPiece(p, u, text);
 }
 
-/** The piece that broke first in the dynamic model, if any. */
-export function firstBroken(r: Results): DynamicPiece | undefined {
-  return r.dynamic.pieces.filter((p) => p.broken).sort((a, b) => (a.breakTime ?? 0) - (b.breakTime ?? 0))[0];
-}
-
 /** The piece with the largest permanent twist in the dynamic model. */
 export function mostTwisted(r: Results): DynamicPiece {
   return r.dynamic.pieces.reduce((b, p) => (p.permanentTwist > b.permanentTwist ? p : b), r.dynamic.pieces[0]);
@@ -23,10 +19,10 @@ export function mostTwisted(r: Results): DynamicPiece {
 /** The overall verdict in one sentence where it stands on the dynamic model past yield. */
 export function dynamicVerdictSentence(r: Results, text: (s: string) => string = (s) => s): string {
   const u = r.case.units;
-  const broke = firstBroken(r);
+  const broke = firstBrokenPiece(r.dynamic);
   if (r.verdict === 'fracture predicted' && broke) {
     const when = broke.breakTime === undefined ? '' : ` ${sig(broke.breakTime * 1000)} ms after the stop began`;
-    return `FRACTURE PREDICTED (dynamic model): ${describeDynamicPiece(broke, u, text)} breaks${when}, at its fracture ${r.plastic.sides.flatMap((s) => s.pieces).find((p) => p.piece.start === broke.piece.start && p.piece.end === broke.piece.end)?.brittle ? 'stress' : 'strain'}.`;
+    return `FRACTURE PREDICTED (dynamic model): ${describeDynamicPiece(broke, u, text)} breaks${when}, at its fracture ${balancePieceOf(r.plastic, broke)?.piece.brittle ? 'stress' : 'strain'}.`;
   }
   if (r.verdict === 'yielded' && r.dynamic.yielded) {
     const p = mostTwisted(r);
@@ -60,11 +56,10 @@ export function dynamicPastYieldLines(r: Results): string[] {
   const u = r.case.units;
   const d = r.dynamic;
   const out = ['', `Past yield in time (dynamic model, ${dynamicLawWords(r)}):`];
-  const facts = r.plastic.sides.flatMap((s) => s.pieces);
   const hit = d.pieces.filter((p) => p.permanentTwist > 0 || p.broken);
   if (hit.length === 0) out.push('  No piece yields through its net section.');
   for (const p of hit) {
-    const f = facts.find((x) => x.piece.start === p.piece.start && x.piece.end === p.piece.end);
+    const f = balancePieceOf(r.plastic, p)?.piece;
     const fs = f?.fractureStrain === undefined ? 'fracture strain unknown' : `fracture at ${sig(f.fractureStrain)}`;
     const state = p.broken ? `BREAKS at ${sig((p.breakTime ?? 0) * 1000)} ms` : `permanent ${show(p.permanentTwist, 'angle', u)}, shear strain ${sig(p.maxShearStrain)} (${fs})`;
     out.push(`  Side ${p.side}, ${describeDynamicPiece(p, u)}: peak torque ${show(p.peakTorque, 'torque', u)}, ${state}`);

@@ -1,6 +1,7 @@
 import type { Results } from '../../results/results.ts';
 import { show, sig } from '../../views/display-units.ts';
-import { describeDynamicPiece, firstBroken, mostTwisted } from '../../views/dynamic-past-yield.ts';
+import { describeDynamicPiece, mostTwisted } from '../../views/dynamic-past-yield.ts';
+import { firstBrokenPiece } from '../../results/dynamic-result.ts';
 import { describePlasticPiece, overallVerdictSentence } from '../../views/plastic-lines.ts';
 import { describePiece, verdictSentence } from '../../views/summary.ts';
 import { chanceOfYieldWords } from '../../views/uncertainty-summary.ts';
@@ -13,7 +14,7 @@ export function verdictInPlainWords(r: Results): string {
   const p = r.plastic;
   const inspect = 'Inspect it, and every key, hub and coupling between the stop and the loaded parts, before anything goes back into service.';
   if (r.pastYieldBasis === 'dynamic model' && (r.dynamic.fractured || r.dynamic.yielded)) {
-    const broke = firstBroken(r);
+    const broke = firstBrokenPiece(r.dynamic);
     if (r.verdict === 'fracture predicted' && broke) {
       return `The shaft is predicted to break: in the dynamic model ${describeDynamicPiece(broke, u)} reaches its fracture limit ${sig((broke.breakTime ?? 0) * 1000)} ms after the stop began. ${inspect}`;
     }

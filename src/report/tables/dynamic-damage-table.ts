@@ -1,3 +1,4 @@
+import { balancePieceOf } from '../../results/plastic-result.ts';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, unitLabel } from '../../views/display-units.ts';
 import { segmentName } from './pieces-table.ts';
@@ -14,7 +15,6 @@ export function dynamicDamageTable(r: Results): ReportTable | undefined {
   const hit = r.dynamic.pieces.filter((p) => p.permanentTwist > 0 || p.broken);
   if (hit.length === 0) return undefined;
   const u = r.case.units;
-  const facts = r.plastic.sides.flatMap((s) => s.pieces);
   return {
     name: 'past-yield-in-time',
     title: 'Past yield in time (dynamic model), the pieces that yielded or broke',
@@ -31,7 +31,7 @@ export function dynamicDamageTable(r: Results): ReportTable | undefined {
       { label: 'breaks at', unit: 'ms' },
     ],
     rows: hit.map((p) => {
-      const f = facts.find((x) => x.piece.start === p.piece.start && x.piece.end === p.piece.end);
+      const f = balancePieceOf(r.plastic, p)?.piece;
       return [
         p.side,
         segmentName(p.piece.segment),
