@@ -62,7 +62,9 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--factor <N>', 'design factor on shear yield in a repeat of the incident (default: the case\'s, else 1.5)', designFactor)
     .option('--json', 'print the check --json object with resize added, SI units')
-    .action((file: string, opts: { factor?: number; json?: boolean }) => resizeCommand(file, opts, io));
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none), as for check', wholeNumber)
+    .option('--seed <s>', 'seed of the Monte Carlo, as for check', wholeNumber)
+    .action((file: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number }) => resizeCommand(file, opts, io));
 
   program
     .command('materials')

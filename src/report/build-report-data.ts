@@ -1,5 +1,6 @@
 import type { Case } from '../case/case.ts';
 import { resizeCase } from '../resize/resize-case.ts';
+import { withFinding } from '../finding/investigation.ts';
 import { investigate } from '../results/investigate.ts';
 import type { ReportData } from './report-context.ts';
 
@@ -20,6 +21,6 @@ export interface ReportDataOptions {
  * (`resize`'s). Pure; the report's sections and figures only read it.
  */
 export function buildReportData(c: Case, opts: ReportDataOptions = {}): ReportData {
-  const results = investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress });
+  const results = withFinding(investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress }));
   return { results, resize: resizeCase(c, results, { factor: opts.factor }) };
 }

@@ -1,4 +1,5 @@
-import type { Results } from '../results/results.ts';
+import type { Investigation } from '../finding/investigation.ts';
+import { verdictWord } from '../views/finding-words.ts';
 import { fillTemplate } from './fill-template.ts';
 import type { ReportFigure } from './figures/report-figure.ts';
 import { figureHref } from './layout.ts';
@@ -23,8 +24,8 @@ export interface ReportInput {
   sections?: readonly ReportSection[];
 }
 
-/** The template fields: case metadata (escaped user text), the run, the verdict word. */
-export function templateFields(r: Results, run: RunInfo, source: CaseSource): Record<string, string> {
+/** The template fields: case metadata (escaped user text), the run, the finding's verdict word. */
+export function templateFields(r: Investigation, run: RunInfo, source: CaseSource): Record<string, string> {
   const m = r.case.meta;
   const text = (v: string | undefined) => (v === undefined || v.trim() === '' ? 'not given' : escapeMarkdown(v));
   return {
@@ -41,7 +42,7 @@ export function templateFields(r: Results, run: RunInfo, source: CaseSource): Re
     'run.time': run.time,
     'run.iso': run.iso,
     'run.version': escapeMarkdown(run.version),
-    verdict: r.verdict.toUpperCase(),
+    verdict: verdictWord(r.finding),
   };
 }
 

@@ -1,5 +1,5 @@
 import type { ResizeResult } from '../resize/resize-result.ts';
-import type { Results } from '../results/results.ts';
+import type { Investigation } from '../finding/investigation.ts';
 import type { RunInfo } from './run-info.ts';
 
 /**
@@ -9,7 +9,7 @@ import type { RunInfo } from './run-info.ts';
  * nothing of their own.
  */
 export interface ReportData {
-  results: Results;
+  results: Investigation;
   resize: ResizeResult;
 }
 

@@ -1,4 +1,5 @@
 import type { Case } from '../case/case.ts';
+import type { Investigation } from '../finding/investigation.ts';
 import type { Results } from '../results/results.ts';
 import { runningTorque } from '../results/running-torque.ts';
 import { criticalSegment } from './critical-segment.ts';
@@ -24,7 +25,7 @@ export interface ResizeOptions {
  * changed case through the engine against a repeat of the incident, and under the running torque.
  * Pure: `results` is analyseCase(c).
  */
-export function resizeCase(c: Case, results: Results, options: ResizeOptions = {}): ResizeResult {
+export function resizeCase(c: Case, results: Investigation, options: ResizeOptions = {}): ResizeResult {
   const designFactor = options.factor ?? c.analysis.designFactor;
   if (!(designFactor >= 1)) throw new RangeError(`resizeCase: a design factor of 1 or more is needed, not ${designFactor}`);
   const { serviceFactor, maxScale } = c.analysis;

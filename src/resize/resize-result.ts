@@ -1,4 +1,4 @@
-import type { Results } from '../results/results.ts';
+import type { Investigation } from '../finding/investigation.ts';
 import type { CriticalSegmentOption } from './critical-segment.ts';
 import type { Recommendation } from './guarding.ts';
 import type { KeyFuse } from './key-fuse.ts';
@@ -20,8 +20,8 @@ export interface OptionEffects {
  * of the changed case, and in normal running. Every view (table, JSON, report section) reads this.
  */
 export interface ResizeResult {
-  /** The check of the case as it is. */
-  results: Results;
+  /** The check of the case as it is, with its finding. */
+  results: Investigation;
   /** Design factor N on shear yield a replacement keeps in a repeat incident. */
   designFactor: number;
   serviceFactor: number;

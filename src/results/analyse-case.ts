@@ -109,11 +109,8 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     fracture: readFracture(c, pastYieldInTime ? dynamicFracturePrediction(dynamic, plastic, verdict) : balanceFracturePrediction(plastic)),
   };
 
-  let reason = basis.reason;
-  if (basis.basis === 'energy method') {
-    const worst = Math.max(...dynamic.sides.map((s) => Math.abs(s.dynamicPeakTorque / s.energyPeakTorque - 1)));
-    reason += ` The dynamic model's peak torques are within ${(100 * worst).toPrecision(2)} % of it${dynamic.shaftInertia ? ' (it adds the shaft\'s own inertia and damping)' : ''}.`;
-  }
+  // How the other model compares is the views' comparison (like for like), not part of the reason.
+  const reason = basis.reason;
 
   return {
     case: c,

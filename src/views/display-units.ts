@@ -43,9 +43,17 @@ export function sig(value: number, digits = 3): string {
   return rounded.toExponential(digits - 1);
 }
 
-/** `value` (SI) shown in the case's units, three significant figures: "81.5 MPa". */
+/**
+ * Below these a value is numerical noise, not a result, and is shown as 0: an angle no dial or
+ * scribed line resolves (0.001°), a length below 0.1 µm, a torque or energy below 1 µN·m or 1 µJ.
+ */
+export const ANGLE_RESOLUTION = (1e-3 * Math.PI) / 180;
+const RESOLUTION: Partial<Record<DisplayKind, number>> = { angle: ANGLE_RESOLUTION, length: 1e-7, torque: 1e-6, energy: 1e-6 };
+
+/** `value` (SI) shown in the case's units, three significant figures: "81.5 MPa"; noise below the display resolution as 0. */
 export function show(value: number, kind: DisplayKind, units: Case['units'], digits = 3): string {
   const u = DISPLAY[units][kind];
+  if (Math.abs(value) < (RESOLUTION[kind] ?? 0)) value = 0;
   // Large metric torques and energies read better with the kilo prefix: 73.5 kN·m, not 73500 N·m.
   if (units === 'metric' && (kind === 'torque' || kind === 'energy') && Math.abs(value) >= 1e4) {
     return `${sig(value / 1e3, digits)} k${u.label}`;

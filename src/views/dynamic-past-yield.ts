@@ -1,4 +1,4 @@
-import { firstBrokenPiece, type DynamicPiece } from '../results/dynamic-result.ts';
+import type { DynamicPiece } from '../results/dynamic-result.ts';
 import { balancePieceOf } from '../results/plastic-result.ts';
 import type { Results } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
@@ -14,26 +14,6 @@ export function describeDynamicPiece(p: DynamicPiece, u: Units, text: (s: string
 /** The piece with the largest permanent twist in the dynamic model. */
 export function mostTwisted(r: Results): DynamicPiece {
   return r.dynamic.pieces.reduce((b, p) => (p.permanentTwist > b.permanentTwist ? p : b), r.dynamic.pieces[0]);
-}
-
-/** The overall verdict in one sentence where it stands on the dynamic model past yield. */
-export function dynamicVerdictSentence(r: Results, text: (s: string) => string = (s) => s): string {
-  const u = r.case.units;
-  const broke = firstBrokenPiece(r.dynamic);
-  if (r.verdict === 'fracture predicted' && broke) {
-    const when = broke.breakTime === undefined ? '' : ` ${sig(broke.breakTime * 1000)} ms after the stop began`;
-    return `FRACTURE PREDICTED (dynamic model): ${describeDynamicPiece(broke, u, text)} breaks${when}, at its fracture ${balancePieceOf(r.plastic, broke)?.piece.brittle ? 'stress' : 'strain'}.`;
-  }
-  if (r.verdict === 'yielded' && r.dynamic.yielded) {
-    const p = mostTwisted(r);
-    const total = r.dynamic.pieces.reduce((s, x) => s + x.permanentTwist, 0);
-    const rest = Math.abs(total - p.permanentTwist) > 1e-3 * total ? ` (${show(total, 'angle', u)} along the whole shaft)` : '';
-    return `YIELDED (dynamic model): the torque in ${describeDynamicPiece(p, u, text)} is capped by plasticity at ${show(p.peakTorque, 'torque', u)}; a permanent twist of ${show(p.permanentTwist, 'angle', u)} is predicted there${rest}; no fracture is predicted.`;
-  }
-  if (r.verdict === 'yielded') {
-    return 'YIELDED (locally): the net section stays elastic, but the stress at a stress raiser passes yield; no measurable permanent twist is predicted.';
-  }
-  return 'ELASTIC: no yield is predicted.';
 }
 
 /**
@@ -55,7 +35,7 @@ export function dynamicLawWords(r: Results): string {
 export function dynamicPastYieldLines(r: Results): string[] {
   const u = r.case.units;
   const d = r.dynamic;
-  const out = ['', `Past yield in time (dynamic model, ${dynamicLawWords(r)}):`];
+  const out = ['', `Past yield in time (the finding's model past yield: ${dynamicLawWords(r)}):`];
   const hit = d.pieces.filter((p) => p.permanentTwist > 0 || p.broken);
   if (hit.length === 0) out.push('  No piece yields through its net section.');
   for (const p of hit) {

@@ -1,54 +1,29 @@
 import type { Results } from '../results/results.ts';
 import type { PlasticPieceResult } from '../results/plastic-result.ts';
 import type { TwistFinding } from '../results/twist-findings.ts';
-import { show, sig } from './display-units.ts';
+import { ANGLE_RESOLUTION, show, sig } from './display-units.ts';
 import { describePlasticPiece } from './piece-span.ts';
 
 export { describePlasticPiece };
-import { dynamicPastYieldLines, dynamicVerdictSentence } from './dynamic-past-yield.ts';
 
 type Units = Results['case']['units'];
 
-/** The overall verdict in one sentence, from the plastic balance and the elastic method; `text` escapes user text (labels) for the output format. */
-export function overallVerdictSentence(r: Results, text: (s: string) => string = (s) => s): string {
-  if (r.pastYieldBasis === 'dynamic model') return dynamicVerdictSentence(r, text);
-  const u = r.case.units;
-  const p = r.plastic;
-  if (r.verdict === 'fracture predicted') {
-    const side = p.sides.find((s) => s.verdict === 'fracture predicted')!;
-    const first = side.firstToBreak === undefined ? undefined : side.pieces[side.firstToBreak];
-    const what = first ? `${describePlasticPiece(first, u, text)} reaches its fracture ${first.brittle ? 'stress' : 'strain'}` : 'a piece reaches its fracture limit';
-    return `FRACTURE PREDICTED: side ${side.side}, ${what}; the side can absorb ${show(side.fractureEnergy, 'energy', u)} before the first break and has ${show(side.energy, 'energy', u)}.`;
-  }
-  if (r.verdict === 'yielded' && p.verdict === 'yielded') {
-    const side = p.sides.reduce((a, b) => (b.permanentTwist > a.permanentTwist ? b : a));
-    return `YIELDED: the peak torque is capped by plasticity at ${show(p.peakTorque, 'torque', u)}; a permanent twist of ${show(side.permanentTwist, 'angle', u)} is predicted on side ${side.side}; no fracture is predicted.`;
-  }
-  if (r.verdict === 'yielded') {
-    return 'YIELDED (locally): the net section stays elastic, but the stress at a stress raiser passes yield; no measurable permanent twist is predicted.';
-  }
-  return 'ELASTIC: no yield is predicted.';
-}
-
 /**
- * The result past yield for `check`, shown when the elastic yield ratio is at or above 1: the
- * dynamic model's where the verdict stands on it, then the energy balance (for comparison there).
+ * The energy balance past yield for `check`: per side the capped peak torque, the twist and the
+ * permanent twist, and each piece that yields or breaks. `role` heads it as the finding's model
+ * past yield or as a comparison.
  */
-export function plasticLines(r: Results): string[] {
+export function plasticLines(r: Results, role: string): string[] {
   const u = r.case.units;
   const p = r.plastic;
   const law = r.case.analysis.hardening === 'linear' ? 'linear strain hardening' : 'elastic–perfectly plastic';
-  const dynamic = r.pastYieldBasis === 'dynamic model';
-  const out: string[] = [
-    ...(dynamic ? dynamicPastYieldLines(r) : []),
-    '',
-    dynamic ? `Past yield by the energy balance, for comparison (${law}; all of each side's energy into its shaft, nothing else acting):` : `Past yield (energy balance, ${law}):`,
-  ];
+  const out: string[] = ['', `Past yield by the energy balance (${role}; ${law}; all of each side's energy into its shaft, nothing else acting):`];
   for (const s of p.sides) {
     const at = s.verdict === 'fracture predicted' ? ' at the break' : '';
     out.push(`  Side ${s.side}  peak torque${at} ${show(s.peakTorque, 'torque', u)}, twist ${show(s.totalTwist, 'angle', u)}, permanent twist ${show(s.permanentTwist, 'angle', u)}, highest shear strain ${sig(s.maxShearStrain)}`);
     for (const piece of s.pieces) {
-      if (!piece.yielded && !piece.state.fractured) continue;
+      // A piece that only grazes yield (a permanent twist no instrument resolves) is not listed.
+      if (!piece.state.fractured && !(piece.yielded && piece.state.permanentTwist >= ANGLE_RESOLUTION)) continue;
       const fs = piece.fractureStrain === undefined ? 'fracture strain unknown' : `fracture at ${sig(piece.fractureStrain)}`;
       out.push(`    ${describePlasticPiece(piece, u)}: permanent ${show(piece.state.permanentTwist, 'angle', u)} (surface offset ${show(piece.surfaceOffset, 'length', u)}, an axial line now at ${show(piece.helixAngle, 'angle', u)}), shear strain ${sig(piece.state.maxShearStrain)} (${fs})${piece.state.fractured ? ' BREAKS' : ''}`);
     }
@@ -96,7 +71,7 @@ export function twistFindingLines(f: TwistFinding, u: Units): string[] {
   if (f.curve.length > 0 && !Number.isFinite(f.yieldOnsetSpeed)) {
     out.push('    The shaft between these stations does not yield at any speed: a weaker piece elsewhere in the run yields first and takes the energy.');
   }
-  out.push(`    Finding: ${FINDING_WORDS[f.finding]}. ${f.meaning}`);
+  out.push(`    Read-back: ${FINDING_WORDS[f.finding]}. ${f.meaning}`);
   if (f.beyondFracture) out.push('    At that speed the model predicts fracture: the measured twist is past the fracture estimate; check the measurement and the fracture strain.');
   return out;
 }

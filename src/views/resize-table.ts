@@ -2,7 +2,7 @@ import type { ResizeResult } from '../resize/resize-result.ts';
 import { show, sig } from './display-units.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from './resize-rows.ts';
 import { criticalSegmentSentence, factorSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from './resize-words.ts';
-import { verdictSentence } from './summary.ts';
+import { findingSentence } from './finding-words.ts';
 import { textTable } from './text-table.ts';
 
 /** The terminal output of `shaftcase resize`: the options table, then each option in words. */
@@ -14,8 +14,9 @@ export function renderResize(z: ResizeResult): string {
   const rows = optionRows(z);
   const out: string[] = [];
   out.push(`${m.id}${m.title ? `  ${m.title}` : ''}`);
-  out.push('What goes back in: each option against a repeat of the recorded incident, checked by a rerun of the changed case (elastic energy method).');
-  out.push(`Present: ${verdictSentence(r)}`);
+  out.push(`Present shaft, the finding: ${findingSentence(r.finding, u)}`);
+  out.push(`  What to do: ${r.finding.disposition}`);
+  out.push('What goes back in: each option against a repeat of the recorded incident, checked by a rerun of the changed case through the elastic energy method (the design check; it leans to the high side where the finding stands on the dynamic model).');
   out.push(factorSentence(z));
   const running = z.present.running.running;
   out.push(running ? `Running torque ${show(running.torque, 'torque', u)}: ${running.source}.` : 'Running torque: unknown; the case gives no drive power or running torque.');

@@ -1,6 +1,7 @@
 import type { Case } from '../case/case.ts';
 import type { KeyFuse } from '../resize/key-fuse.ts';
 import type { ResizeResult } from '../resize/resize-result.ts';
+import type { Results } from '../results/results.ts';
 import { sideYieldRatio } from '../resize/side-ratio.ts';
 import type { RunningCheck } from '../resize/running-check.ts';
 import { show, sig } from './display-units.ts';
@@ -119,7 +120,7 @@ export function keySentences(z: ResizeResult, k: KeyFuse): string[] {
 }
 
 /** " Side B is then at a yield ratio of 5.21, past the factor: …" for each other side a change leaves past N. */
-function otherSidesWords(z: ResizeResult, rerun: ResizeResult['results'], side: string): string {
+function otherSidesWords(z: ResizeResult, rerun: Results, side: string): string {
   return rerun.sides
     .filter((s) => s.side !== side && sideYieldRatio(rerun, s.side) * z.designFactor > 1 + 1e-9)
     .map((s) => ` Side ${s.side} is then at a yield ratio of ${sig(sideYieldRatio(rerun, s.side))}, past the factor: it needs its own remedy.`)

@@ -1,16 +1,22 @@
 import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { DynamicResult } from '../results/dynamic-result.ts';
-import type { Results } from '../results/results.ts';
+import type { Investigation } from '../finding/investigation.ts';
+import { findingToJson } from './finding-json.ts';
 import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
 import type { Uncertainty } from '../uncertainty/uncertainty.ts';
 
 /**
  * The machine-readable result, SI, keys carrying their units. These names are a contract: keep them
- * stable. `max_shear_stress_Pa`, `shear_yield_Pa`, `yield_ratio`, `verdict` and `governing` are by
+ * stable. `finding` is the one verdict every view shows (src/finding/): its model, its numbers for
+ * the governing piece, its chance and what to do; read it first. The other keys are kept for their
+ * readers: `max_shear_stress_Pa`, `shear_yield_Pa`, `yield_ratio`, `governing` and `sides` are the
+ * elastic energy method's (a comparison where `finding.basis` is the dynamic model), `plastic` the
+ * energy balance past yield (a comparison where `finding.past_yield_model` is the dynamic model),
+ * `dynamic` always the dynamic model. Older note: `max_shear_stress_Pa`, `shear_yield_Pa`, `yield_ratio`, `verdict` and `governing` are by
  * the verdict's basis, which `verdict_basis` names ("energy method" or "dynamic model") and
  * `verdict_reason` explains; `sides` is always the energy method, `dynamic` always the dynamic model.
  */
-export function resultsToJson(r: Results): Record<string, unknown> {
+export function resultsToJson(r: Investigation): Record<string, unknown> {
   return {
     case_id: r.case.meta.id,
     speed_rad_s: r.speed,
@@ -33,6 +39,7 @@ export function resultsToJson(r: Results): Record<string, unknown> {
     observed_fracture: observedFractureToJson(r.observedFindings),
     ...(r.uncertainty ? { uncertainty: uncertaintyJson(r.uncertainty) } : {}),
     dynamic: dynamicJson(r.dynamic),
+    finding: findingToJson(r.finding, r.case.units),
   };
 }
 

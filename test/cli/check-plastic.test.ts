@@ -16,7 +16,7 @@ describe('shaftcase check on the sample cases, past yield', () => {
     expect(code).toBe(0);
     expect(out).toMatch(/Past yield/);
     expect(out).toMatch(/Permanent twist between "drive sheave" and "rotor": measured 4°/);
-    expect(out).toMatch(/Finding: LESS than the recorded speed explains/);
+    expect(out).toMatch(/Read-back: LESS than the recorded speed explains/);
     expect(out).toMatch(/the belt at "drive sheave" \(slip torque .*\) slipped/);
     expect(out).toMatch(/energy was taken somewhere the case does not describe/);
   });
@@ -25,7 +25,7 @@ describe('shaftcase check on the sample cases, past yield', () => {
     const { code, out } = await run(['check', 'sample-cases/exhaust-fan-seized-impeller.yaml']);
     expect(code).toBe(0);
     expect(out).toMatch(/lbf·ft/);
-    expect(out).toMatch(/^Verdict: FRACTURE PREDICTED: side A, "sheave seat"/m);
+    expect(out).toMatch(/^Finding: FRACTURE PREDICTED \(energy method\): side A, "sheave seat"/m);
     expect(out).toMatch(/Agrees: Fracture is predicted in ductile material/);
     expect(out).toMatch(/stated in the case|CONSISTENT/);
   });

@@ -7,9 +7,7 @@ import { plasticPiecesTable } from '../../src/report/tables/plastic-pieces-table
 import { plasticSidesTable } from '../../src/report/tables/plastic-sides-table.ts';
 import { markdownTable } from '../../src/report/tables/report-table.ts';
 import { show, sig } from '../../src/views/display-units.ts';
-import { describeDynamicPiece } from '../../src/views/dynamic-past-yield.ts';
 import { describePlasticPiece } from '../../src/views/plastic-lines.ts';
-import { describePiece } from '../../src/views/summary.ts';
 import { defaultTemplate, fixture, RUN } from './report-fixtures.ts';
 
 function report(name: string, data = fixture(name).data) {
@@ -41,56 +39,58 @@ describe('renderReport', () => {
     expect(md).toContain('\n## Sign-off\n');
   });
 
-  it('every number in the summary is one of the results object\'s, shown in the case\'s units', () => {
+  it('every number in the summary is one of the finding\'s or the results object\'s, shown in the case\'s units', () => {
     for (const name of CASES) {
       const { results: r, md } = report(name);
       const u = r.case.units;
-      const g = r.governing.piece;
-      const p = r.plastic;
+      const f = r.finding;
       const expected = [
         show(r.speed, 'speed', u, 4),
-        ...r.sides.flatMap((s) => [show(s.kineticEnergy, 'energy', u), show(s.peakTorque, 'torque', u), show(s.twist, 'angle', u)]),
-        show(g.shearStress, 'stress', u),
-        show(g.shearYield, 'stress', u),
-        sig(r.yieldRatio),
-        describePiece(g, u),
-        ...(r.verdict === 'elastic' ? [`${sig(100 * r.verdictYieldRatio)} %`] : []),
-        ...(r.verdictBasis === 'dynamic model' ? [sig(r.verdictYieldRatio), describePiece(r.verdictGoverning.piece, u)] : []),
+        ...r.sides.map((s) => show(s.kineticEnergy, 'energy', u)),
+        show(f.peakTorque, 'torque', u),
+        show(f.elasticStress, 'stress', u),
+        show(f.shearYield, 'stress', u),
+        sig(f.yieldRatio),
+        describePlasticPiece(f, u),
       ];
       const summary = section(md, 'Summary');
       for (const e of expected) expect(summary, `${name}: ${e}`).toContain(e);
-      // Conversely, every number in the summary comes from those values, the plastic result, the
-      // uncertainty run, the incident's date, the machine's or the material's name.
-      const plastic = p.sides.flatMap((s) => [show(s.energy, 'energy', u), show(s.fractureEnergy, 'energy', u), show(s.peakTorque, 'torque', u), show(s.permanentTwist, 'angle', u), ...s.pieces.map((x) => describePlasticPiece(x, u))]);
-      // Past yield in time (where the verdict stands on it): the dynamic model's pieces.
-      const inTime = r.dynamic.pieces.flatMap((x) => [describeDynamicPiece(x, u), show(x.peakTorque, 'torque', u), show(x.permanentTwist, 'angle', u), sig((x.breakTime ?? 0) * 1000)]);
-      inTime.push(show(r.dynamic.pieces.reduce((s, x) => s + x.permanentTwist, 0), 'angle', u));
-      const sure = r.uncertainty ? [String(r.uncertainty.samples), sig(100 * r.uncertainty.yieldProbability, 3)] : [];
-      const context = [r.verdictReason, r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[g.piece.segment.material].name, String(r.warnings.length), show(p.peakTorque, 'torque', u)];
-      const allowed = new Set([...expected, ...plastic, ...inTime, ...sure, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
-      for (const n of summary.replace(/side [AB]/g, '').replace(/a yield ratio of 1\b/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the summary`).toContain(n);
+      // Conversely, every number in the summary comes from the finding, the energy method's side
+      // figures (as a comparison), the incident's date, the machine's or the material's name.
+      const finding = [show(f.elasticPeakTorque, 'torque', u), f.permanentTwist === undefined ? '' : show(f.permanentTwist, 'angle', u), sig((f.breakTime ?? 0) * 1000), `kt ${sig(f.piece.segment.kt)}`];
+      const comparison = r.sides.map((s) => show(s.peakTorque, 'torque', u));
+      const chance = f.chance ? [sig(100 * f.chance.probability, 2), String(f.chance.runs), ...(f.chance.interval ?? []).map((x) => sig(100 * x, 2))] : [];
+      const context = [f.basisReason, f.disposition, r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[f.piece.segment.material].name, String(r.warnings.length)];
+      const allowed = new Set([...expected, ...finding, ...comparison, ...chance, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
+      for (const n of summary.replace(/side [AB]/g, '').replace(/95 % interval/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the summary`).toContain(n);
     }
   });
 
-  it('the summary states the overall verdict in plain words for each verdict, the elastic method\'s beside it', () => {
-    expect(section(report('sample').md, 'Summary')).toMatch(/> \*\*Verdict: YIELDED \(dynamic model\): the torque in .* is capped by plasticity at .*\*\*\n>\n> The shaft cannot have stayed elastic: .* permanent twist of .*; no fracture is predicted\. .*\n>\n> Elastic energy method: YIELDED: /);
-    expect(section(report('edger-arbor-two-sides.yaml').md, 'Summary')).toMatch(/> \*\*Verdict: YIELDED: the peak torque is capped by plasticity at .*\*\*\n>\n> The shaft cannot have stayed elastic: .* permanent twist of .*; no fracture is predicted\. .*\n>\n> Elastic energy method: YIELDED: /);
-    expect(section(report('elastic-fan.yaml').md, 'Summary')).toMatch(/> \*\*Verdict: ELASTIC: no yield is predicted\.\*\*\n>\n> The shaft can have stayed elastic/);
-    expect(section(report('exhaust-fan-seized-impeller.yaml').md, 'Summary')).toMatch(/> \*\*Verdict: FRACTURE PREDICTED: .*\*\*\n>\n> The shaft is predicted to break: side A had .* and it can absorb only .* before .* reaches its fracture strain\./);
+  it('the summary opens with the one finding line, what to do and why that model, for each verdict', () => {
+    const box = (name: string) => section(report(name).md, 'Summary');
+    expect(box('sample')).toMatch(/^\n## Summary\n\n> \*\*Finding: YIELDED THROUGH THE SECTION \(dynamic model\): .* capped at .* permanent twist of .*\*\*\n>\n> \*\*What to do:\*\* Not fit to return/);
+    expect(box('edger-arbor-two-sides.yaml')).toMatch(/^\n## Summary\n\n> \*\*Finding: YIELDED THROUGH THE SECTION \(energy method\): /);
+    expect(box('elastic-fan.yaml')).toMatch(/^\n## Summary\n\n> \*\*Finding: ELASTIC \(energy method\): .* no yield is predicted\.\*\*\n>\n> \*\*What to do:\*\* May go back after inspection/);
+    expect(box('exhaust-fan-seized-impeller.yaml')).toMatch(/^\n## Summary\n\n> \*\*Finding: FRACTURE PREDICTED \(energy method\): .* breaks, at its fracture strain/);
+    for (const name of CASES) expect(box(name).match(/Finding:|Verdict/g), name).toHaveLength(1);
   });
 
-  it('with tolerances the summary gives the chance of yield from the uncertainty run', () => {
+  it('with tolerances the summary gives the chance of yield from the finding\'s own model', () => {
     const { md, results } = report('screw-conveyor-jam-us.yaml');
-    expect(section(md, 'Summary')).toContain(`Over the case's tolerances (see How sure the finding is), ${sig(100 * results.uncertainty!.yieldProbability, 3)} % of the ${results.uncertainty!.samples} samples reach a yield ratio of 1 or more.`);
+    expect(results.finding.basis).toBe('dynamic model');
+    expect(results.finding.chance!.model).toBe('dynamic model');
+    expect(section(md, 'Summary')).toContain(`Chance of yield under the case's tolerances: ${sig(100 * results.finding.chance!.probability, 2)} %`);
+    expect(section(md, 'Summary')).toContain(`runs of the dynamic model`);
   });
 
-  it('the findings are one section: the verdicts, past yield, the measured twist read back and the fracture reading', () => {
+  it('the findings are one section: the models\' numbers, past yield, the measured twist read back and the fracture reading; no verdict of its own', () => {
     const { md, results } = report('exhaust-fan-seized-impeller.yaml');
     const findings = section(md, 'Findings');
     expect(md.match(/\n## Findings\n/g)).toHaveLength(1);
-    expect(findings).toMatch(/^\n## Findings\n\n\*\*Verdict: FRACTURE PREDICTED: /);
+    expect(findings).toMatch(/^\n## Findings\n\n- The finding \(stated in the summary\) stands on the energy method/);
+    expect(findings).not.toMatch(/Verdict|Finding:/);
     for (const h of ['### Past yield', '### Measured permanent twist, read back to the stop', '### Fracture']) expect(findings).toContain(h);
-    expect(findings).toContain(`Elastic energy method: YIELDED: `);
+    expect(findings).toContain('like for like (both elastic)');
     expect(findings).toContain(markdownTable(plasticSidesTable(results)));
     expect(findings).toContain(markdownTable(plasticPiecesTable(results)!));
     expect(findings).toMatch(/\*\*Agrees with the prediction\.\*\*/);
@@ -105,9 +105,10 @@ describe('renderReport', () => {
     expect(s).toContain('A stated ± band is taken as two standard deviations of a normal distribution');
     expect(s).toContain('A handbook minimum strength is taken as the 5th percentile of a normal distribution with a coefficient of variation of 7 %');
     expect(s).toContain(`| yield ratio (elastic method, kt applied) | — | ${sig(results.yieldRatio)} | ${u.percentiles.yieldRatio.map((v) => sig(v)).join(' | ')} |`);
-    expect(s).toContain(`**Chance of yield:** ${sig(100 * u.yieldProbability, 3)} % of the ${u.samples} samples`);
+    expect(s).toContain(`**Chance of yield under the case's tolerances: ${sig(100 * results.finding.chance!.probability, 2)} %`);
+    expect(s).toContain(`${sig(100 * u.yieldProbability, 3)} % of the ${u.samples} samples`);
     expect(s).toContain(`| 1 | yield strength of aisi-1045-cd | ${sig(u.sensitivity[0].low)} | ${sig(u.sensitivity[0].high)} |`);
-    expect(s).toMatch(/\*\*Yield strength of aisi-1045-cd moves the yield ratio most \(from .* across its band\): measure it better first\.\*\*/);
+    expect(s).toMatch(/\*\*Yield strength of aisi-1045-cd moves stress \/ shear yield most \(from .* across its band\): measure it better first\.\*\*/);
     expect(s).toContain('](figures/uncertainty-yield-ratio.svg)');
     expect(s).toContain('](figures/uncertainty-sensitivity.svg)');
   });

@@ -8,7 +8,7 @@ import { parseCase } from '../../src/case/parse-case.ts';
 import { buildReportData } from '../../src/report/build-report-data.ts';
 import type { CaseSource, ReportContext, ReportData } from '../../src/report/report-context.ts';
 import { runInfo } from '../../src/report/run-info.ts';
-import type { Results } from '../../src/results/results.ts';
+import type { Investigation } from '../../src/finding/investigation.ts';
 
 export const DATA = fileURLToPath(new URL('../data/report/', import.meta.url));
 export const SAMPLE_CASES = fileURLToPath(new URL('../../sample-cases/', import.meta.url));
@@ -24,7 +24,7 @@ export const RUN = runInfo(FIXED_NOW, '9.9.9-test');
 export interface Fixture {
   /** What the report shows, as the report command builds it (investigate, then resize). */
   data: ReportData;
-  results: Results;
+  results: Investigation;
   source: CaseSource;
   /** The context every section renders from, with the fixed run. */
   ctx: ReportContext;

@@ -7,13 +7,14 @@ import { limiterSlip } from '../../src/resize/limiter-slip.ts';
 import { resizeCase } from '../../src/resize/resize-case.ts';
 import { limiterSentences } from '../../src/views/resize-words.ts';
 import { caseText } from '../helpers/layout.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 
 const sample = (f: string) => parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8'));
 
 describe('a torque limiter\'s slip through the dynamic model, where the verdict stands on it', () => {
   it('the granulator\'s limiter slip energy and angle are those of a slip element in an independent rerun of the changed case', () => {
     const c = sample('granulator-tramp-metal.yaml');
-    const r = analyseCase(c);
+    const r = withFinding(analyseCase(c));
     expect(r.verdictBasis).toBe('dynamic model');
     const z = resizeCase(c, r);
     const s = z.limiter.slip;
@@ -22,7 +23,7 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
     // piece toward the stop: the bearing journal, segment index 1. Built here by hand, not by the program.
     expect(s.segment).toBe(1);
     const changed = { ...c, shaft: { segments: c.shaft.segments.map((g) => (g.index === 1 ? { ...g, slipTorque: z.limiter.max } : g)) } };
-    const rerun = analyseCase(changed);
+    const rerun = withFinding(analyseCase(changed));
     const element = rerun.dynamic.slips.find((x) => x.element === 'the torque limiter in "bearing journal"')!;
     expect(element.energy).toBeGreaterThan(0);
     expect(s.slipEnergy).toBe(element.energy);
@@ -40,11 +41,11 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
 
   it('the roll line\'s existing limiter is taken as the limiter\'s place and set to the option\'s setting', () => {
     const c = sample('roll-line-limiter-two-sides.yaml');
-    const r = analyseCase(c);
+    const r = withFinding(analyseCase(c));
     const z = resizeCase(c, r);
     expect(z.limiter.slip.segment).toBe(1);
     const changed = { ...c, shaft: { segments: c.shaft.segments.map((g) => (g.index === 1 ? { ...g, slipTorque: z.limiter.max } : g)) } };
-    const element = analyseCase(changed).dynamic.slips.find((x) => x.kind === 'torque limiter')!;
+    const element = withFinding(analyseCase(changed)).dynamic.slips.find((x) => x.kind === 'torque limiter')!;
     expect(z.limiter.slip.slipEnergy).toBe(element.energy);
     expect(element.slipTorque).toBe(z.limiter.max);
   });
@@ -54,7 +55,7 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
     const text = caseText({ rpm: 1, segments: [[100, 40, 0], [400, 40, 0]], stations: [['disc', 0, 1], ['jam', 500, 0]], stop: 'jam' })
       .replace('speed: 1 rpm', 'speed: 50 rad/s')
       .replace('stop: { at: jam }', 'stop: { at: jam, duration: 0.1 ms }');
-    const r = analyseCase(parseCase(text));
+    const r = withFinding(analyseCase(parseCase(text)));
     expect(r.verdictBasis).toBe('dynamic model');
     const d = dynamicLimiterSlip(r.case, 'disc', 'A', 500)!;
     expect(d.segment).toBe(0);
@@ -74,7 +75,7 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
   it('keeps the energy method and says so when no segment between the limiter and the stop can hold it', () => {
     // One segment holds both the disc (inside it) and the stop (inside it): nowhere to put a limiter.
     const text = caseText({ rpm: 300, segments: [[600, 40, 0]], stations: [['disc', 100, 1], ['jam', 500, 0]], stop: 'jam' }).replace('stop: { at: jam }', 'stop: { at: jam, duration: 1 ms }');
-    const r = analyseCase(parseCase(text));
+    const r = withFinding(analyseCase(parseCase(text)));
     const s = limiterSlip(r, { station: 'disc', side: 'A' }, 500);
     expect(s.slipMethod).toBe('energy method');
     expect(s.note).toMatch(/No shaft segment between "disc" and the stop can hold a limiter/);
@@ -83,7 +84,7 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
 
 describe('the granulator\'s limiter rerun: the peak between the limiter and the stop', () => {
   const c = sample('granulator-tramp-metal.yaml');
-  const setting = resizeCase(c, analyseCase(c)).limiter.max;
+  const setting = resizeCase(c, withFinding(analyseCase(c))).limiter.max;
   // The limiter goes into the bearing journal (segment index 1, see above); the run from there to
   // the stop is the rest of the bearing journal (Ø65), the shoulder (Ø80) and the rotor body (Ø90).
   const peakWith = (stop: number, elements?: number) =>
@@ -106,7 +107,7 @@ describe('the granulator\'s limiter rerun: the peak between the limiter and the 
   });
 
   it('with the stop instantaneous it is the stop\'s stress wave on top of the running torque, not the limiter\'s setting, and the option says so', () => {
-    const z = resizeCase(c, analyseCase(c));
+    const z = resizeCase(c, withFinding(analyseCase(c)));
     const s = z.limiter.slip;
     // Bounds (derived here): the wave itself, T_run + ω·J_p·√(Gρ), with a fifth off for the model's
     // stiffness-proportional damping, which smears the wave front over about (2ζ/ω₁)·√(G/ρ) = 14 cm;

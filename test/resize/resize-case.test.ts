@@ -5,12 +5,13 @@ import { analyseCase } from '../../src/results/analyse-case.ts';
 import { resizeCase } from '../../src/resize/resize-case.ts';
 import { sideYieldRatio } from '../../src/resize/side-ratio.ts';
 import { rel } from '../helpers/layout.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 
 const dir = new URL('../../sample-cases/', import.meta.url);
 const samples = readdirSync(dir).filter((f) => f.endsWith('.yaml'));
 const load = (f: string) => {
   const c = parseCase(readFileSync(new URL(f, dir), 'utf8'), f);
-  return { c, r: analyseCase(c) };
+  return { c, r: withFinding(analyseCase(c)) };
 };
 
 describe('resizeCase on every sample case', () => {

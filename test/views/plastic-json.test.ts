@@ -2,19 +2,20 @@ import { describe, expect, it } from 'vitest';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { resultsToJson } from '../../src/views/results-json.ts';
 import { ep5Case } from '../data/ep5-case.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 
 const observed = ['permanent_twist:', '  - { between: [seized bearing, disc], angle: 2.5 deg, method: scribe line }', 'fracture: { type: none }'];
 
 describe('resultsToJson: plastic and observed', () => {
   it('keeps every key the JSON had before, and adds plastic, observed, observed_fracture and elastic_verdict', () => {
-    const j = resultsToJson(analyseCase(ep5Case({ observed })));
+    const j = resultsToJson(withFinding(analyseCase(ep5Case({ observed }))));
     const before = ['case_id', 'speed_rad_s', 'kinetic_energy_J', 'max_shear_stress_Pa', 'shear_yield_Pa', 'yield_ratio', 'verdict', 'governing', 'warnings', 'cautions', 'sides'];
     expect(Object.keys(j)).toEqual(expect.arrayContaining([...before, 'elastic_verdict', 'plastic', 'observed', 'observed_fracture']));
     expect(Object.keys(j).slice(0, 7)).toEqual(before.slice(0, 7));
   });
 
   it('plastic carries peak_torque_Nm, verdict and per side and segment the named keys, in SI', () => {
-    const r = analyseCase(ep5Case({ observed }));
+    const r = withFinding(analyseCase(ep5Case({ observed })));
     const p = resultsToJson(r).plastic as Record<string, any>;
     expect(p.peak_torque_Nm).toBe(r.plastic.peakTorque);
     expect(p.verdict).toBe('yielded');
@@ -29,7 +30,7 @@ describe('resultsToJson: plastic and observed', () => {
   });
 
   it('observed lists each measurement with between, measured_rad, predicted_rad, speed_for_measured_rad_s, energy_for_measured_J and finding', () => {
-    const r = analyseCase(ep5Case({ observed }));
+    const r = withFinding(analyseCase(ep5Case({ observed })));
     const o = resultsToJson(r).observed as Record<string, any>[];
     expect(o).toHaveLength(1);
     expect(o[0].between).toEqual(['seized bearing', 'disc']);
@@ -42,14 +43,14 @@ describe('resultsToJson: plastic and observed', () => {
   });
 
   it('writes "none" and "unknown" (no fracture limit, no speed) as null, never Infinity, so the output is valid JSON', () => {
-    const r = analyseCase(
+    const r = withFinding(analyseCase(
       ep5Case({
         material: ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa'],
         segments: ['- { length: 250 mm, diameter: 40 mm }', '- { length: 250 mm, diameter: 60 mm }'],
         stations: ['- { name: middle, at: 250 mm }'],
         observed: ['permanent_twist:', '  - { between: [middle, disc], angle: 1 deg }'],
       }),
-    );
+    ));
     const j = resultsToJson(r) as Record<string, any>;
     expect(j.observed[0].speed_for_measured_rad_s).toBeNull();
     expect(j.observed[0].yield_onset_speed_rad_s).toBeNull();

@@ -5,10 +5,11 @@ import { analyseCase } from '../../src/results/analyse-case.ts';
 import { resizeCase } from '../../src/resize/resize-case.ts';
 import { resizeToJson } from '../../src/views/resize-json.ts';
 import { resultsToJson } from '../../src/views/results-json.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 
 const json = (f: string) => {
   const c = parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8'));
-  const r = analyseCase(c);
+  const r = withFinding(analyseCase(c));
   return { r, j: JSON.parse(JSON.stringify(resizeToJson(resizeCase(c, r)))) };
 };
 

@@ -6,10 +6,11 @@ import { analyseCase } from '../../src/results/analyse-case.ts';
 import { resizeCase } from '../../src/resize/resize-case.ts';
 import { renderResize } from '../../src/views/resize-table.ts';
 import { caseText, type Layout } from '../helpers/layout.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 
 const render = (text: string) => {
   const c = parseCase(text);
-  return renderResize(resizeCase(c, analyseCase(c)));
+  return renderResize(resizeCase(c, withFinding(analyseCase(c))));
 };
 const layout = (drive?: string): Layout => ({
   rpm: 300,

@@ -3,8 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { resultsToJson } from '../../src/views/results-json.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 
-const sample = (f: string) => analyseCase(parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8')));
+const sample = (f: string) => withFinding(analyseCase(parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8'))));
 
 describe('resultsToJson: the dynamic model', () => {
   it('gives dynamic with its maxima, per-segment peaks and slips, from Results as they are', () => {

@@ -1,54 +1,53 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { show, sig } from '../../src/views/display-units.ts';
-import { dynamicLines, renderSummary, verdictSentence } from '../../src/views/summary.ts';
+import { findingSentence } from '../../src/views/finding-words.ts';
+import { dynamicLines, renderSummary } from '../../src/views/summary.ts';
 
-const sample = (f: string) => analyseCase(parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8')));
+const sample = (f: string) => withFinding(analyseCase(parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8'))));
 
 describe('the summary with the dynamic model', () => {
-  it('shows each side\'s dynamic peak beside the energy method\'s, the lowest frequencies, and what slipped', () => {
+  it('shows each side\'s peak as carried, and like for like its elastic peak and ratio; the lowest frequencies; what slipped', () => {
     const r = sample('granulator-tramp-metal.yaml');
-    const lines = dynamicLines(r).join('\n');
+    const lines = dynamicLines(r, "the finding's model").join('\n');
     const s = r.dynamic.sides[0];
-    // Past yield the peak is capped; the torque the elastic check stands on is named beside it.
     const elastic = Math.max(...r.dynamic.pieces.map((p) => p.elasticPeakTorque));
     expect(elastic).toBeGreaterThan(s.dynamicPeakTorque);
-    expect(lines).toContain(`peak torque ${show(s.dynamicPeakTorque, 'torque', 'metric')}, ${show(elastic, 'torque', 'metric')} had it stayed elastic (energy method ${show(s.energyPeakTorque, 'torque', 'metric')}), elastic yield ratio ${sig(s.dynamicYieldRatio)}`);
+    expect(lines).toContain(`peak torque as carried ${show(s.dynamicPeakTorque, 'torque', 'metric')} (capped past yield); elastic ${show(elastic, 'torque', 'metric')}, stress / shear yield ${sig(s.dynamicYieldRatio)}`);
+    expect(lines).not.toContain('energy method');
     expect(lines).toContain(`${sig(r.dynamic.naturalFrequencies[0])}`);
     expect(lines).toMatch(/the belt at "drive sheave" \(slip torque 1870 N·m\) slipped .* still slipping at the end/);
   });
 
-  it('names the verdict\'s basis and gives the reason under it', () => {
+  it('opens with the one finding line and its model\'s reason, and heads the other model as a comparison', () => {
     const r = sample('granulator-tramp-metal.yaml');
     const text = renderSummary(r);
-    expect(text).toMatch(/Verdict \(dynamic model\): YIELDED/);
-    expect(text).toContain(`  ${r.verdictReason}`);
-    expect(renderSummary(sample('edger-arbor-two-sides.yaml'))).toMatch(/Verdict \(elastic energy method\): .*\n {2}The verdict uses the energy method/);
+    const lines = text.split('\n');
+    expect(lines[3]).toBe(`Finding: ${findingSentence(r.finding, 'metric')}`);
+    expect(lines[4]).toBe(`  Why this model: ${r.verdictReason}`);
+    expect(text).not.toMatch(/Verdict/);
+    expect(text.indexOf('Dynamic model (the finding\'s model')).toBeLessThan(text.indexOf('For comparison, the energy method'));
+    const edger = renderSummary(sample('edger-arbor-two-sides.yaml'));
+    expect(edger.indexOf('Energy method (the finding\'s model')).toBeLessThan(edger.indexOf('Dynamic model (for comparison'));
+  });
+
+  it('compares the models like for like: the dynamic model\'s elastic peak against the energy method\'s', () => {
+    const r = sample('edger-arbor-two-sides.yaml');
+    const text = renderSummary(r);
+    const worst = Math.max(...r.dynamic.sides.map((s) => Math.abs(Math.max(...r.dynamic.pieces.filter((p) => p.side === s.side).map((p) => p.elasticPeakTorque)) / s.energyPeakTorque - 1)));
+    expect(text).toContain(`like for like (both elastic), its peak torques are within ${sig(100 * worst, 2)} %`);
+    expect(worst).toBeLessThan(0.1);
   });
 
   it('shows US units in a US case', () => {
-    expect(dynamicLines(sample('screw-conveyor-jam-us.yaml')).join('\n')).toMatch(/peak torque [\d.]+ lbf·ft(, [\d.]+ lbf·ft had it stayed elastic)? \(energy method [\d.]+ lbf·ft\)/);
+    expect(dynamicLines(sample('screw-conveyor-jam-us.yaml'), 'x').join('\n')).toMatch(/peak torque [\d.]+ lbf·ft \(elastic\), stress \/ shear yield [\d.]+/);
   });
-});
 
-describe('the elastic verdict in words for a brittle shaft', () => {
-  it('says a gray-iron shaft over its strength cracks rather than twists, not that it yielded', () => {
-    const text = `case: { id: B }
-speed: 600 rpm
-stop: { at: jam }
-shaft:
-  material: gray-iron-30
-  segments:
-    - { length: 500 mm, diameter: 40 mm }
-stations:
-  - { name: disc, at: 0 mm, parts: [{ shape: inertia, inertia: 1 kg*m^2 }] }
-  - { name: jam, at: 500 mm }
-`;
-    const r = analyseCase(parseCase(text));
-    expect(r.yieldRatio).toBeGreaterThan(1);
-    expect(verdictSentence(r)).toMatch(/^OVER ITS STRENGTH: .* brittle material .* cracks or breaks rather than taking a permanent twist\.$/);
-    expect(verdictSentence(r)).not.toMatch(/YIELDED/);
+  it('does not list a piece whose permanent twist is below what an instrument resolves', () => {
+    const text = renderSummary(sample('roll-line-limiter-two-sides.yaml'));
+    expect(text).not.toMatch(/e-\d/);
   });
 });

@@ -17,8 +17,8 @@ describe('inputQuantity', () => {
 
 describe('chanceOfYieldWords', () => {
   it('chanceOfYieldWords says none, every one, or the share of the samples that reach yield', () => {
-    expect(chanceOfYieldWords({ yieldProbability: 0, samples: 10000 })).toBe('None of the 10000 samples reaches a yield ratio of 1 (the chance of yield is below 1 in 10000)');
-    expect(chanceOfYieldWords({ yieldProbability: 1, samples: 500 })).toBe('Every one of the 500 samples reaches a yield ratio of 1 or more');
-    expect(chanceOfYieldWords({ yieldProbability: 4 / 10000, samples: 10000 })).toBe('0.04 % of the 10000 samples reach a yield ratio of 1 or more');
+    expect(chanceOfYieldWords({ yieldProbability: 0, samples: 10000 })).toBe('None of the 10000 samples reaches a stress / shear yield of 1 (the chance of yield is below 1 in 10000)');
+    expect(chanceOfYieldWords({ yieldProbability: 1, samples: 500 })).toBe('Every one of the 500 samples reaches a stress / shear yield of 1 or more');
+    expect(chanceOfYieldWords({ yieldProbability: 4 / 10000, samples: 10000 })).toBe('0.04 % of the 10000 samples reach a stress / shear yield of 1 or more');
   });
 });

@@ -1,4 +1,5 @@
 import { loadCase } from '../../io/load-case.ts';
+import { withFinding } from '../../finding/investigation.ts';
 import { investigate } from '../../results/investigate.ts';
 import { resultsToJson } from '../../views/results-json.ts';
 import { renderSummary } from '../../views/summary.ts';
@@ -7,6 +8,6 @@ import { terminalProgress } from '../progress.ts';
 
 export function checkCommand(path: string, opts: { json?: boolean; samples?: number; seed?: number }, io: Io): void {
   const loaded = loadCase(path);
-  const results = investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances') });
+  const results = withFinding(investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances') }));
   io.out(opts.json ? JSON.stringify(resultsToJson(results), null, 2) + '\n' : renderSummary(results));
 }

@@ -14,8 +14,7 @@ import { renderReport } from '../../report/render-report.ts';
 import { reportJson } from '../../report/report-json.ts';
 import { runInfo } from '../../report/run-info.ts';
 import { reportTablesCsv } from '../../report/tables-csv.ts';
-import { overallVerdictSentence } from '../../views/plastic-lines.ts';
-import { verdictSentence } from '../../views/summary.ts';
+import { findingSentence } from '../../views/finding-words.ts';
 import type { Io } from '../main.ts';
 import { version } from '../version.ts';
 import { terminalProgress } from '../progress.ts';
@@ -70,8 +69,7 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
   const lines = [`Wrote the report ${written.folder}/`, ...files.map((f) => `  ${f.path}`)];
   lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
   lines.push(`Open ${written.folder}/report.html`);
-  lines.push(`Verdict (${results.verdictBasis === 'dynamic model' ? 'dynamic model' : 'elastic energy method'}): ${verdictSentence(results, true)}`);
-  lines.push(`Verdict: ${overallVerdictSentence(results)}`);
+  lines.push(`Finding: ${findingSentence(results.finding, results.case.units)}`);
   io.out(lines.join('\n') + '\n');
 }
 

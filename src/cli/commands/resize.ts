@@ -1,14 +1,20 @@
+import { withFinding } from '../../finding/investigation.ts';
 import { loadCase } from '../../io/load-case.ts';
 import { resizeCase } from '../../resize/resize-case.ts';
-import { analyseCase } from '../../results/analyse-case.ts';
+import { investigate } from '../../results/investigate.ts';
 import { resizeToJson } from '../../views/resize-json.ts';
 import { renderResize } from '../../views/resize-table.ts';
 import type { Io } from '../main.ts';
+import { terminalProgress } from '../progress.ts';
 
-/** `shaftcase resize CASE [--factor N] [--json]`. Imports no plotting code: it must start fast. */
-export function resizeCommand(path: string, opts: { factor?: number; json?: boolean }, io: Io): void {
+/**
+ * `shaftcase resize CASE [--factor N] [--json]`. Imports no plotting code: it must start fast. The
+ * case is investigated as `check` does it (tolerances included), so the present shaft's finding is
+ * the same one `check` and the report show.
+ */
+export function resizeCommand(path: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number }, io: Io): void {
   const loaded = loadCase(path);
-  const results = analyseCase(loaded.case);
+  const results = withFinding(investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances') }));
   const z = resizeCase(loaded.case, results, { factor: opts.factor });
   io.out(opts.json ? JSON.stringify(resizeToJson(z), null, 2) + '\n' : renderResize(z));
 }

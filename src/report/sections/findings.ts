@@ -1,9 +1,11 @@
 import type { Results } from '../../results/results.ts';
 import type { TwistFinding } from '../../results/twist-findings.ts';
-import { show } from '../../views/display-units.ts';
+import { show, sig } from '../../views/display-units.ts';
 import { describeDynamicPiece, dynamicLawWords, mostTwisted } from '../../views/dynamic-past-yield.ts';
-import { bandText, overallVerdictSentence } from '../../views/plastic-lines.ts';
-import { describePiece, verdictSentence } from '../../views/summary.ts';
+import { bandText } from '../../views/plastic-lines.ts';
+import { describePiece } from '../../views/summary.ts';
+import { elasticDynamicPeak, whyTheModelsDiffer } from '../../views/model-comparison.ts';
+import type { Investigation } from '../../finding/investigation.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
 import { dynamicDamageTable } from '../tables/dynamic-damage-table.ts';
@@ -33,14 +35,21 @@ export const findingsSection: ReportSection = {
   },
 };
 
-function verdicts(r: Results): string {
+/** How the finding stands: its model's numbers, then the other model's as a comparison, like for like. No verdict of its own: the summary states it. */
+function verdicts(r: Investigation): string {
   const u = r.case.units;
+  const f = r.finding;
   const items = [
-    `Elastic energy method: ${verdictSentence(r)}`,
+    `The finding (stated in the summary) stands on the ${f.basis}; past yield on the ${f.pastYieldModel}.`,
+    ...(f.basis === 'dynamic model'
+      ? r.dynamic.sides.map((s) => `Dynamic model, side ${s.side}: peak torque as carried ${show(s.dynamicPeakTorque, 'torque', u)}; elastic peak ${show(elasticDynamicPeak(r.dynamic, s.side), 'torque', u)}, stress / shear yield ${sig(s.dynamicYieldRatio)}.`)
+      : []),
     ...r.sides.map((s) => {
       const worst = s.pieces.reduce((a, b) => (b.yieldRatio > a.yieldRatio ? b : a));
-      return `Side ${s.side} (${s.stations.join(', ')}): elastic peak torque ${show(s.peakTorque, 'torque', u)}; the most stressed piece on this side is ${describePiece(worst, u)} at ${show(worst.shearStress, 'stress', u)}.`;
+      const role = f.basis === 'energy method' ? 'Energy method' : 'For comparison, the energy method';
+      return `${role}, side ${s.side} (${s.stations.join(', ')}): elastic peak torque ${show(s.peakTorque, 'torque', u)}; the most stressed piece on this side is ${describePiece(worst, u)} at ${show(worst.shearStress, 'stress', u)}, stress / shear yield ${sig(worst.yieldRatio)}.`;
     }),
+    whyTheModelsDiffer(r),
     ...(r.pastYieldBasis === 'dynamic model' && r.dynamic.yielded
       ? [`Past yield in time, the dynamic model caps the torque in ${describeDynamicPiece(mostTwisted(r), u)} at ${show(mostTwisted(r).peakTorque, 'torque', u)} and leaves a permanent twist of ${show(mostTwisted(r).permanentTwist, 'angle', u)} there.`]
       : []),
@@ -51,7 +60,7 @@ function verdicts(r: Results): string {
       ? `The engine raised ${r.warnings.length} warning${r.warnings.length === 1 ? '' : 's'} about the model's fit to this case (listed under the method); weigh the numbers with them.`
       : "The engine raised no warning about the model's fit to this case.",
   ];
-  return `**Verdict: ${escapeMarkdown(overallVerdictSentence(r))}**\n\n${bulletList(items.map(escapeMarkdown))}`;
+  return bulletList(items.map(escapeMarkdown));
 }
 
 function pastYield(r: Results): string {

@@ -2,6 +2,7 @@ import type { Results } from '../../results/results.ts';
 import type { Uncertainty } from '../../uncertainty/uncertainty.ts';
 import { show, sig } from '../../views/display-units.ts';
 import { chanceOfYieldWords, sensitivityFinding } from '../../views/uncertainty-summary.ts';
+import { chanceSentence } from '../../views/finding-words.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
 import { markdownTable } from '../tables/report-table.ts';
@@ -31,14 +32,14 @@ export const howSureSection: ReportSection = {
       ...(u.notVaried.length > 0 ? [escapeMarkdown(`Stated tolerances the Monte Carlo does not vary (lengths and positions): ${u.notVaried.join(', ')}.`)] : []),
       '**The ranges**',
       markdownTable(uncertaintyPercentilesTable(r)!),
-      `**Chance of yield:** ${escapeMarkdown(`${chanceOfYieldWords(u)}. The single run gives a yield ratio of ${sig(r.yieldRatio)}; over the tolerances the median is ${sig(y50)} and 90 % of the samples lie between ${sig(y5)} and ${sig(y95)}.`)}`,
+      ...(chanceSentence(r.finding) ? [`**${escapeMarkdown(chanceSentence(r.finding)!)}**`] : []),
       ...(u.dynamic
         ? [
-            `**Through the dynamic model:** ${escapeMarkdown(
-              `the verdict stands on the dynamic model, so the same inputs were also drawn ${u.dynamic.samples} times (same seed; fewer samples, since each is a full time solution; analysis.dynamic_samples) through it. Its peak yield ratio has a median of ${sig(u.dynamic.percentiles.yieldRatio[1])}, 90 % of the samples between ${sig(u.dynamic.percentiles.yieldRatio[0])} and ${sig(u.dynamic.percentiles.yieldRatio[2])}; ${sig(100 * u.dynamic.yieldProbability, 3)} % of them reach 1 or more. With so few samples the tails are rough.`,
+            `**Through the dynamic model (the finding's model):** ${escapeMarkdown(
+              `the same inputs were drawn ${u.dynamic.samples} times (same seed; analysis.dynamic_samples) through the dynamic model. Its stress / shear yield has a median of ${sig(u.dynamic.percentiles.yieldRatio[1])}, 90 % of the runs between ${sig(u.dynamic.percentiles.yieldRatio[0])} and ${sig(u.dynamic.percentiles.yieldRatio[2])}. For comparison, through the energy method (${u.samples} samples): ${chanceOfYieldWords(u).toLowerCase()}; median ${sig(y50)}, 90 % between ${sig(y5)} and ${sig(y95)}, single run ${sig(r.yieldRatio)}.`,
             )}`,
           ]
-        : []),
+        : [`**Through the energy method (the finding's model):** ${escapeMarkdown(`${chanceOfYieldWords(u)}. The single run gives stress / shear yield ${sig(r.yieldRatio)}; over the tolerances the median is ${sig(y50)} and 90 % of the samples lie between ${sig(y5)} and ${sig(y95)}.`)}`]),
       ...observedWords(r, u),
     ];
     if (u.sensitivity.length > 0) {

@@ -1,7 +1,7 @@
 import type { ResizeResult } from '../../resize/resize-result.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from '../../views/resize-rows.ts';
 import { criticalSegmentSentence, factorSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from '../../views/resize-words.ts';
-import { verdictSentence } from '../../views/summary.ts';
+import { findingSentence } from '../../views/finding-words.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
 
@@ -16,7 +16,7 @@ export const recommendationsSection: ReportSection = {
   render({ results, resize }) {
     const e = escapeMarkdown;
     const out = [
-      e(`Each option is checked against a repeat of the recorded incident by a rerun of the changed case through the elastic energy method, and under the running torque. Present shaft: ${verdictSentence(results)}`),
+      e(`Each option is checked against a repeat of the recorded incident by a rerun of the changed case through the elastic energy method, and under the running torque. Present shaft, the finding: ${findingSentence(results.finding, results.case.units)}`),
       e(factorSentence(resize)),
       optionsTable(resize),
       e("Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate."),

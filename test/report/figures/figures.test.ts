@@ -6,10 +6,11 @@ import { analyseCase } from '../../../src/results/analyse-case.ts';
 import { resizeCase } from '../../../src/resize/resize-case.ts';
 import { peakTorqueAgainstLimiterFigure } from '../../../src/report/figures/peak-torque-vs-limiter.ts';
 import { yieldRatioAgainstDiameterFigure } from '../../../src/report/figures/yield-ratio-vs-diameter.ts';
+import { withFinding } from '../../../src/finding/investigation.ts';
 
 const load = (f: string, edit = (t: string) => t) => {
   const c = parseCase(edit(readFileSync(new URL(`../../../sample-cases/${f}`, import.meta.url), 'utf8')));
-  const r = analyseCase(c);
+  const r = withFinding(analyseCase(c));
   return { r, z: resizeCase(c, r) };
 };
 const figures = [yieldRatioAgainstDiameterFigure, peakTorqueAgainstLimiterFigure];

@@ -10,7 +10,7 @@ describe('yieldRatioHistogramFigure', () => {
   it('yieldRatioHistogramFigure is a framed SVG with its title, caption and labelled axes', () => {
     checkFigure(f, 'uncertainty-yield-ratio', [/^yield ratio \(stress \/ shear yield, elastic method\)/, /samples \(of 10000\)/, /^yield, ratio 1$/, /^single run, 0\.855$/]);
     expect(f.caption).toContain(`seed ${r.uncertainty!.seed}`);
-    expect(f.caption).toContain('% of the 10000 samples reach a yield ratio of 1 or more');
+    expect(f.caption).toContain('% of the 10000 samples reach a stress / shear yield of 1 or more');
   });
 
   it('yieldRatioHistogramFigure draws the yield line at a ratio of exactly 1 and the single run at its ratio', () => {

@@ -23,15 +23,16 @@ describe('findingsSection', () => {
     'fracture: { type: fatigue, at: disc, notes: "# not a heading" }',
   ]);
 
-  it('findingsSection opens with the overall verdict and has its parts as sub-headings, no cautions of its own', () => {
-    expect(text).toMatch(/^\*\*Verdict: YIELDED: the peak torque is capped by plasticity/);
+  it('findingsSection opens with the finding\'s model, states no verdict of its own, and has its parts as sub-headings, no cautions of its own', () => {
+    expect(text).toMatch(/^- The finding \(stated in the summary\) stands on the energy method; past yield on the energy balance\./);
+    expect(text).not.toMatch(/Verdict|Finding:/);
     for (const h of ['Past yield', 'Measured permanent twist, read back to the stop', 'Fracture']) expect(html).toContain(`<h3>${h}</h3>`);
     expect(html).not.toContain('<h3>Cautions</h3>');
     expect(html).not.toContain('<h2>');
   });
 
-  it('findingsSection gives the elastic method\'s verdict beside the overall one, and the tables past yield', () => {
-    expect(text).toMatch(/- Elastic energy method: YIELDED: the elastic stress reaches/);
+  it('findingsSection gives the energy method\'s numbers per side, and the tables past yield', () => {
+    expect(text).toMatch(/- Energy method, side B \(disc\): elastic peak torque .*, stress \/ shear yield [\d.]+\./);
     expect(html).toMatch(/<table>[\s\S]*permanent twist[\s\S]*<\/table>/);
     expect(text).toContain('**The pieces that went past yield**');
     expect(text).toContain(`| ${r.plastic.sides[0].side} | 1 |`);
@@ -58,7 +59,7 @@ describe('findingsSection', () => {
     const slow = buildReportData(ep5Case({ speed: '20 rpm' }));
     const md2 = findingsSection.render({ ...slow, run: RUN, source: { file: 'ep5.yaml', text: '', sha256: '0'.repeat(64) } })!;
     expect(slow.results.verdict).toBe('elastic');
-    expect(md2).toMatch(/^\*\*Verdict: ELASTIC: no yield is predicted\.\*\*/);
+    expect(slow.results.finding.verdict).toBe('elastic');
     expect(md2).toContain('No piece of shaft passes yield over its net section: no permanent twist is predicted.');
     expect(md2).not.toContain('went past yield');
     expect(md2).not.toContain('### Measured permanent twist');

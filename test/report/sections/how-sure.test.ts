@@ -46,6 +46,6 @@ describe('howSureSection', () => {
     const { r, md } = render(ep5CaseText({ speed: '300 rpm ± 4 %' }));
     const top = r.uncertainty!.sensitivity[0];
     expect(md).toMatch(/\*\*Which input matters most\*\*\n\n\| rank \| input \|/);
-    expect(md!.trimEnd().split('\n').pop()).toMatch(new RegExp(`^\\*\\*[A-Z].* moves the yield ratio most \\(from ${sig(top.low).replace('.', '\\.')} to ${sig(top.high).replace('.', '\\.')} across its band\\): measure it better first\\.\\*\\*$`));
+    expect(md!.trimEnd().split('\n').pop()).toMatch(new RegExp(`^\\*\\*[A-Z].* moves stress / shear yield most \\(from ${sig(top.low).replace('.', '\\.')} to ${sig(top.high).replace('.', '\\.')} across its band\\): measure it better first\\.\\*\\*$`));
   });
 });
