@@ -11,9 +11,9 @@ import { stockSizeUp, stockSizesBetween } from './stock-sizes.ts';
 export interface DiameterPoint {
   /** m */
   diameter: number;
-  /** Highest yield ratio on the side in a repeat incident. */
+  /** Highest stress / shear yield on the side in a repeat incident. */
   sideYieldRatio: number;
-  /** The critical segment's own yield ratio. */
+  /** The critical segment's own stress / shear yield. */
   segmentYieldRatio: number;
 }
 
@@ -27,11 +27,11 @@ export type CriticalVerdict = 'fits' | 'present-keeps' | 'others-critical';
 export interface CriticalSegmentOption {
   side: SideName;
   segment: Segment;
-  /** The segment's present yield ratio. */
+  /** The segment's present stress / shear yield. */
   presentYieldRatio: number;
-  /** The diameter at which the segment's own yield ratio reaches 1/N, m. */
+  /** The diameter at which the segment's own stress / shear yield reaches 1/N, m. */
   ownDiameter: number;
-  /** The other segments' highest yield ratio at `ownDiameter`. */
+  /** The other segments' highest stress / shear yield at `ownDiameter`. */
   othersAtOwn: number;
   verdict: CriticalVerdict;
   /** The smallest diameter that keeps every segment of the side within the factor, m; undefined when none does. */
@@ -39,7 +39,7 @@ export interface CriticalSegmentOption {
   stockDiameter?: number;
   rerun?: Results;
   stockRerun?: Results;
-  /** Repeat-incident yield ratio against the segment's diameter, for the report's figure. */
+  /** Repeat-incident stress / shear yield against the segment's diameter, for the report's figure. */
   sweep: DiameterPoint[];
   /** Stock sizes within the sweep, m. */
   stockSizes: number[];
@@ -50,7 +50,7 @@ const SWEEP_POINTS = 48;
 /**
  * Resizes only the most stressed segment (bore ratio kept). Its own stress falls as it grows, but a
  * stiffer segment raises the side's torque (T = √(2E/C)), so the others' stresses rise: the answer
- * is the diameter where its own yield ratio reaches 1/N, provided the others are then still within
+ * is the diameter where its own stress / shear yield reaches 1/N, provided the others are then still within
  * it. Every trial diameter is a rerun of the engine.
  */
 export function criticalSegment(c: Case, r: Results, designFactor: number): CriticalSegmentOption {

@@ -6,7 +6,7 @@ import type { Results } from '../results/results.ts';
  * The engine run on a changed case, as a design check: does the changed shaft stay below yield
  * with the design factor? The dynamic model's shaft elements are kept elastic here
  * (`dynamic_plasticity: false`): where the changed shaft stays elastic the elastic model is the
- * same result, and where it would yield the option fails either way, with the elastic yield ratio
+ * same result, and where it would yield the option fails either way, with the elastic stress / shear yield
  * saying by how much (a yielding model would cap it). No twist read-back is made.
  */
 export function designRun(c: Case): Results {

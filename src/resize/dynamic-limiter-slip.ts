@@ -17,7 +17,7 @@ export interface DynamicLimiterSlip {
   energyLeft: number;
   /** Energy the model's damping took, J. */
   dampingWork: number;
-  /** Highest yield ratio of the limited side in the rerun. */
+  /** Highest stress / shear yield of the limited side in the rerun. */
   yieldRatio: number;
   /** The rerun's result. */
   rerun: Results;

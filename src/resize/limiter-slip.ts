@@ -29,7 +29,7 @@ export interface LimiterSlip {
   method: string;
   /** Dynamic model: the segment (index into `shaft.segments`) the limiter was put in. */
   segment?: number;
-  /** Dynamic model: the limited side's highest yield ratio in the rerun. */
+  /** Dynamic model: the limited side's highest stress / shear yield in the rerun. */
   yieldRatio?: number;
   /** Dynamic model: energy its damping took in the rerun, J. */
   dampingWork?: number;

@@ -8,7 +8,7 @@ import { withShaftMaterial } from './change-case.ts';
 /** A library material for the whole shaft, same geometry, against a repeat of the incident. */
 export interface MaterialOption {
   material: Material;
-  /** Highest yield ratio over every side in the rerun. */
+  /** Highest stress / shear yield over every side in the rerun. */
   yieldRatio: number;
   keepsFactor: boolean;
   rerun: Results;

@@ -11,7 +11,7 @@ export interface ScaleSideOption {
   side: SideName;
   /** The scale of every diameter (and bore) of the side, s = yield_ratio·N. */
   s: number;
-  /** The side's present yield ratio. */
+  /** The side's present stress / shear yield. */
   presentYieldRatio: number;
   /** s > 1: the present shaft does not keep the factor. */
   needed: boolean;
@@ -31,10 +31,10 @@ export interface ScaleSideOption {
 }
 
 /**
- * Scales every segment of the side with the highest yield ratio by one factor s, bores with them.
+ * Scales every segment of the side with the highest stress / shear yield by one factor s, bores with them.
  * In the elastic energy method the side's compliance falls as 1/s⁴, so its peak torque rises as s²
  * while each section's stress per torque falls as 1/s³: stress falls as 1/s, and s = yield_ratio·N
- * brings the side's highest yield ratio to exactly 1/N (REFERENCE 10.10: d scales linearly with N,
+ * brings the side's highest stress / shear yield to exactly 1/N (REFERENCE 10.10: d scales linearly with N,
  * derived). Both the exact and the stock-size cases are rerun through the engine.
  */
 export function scaleSide(c: Case, r: Results, designFactor: number, maxScale: number): ScaleSideOption {

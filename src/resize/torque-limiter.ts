@@ -24,11 +24,11 @@ export interface LimiterOption {
   windowEmpty: boolean;
   /** Slip in a repeat incident at the highest setting. */
   slip: LimiterSlip;
-  /** The limited side's highest yield ratio in a repeat incident at the highest setting. */
+  /** The limited side's highest stress / shear yield in a repeat incident at the highest setting. */
   yieldRatio: number;
   /** Stations between the limiter and the stop whose parts still drive the shaft unlimited. */
   unlimitedStations: string[];
-  /** Sides of the stop the limiter does not protect, with their present yield ratio. */
+  /** Sides of the stop the limiter does not protect, with their present stress / shear yield. */
   otherSides: { side: SideName; yieldRatio: number }[];
   /** Repeat-incident peak torque against the setting, for the report's figure. */
   sweep: LimiterSlip[];

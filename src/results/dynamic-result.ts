@@ -24,7 +24,7 @@ export interface DynamicPiece {
   /**
    * The peak the piece would have carried had the shaft stayed elastic, N·m: the same chain solved
    * with elastic elements where the yielding run yielded or broke (else `peakTorque`). The elastic
-   * check (stress, yield ratio) stands on it, as the energy method's does, so that the ratio says how
+   * check (stress, stress / shear yield) stands on it, as the energy method's does, so that the ratio says how
    * far past yield the incident went instead of stopping at the fully plastic torque.
    */
   elasticPeakTorque: number;
@@ -89,7 +89,7 @@ export interface DynamicResult {
   peakTorque: number;
   maxShearStress: number;
   yieldRatio: number;
-  /** Index into `pieces` of the highest yield ratio. */
+  /** Index into `pieces` of the highest stress / shear yield. */
   governing: number;
   slips: SlipOutcome[];
   pins: PinOutcome[];

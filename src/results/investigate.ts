@@ -26,7 +26,7 @@ export function metricsOf(r: Results): Metrics {
   };
 }
 
-/** A dynamic-model sample: the verdict's yield ratio, the dynamic peak torque and stress. */
+/** A dynamic-model sample: the verdict's stress / shear yield, the dynamic peak torque and stress. */
 export function dynamicMetrics(k: Case): Metrics {
   const r = analyseCase(k, { readBack: false });
   return { yieldRatio: r.verdictYieldRatio, maxShearStress: r.dynamic.maxShearStress, peakTorque: r.dynamic.peakTorque };

@@ -36,16 +36,16 @@ export interface Results {
   /** Kinetic energy of both sides, J. */
   kineticEnergy: number;
   /**
-   * The piece of shaft with the highest yield ratio, and its side, by the elastic energy method.
+   * The piece of shaft with the highest stress / shear yield, and its side, by the elastic energy method.
    */
   governing: { side: SideResult; piece: PieceResult };
   /** Highest shear stress over all sides, Pa, by the energy method. */
   maxShearStress: number;
-  /** Highest yield ratio over all sides, by the energy method. */
+  /** Highest stress / shear yield over all sides, by the energy method. */
   yieldRatio: number;
   /** Overall verdict: the worse of the plastic balance's and the elastic method's. */
   verdict: Verdict;
-  /** The elastic energy method's verdict (yield ratio with kt below 1 or not). */
+  /** The elastic energy method's verdict (stress / shear yield with kt below 1 or not). */
   elasticVerdict: ElasticVerdict;
   /** The energy balance past yield: peak torque capped by plasticity, permanent twist, fracture. */
   plastic: PlasticResult;
@@ -60,8 +60,8 @@ export interface Results {
   /** Which result the verdict's elastic check stands on. */
   verdictBasis: VerdictBasis;
   /**
-   * The governing piece and its yield ratio by the verdict's basis: the energy method's `governing`,
-   * or the dynamic model's piece with the highest peak yield ratio over the window.
+   * The governing piece and its stress / shear yield by the verdict's basis: the energy method's `governing`,
+   * or the dynamic model's piece with the highest peak stress / shear yield over the window.
    */
   verdictGoverning: { side: SideResult; piece: PieceResult };
   verdictYieldRatio: number;

@@ -2,13 +2,13 @@ import type { Case } from '../case/case.ts';
 import type { UncertainInput } from './inputs.ts';
 import type { Engine } from './monte-carlo.ts';
 
-/** How far one input, swung across its band with the others at their nominal, moves the yield ratio. */
+/** How far one input, swung across its band with the others at their nominal, moves stress / shear yield. */
 export interface Swing {
   /** Field path of the input. */
   input: string;
-  /** Yield ratio with the input at mean − 2σ (the low end of a stated band). */
+  /** Stress / shear yield with the input at mean − 2σ (the low end of a stated band). */
   low: number;
-  /** Yield ratio with the input at mean + 2σ. */
+  /** Stress / shear yield with the input at mean + 2σ. */
   high: number;
   /** Same for the permanent twist, rad, where the engine gives one. */
   twistLow?: number;

@@ -20,7 +20,7 @@ export interface Uncertainty {
   inputs: { path: string; mean: number; sd: number; basis: SpreadBasis }[];
   /** Toleranced fields the Monte Carlo does not vary (lengths, positions). */
   notVaried: string[];
-  /** Share of samples whose yield ratio is 1 or more. */
+  /** Share of samples whose stress / shear yield is 1 or more. */
   yieldProbability: number;
   percentiles: {
     yieldRatio: [number, number, number];
@@ -47,7 +47,7 @@ export interface Uncertainty {
 
 export interface DynamicUncertainty {
   samples: number;
-  /** Share of samples whose peak yield ratio over the window is 1 or more. */
+  /** Share of samples whose peak stress / shear yield over the window is 1 or more. */
   yieldProbability: number;
   percentiles: { yieldRatio: [number, number, number]; peakTorque: [number, number, number]; maxShearStress: [number, number, number] };
 }

@@ -9,7 +9,7 @@ import { showDiameter } from './show-diameter.ts';
 export interface OptionRow {
   option: string;
   change: string;
-  /** Repeat-incident yield ratio, from the rerun. */
+  /** Repeat-incident stress / shear yield, from the rerun. */
   yieldRatio: string;
   peakTorque: string;
   running: string;
@@ -20,7 +20,7 @@ export interface OptionRow {
 export const ROW_HEADINGS: Record<keyof OptionRow, string> = {
   option: 'Option',
   change: 'New size or setting',
-  yieldRatio: 'Repeat yield ratio',
+  yieldRatio: 'Repeat stress / shear yield',
   peakTorque: 'Repeat peak torque',
   running: 'Running factor kt (static)',
   stiffness: 'Stiffness, freq.',

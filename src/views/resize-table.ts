@@ -35,7 +35,7 @@ export function renderResize(z: ResizeResult): string {
     'Another material',
     [materialsSentence(z)],
     textTable([
-      ['material', 'repeat yield ratio', 'keeps N', 'peak torque', 'strength basis'],
+      ['material', 'repeat stress / shear yield', 'keeps N', 'peak torque', 'strength basis'],
       ...z.materials.map((x) => [x.material.key, sig(x.yieldRatio), x.keepsFactor ? 'yes' : 'no', `×${sig(x.change.peakTorque)}`, x.material.strengthBasis ?? '—']),
     ]),
   );

@@ -14,13 +14,13 @@ import { describePiece } from './summary.ts';
 /** A segment as the output names it: its label in quotes, or "segment 3". */
 export const segName = (s: { label?: string; index: number }) => (s.label ? `"${s.label}"` : `segment ${s.index + 1}`);
 
-/** "0.667" — the yield ratio a replacement may reach at design factor N. */
+/** "0.667" — stress / shear yield a replacement may reach at design factor N. */
 export function allowedRatio(z: ResizeResult): string {
   return sig(1 / z.designFactor);
 }
 
 export function factorSentence(z: ResizeResult): string {
-  return `Design factor N = ${sig(z.designFactor)} on shear yield in a repeat of the incident, so a replacement keeps a yield ratio of ${allowedRatio(z)} or less. N is the engineer's choice: confirm it against the site's rules.`;
+  return `Design factor N = ${sig(z.designFactor)} on shear yield in a repeat of the incident, so a replacement keeps a stress / shear yield of ${allowedRatio(z)} or less. N is the engineer's choice: confirm it against the site's rules.`;
 }
 
 export function runningWords(r: RunningCheck, units: Case['units']): string {
@@ -34,7 +34,7 @@ export function scaleSideSentence(z: ResizeResult): string {
   const u = z.results.case.units;
   const sizes = o.segments.map((g, i) => `${segName(g)} Ø${showDiameter(g.diameter, u)} → ${showDiameter(o.diameters[i], u)} (stock ${showDiameter(o.stockDiameters[i], u)})`).join('; ');
   const head = `Scale side ${o.side}: every segment of the side by s = ${sig(o.presentYieldRatio)} × ${sig(z.designFactor)} = ${sig(o.s, 4)}, bores with them (stress falls as 1/s in the energy method): ${sizes}.`;
-  const rerun = `Rerun: side ${o.side}'s yield ratio ${sig(sideYieldRatio(o.rerun, o.side), 4)} at the exact sizes, ${sig(sideYieldRatio(o.stockRerun, o.side), 4)} at the stock sizes; peak torque ${show(o.stockRerun.sides.find((s) => s.side === o.side)!.peakTorque, 'torque', u)}.`;
+  const rerun = `Rerun: side ${o.side}'s stress / shear yield ${sig(sideYieldRatio(o.rerun, o.side), 4)} at the exact sizes, ${sig(sideYieldRatio(o.stockRerun, o.side), 4)} at the stock sizes; peak torque ${show(o.stockRerun.sides.find((s) => s.side === o.side)!.peakTorque, 'torque', u)}.`;
   const otherWords = otherSidesWords(z, o.stockRerun, o.side);
   if (!o.needed) return `${head} ${rerun} The present shaft already keeps the factor (s ≤ 1): no larger shaft is needed for a repeat of this incident; do not make it smaller on this basis alone.${otherWords}`;
   const verdict = o.practical
@@ -48,11 +48,11 @@ export function criticalSegmentSentence(z: ResizeResult): string {
   const u = z.results.case.units;
   const name = `${segName(o.segment)} (Ø${showDiameter(o.segment.diameter, u)}${o.segment.kt !== 1 ? `, kt ${o.segment.kt}` : ''})`;
   if (o.verdict === 'others-critical') {
-    return `No size of ${name} alone keeps side ${o.side} within the factor: at Ø${showDiameter(o.ownDiameter, u)}, where it reaches ${allowedRatio(z)}, the stiffer shaft raises the torque and the rest of the side reaches a yield ratio of ${sig(o.othersAtOwn)}. The other segments then become critical.`;
+    return `No size of ${name} alone keeps side ${o.side} within the factor: at Ø${showDiameter(o.ownDiameter, u)}, where it reaches ${allowedRatio(z)}, the stiffer shaft raises the torque and the rest of the side reaches a stress / shear yield of ${sig(o.othersAtOwn)}. The other segments then become critical.`;
   }
-  const stock = `Stock size Ø${showDiameter(o.stockDiameter!, u)}; rerun: side ${o.side}'s yield ratio ${sig(sideYieldRatio(o.stockRerun!, o.side), 4)}.`;
+  const stock = `Stock size Ø${showDiameter(o.stockDiameter!, u)}; rerun: side ${o.side}'s stress / shear yield ${sig(sideYieldRatio(o.stockRerun!, o.side), 4)}.`;
   if (o.verdict === 'present-keeps') {
-    return `${name} already keeps the factor (yield ratio ${sig(o.presentYieldRatio)}); the smallest diameter that would is Ø${showDiameter(o.diameter!, u)}. ${stock} Do not make it smaller on this basis alone.`;
+    return `${name} already keeps the factor (stress / shear yield ${sig(o.presentYieldRatio)}); the smallest diameter that would is Ø${showDiameter(o.diameter!, u)}. ${stock} Do not make it smaller on this basis alone.`;
   }
   const warn = sideYieldRatio(o.stockRerun!, o.side) * z.designFactor > 1 + 1e-9 ? ' At the stock size the stiffer segment pushes the side just past the factor: take the next size down and check, or accept the small excess knowingly.' : '';
   return `Resize ${name} only: the smallest diameter that keeps every segment of side ${o.side} within the factor is Ø${showDiameter(o.diameter!, u)}. ${stock}${warn}${otherSidesWords(z, o.stockRerun!, o.side)}`;
@@ -62,7 +62,7 @@ export function materialsSentence(z: ResizeResult): string {
   const keep = z.materials.filter((m) => m.keepsFactor);
   if (keep.length === 0) {
     const best = z.materials[0];
-    return `No library material keeps the factor with the present geometry; the best, ${best.material.key}, reaches a yield ratio of ${sig(best.yieldRatio)}.`;
+    return `No library material keeps the factor with the present geometry; the best, ${best.material.key}, reaches a stress / shear yield of ${sig(best.yieldRatio)}.`;
   }
   const typical = keep.some((m) => m.material.strengthBasis === 'typical') ? ' Strengths marked "typical" are mean values, not minima: get the mill certificate before relying on them.' : '';
   return `With the present geometry these library materials keep the factor (a lower G also lowers the torque): ${keep.map((m) => `${m.material.key} (${sig(m.yieldRatio)})`).join(', ')}.${typical}`;
@@ -96,7 +96,7 @@ export function limiterSentences(z: ResizeResult): string[] {
     );
   }
   if (o.unlimitedStations.length > 0) out.push(`The parts at ${o.unlimitedStations.map((n) => `"${n}"`).join(', ')} lie between the limiter and the stop and still drive the shaft unlimited.`);
-  for (const s2 of o.otherSides) if (s2.yieldRatio * z.designFactor > 1) out.push(`Side ${s2.side} (yield ratio ${sig(s2.yieldRatio)}) is not protected by this limiter; it needs its own.`);
+  for (const s2 of o.otherSides) if (s2.yieldRatio * z.designFactor > 1) out.push(`Side ${s2.side} (stress / shear yield ${sig(s2.yieldRatio)}) is not protected by this limiter; it needs its own.`);
   return out;
 }
 
@@ -119,11 +119,11 @@ export function keySentences(z: ResizeResult, k: KeyFuse): string[] {
   return out;
 }
 
-/** " Side B is then at a yield ratio of 5.21, past the factor: …" for each other side a change leaves past N. */
+/** " Side B is then at a stress / shear yield of 5.21, past the factor: …" for each other side a change leaves past N. */
 function otherSidesWords(z: ResizeResult, rerun: Results, side: string): string {
   return rerun.sides
     .filter((s) => s.side !== side && sideYieldRatio(rerun, s.side) * z.designFactor > 1 + 1e-9)
-    .map((s) => ` Side ${s.side} is then at a yield ratio of ${sig(sideYieldRatio(rerun, s.side))}, past the factor: it needs its own remedy.`)
+    .map((s) => ` Side ${s.side} is then at a stress / shear yield of ${sig(sideYieldRatio(rerun, s.side))}, past the factor: it needs its own remedy.`)
     .join('');
 }
 

@@ -39,7 +39,7 @@ describe('shaftcase resize', () => {
     for (const f of ['granulator-tramp-metal.yaml', 'screw-conveyor-jam-us.yaml', 'edger-arbor-two-sides.yaml']) {
       const r = await cli('resize', sample(f));
       expect(r.status).toBe(0);
-      expect(r.out).toMatch(/Option\s+New size or setting\s+Repeat yield ratio/);
+      expect(r.out).toMatch(/Option\s+New size or setting\s+Repeat stress \/ shear yield/);
       expect(r.out).toMatch(/lock out and tag out/);
     }
   });

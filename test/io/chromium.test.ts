@@ -94,7 +94,7 @@ describe.skipIf(missing && !inCI)('report.html in headless Chromium (skipped wit
     const page = await browser.newPage();
     await page.setContent(toleranced, { waitUntil: 'load' });
     expect(await page.getByRole('heading', { name: 'How sure the finding is', exact: true }).isVisible()).toBe(true);
-    for (const name of ['Yield ratio over the tolerances', 'Which input moves the yield ratio most']) {
+    for (const name of ['Stress / shear yield over the tolerances', 'Which input moves stress / shear yield most']) {
       const figure = page.locator(`.figure[aria-label^="Figure"][aria-label*="${name}"] svg`);
       const box = await figure.boundingBox();
       expect(box!.width, name).toBeGreaterThan(300);

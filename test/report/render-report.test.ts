@@ -104,7 +104,7 @@ describe('renderReport', () => {
     expect(s).toContain(`repeated ${u.samples} times (a seeded Monte Carlo, seed ${u.seed})`);
     expect(s).toContain('A stated ± band is taken as two standard deviations of a normal distribution');
     expect(s).toContain('A handbook minimum strength is taken as the 5th percentile of a normal distribution with a coefficient of variation of 7 %');
-    expect(s).toContain(`| yield ratio (elastic method, kt applied) | — | ${sig(results.yieldRatio)} | ${u.percentiles.yieldRatio.map((v) => sig(v)).join(' | ')} |`);
+    expect(s).toContain(`| stress / shear yield (elastic method, kt applied) | — | ${sig(results.yieldRatio)} | ${u.percentiles.yieldRatio.map((v) => sig(v)).join(' | ')} |`);
     expect(s).toContain(`**Chance of yield under the case's tolerances: ${sig(100 * results.finding.chance!.probability, 2)} %`);
     expect(s).toContain(`${sig(100 * u.yieldProbability, 3)} % of the ${u.samples} samples`);
     expect(s).toContain(`| 1 | yield strength of aisi-1045-cd | ${sig(u.sensitivity[0].low)} | ${sig(u.sensitivity[0].high)} |`);

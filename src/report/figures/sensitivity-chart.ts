@@ -10,7 +10,7 @@ const LOW = '#4e79a7';
 const HIGH = '#f28e2b';
 
 /**
- * One bar per varied input, from the yield ratio with the input at the low end of its band to the
+ * One bar per varied input, from stress / shear yield with the input at the low end of its band to the
  * ratio at the high end (the others held at the single run's values), largest swing at the top, the
  * single run's ratio and, where it is in range, yield (ratio 1) marked. The swings come from
  * `results.uncertainty.sensitivity`. Undefined without an uncertainty run.
@@ -59,12 +59,12 @@ export function sensitivityFigure(r: Results): ReportFigure | undefined {
     marginRight: 30,
     marginTop: 30,
     marginBottom: 40,
-    x: { domain, label: 'yield ratio in a run with this input at the end of its band', labelAnchor: 'center', grid: true },
+    x: { domain, label: 'stress / shear yield in a run with this input at the end of its band', labelAnchor: 'center', grid: true },
     y: { domain: names, label: null },
     marks,
   };
   const top = swings[0];
-  const title = 'Which input moves the yield ratio most';
+  const title = 'Which input moves stress / shear yield most';
   const caption = `Each input swung across its band (±2σ), the others held at the single run's values: blue, the input at the low end; orange, at the high end; the black line is the single run's ${sig(r.yieldRatio)}${yieldInView ? ', the red dashed line yield' : ''}. Largest swing at the top: ${inputName(top.input)}, ${sig(top.low)} to ${sig(top.high)}.`;
   return { name: 'uncertainty-sensitivity', title, caption, svg: plotToSvg(options, title, caption) };
 }

@@ -16,7 +16,7 @@ const SPAN = 1.5;
  * incident's speed, each point from the engine's energy method itself (`energyMethodSide` on the
  * case at that speed; the dynamic model is not rerun for a figure of the elastic method).
  * In the elastic energy method the stress is proportional to the speed (T = √(2E/C), E ∝ ω²), so
- * yield begins at the incident speed divided by the yield ratio; the sweep shows it and the
+ * yield begins at the incident speed divided by stress / shear yield; the sweep shows it and the
  * figure's test checks the engine agrees.
  */
 export function stressVsSpeedFigure(r: Results): ReportFigure | undefined {

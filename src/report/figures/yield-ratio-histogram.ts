@@ -10,7 +10,7 @@ import { FIGURE_WIDTH } from './svg-frame.ts';
 const BINS = 40;
 
 /**
- * The yield ratio of every Monte Carlo sample as a histogram, with the yield line (ratio 1), the
+ * The stress / shear yield of every Monte Carlo sample as a histogram, with the yield line (ratio 1), the
  * single run and the 5th and 95th percentiles marked. The samples and percentiles come from
  * `results.uncertainty`; the binning is the only thing done here. Undefined without an uncertainty run.
  */
@@ -48,12 +48,12 @@ export function yieldRatioHistogramFigure(r: Results): ReportFigure | undefined 
     marginRight: 20,
     marginTop: 36,
     marginBottom: 42,
-    x: { domain, label: 'yield ratio (stress / shear yield, elastic method)', labelAnchor: 'center' },
+    x: { domain, label: 'stress / shear yield (elastic method, kt applied)', labelAnchor: 'center' },
     y: { label: `samples (of ${un.samples})`, grid: true },
     marks,
   };
   const chance = chanceOfYieldWords(un);
-  const title = 'Yield ratio over the tolerances (Monte Carlo)';
-  const caption = `Yield ratio of each of the ${un.samples} samples (seed ${un.seed}); dotted lines: the 5th and 95th percentiles, ${sig(p5)} and ${sig(p95)}; dashed: the single run, ${sig(r.yieldRatio)}; red: yield (ratio 1). ${chance}.`;
+  const title = 'Stress / shear yield over the tolerances (Monte Carlo)';
+  const caption = `Stress / shear yield of each of the ${un.samples} samples (seed ${un.seed}); dotted lines: the 5th and 95th percentiles, ${sig(p5)} and ${sig(p95)}; dashed: the single run, ${sig(r.yieldRatio)}; red: yield (ratio 1). ${chance}.`;
   return { name: 'uncertainty-yield-ratio', title, caption, svg: plotToSvg(options, title, caption) };
 }

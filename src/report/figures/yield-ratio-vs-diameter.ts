@@ -9,7 +9,7 @@ import type { ReportFigure } from './report-figure.ts';
 import { FIGURE_WIDTH } from './svg-frame.ts';
 
 /**
- * Repeat-incident yield ratio of the governing side against the diameter of its critical segment
+ * Repeat-incident stress / shear yield of the governing side against the diameter of its critical segment
  * (the others as they are), with the line of the design factor (1/N) and the stock sizes marked.
  * Every point is a rerun of the engine made by the resize options; nothing is computed here.
  * Undefined when the sweep has no points.
@@ -47,11 +47,11 @@ export function yieldRatioAgainstDiameterFigure(results: Results, resize: Resize
     marginRight: 24,
     marginBottom: 42,
     x: { label: `diameter of ${seg} (${unitLabel('length', u)})`, labelAnchor: 'center' },
-    y: { type: log ? 'log' : 'linear', domain: [yMin, yMax], label: 'repeat-incident yield ratio', grid: true, tickFormat: '~g' },
+    y: { type: log ? 'log' : 'linear', domain: [yMin, yMax], label: 'repeat-incident stress / shear yield', grid: true, tickFormat: '~g' },
     marks,
   };
-  const title = `Repeat-incident yield ratio against the diameter of ${seg}`;
+  const title = `Repeat-incident stress / shear yield against the diameter of ${seg}`;
   const caption =
-    `Highest yield ratio on side ${k.side} (solid) and of ${seg} itself (dashed) in a repeat of the incident, the other segments as they are and the bore ratio kept; each point is a rerun of the elastic energy method. Dashed red line: 1/N for the design factor N = ${sig(resize.designFactor)}. Ticks at the foot: stock sizes (${resize.stockSeries}).`;
+    `Highest stress / shear yield on side ${k.side} (solid) and of ${seg} itself (dashed) in a repeat of the incident, the other segments as they are and the bore ratio kept; each point is a rerun of the elastic energy method. Dashed red line: 1/N for the design factor N = ${sig(resize.designFactor)}. Ticks at the foot: stock sizes (${resize.stockSeries}).`;
   return { name: 'resize-yield-ratio-vs-diameter', title, caption, svg: plotToSvg(options, title, caption) };
 }

@@ -23,7 +23,7 @@ export function renderDynamicsSection(r: Results): string {
   );
 
   out.push('### Energy method against dynamic model', '');
-  out.push('| side | stations | peak torque, energy method (elastic) | peak torque as carried, dynamic model | yield ratio, energy method | yield ratio, dynamic model |');
+  out.push('| side | stations | peak torque, energy method (elastic) | peak torque as carried, dynamic model | stress / shear yield, energy method | stress / shear yield, dynamic model |');
   out.push('|---|---|---|---|---|---|');
   for (const s of d.sides) {
     const stations = r.sides.find((x) => x.side === s.side)?.stations.map(escapeMarkdown).join(', ') ?? '';
@@ -33,7 +33,7 @@ export function renderDynamicsSection(r: Results): string {
 
   const capped = d.pieces.some((p) => p.elasticPeakTorque > p.peakTorque * (1 + 1e-6));
   out.push('### Peak torque along the shaft, dynamic model', '');
-  out.push(`| side | piece | from | to | peak torque | at |${capped ? ' peak torque had it stayed elastic |' : ''} shear stress with kt | yield ratio |`);
+  out.push(`| side | piece | from | to | peak torque | at |${capped ? ' peak torque had it stayed elastic |' : ''} shear stress with kt | stress / shear yield |`);
   out.push(`|---|---|---|---|---|---|${capped ? '---|' : ''}---|---|`);
   for (const p of d.pieces) {
     const seg = p.piece.segment;
@@ -44,7 +44,7 @@ export function renderDynamicsSection(r: Results): string {
   }
   out.push('');
   if (capped) {
-    out.push(escapeMarkdown('Past yield the shaft elements carry at most their fully plastic torque; the shear stress and yield ratio are those of the same chain solved with the shaft kept elastic (the elastic check, like the energy method\'s), which says how far past yield the incident went.'), '');
+    out.push(escapeMarkdown('Past yield the shaft elements carry at most their fully plastic torque; the shear stress and stress / shear yield are those of the same chain solved with the shaft kept elastic (the elastic check, like the energy method\'s), which says how far past yield the incident went.'), '');
   }
 
   out.push(...protectionLines(r, d));
@@ -107,7 +107,7 @@ function protectionLines(r: Results, d: DynamicResult): string[] {
   const limiters = d.slips.filter((s) => s.kind === 'torque limiter');
   if (limiters.length > 0) {
     const worst = Math.max(...d.pieces.map((p) => p.yieldRatio));
-    out.push(`- ${limiters.some((s) => s.firstSlip !== undefined) ? 'The limiter slipped' : 'The limiter did not slip'}; the highest yield ratio anywhere on the shaft is ${sig(worst)}${worst < 1 ? ', so the shaft stayed below yield' : ''}.`);
+    out.push(`- ${limiters.some((s) => s.firstSlip !== undefined) ? 'The limiter slipped' : 'The limiter did not slip'}; the highest stress / shear yield anywhere on the shaft is ${sig(worst)}${worst < 1 ? ', so the shaft stayed below yield' : ''}.`);
   }
   out.push('');
   return out;

@@ -2,7 +2,7 @@ import type { Results } from '../../results/results.ts';
 import { inDisplay, unitLabel } from '../../views/display-units.ts';
 import type { ReportTable } from './report-table.ts';
 
-/** Every loaded piece of shaft (segments cut at stations): torque, stress with kt, twist, yield ratio. */
+/** Every loaded piece of shaft (segments cut at stations): torque, stress with kt, twist, stress / shear yield. */
 export function piecesTable(r: Results): ReportTable {
   const u = r.case.units;
   return {

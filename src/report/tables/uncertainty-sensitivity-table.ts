@@ -5,7 +5,7 @@ import type { ReportTable } from './report-table.ts';
 
 /**
  * The inputs ranked by how far each, swung across its band with the others held at the single
- * run's values, moves the yield ratio (largest first), with the permanent twist where some swing
+ * run's values, moves stress / shear yield (largest first), with the permanent twist where some swing
  * leaves one. Undefined without an uncertainty run.
  */
 export function uncertaintySensitivityTable(r: Results): ReportTable | undefined {
@@ -16,13 +16,13 @@ export function uncertaintySensitivityTable(r: Results): ReportTable | undefined
   const deg = (v: number | undefined) => (v === undefined ? null : inDisplay(v, 'angle', u));
   return {
     name: 'uncertainty-sensitivity',
-    title: 'Inputs by their effect on the yield ratio',
+    title: 'Inputs by their effect on stress / shear yield',
     columns: [
       { label: 'rank' },
       { label: 'input' },
-      { label: 'yield ratio, input at the low end of its band' },
-      { label: 'yield ratio, input at the high end' },
-      { label: 'swing of the yield ratio' },
+      { label: 'stress / shear yield, input at the low end of its band' },
+      { label: 'stress / shear yield, input at the high end' },
+      { label: 'swing of stress / shear yield' },
       ...(twist ? [{ label: 'permanent twist, low end', unit: unitLabel('angle', u) }, { label: 'permanent twist, high end', unit: unitLabel('angle', u) }] : []),
     ],
     rows: un.sensitivity.map((s, i) => [i + 1, inputName(s.input), s.low, s.high, Math.abs(s.high - s.low), ...(twist ? [deg(s.twistLow), deg(s.twistHigh)] : [])]),

@@ -8,7 +8,7 @@ describe('sensitivityFigure', () => {
   const r = fixture('exhaust-fan-seized-impeller.yaml').results;
   const swings = r.uncertainty!.sensitivity;
   const f = sensitivityFigure(r)!;
-  const document = checkFigure(f, 'uncertainty-sensitivity', [/^yield ratio in a run with this input at the end of its band/, /^single run 20\.5$/]);
+  const document = checkFigure(f, 'uncertainty-sensitivity', [/^stress \/ shear yield in a run with this input at the end of its band/, /^single run 20\.5$/]);
 
   it('sensitivityFigure names every input down its side, largest swing at the top', () => {
     const labels = [...document.querySelectorAll('[aria-label="y-axis tick label"] text')];

@@ -8,7 +8,7 @@ describe('yieldRatioHistogramFigure', () => {
   const f = yieldRatioHistogramFigure(r)!;
 
   it('yieldRatioHistogramFigure is a framed SVG with its title, caption and labelled axes', () => {
-    checkFigure(f, 'uncertainty-yield-ratio', [/^yield ratio \(stress \/ shear yield, elastic method\)/, /samples \(of 10000\)/, /^yield, ratio 1$/, /^single run, 0\.855$/]);
+    checkFigure(f, 'uncertainty-yield-ratio', [/^stress \/ shear yield \(elastic method, kt applied\)/, /samples \(of 10000\)/, /^yield, ratio 1$/, /^single run, 0\.855$/]);
     expect(f.caption).toContain(`seed ${r.uncertainty!.seed}`);
     expect(f.caption).toContain('% of the 10000 samples reach a stress / shear yield of 1 or more');
   });

@@ -27,7 +27,7 @@ describe('renderDynamicsSection', () => {
 
   it('shows what slipped and that the limiter kept its side of the shaft protected', () => {
     expect(md).toMatch(/\| the torque limiter in "limiter hub seat" \| 9000 N·m \| [\d.]+ ms \|/);
-    expect(md).toMatch(/The limiter slipped; the highest yield ratio anywhere on the shaft is/);
+    expect(md).toMatch(/The limiter slipped; the highest stress \/ shear yield anywhere on the shaft is/);
     expect(md).toMatch(/### Events, located in time\n\n- [\d.]+ ms: The belt at "drive pulley" starts to slip\./);
   });
 
