@@ -80,6 +80,8 @@ interface FieldCheck {
   advice: string;
   /** Whether a swapped value is a fix; default: the judge passes it. */
   fixes?: (value: number) => boolean;
+  /** Warn only where a unit swap fixes the value. */
+  onlyWithFix?: boolean;
 }
 
 /**
@@ -94,12 +96,18 @@ export function checkPlausibility(c: Case, text: string): InputWarning[] {
     const src = source.at(fc.path);
     if (!src || out.some((w) => w.path === formatPath(fc.path))) return;
     const why = fc.judge(parseQuantity(src.text, fc.kind).value);
-    if (why !== undefined) out.push(warning(c, fc, src, why));
+    if (why === undefined) return;
+    const w = warning(c, fc, src, why);
+    if (w.fix !== undefined || !fc.onlyWithFix) out.push(w);
   };
 
   const segments = c.shaft.segments;
   const length = segments.at(-1)?.end ?? 0;
   for (const seg of segments) run(diameterCheck(c, seg, length));
+  for (const seg of segments) {
+    const step = stepCheck(c, seg, length);
+    if (step) run(step);
+  }
   for (const seg of segments) if (seg.bore > 0) run(boreCheck(c, ['shaft', 'segments', seg.index, 'bore'], seg.diameter));
   c.stations.forEach((st, i) =>
     st.parts.forEach((part, j) => {
@@ -137,10 +145,8 @@ function where(path: Path, p: SourcePosition): Pick<InputWarning, 'path' | 'line
   return { path: formatPath(path), line: p.line, column: p.column };
 }
 
-/** A segment diameter: 3 mm to 2 m, no larger than the whole shaft, within ×10 of the other segments' median. */
+/** A segment diameter: 3 mm to 2 m and no larger than the whole shaft. */
 function diameterCheck(c: Case, seg: Segment, length: number): FieldCheck {
-  const others = c.shaft.segments.filter((s) => s !== seg).map((s) => s.diameter);
-  const m = median(others);
   const show = (x: number) => showLength(x, c.units);
   return {
     code: 'W_DIAMETER',
@@ -151,11 +157,30 @@ function diameterCheck(c: Case, seg: Segment, length: number): FieldCheck {
       if (d < PLAUSIBLE.minDiameter) return `is below ${show(PLAUSIBLE.minDiameter)}, thinner than any shaft that carries a machine's parts`;
       if (d > PLAUSIBLE.maxDiameter) return `is above ${show(PLAUSIBLE.maxDiameter)}, thicker than any machine shaft`;
       if (d > length) return `is larger than the shaft's whole length (${show(length)})`;
-      if (m !== undefined && d > PLAUSIBLE.diameterStep * m) return `is ${round(d / m)} times the shaft's other segments (median ${show(m)})`;
-      if (m !== undefined && d * PLAUSIBLE.diameterStep < m) return `is 1/${round(m / d)} of the shaft's other segments (median ${show(m)})`;
       return undefined;
     },
   };
+}
+
+/**
+ * A segment more than ten times thicker (or thinner) than every other segment of the shaft, where
+ * the same number in the other unit (mm for in) fits among them: a unit slip. Only with that fix:
+ * from two segments alone the thick one and the thin one cannot be told apart otherwise.
+ */
+function stepCheck(c: Case, seg: Segment, length: number): FieldCheck | undefined {
+  const others = c.shaft.segments.filter((s) => s !== seg).map((s) => s.diameter);
+  if (others.length === 0) return undefined;
+  const [lo, hi] = [Math.min(...others), Math.max(...others)];
+  const range = diameterCheck(c, seg, length);
+  const judge = (d: number): string | undefined => {
+    const m = median(others)!;
+    const show = (x: number) => showLength(x, c.units);
+    const what = others.length === 1 ? `the shaft's other segment (${show(m)})` : `the shaft's other segments (median ${show(m)})`;
+    if (d > PLAUSIBLE.diameterStep * hi) return `is ${round(d / m)} times ${what}`;
+    if (d * PLAUSIBLE.diameterStep < lo) return `is 1/${round(m / d)} of ${what}`;
+    return undefined;
+  };
+  return { ...range, judge, onlyWithFix: true, fixes: (d) => judge(d) === undefined && range.judge(d) === undefined };
 }
 
 /** A bore closer than 0.5 mm to its diameter: a wall no shaft or hub is made of. */
@@ -175,7 +200,8 @@ function boreCheck(c: Case, path: Path, diameter: number): FieldCheck {
 /**
  * A part on the shaft (speed ratio 1, not a motor's rotor) heavier than the shaft could hold up
  * standing still: its weight alone, at the middle of a simply supported span of the shaft's whole
- * length, would bend the shaft's thickest segment past its yield strength, σ = 32·M·D/(π(D⁴ − d⁴))
+ * length, would bend the shaft's strongest segment in bending (the largest section modulus) past
+ * its yield strength, σ = 32·M·D/(π(D⁴ − d⁴))
  * with M = W·L/4 (Shigley, beam tables; from memory). A real part is held nearer its bearings and
  * the shaft is sized for far more than its weight, so the rule only catches masses no such shaft
  * can have carried (a disc diameter in feet for inches).
@@ -183,10 +209,11 @@ function boreCheck(c: Case, path: Path, diameter: number): FieldCheck {
 function partMassCheck(c: Case, st: Station, part: Part, path: Path): FieldCheck | undefined {
   const index = st.parts.indexOf(part);
   if (part.speedRatio !== 1 || st.drive?.rotorParts.includes(index) || (part.shape !== 'disc' && part.shape !== 'mass')) return undefined;
-  const thickest = c.shaft.segments.reduce((a, b) => (b.diameter > a.diameter ? b : a));
+  const modulus = (s: Segment) => (s.diameter ** 4 - s.bore ** 4) / s.diameter;
+  const stoutest = c.shaft.segments.reduce((a, b) => (modulus(b) > modulus(a) ? b : a));
   const length = c.shaft.segments.at(-1)!.end;
-  const { diameter: D, bore: d } = thickest;
-  const sy = c.materials[thickest.material].yieldStrength!;
+  const { diameter: D, bore: d } = stoutest;
+  const sy = c.materials[stoutest.material].yieldStrength!;
   const stress = (mass: number) => {
     const moment = (mass * part.count * GRAVITY * length) / 4;
     return (32 * moment * D) / (Math.PI * (D ** 4 - d ** 4));
@@ -195,7 +222,7 @@ function partMassCheck(c: Case, st: Station, part: Part, path: Path): FieldCheck
     const s = stress(mass);
     if (s <= sy) return undefined;
     const many = part.count > 1 ? ` (${part.count} of them)` : '';
-    return `makes the part weigh ${showMass(mass, c.units)}${many}, whose weight alone at mid-span of the whole shaft (${showLength(length, c.units)}) would bend its thickest segment (${showLength(D, c.units)}) to ${showStress(s, c.units)}, past its yield strength of ${showStress(sy, c.units)}`;
+    return `makes the part weigh ${showMass(mass, c.units)}${many}, whose weight alone at mid-span of the whole shaft (${showLength(length, c.units)}) would bend its strongest segment in bending (${showLength(D, c.units)}) to ${showStress(s, c.units)}, past its yield strength of ${showStress(sy, c.units)}`;
   };
   const advice = 'check the value and its unit';
   if (part.shape === 'mass') return { code: 'W_PART_MASS', path: [...path, 'mass'], kind: 'mass', advice, judge: why };
@@ -294,7 +321,7 @@ function sig(x: number): string {
 }
 
 function showLength(m: number, units: Case['units']): string {
-  if (units === 'us') return m >= 3 * 0.3048 ? `${sig(m / 0.3048)} ft` : `${sig(m / 0.0254)} in`;
+  if (units === 'us') return m >= 10 * 0.3048 ? `${sig(m / 0.3048)} ft` : `${sig(m / 0.0254)} in`;
   return m >= 1 ? `${sig(m)} m` : `${sig(m * 1000)} mm`;
 }
 

@@ -12,7 +12,7 @@ const SYSTEM: Record<string, UnitSystem> = { mm: 'metric', cm: 'metric', m: 'met
  * the metre and the foot, the kilogram and the pound, rpm and rad/s.
  */
 const SWAP: Partial<Record<QuantityKind, Record<string, string>>> = {
-  length: { mm: 'in', cm: 'in', m: 'ft', in: 'mm', inch: 'mm', ft: 'm' },
+  length: { mm: 'in', cm: 'in', in: 'mm', inch: 'mm' },
   mass: { kg: 'lb', lb: 'kg' },
   angular_speed: { 'rad/s': 'rpm', 'r/s': 'rpm', 'rev/s': 'rpm', rpm: 'rad/s', 'r/min': 'rad/s', 'rev/min': 'rad/s' },
 };
