@@ -1,5 +1,6 @@
 import type { Case } from '../case/case.ts';
 import { resizeCase } from '../resize/resize-case.ts';
+import type { InputWarnings } from '../results/input-warnings.ts';
 import { investigate } from '../results/investigate.ts';
 import type { ReportData } from './report-context.ts';
 
@@ -12,6 +13,8 @@ export interface ReportDataOptions {
   factor?: number;
   /** Progress of the dynamic-model samples, for a terminal. */
   onDynamicProgress?: (done: number, total: number) => void;
+  /** The case file's plausibility warnings, carried into the results as `check` carries them. */
+  inputWarnings?: InputWarnings;
 }
 
 /**
@@ -20,6 +23,6 @@ export interface ReportDataOptions {
  * (`resize`'s). Pure; the report's sections and figures only read it.
  */
 export function buildReportData(c: Case, opts: ReportDataOptions = {}): ReportData {
-  const results = investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress });
+  const results = investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress, inputWarnings: opts.inputWarnings });
   return { results, resize: resizeCase(c, results, { factor: opts.factor }) };
 }
