@@ -178,6 +178,12 @@ describe('the bundled cases give no plausibility warning', () => {
     expect(checkPlausibility(parseCase(text, f), text)).toEqual([]);
   });
 
+  it('the README\'s annotated case-file example', () => {
+    const readme = readFileSync(fileURLToPath(new URL('../../README.md', import.meta.url)), 'utf8');
+    const example = /## The case file[\s\S]*?```yaml\n([\s\S]*?)```/.exec(readme)![1];
+    expect(checkPlausibility(parseCase(example, 'README example'), example)).toEqual([]);
+  });
+
   const template = (name: string) => readFileSync(fileURLToPath(new URL(`../../templates/${name}`, import.meta.url)), 'utf8');
   it.each(['case-metric.yaml', 'case-us.yaml'])('template %s filled in with its own examples', (name) => {
     // The same filling as test/templates/case-templates.test.ts: the US template's own example values.
