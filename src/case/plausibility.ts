@@ -90,6 +90,7 @@ interface FieldCheck {
  * field: the first check that finds it implausible.
  */
 export function checkPlausibility(c: Case, text: string): InputWarning[] {
+  if (c.shaft.segments.length === 0) return [];
   const source = sourceValues(text);
   const out: InputWarning[] = [];
   const run = (fc: FieldCheck): void => {
@@ -154,8 +155,8 @@ function diameterCheck(c: Case, seg: Segment, length: number): FieldCheck {
     kind: 'length',
     advice: 'check the value and its unit',
     judge: (d) => {
-      if (d < PLAUSIBLE.minDiameter) return `is below ${show(PLAUSIBLE.minDiameter)}, thinner than any shaft that carries a machine's parts`;
-      if (d > PLAUSIBLE.maxDiameter) return `is above ${show(PLAUSIBLE.maxDiameter)}, thicker than any machine shaft`;
+      if (d < PLAUSIBLE.minDiameter) return `is below ${showLimit(PLAUSIBLE.minDiameter, c.units)}, thinner than any shaft that carries a machine's parts`;
+      if (d > PLAUSIBLE.maxDiameter) return `is above ${showLimit(PLAUSIBLE.maxDiameter, c.units)}, thicker than any machine shaft`;
       if (d > length) return `is larger than the shaft's whole length (${show(length)})`;
       return undefined;
     },
@@ -257,7 +258,8 @@ function speedCheck(c: Case): FieldCheck {
       const fastest = rims.reduce((a, b) => (b.radius * b.ratio > a.radius * a.ratio ? b : a));
       const v = w * fastest.ratio * fastest.radius;
       if (v <= PLAUSIBLE.maxRimSpeed) return undefined;
-      return `gives ${fastest.what} a speed of ${showSpeed(v, c.units)}, beyond the ${showSpeed(PLAUSIBLE.maxRimSpeed, c.units)} at which even a thin ring of the strongest steel bursts`;
+      const limit = c.units === 'us' ? `${showSpeed(PLAUSIBLE.maxRimSpeed, 'us')} (${PLAUSIBLE.maxRimSpeed} m/s)` : showSpeed(PLAUSIBLE.maxRimSpeed, 'metric');
+      return `gives ${fastest.what} a speed of ${showSpeed(v, c.units)}, beyond the ${limit} at which even a thin ring of the strongest steel bursts`;
     },
   };
 }
@@ -323,6 +325,11 @@ function sig(x: number): string {
 function showLength(m: number, units: Case['units']): string {
   if (units === 'us') return m >= 10 * 0.3048 ? `${sig(m / 0.3048)} ft` : `${sig(m / 0.0254)} in`;
   return m >= 1 ? `${sig(m)} m` : `${sig(m * 1000)} mm`;
+}
+
+/** A limit that is set in metric units, in the case's units with the metric figure beside it. */
+function showLimit(m: number, units: Case['units']): string {
+  return units === 'us' ? `${showLength(m, 'us')} (${showLength(m, 'metric')})` : showLength(m, 'metric');
 }
 
 function showMass(kg: number, units: Case['units']): string {

@@ -88,7 +88,7 @@ describe('checkPlausibility(case, text)', () => {
     const { found } = warnings(US, 12, '1 11/16 in', '1 11/16 mm');
     expect(found).toHaveLength(1);
     expect(found[0]).toMatchObject({ code: 'W_UNITS', path: 'shaft.segments[2].diameter', line: 12, value: '1 11/16 mm', fix: '1 11/16 in' });
-    expect(found[0].message).toBe(`"1 11/16 mm" is below 0.118 in, thinner than any shaft that carries a machine's parts, and the case is in US units; did you mean "1 11/16 in"?`);
+    expect(found[0].message).toBe(`"1 11/16 mm" is below 0.118 in (3 mm), thinner than any shaft that carries a machine's parts, and the case is in US units; did you mean "1 11/16 in"?`);
   });
 
   it('a diameter above 2 m is refused as a shaft, whatever the shaft\'s length', () => {
