@@ -9,6 +9,7 @@ export type CaseErrorCode =
   | 'E_REFERENCE' // a name that refers to nothing (station, material)
   | 'E_MATERIAL' // a material lacks a property its use needs
   | 'E_MODEL' // the case as a whole cannot be modelled (nothing turning, …)
+  | 'E_IMPLAUSIBLE' // a value almost certainly mistyped (a plausibility warning, an error under --strict)
   | 'E_FILE' // the case file or a file it names cannot be read
   | 'E_TEMPLATE'; // a report template with a placeholder it cannot fill
 

@@ -54,7 +54,8 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--json', 'print one JSON object, SI units')
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
-    .action((file: string, opts: { json?: boolean; samples?: number; seed?: number }) => checkCommand(file, opts, io));
+    .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
+    .action((file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }) => checkCommand(file, opts, io));
 
   program
     .command('resize')
@@ -64,7 +65,8 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--json', 'print the check --json object with resize added, SI units')
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none), as for check', wholeNumber)
     .option('--seed <s>', 'seed of the Monte Carlo, as for check', wholeNumber)
-    .action((file: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number }) => resizeCommand(file, opts, io));
+    .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
+    .action((file: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number; strict?: boolean }) => resizeCommand(file, opts, io));
 
   program
     .command('materials')
@@ -88,7 +90,8 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
-    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number }) => {
+    .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
+    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number; strict?: boolean }) => {
       // The report's libraries (plots, DOM, tables, Markdown, zip, browser) load only here, so check stays fast.
       const { reportCommand } = await import('./commands/report.ts');
       await reportCommand(file, opts, io, clock());

@@ -1,6 +1,7 @@
 import type { Case } from '../case/case.ts';
 import { resizeCase } from '../resize/resize-case.ts';
 import { withFinding } from '../finding/investigation.ts';
+import type { InputWarnings } from '../results/input-warnings.ts';
 import { investigate } from '../results/investigate.ts';
 import type { ReportData } from './report-context.ts';
 
@@ -13,6 +14,8 @@ export interface ReportDataOptions {
   factor?: number;
   /** Progress of the dynamic-model samples, for a terminal. */
   onDynamicProgress?: (done: number, total: number) => void;
+  /** The case file's plausibility warnings, carried into the results as `check` carries them. */
+  inputWarnings?: InputWarnings;
 }
 
 /**
@@ -21,6 +24,6 @@ export interface ReportDataOptions {
  * (`resize`'s). Pure; the report's sections and figures only read it.
  */
 export function buildReportData(c: Case, opts: ReportDataOptions = {}): ReportData {
-  const results = withFinding(investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress }));
+  const results = withFinding(investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress, inputWarnings: opts.inputWarnings }));
   return { results, resize: resizeCase(c, results, { factor: opts.factor }) };
 }

@@ -4,6 +4,7 @@ import { sampleMetrics } from '../uncertainty/sample-engine.ts';
 import { runDynamicUncertainty, runUncertainty } from '../uncertainty/uncertainty.ts';
 import { judgeByInterval } from './twist-findings.ts';
 import { analyseCase } from './analyse-case.ts';
+import { withInputWarnings, type InputWarnings } from './input-warnings.ts';
 import type { Results } from './results.ts';
 
 /** Overrides from the command line. */
@@ -13,6 +14,8 @@ export interface InvestigateOptions {
   seed?: number;
   /** Called after each dynamic-model sample, so a terminal can show progress (the core keeps no clock). */
   onDynamicProgress?: (done: number, total: number) => void;
+  /** The case file's plausibility warnings, carried into the results' warnings. */
+  inputWarnings?: InputWarnings;
 }
 
 /** The numbers one Monte Carlo sample keeps, read from a full run (the sampling engine must agree with it). */
@@ -37,7 +40,7 @@ export function dynamicMetrics(k: Case): Metrics {
  * sure its finding is. Pure.
  */
 export function investigate(c: Case, opts: InvestigateOptions = {}): Results {
-  const results = analyseCase(c);
+  const results = withInputWarnings(analyseCase(c), opts.inputWarnings);
   const u = c.analysis.uncertainty;
   const samples = opts.samples ?? u.samples;
   if (!u.wanted || samples === 0) return results;

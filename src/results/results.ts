@@ -1,4 +1,5 @@
 import type { Case } from '../case/case.ts';
+import type { InputWarning } from '../case/plausibility.ts';
 import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { Uncertainty } from '../uncertainty/uncertainty.ts';
 import type { FractureFinding } from './fracture-reading.ts';
@@ -69,8 +70,10 @@ export interface Results {
   verdictReason: string;
   /** The lumped torsional chain solved in time, beside the energy method. */
   dynamic: DynamicResult;
-  /** Warnings about the model's fit to the case, in plain words. */
+  /** Warnings about the model's fit to the case, in plain words; the case file's plausibility warnings first, where the CLI carries them in. */
   warnings: string[];
+  /** The case file's plausibility warnings (`checkPlausibility`), where the CLI carried them in (`withInputWarnings`). */
+  inputWarnings?: InputWarning[];
   cautions: readonly string[];
   /** How sure the finding is; present when the case states tolerances. */
   uncertainty?: Uncertainty;

@@ -41,6 +41,16 @@ function factorOrThrow(unit: string, kind: QuantityKind, whole: string): number 
 }
 
 /**
+ * The number and the unit of a quantity as written ("1 7/16 in" → `{ number: '1 7/16', unit: 'in' }`),
+ * the tolerance left out; undefined when the text is not a number with a unit. For checks that look
+ * at the spelling (a value typed in the other unit system), not at the value.
+ */
+export function splitQuantity(input: string): { number: string; unit: string } | undefined {
+  const m = QUANTITY.exec(input);
+  return m && m[2] !== '' ? { number: m[1], unit: m[2] } : undefined;
+}
+
+/**
  * Reads "40 mm", "1750 r/min", "420 rpm ± 3 %", "40 mm +/- 0.05 mm", "1 7/16 in" as a quantity of `kind`.
  * A bare number is accepted only for `fraction` (as a fraction of one, not a percentage).
  */

@@ -31,6 +31,7 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
     past_yield_basis: r.pastYieldBasis,
     governing: { side: r.governing.side.side, from_m: r.governing.piece.piece.start, to_m: r.governing.piece.piece.end },
     warnings: r.warnings,
+    input_warnings: (r.inputWarnings ?? []).map((w) => ({ code: w.code, path: w.path, line: w.line, column: w.column, message: w.message, ...(w.fix !== undefined ? { fix: w.fix } : {}) })),
     cautions: r.cautions,
     sides: r.sides.map(sideJson),
     elastic_verdict: r.elasticVerdict,

@@ -1,7 +1,10 @@
 import { spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { runMain } from '../../src/cli/main.ts';
+import { copyToTemp } from '../io/io-fixtures.ts';
 
 const fixture = fileURLToPath(new URL('../data/one-disc.yaml', import.meta.url));
 const bin = fileURLToPath(new URL('../../dist/src/cli/bin.js', import.meta.url));
@@ -82,4 +85,47 @@ describe('shaftcase check', () => {
     expect(list.length).toBeGreaterThanOrEqual(12);
     for (const m of list) expect(m.source).toMatch(/\w/);
   });
+
+  describe('plausibility warnings', () => {
+    const implausible = fileURLToPath(new URL('../data/implausible-us.yaml', import.meta.url));
+    const line = /implausible-us\.yaml:13:34 shaft\.segments\[1\]\.diameter: "43 in" is larger than the shaft's whole length \(40 in\); did you mean "43 mm"\?/;
+
+    it('check prints each warning on stderr, one line with file:line:column, before the results, and lists it among the warnings', async () => {
+      const r = await cli('check', implausible);
+      expect(r.status).toBe(0);
+      expect(r.err).toMatch(new RegExp(`^[^\\n]*${line.source}\n`));
+      expect(r.err).not.toMatch(/\n\s+at /);
+      expect(r.out).toMatch(line);
+    });
+
+    it('check --json carries them in warnings and in input_warnings with code, path, line and column', async () => {
+      const j = JSON.parse((await cli('check', implausible, '--json')).out);
+      expect(j.input_warnings).toEqual([{ code: 'W_DIAMETER', path: 'shaft.segments[1].diameter', line: 13, column: 34, message: expect.stringMatching(/^"43 in" is larger/), fix: '43 mm' }]);
+      expect(j.warnings[0]).toMatch(line);
+    });
+
+    it('a plausible case prints no warning on stderr and an empty input_warnings', async () => {
+      const r = await cli('check', fixture, '--json');
+      expect(r.err).toBe('');
+      expect(JSON.parse(r.out).input_warnings).toEqual([]);
+    });
+
+    it.each([['check'], ['resize'], ['report']])('%s --strict turns them into errors: exit 2, the positioned message, nothing written', async (command) => {
+      const copy = copyToTemp(implausible);
+      const r = await cli(command, copy, '--strict');
+      expect(r.status).toBe(2);
+      expect(r.out).toBe('');
+      expect(r.err).toMatch(line);
+      expect(r.err).toMatch(/1 problem in .*implausible-us\.yaml; nothing was written\./);
+      expect(existsSync(join(dirname(copy), 'reports'))).toBe(false);
+    });
+
+    it('resize prints them on stderr and lists them among its warnings', async () => {
+      const r = await cli('resize', implausible);
+      expect(r.status).toBe(0);
+      expect(r.err).toMatch(line);
+      expect(r.out).toMatch(line);
+    });
+  });
 });
+

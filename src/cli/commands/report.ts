@@ -15,6 +15,7 @@ import { reportJson } from '../../report/report-json.ts';
 import { runInfo } from '../../report/run-info.ts';
 import { reportTablesCsv } from '../../report/tables-csv.ts';
 import { findingSentence } from '../../views/finding-words.ts';
+import { screenInputs } from '../input-warnings.ts';
 import type { Io } from '../main.ts';
 import { version } from '../version.ts';
 import { terminalProgress } from '../progress.ts';
@@ -27,13 +28,16 @@ export interface ReportOptions {
   seed?: number;
   /** Design factor for what goes back in, as `resize` takes it. */
   factor?: number;
+  /** Plausibility warnings become errors (exit 2), as for `check`. */
+  strict?: boolean;
 }
 
 /** `shaftcase report CASE`: a new dated report folder and its zip beside the case. */
 export async function reportCommand(path: string, opts: ReportOptions, io: Io, now: Date): Promise<void> {
   const loaded = loadCase(path);
+  const inputWarnings = screenInputs(loaded, opts.strict, io);
   // Everything the report shows is computed here, once; rendering only reads it.
-  const data = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances') });
+  const data = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
   const { results } = data;
   const template = readTemplate(opts.template);
   const photos = readPhotos(loaded.file, loaded.text, loaded.case.observed.photos);

@@ -4,6 +4,7 @@ import { resizeCase } from '../../resize/resize-case.ts';
 import { investigate } from '../../results/investigate.ts';
 import { resizeToJson } from '../../views/resize-json.ts';
 import { renderResize } from '../../views/resize-table.ts';
+import { screenInputs } from '../input-warnings.ts';
 import type { Io } from '../main.ts';
 import { terminalProgress } from '../progress.ts';
 
@@ -12,9 +13,10 @@ import { terminalProgress } from '../progress.ts';
  * case is investigated as `check` does it (tolerances included), so the present shaft's finding is
  * the same one `check` and the report show.
  */
-export function resizeCommand(path: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number }, io: Io): void {
+export function resizeCommand(path: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number; strict?: boolean }, io: Io): void {
   const loaded = loadCase(path);
-  const results = withFinding(investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances') }));
+  const inputWarnings = screenInputs(loaded, opts.strict, io);
+  const results = withFinding(investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings }));
   const z = resizeCase(loaded.case, results, { factor: opts.factor });
   io.out(opts.json ? JSON.stringify(resizeToJson(z), null, 2) + '\n' : renderResize(z));
 }
