@@ -9,7 +9,8 @@ import { ElasticLaw, type TorqueLaw } from '../physics/torque-law.ts';
  * The numeric system the integrator takes, from a chain: one law per element (elastic shaft, or
  * the law `shaftLaw` gives a plain shaft element — yielding, breaking —, a limiter's slip, a pin's parting), stiffness-proportional damping c = β·k with β = 2ζ/ω₁ per side
  * so that each side's lowest mode has the damping ratio ζ (Rayleigh damping with the mass term
- * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident), and the twist
+ * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident; the stepper
+ * scales each dashpot by its law's tangent over its elastic stiffness, `ChainStepper.dashpot`), and the twist
  * of the running torque, which flows from each drive to the stop.
  */
 export function systemOf(
