@@ -30,14 +30,14 @@ export function systemOf(
     else for (let e = P; e < d.node; e++) torque[e] += d.runningTorque;
   }
   const initialTwist = Float64Array.from(chain.elements, (el, e) => torque[e] / el.stiffness);
-  const laws: TorqueLaw[] = chain.elements.map((el, e) => {
-    if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e]);
-    if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
-    return shaftLaw?.(el, initialTwist[e]) ?? new ElasticLaw(el.stiffness);
-  });
   const damping = Float64Array.from(chain.elements, (el) => {
     const w = lowest[el.side];
     return w ? ((2 * dampingRatio) / w) * el.stiffness : 0;
+  });
+  const laws: TorqueLaw[] = chain.elements.map((el, e) => {
+    if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e], damping[e]);
+    if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
+    return shaftLaw?.(el, initialTwist[e]) ?? new ElasticLaw(el.stiffness);
   });
   return {
     inertia: Float64Array.from(chain.nodes, (n) => n.inertia),
