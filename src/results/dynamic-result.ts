@@ -133,7 +133,7 @@ export function firstBrokenPiece(d: Pick<DynamicResult, 'pieces'>): DynamicPiece
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
   const solve = solveDynamics(c, model);
   const { chain, modes, run, piecePeak, pieceTime } = solve.final;
-  const damage = dynamicPieceDamage(chain, run.laws, piecePeak);
+  const damage = dynamicPieceDamage(chain, run.laws, piecePeak, chain.pieces.map((p) => c.materials[p.piece.segment.material].shearModulus!));
   const breakTime = (i: number) => run.events.find((e) => e.what === 'breaks' && e.source.kind === 'element' && chain.elements[e.source.index].pieces.includes(i))?.time;
   const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
   const pastYield = plasticLaws.some((l) => l.yielded) || damage.some((d) => d.broken);

@@ -168,4 +168,13 @@ describe('dynamicResult: a torque limiter in a massless shaft, damped', () => {
       expect(b.firstSlip!).toBeLessThan(a.firstSlip!);
     }
   });
+
+  it('reports each segment\'s largest shear strain, the elastic one of the slip torque: T·c/(G·J_p) (Shigley 9th ed. Sec. 3-12)', () => {
+    const c = parseCase(limiterCase('3 kN*m'));
+    const r = analyseCase(c);
+    const G = c.materials['aisi-4140-qt540'].shearModulus!;
+    const expected = [0.06, 0.05].map((d) => (r.dynamic.pieces[0].peakTorque * (d / 2)) / (G * polarMoment(d)));
+    expect(r.dynamic.pieces.map((p) => p.maxShearStrain)).toEqual(expected.map((e) => expect.closeTo(e, 12)));
+    expect(Math.abs(r.dynamic.pieces[0].peakTorque / 3000 - 1)).toBeLessThan(1e-6);
+  });
 });
