@@ -57,6 +57,16 @@ describe('analyseCase past yield (Results.plastic)', () => {
     expect(r.plastic.brittleNotes.join(' ')).toMatch(/fractures near its ultimate strength without plastic twist/);
   });
 
+  it('reports no permanent twist for a piece or a side that breaks: its ends have parted', () => {
+    const material = ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa', 'fracture_strain: 0.05'];
+    const side = analyseCase(ep5Case({ speed: '1500 rpm', material })).plastic.sides[0];
+    expect(side.pieces[0].state.fractured).toBe(true);
+    expect(side.pieces[0].state.permanentTwist).toBe(0);
+    expect(side.pieces[0].surfaceOffset).toBe(0);
+    expect(side.permanentTwist).toBe(0);
+    expect(side.totalTwist).toBeGreaterThan(0);
+  });
+
   it('does not apply kt to the net section, and says so', () => {
     const r = analyseCase(ep5Case({ speed: '170 rpm', segments: ['- { length: 500 mm, diameter: 40 mm, kt: 2 }'] }));
     expect(r.elasticVerdict).toBe('yielded');
