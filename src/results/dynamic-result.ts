@@ -2,7 +2,7 @@ import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Case } from '..
 import type { Chain } from '../model/chain.ts';
 import type { ShaftModel, ShaftPiece, SideName } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
-import { shearYield } from '../physics/shear-strength.ts';
+import { verdictShearStrength } from '../physics/shear-strength.ts';
 import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
@@ -140,7 +140,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
   const elasticPeak = pastYield ? elasticPeaks(c, model, solve.target) : piecePeak;
   const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {
     const seg = p.piece.segment;
-    const tauY = shearYield(c.materials[seg.material].yieldStrength!, c.analysis.criterion);
+    const tauY = verdictShearStrength(c.materials[seg.material], c.analysis.criterion);
     const tau = seg.kt * shearStress(elasticPeak[i], seg.diameter, seg.bore);
     const d = damage[i];
     const broke = d.broken ? { breakTime: breakTime(i) } : {};
