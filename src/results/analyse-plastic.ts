@@ -81,8 +81,7 @@ function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResu
     energy,
     peakTorque: state.torque,
     totalTwist: pieces.reduce((s, p) => s + p.state.twist, 0),
-    // A side that breaks is in two: no twist between its ends (its unbroken pieces keep theirs).
-    permanentTwist: fractured ? 0 : pieces.reduce((s, p) => s + p.state.permanentTwist, 0),
+    permanentTwist: sidePermanentTwist(state),
     maxShearStrain: Math.max(...pieces.map((p) => p.state.maxShearStrain)),
     fractureEnergy: limit.energy,
     firstToBreak: limit.piece,
@@ -101,6 +100,11 @@ export function sideEndState(b: SideBalance, energy: number) {
   const state = breaks ? b.balance.stateAt(limit.twistRate) : b.balance.stateForEnergy(energy);
   if (breaks) state.pieces[limit.piece!] = { ...state.pieces[limit.piece!], fractured: true };
   return { state, limit, breaks };
+}
+
+/** The permanent twist of a side's run at its end state, rad: 0 where a piece breaks (the run is in two; its unbroken pieces keep theirs). */
+export function sidePermanentTwist(state: { pieces: readonly { permanentTwist: number; fractured: boolean }[] }): number {
+  return state.pieces.some((p) => p.fractured) ? 0 : state.pieces.reduce((s, p) => s + p.permanentTwist, 0);
 }
 
 /** The piece with the highest outer-fibre shear strain, with its loading path sampled for the figure. */
