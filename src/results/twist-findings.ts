@@ -22,8 +22,9 @@ export interface SpeedBand {
   high: number;
   /**
    * `case`: the ± stated on `speed` in the case; `default`: DEFAULT_SPEED_BAND, stated as a default;
-   * `monte-carlo`: the finding was judged by the interval of speeds that explain the measured twist
-   * over the case's tolerances (see `judgeByInterval`).
+   * `monte-carlo`: the band is still the recorded speed's (the case's or the default), and the finding
+   * was judged by whether the interval of speeds that explain the measured twist over the case's
+   * tolerances meets it (see `judgeByInterval`).
    */
   basis: 'case' | 'default' | 'monte-carlo';
 }
@@ -179,12 +180,16 @@ function angleTolerance(c: Case, index: number, angle: number): number {
 
 /**
  * Re-judges a finding where the uncertainty run gives the 5–95 % interval of speeds that explain
- * the measured twist over every stated tolerance: consistent when the recorded speed lies inside
- * it, `more` when the whole interval lies above the recorded speed, `less` when below.
+ * the measured twist over every stated tolerance, by the same rule as `readTwistBack` with that
+ * interval in place of the speeds for the measured angle ∓ its tolerance: consistent when the
+ * interval meets the band on the recorded speed, `more` when it lies wholly above the band, `less`
+ * when wholly below. The band stays the recorded speed's (the case's ± or the default), so a
+ * measurement is judged against the same band with or without the Monte Carlo; only its basis says
+ * that the interval judged it.
  */
 export function judgeByInterval(f: TwistFinding, interval: [number, number] | null): TwistFinding {
   // The uncertainty run samples the energy balance; a finding read through the dynamic model keeps its own band.
   if (interval === null || f.model !== 'energy balance' || f.finding === 'no_loaded_shaft' || f.finding === 'unexplained') return f;
-  const finding: TwistFindingCode = f.recordedSpeed < interval[0] ? 'more' : f.recordedSpeed > interval[1] ? 'less' : 'consistent';
-  return { ...f, finding, meaning: MEANINGS[finding], speedRange: [interval[0], interval[1]], band: { low: f.recordedSpeed, high: f.recordedSpeed, basis: 'monte-carlo' } };
+  const finding: TwistFindingCode = interval[0] > f.band.high ? 'more' : interval[1] < f.band.low ? 'less' : 'consistent';
+  return { ...f, finding, meaning: MEANINGS[finding], speedRange: [interval[0], interval[1]], band: { low: f.band.low, high: f.band.high, basis: 'monte-carlo' } };
 }
