@@ -178,3 +178,29 @@ describe('judgeByInterval: the Monte Carlo judges against the recorded speed\'s 
     expect(investigate(c, { samples: 200 }).observedFindings.twist[0].finding).toBe('more');
   });
 });
+
+describe('the words of a "less" finding follow the material\'s strength basis', () => {
+  const steel = ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa', 'tensile_strength: 630 MPa', 'elongation: 12 %', 'reduction_of_area: 35 %', 'density: 7850 kg/m^3'];
+  const less = (basis?: string, analysis?: string[]) =>
+    investigate(ep5Case({ observed: between(0.3, ' ± 0.05 deg'), material: basis ? [...steel, `strength_basis: ${basis}`] : steel, ...(analysis ? { analysis } : {}) }), { samples: 50 }).observedFindings.twist[0];
+
+  it('typical, with 0 % scatter: the mean strength, not a published minimum (with the Monte Carlo too)', () => {
+    const f = less('typical', ['strength_scatter: 0 %']);
+    expect(f.finding).toBe('less');
+    expect(f.strengthBasis).toBe('typical');
+    expect(f.meaning).toMatch(/typical \(mean\) strength used/);
+    expect(f.meaning).not.toMatch(/published minimum/);
+  });
+
+  it('minimum: the published minimum strength, which a real bar usually exceeds', () => {
+    const f = less('minimum');
+    expect(f.meaning).toMatch(/published minimum strength used, as a real bar usually is/);
+  });
+
+  it('no basis stated: the strength given in the case', () => {
+    const f = less();
+    expect(f.strengthBasis).toBe('case');
+    expect(f.meaning).toMatch(/the strength given in the case/);
+    expect(f.meaning).not.toMatch(/published minimum/);
+  });
+});
