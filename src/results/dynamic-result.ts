@@ -204,7 +204,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     histories: dynamicHistories(chain, solve.final, slips),
     ...optional('yieldPath', yieldPath(chain, solve.final, pieces.map((p) => p.permanentTwist))),
     assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),
-    notes: [...runningChecks(chain, c.speed), ...solve.notes],
+    notes: [...runningChecks(chain, c.speed), ...solve.notes, ...chain.drives.flatMap((d) => d.warnings)],
   };
 }
 

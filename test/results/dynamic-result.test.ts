@@ -178,3 +178,11 @@ describe('dynamicResult: a torque limiter in a massless shaft, damped', () => {
     expect(Math.abs(r.dynamic.pieces[0].peakTorque / 3000 - 1)).toBeLessThan(1e-6);
   });
 });
+
+describe('a drive given only by its power', () => {
+  it('puts its warning in Results.warnings (the screw-conveyor sample: drive: { power: 15 hp })', () => {
+    const r = analyseCase(parseCase(readFileSync(new URL('../../sample-cases/screw-conveyor-jam-us.yaml', import.meta.url), 'utf8')));
+    expect(r.verdictBasis).toBe('dynamic model');
+    expect(r.warnings.filter((w) => /given only by its power.*unconservative/.test(w))).toHaveLength(1);
+  });
+});
