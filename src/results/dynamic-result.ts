@@ -8,6 +8,7 @@ import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
+import { modeFrequencies, type ModeFrequency } from './mode-convergence.ts';
 import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
 import { yieldPath, type YieldPath } from './yield-path.ts';
 import { runningChecks } from './running-checks.ts';
@@ -79,8 +80,12 @@ export interface DynamicResult {
   converged: boolean;
   /** Natural frequencies with the stop held, Hz, ascending (the lowest ten at most). */
   naturalFrequencies: number[];
-  /** The same modes with their side and their share of the side's energy after an instantaneous stop. */
-  frequencies: { side: SideName; frequency: number; participation: number }[];
+  /**
+   * The same modes with their side, their share of the side's energy after an instantaneous stop,
+   * and whether the element count resolves them (within 1 %, from a chain with twice the elements;
+   * see `modeFrequencies`). Higher modes of a coarse chain are low.
+   */
+  frequencies: ModeFrequency[];
   /** The lowest three modes with their shapes. */
   modes: DynamicMode[];
   pieces: DynamicPiece[];
@@ -180,7 +185,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     refinement: solve.refinement,
     converged: solve.converged,
     naturalFrequencies: modes.slice(0, 10).map((m) => m.frequency),
-    frequencies: modes.slice(0, 10).map((m) => ({ side: m.side, frequency: m.frequency, participation: m.participation })),
+    frequencies: modeFrequencies(c, model, chain, modes.slice(0, 10), solve.target),
     modes: modes.slice(0, 3).map((m) => {
       const idx = chain.nodes.flatMap((n, i) => (n.side === m.side || i === P ? [i] : []));
       return { side: m.side, frequency: m.frequency, participation: m.participation, at: idx.map((i) => chain.nodes[i].at), amplitude: idx.map((i) => m.shape[i]) };
