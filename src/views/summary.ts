@@ -73,7 +73,7 @@ export function renderSummary(r: Results): string {
   const out: string[] = [];
   out.push(`${m.id}${m.title ? `  ${m.title}` : ''}`);
   out.push(
-    `Speed at the stop ${show(r.speed, 'speed', u, 4)}; stopped at "${r.case.stop.at}"; shear yield by ${r.case.analysis.criterion === 'max-shear' ? 'maximum shear (0.5·Sy)' : 'distortion energy (0.577·Sy)'}.`,
+    `Speed at the stop ${show(r.speed, 'speed', u, 4)}; stopped at "${r.case.stop.at}"; shear yield by ${r.case.analysis.criterion === 'max-shear' ? 'maximum shear (0.5·Sy)' : 'distortion energy (Sy/√3 ≈ 0.577·Sy)'}.`,
   );
   for (const s of r.sides) {
     const worst = s.pieces.reduce((a, b) => (b.yieldRatio > a.yieldRatio ? b : a));
