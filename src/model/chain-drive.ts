@@ -19,6 +19,8 @@ export interface ChainDrive {
   runningTorque: number;
   /** How the motor's torques were settled where the case leaves them open, as sentences. */
   assumptions: string[];
+  /** What the reader must weigh in how they were settled (a drive given only by its power), as sentences for `Results.warnings`. */
+  warnings: string[];
 }
 
 /**
@@ -32,6 +34,7 @@ export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainD
   const r = d.speedRatio;
   const motorSpeed = shaftSpeed * r;
   const assumptions: string[] = [];
+  const warnings: string[] = [];
   const fromPower = d.power !== undefined ? d.power / motorSpeed : undefined;
   let spec = d.torque;
   if (!spec) {
@@ -41,6 +44,13 @@ export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainD
     } else if (fromPower !== undefined) {
       spec = { kind: 'constant', torque: fromPower };
       assumptions.push(`The motor at "${s.name}" is taken to hold its rated torque, power ÷ speed, while it is pulled down (no torque or curve given).`);
+      // Kept as a constant rated torque rather than a guessed pull-out curve, and said where the
+      // reader sees it: a motor pulled down toward standstill gives more than its rated torque
+      // (an induction motor's breakdown torque is some 2–3 × rated; NEMA MG 1, design B: at least
+      // 200 %; from memory, verify), so this understates what the drive adds.
+      warnings.push(
+        `The drive at "${s.name}" is given only by its power, so the dynamic model (which the verdict stands on, with this drive acting) holds the rated torque, power ÷ speed, while the jam pulls the motor down. That is unconservative: a motor pulled down toward standstill gives more, an induction motor's breakdown torque being some 2 to 3 times its rated torque (NEMA MG 1 design B: at least 200 %), so the drive's share of the peak torque, twist and damage is likely understated. Give drive.torque or drive.curve from the motor's data.`,
+      );
     } else {
       spec = { kind: 'constant', torque: 0 };
       assumptions.push(`The motor at "${s.name}" is taken to give no torque after the stop (no torque, curve, running torque or power given), as if it had tripped at once.`);
@@ -67,5 +77,6 @@ export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainD
     line: reflectLine(motorLine(spec), r),
     runningTorque: running * r,
     assumptions,
+    warnings,
   };
 }

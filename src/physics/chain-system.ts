@@ -11,7 +11,7 @@ export interface ChainSystem {
   inertia: Float64Array;
   /** One torque law per element. */
   laws: TorqueLaw[];
-  /** Dashpot per element, N·m·s/rad (stiffness-proportional damping; used where the law says it acts). */
+  /** Dashpot per element at its elastic stiffness, N·m·s/rad (stiffness-proportional damping; used where the law says it acts, scaled by the law's tangent over its elastic stiffness). */
   damping: Float64Array;
   /**
    * Each element's own inertia, kg·m², already lumped half on each end node; with it the torque at

@@ -2,7 +2,7 @@ import type { Case, Part, YieldCriterion } from '../case/case.ts';
 import type { Material } from '../materials/material.ts';
 import type { ShaftPiece, Side, SideName } from '../model/shaft-model.ts';
 import { kineticEnergy, reflectedInertia } from './inertia.ts';
-import { shearYield } from './shear-strength.ts';
+import { verdictShearStrength } from './shear-strength.ts';
 import { compliance, shaftInertia, shearStress, torqueForEnergy } from './torsion.ts';
 
 /** One piece of shaft under the side's peak torque. */
@@ -12,7 +12,7 @@ export interface PieceResult {
   torque: number;
   /** Outer-fibre shear stress with the segment's kt applied, Pa. */
   shearStress: number;
-  /** Shear yield of the segment's material by the case's criterion, Pa. */
+  /** Shear yield of the segment's material by the case's criterion, Pa; for brittle material its fracture shear S_ut (`verdictShearStrength`). */
   shearYield: number;
   /** Elastic twist of this piece, rad. */
   twist: number;
@@ -80,7 +80,7 @@ export function energyMethodSide(
 
   const pieces = side.pieces.map((piece, i): PieceResult => {
     const { segment } = piece;
-    const tauY = shearYield(materials[segment.material].yieldStrength!, criterion);
+    const tauY = verdictShearStrength(materials[segment.material], criterion);
     const tau = segment.kt * shearStress(peakTorque, segment.diameter, segment.bore);
     return { piece, torque: peakTorque, shearStress: tau, shearYield: tauY, twist: peakTorque * pieceCompliance[i], yieldRatio: tau / tauY };
   });

@@ -170,7 +170,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
       final: chainEnergy(st),
       motorWork: st.motorWork,
       boundaryWork: st.boundaryWork,
-      dampingWork: st.dampingWork,
+      dampingWork: st.dampingWork + st.laws.reduce((s, l) => s + (l.dampingWork ?? 0), 0),
       slipWork: lawWork + otherLaw + st.drives.reduce((w, d) => w + d.slipWork, 0) + st.jamWork,
       released,
     },

@@ -35,6 +35,8 @@ export interface TorqueLaw {
   energy(theta: number): number;
   /** Work dissipated in the element so far (slip, plastic flow, energy released at parting), J. */
   readonly dissipated: number;
+  /** Work of a dashpot that the law books itself (a slipping limiter's spring relaxing), J; absent: 0. It counts with the damping, not in `dissipated`. */
+  readonly dampingWork?: number;
   /** Twist taken up by slip or flow so far, rad (signed). */
   readonly offset: number;
   /**

@@ -1,6 +1,6 @@
 import type { Case } from '../case/case.ts';
 import { cutAtStations, type ShaftPiece } from '../model/shaft-model.ts';
-import { shearYield } from '../physics/shear-strength.ts';
+import { verdictShearStrength } from '../physics/shear-strength.ts';
 import { shearStress } from '../physics/torsion.ts';
 
 /** One piece of shaft on a run that carries one torque, with what a torque does to it. */
@@ -31,7 +31,7 @@ export function shaftRun(c: Case, from: number, to: number): RunPiece[] {
     .map((piece) => {
       const { segment } = piece;
       const nominal = shearStress(1, segment.diameter, segment.bore);
-      const tauY = shearYield(c.materials[segment.material].yieldStrength!, c.analysis.criterion);
+      const tauY = verdictShearStrength(c.materials[segment.material], c.analysis.criterion);
       return { piece, stressPerTorque: segment.kt * nominal, nominalPerTorque: nominal, shearYield: tauY, yieldTorque: tauY / (segment.kt * nominal) };
     });
 }

@@ -56,6 +56,8 @@ export function analysePlastic(c: Case, model: { sides: Side[] }, elastic: reado
  */
 function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResult {
   const { state, limit, breaks } = sideEndState(b, energy);
+  // A piece that breaks keeps no twist to measure: its ends have parted (as in the dynamic model).
+  const kept = state.pieces.map((p) => (p.fractured ? { ...p, permanentTwist: 0 } : p));
   const pieces = side.pieces.map((piece, i): PlasticPieceResult => {
     const bp = b.balance.pieces[i];
     const yieldTwist = yieldTwistRate(bp.law) * bp.length;
@@ -68,9 +70,9 @@ function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResu
       fractureTwist: bp.fractureTwistRate * bp.length,
       fractureEnergy: Number.isFinite(bp.fractureTwistRate) ? energyPerLength(bp.law, bp.fractureTwistRate) * bp.length : Infinity,
       yielded: state.pieces[i].twist > yieldTwist,
-      surfaceOffset: bp.law.outerRadius * state.pieces[i].permanentTwist,
-      helixAngle: Math.atan((bp.law.outerRadius * state.pieces[i].permanentTwist) / bp.length),
-      state: state.pieces[i],
+      surfaceOffset: bp.law.outerRadius * kept[i].permanentTwist,
+      helixAngle: Math.atan((bp.law.outerRadius * kept[i].permanentTwist) / bp.length),
+      state: kept[i],
     };
   });
   const fractured = breaks || pieces.some((p) => p.state.fractured);
@@ -79,7 +81,7 @@ function sideResult(side: Side, b: SideBalance, energy: number): PlasticSideResu
     energy,
     peakTorque: state.torque,
     totalTwist: pieces.reduce((s, p) => s + p.state.twist, 0),
-    permanentTwist: pieces.reduce((s, p) => s + p.state.permanentTwist, 0),
+    permanentTwist: sidePermanentTwist(state),
     maxShearStrain: Math.max(...pieces.map((p) => p.state.maxShearStrain)),
     fractureEnergy: limit.energy,
     firstToBreak: limit.piece,
@@ -98,6 +100,11 @@ export function sideEndState(b: SideBalance, energy: number) {
   const state = breaks ? b.balance.stateAt(limit.twistRate) : b.balance.stateForEnergy(energy);
   if (breaks) state.pieces[limit.piece!] = { ...state.pieces[limit.piece!], fractured: true };
   return { state, limit, breaks };
+}
+
+/** The permanent twist of a side's run at its end state, rad: 0 where a piece breaks (the run is in two; its unbroken pieces keep theirs). */
+export function sidePermanentTwist(state: { pieces: readonly { permanentTwist: number; fractured: boolean }[] }): number {
+  return state.pieces.some((p) => p.fractured) ? 0 : state.pieces.reduce((s, p) => s + p.permanentTwist, 0);
 }
 
 /** The piece with the highest outer-fibre shear strain, with its loading path sampled for the figure. */

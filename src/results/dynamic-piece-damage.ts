@@ -3,12 +3,13 @@ import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
 import { residualTwistRate, rigidity } from '../physics/plastic-torsion.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import type { TorqueLaw } from '../physics/torque-law.ts';
+import { shearStress } from '../physics/torsion.ts';
 
 /** What the incident left in one piece of shaft, by the dynamic model. */
 export interface PieceDamage {
   /** Twist left after the incident, rad (0 where it stayed elastic, broke, or plasticity is off). */
   permanentTwist: number;
-  /** Largest outer-fibre shear strain it reached (net section), rad; 0 where plasticity is off. */
+  /** Largest outer-fibre shear strain it reached (net section), rad; with plasticity off, or where the piece has no elastic–plastic element, the elastic strain of its peak torque. */
   maxShearStrain: number;
   /** Whether an element in the piece broke. */
   broken: boolean;
@@ -22,17 +23,27 @@ export interface PieceDamage {
  * `SeriesBackbone.pieceTwistRates`. A broken element leaves no measurable twist (the parts have
  * separated); its piece is marked broken. An element that never yielded was stepped as elastic
  * without its largest twist kept (`TorqueLaw.elasticUntilEvent`): its pieces' strain is the elastic
- * one of their peak torque, T·c/(G·J_p), from `piecePeak` (N·m, per piece) where it is given.
+ * one of their peak torque, T·c/(G·J_p), from `piecePeak` (N·m, per piece) where it is given. So
+ * is the strain of a piece in an element of another law (plain elastic, a limiter's or a pin's
+ * element, a brittle element, before it broke): T·c/(G·J_p) = τ/G at the piece's peak torque, net
+ * section, with `shearModulus` (Pa, per piece) where it is given (Shigley 9th ed. Sec. 3-12,
+ * τ = Tc/J and γ = τ/G; from memory, confident).
  */
-export function dynamicPieceDamage(chain: Chain, laws: readonly TorqueLaw[], piecePeak?: readonly number[]): PieceDamage[] {
+export function dynamicPieceDamage(chain: Chain, laws: readonly TorqueLaw[], piecePeak?: readonly number[], shearModulus?: readonly number[]): PieceDamage[] {
+  const elasticStrain = (i: number) => {
+    const seg = chain.pieces[i].piece.segment;
+    return piecePeak && shearModulus ? shearStress(piecePeak[i], seg.diameter, seg.bore) / shearModulus[i] : 0;
+  };
   const out: PieceDamage[] = chain.pieces.map(() => ({ permanentTwist: 0, maxShearStrain: 0, broken: false }));
   chain.elements.forEach((el, e) => {
     const law = laws[e];
-    if (law instanceof ShearPinLaw && law.kind === 'shaft' && law.isParted) {
-      for (const i of el.pieces) out[i].broken = true;
+    if (!(law instanceof PlasticElementLaw)) {
+      for (const i of el.pieces) {
+        out[i].maxShearStrain = Math.max(out[i].maxShearStrain, elasticStrain(i));
+        if (law instanceof ShearPinLaw && law.kind === 'shaft' && law.isParted) out[i].broken = true;
+      }
       return;
     }
-    if (!(law instanceof PlasticElementLaw)) return;
     const b = law.backbone;
     const rates = b.pieceTwistRates(law.peakTwist);
     // The backbone's pieces are the element's pieces of positive length, in order.

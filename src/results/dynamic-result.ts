@@ -2,12 +2,13 @@ import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Case } from '..
 import type { Chain } from '../model/chain.ts';
 import type { ShaftModel, ShaftPiece, SideName } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
-import { shearYield } from '../physics/shear-strength.ts';
+import { verdictShearStrength } from '../physics/shear-strength.ts';
 import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
+import { modeFrequencies, type ModeFrequency } from './mode-convergence.ts';
 import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
 import { yieldPath, type YieldPath } from './yield-path.ts';
 import { runningChecks } from './running-checks.ts';
@@ -79,8 +80,12 @@ export interface DynamicResult {
   converged: boolean;
   /** Natural frequencies with the stop held, Hz, ascending (the lowest ten at most). */
   naturalFrequencies: number[];
-  /** The same modes with their side and their share of the side's energy after an instantaneous stop. */
-  frequencies: { side: SideName; frequency: number; participation: number }[];
+  /**
+   * The same modes with their side, their share of the side's energy after an instantaneous stop,
+   * and whether the element count resolves them (within 1 %, from a chain with twice the elements;
+   * see `modeFrequencies`). Higher modes of a coarse chain are low.
+   */
+  frequencies: ModeFrequency[];
   /** The lowest three modes with their shapes. */
   modes: DynamicMode[];
   pieces: DynamicPiece[];
@@ -133,14 +138,14 @@ export function firstBrokenPiece(d: Pick<DynamicResult, 'pieces'>): DynamicPiece
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
   const solve = solveDynamics(c, model);
   const { chain, modes, run, piecePeak, pieceTime } = solve.final;
-  const damage = dynamicPieceDamage(chain, run.laws, piecePeak);
+  const damage = dynamicPieceDamage(chain, run.laws, piecePeak, chain.pieces.map((p) => c.materials[p.piece.segment.material].shearModulus!));
   const breakTime = (i: number) => run.events.find((e) => e.what === 'breaks' && e.source.kind === 'element' && chain.elements[e.source.index].pieces.includes(i))?.time;
   const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
   const pastYield = plasticLaws.some((l) => l.yielded) || damage.some((d) => d.broken);
   const elasticPeak = pastYield ? elasticPeaks(c, model, solve.target) : piecePeak;
   const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {
     const seg = p.piece.segment;
-    const tauY = shearYield(c.materials[seg.material].yieldStrength!, c.analysis.criterion);
+    const tauY = verdictShearStrength(c.materials[seg.material], c.analysis.criterion);
     const tau = seg.kt * shearStress(elasticPeak[i], seg.diameter, seg.bore);
     const d = damage[i];
     const broke = d.broken ? { breakTime: breakTime(i) } : {};
@@ -180,7 +185,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     refinement: solve.refinement,
     converged: solve.converged,
     naturalFrequencies: modes.slice(0, 10).map((m) => m.frequency),
-    frequencies: modes.slice(0, 10).map((m) => ({ side: m.side, frequency: m.frequency, participation: m.participation })),
+    frequencies: modeFrequencies(c, model, chain, modes.slice(0, 10), solve.target),
     modes: modes.slice(0, 3).map((m) => {
       const idx = chain.nodes.flatMap((n, i) => (n.side === m.side || i === P ? [i] : []));
       return { side: m.side, frequency: m.frequency, participation: m.participation, at: idx.map((i) => chain.nodes[i].at), amplitude: idx.map((i) => m.shape[i]) };
@@ -204,7 +209,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     histories: dynamicHistories(chain, solve.final, slips),
     ...optional('yieldPath', yieldPath(chain, solve.final, pieces.map((p) => p.permanentTwist))),
     assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),
-    notes: [...runningChecks(chain, c.speed), ...solve.notes],
+    notes: [...runningChecks(chain, c.speed), ...solve.notes, ...chain.drives.flatMap((d) => d.warnings)],
   };
 }
 
@@ -235,7 +240,7 @@ function assumptionsOf(c: Case, shaftInertia: boolean, drives: string[]): string
       ? 'The shaft is a chain of lumped inertias joined by torsional springs (k = G·J_p/L per element) that yield as the net section does, elastic–plastic at the shear yield of the criterion, with Masing\'s rule on reversals (analysis.dynamic_plasticity: true); parts count at their station as J·ratio², and gears and couplings are rigid.'
       : 'The shaft is a chain of lumped inertias joined by elastic torsional springs (k = G·J_p/L per element); parts count at their station as J·ratio², and gears and couplings are rigid.',
     shaftInertia ? 'The shaft\'s own inertia is lumped half onto each end of every element.' : 'The shaft\'s own inertia is left out (analysis.shaft_inertia: false).',
-    `Damping is stiffness-proportional, ${(100 * c.analysis.dampingRatio).toPrecision(2)} % of critical in each side's lowest mode${c.analysis.dampingRatio === DEFAULT_DAMPING_RATIO ? ' (the default, a small value typical of steel shafting: material damping of steel is a fraction of a percent, and it is taken low so that the peak and the ringing are not understated)' : ''}; the dashpots take energy but the torques reported are the elastic ones.`,
+    `Damping is stiffness-proportional, ${(100 * c.analysis.dampingRatio).toPrecision(2)} % of critical in each side's lowest mode${c.analysis.dampingRatio === DEFAULT_DAMPING_RATIO ? ' (the default, a small value typical of steel shafting: material damping of steel is a fraction of a percent, and it is taken low so that the peak and the ringing are not understated)' : ''}; the dashpots take energy but the torques reported are the elastic ones. Each dashpot follows its element's tangent stiffness, so a section that flows plastically is damped as little as it is stiff.`,
     c.stop.duration > 0 ? `The stop station's speed falls linearly to zero over ${(c.stop.duration * 1000).toPrecision(3)} ms, then stays at zero.` : 'The stop station\'s speed drops to zero at once and stays there.',
     ...(c.stop.torqueCapacity !== undefined ? [`The jam holds up to ${c.stop.torqueCapacity.toPrecision(4)} N·m and slips with that torque above it (Coulomb).`] : []),
     'Belts, torque limiters and a soft jam stick rigidly until their slip torque is reached, then slip with that torque (Coulomb friction, no difference between static and sliding friction).',

@@ -27,7 +27,7 @@ export interface PlasticPieceResult extends PieceMaterialFacts {
    */
   surfaceOffset: number;
   helixAngle: number;
-  /** Peak state: twist, permanent twist, outer-fibre shear strain, energy, fractured. */
+  /** Peak state: twist, permanent twist (0 for a piece that breaks), outer-fibre shear strain, energy, fractured. */
   state: PieceState;
 }
 
@@ -39,7 +39,7 @@ export interface PlasticSideResult {
   peakTorque: number;
   /** Peak twist of the side's run, rad. */
   totalTwist: number;
-  /** Twist left in the side's run after unloading (at the break: in the pieces as they spring back), rad. */
+  /** Twist left in the side's run after unloading, rad; 0 where the side breaks (its run has parted; the pieces that did not break keep theirs in `pieces`). */
   permanentTwist: number;
   /** Highest outer-fibre shear strain in the run, rad. */
   maxShearStrain: number;

@@ -9,7 +9,8 @@ import { ElasticLaw, type TorqueLaw } from '../physics/torque-law.ts';
  * The numeric system the integrator takes, from a chain: one law per element (elastic shaft, or
  * the law `shaftLaw` gives a plain shaft element — yielding, breaking —, a limiter's slip, a pin's parting), stiffness-proportional damping c = β·k with β = 2ζ/ω₁ per side
  * so that each side's lowest mode has the damping ratio ζ (Rayleigh damping with the mass term
- * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident), and the twist
+ * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident; the stepper
+ * scales each dashpot by its law's tangent over its elastic stiffness, `ChainStepper.dashpot`), and the twist
  * of the running torque, which flows from each drive to the stop.
  */
 export function systemOf(
@@ -29,14 +30,14 @@ export function systemOf(
     else for (let e = P; e < d.node; e++) torque[e] += d.runningTorque;
   }
   const initialTwist = Float64Array.from(chain.elements, (el, e) => torque[e] / el.stiffness);
-  const laws: TorqueLaw[] = chain.elements.map((el, e) => {
-    if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e]);
-    if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
-    return shaftLaw?.(el, initialTwist[e]) ?? new ElasticLaw(el.stiffness);
-  });
   const damping = Float64Array.from(chain.elements, (el) => {
     const w = lowest[el.side];
     return w ? ((2 * dampingRatio) / w) * el.stiffness : 0;
+  });
+  const laws: TorqueLaw[] = chain.elements.map((el, e) => {
+    if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e], damping[e]);
+    if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
+    return shaftLaw?.(el, initialTwist[e]) ?? new ElasticLaw(el.stiffness);
   });
   return {
     inertia: Float64Array.from(chain.nodes, (n) => n.inertia),

@@ -22,8 +22,9 @@ export interface SpeedBand {
   high: number;
   /**
    * `case`: the ± stated on `speed` in the case; `default`: DEFAULT_SPEED_BAND, stated as a default;
-   * `monte-carlo`: the finding was judged by the interval of speeds that explain the measured twist
-   * over the case's tolerances (see `judgeByInterval`).
+   * `monte-carlo`: the band is still the recorded speed's (the case's or the default), and the finding
+   * was judged by whether the interval of speeds that explain the measured twist over the case's
+   * tolerances meets it (see `judgeByInterval`).
    */
   basis: 'case' | 'default' | 'monte-carlo';
 }
@@ -50,6 +51,8 @@ export interface TwistFinding {
   /** At `speedForMeasured` the model predicts fracture (the twist is past the fracture estimate). */
   beyondFracture: boolean;
   finding: TwistFindingCode;
+  /** How the strengths of the shaft between the stations were stated (the words of `meaning` follow it). */
+  strengthBasis: StrengthBasis;
   /** What the finding usually means, in plain words (no numbers: the views add them in the case's units). */
   meaning: string;
   /** The speed → permanent-twist relation between the stations, for the figure. */
@@ -59,7 +62,7 @@ export interface TwistFinding {
 const MEANINGS: Record<TwistFindingCode, string> = {
   consistent: 'The measured twist agrees with the recorded speed within the stated band.',
   more: 'The shaft took more energy than the recorded speed gives: the speed may have been higher than recorded, the drive may have kept pushing through the jam (its torque is not in the energy balance), the shaft may already have been twisted in an earlier event, or the material is weaker than the value used.',
-  less: 'The shaft took less energy than the recorded speed gives: energy was taken elsewhere (belt slip, a torque limiter or shear pin, a hub or key slipping, the jam giving way), or the bar is stronger than the published minimum strength used, as a real bar usually is.',
+  less: 'The shaft took less energy than the recorded speed gives: energy was taken elsewhere (belt slip, a torque limiter or shear pin, a hub or key slipping, the jam giving way), or the bar is stronger than {strength}.',
   no_loaded_shaft: 'No shaft between these stations carries torque in the model (it lies outside every loaded run), so no permanent twist is predicted there; a measured offset points to slip at a fit, a load path the case does not describe, or an earlier event.',
   unexplained: 'No speed leaves this much twist between these stations: a weaker piece elsewhere yields first and shields them (or they never yield). Check the measurement, the stations, and for slip at a fit.',
 };
@@ -67,8 +70,38 @@ const MEANINGS: Record<TwistFindingCode, string> = {
 /** Where the dynamic model, which follows the drive, the slip and the breaks in time, says otherwise. */
 const DYNAMIC_MEANINGS: Partial<Record<TwistFindingCode, string>> = {
   more: 'The shaft took more energy than the recorded speed gives: the speed may have been higher than recorded, the drive may have pushed harder or longer than the case describes, the shaft may already have been twisted in an earlier event, or the material is weaker than the value used.',
-  less: 'The shaft took less energy than the recorded speed gives, even with the slip and the drive the case describes followed in time: energy was taken somewhere the case does not describe (a hub or key slipping, the jam giving way, a belt or limiter slipping sooner than stated), or the bar is stronger than the published minimum strength used, as a real bar usually is.',
+  less: 'The shaft took less energy than the recorded speed gives, even with the slip and the drive the case describes followed in time: energy was taken somewhere the case does not describe (a hub or key slipping, the jam giving way, a belt or limiter slipping sooner than stated), or the bar is stronger than {strength}.',
 };
+
+/**
+ * How the strength the finding used was stated, for the sentence that says the bar may be
+ * stronger: the materials' own `strengthBasis` (a published minimum, which a real bar usually
+ * exceeds; a typical value, a mean that a given bar may exceed or fall short of), or the case's.
+ */
+const STRENGTH_WORDS: Record<StrengthBasis, string> = {
+  minimum: 'the published minimum strength used, as a real bar usually is',
+  typical: 'the typical (mean) strength used: a given bar may be stronger or weaker than the mean',
+  case: 'the strength given in the case',
+  mixed: 'the strengths used (published minima for some materials, typical means or values given in the case for others)',
+};
+
+/** The basis of the strengths of the shaft between two stations (see `STRENGTH_WORDS`). */
+export type StrengthBasis = 'minimum' | 'typical' | 'case' | 'mixed';
+
+function meaningOf(finding: TwistFindingCode, model: TwistRelation['model'], strength: StrengthBasis): string {
+  const text = (model === 'dynamic model' ? DYNAMIC_MEANINGS[finding] : undefined) ?? MEANINGS[finding];
+  return text.replace('{strength}', STRENGTH_WORDS[strength]);
+}
+
+/** The strength basis of the materials of the segments between x1 and x2 (m along the shaft). */
+function strengthBasisBetween(c: Case, x1: number, x2: number): StrengthBasis {
+  const bases = new Set<StrengthBasis>();
+  for (const seg of c.shaft.segments) {
+    if (Math.min(seg.end, x2) - Math.max(seg.start, x1) <= EPS) continue;
+    bases.add(c.materials[seg.material].strengthBasis ?? 'case');
+  }
+  return bases.size === 1 ? [...bases][0] : bases.size === 0 ? 'case' : 'mixed';
+}
 
 /** A twist no speed leaves because the model breaks the shaft before the stations are twisted that far. */
 const PAST_FRACTURE =
@@ -107,7 +140,8 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
     const at = m.between.map((name) => c.stations.find((s) => s.name === name)!.at);
     const rel = relation(Math.min(...at), Math.max(...at));
     const tol = angleTolerance(c, k, m.angle);
-    const base = { measurement: m, angleTolerance: tol, recordedSpeed: c.speed, band };
+    const strengthBasis = strengthBasisBetween(c, Math.min(...at), Math.max(...at));
+    const base = { measurement: m, angleTolerance: tol, recordedSpeed: c.speed, band, strengthBasis };
     if (!rel) {
       const finding: TwistFindingCode = m.angle - tol <= 0 ? 'consistent' : 'no_loaded_shaft';
       return { ...base, model: 'energy balance' as const, predicted: 0, yieldOnsetSpeed: Infinity, speedForMeasured: undefined, speedRange: [undefined, undefined] as [undefined, undefined], energyForMeasured: undefined, beyondFracture: false, finding, meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft, curve: [] };
@@ -135,7 +169,7 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
       // A zero twist's speed is the most that leaves none: no twist to be past the fracture estimate.
       beyondFracture: speed !== undefined && m.angle > 0 && rel.breaksAt(speed),
       finding,
-      meaning: finding === 'unexplained' && rel.breaksBefore(m.angle) ? PAST_FRACTURE : ((rel.model === 'dynamic model' ? DYNAMIC_MEANINGS[finding] : undefined) ?? MEANINGS[finding]),
+      meaning: finding === 'unexplained' && rel.breaksBefore(m.angle) ? PAST_FRACTURE : meaningOf(finding, rel.model, strengthBasis),
       curve: speeds.map((w) => ({ speed: w, permanentTwist: rel.permanentAt(w) })),
     };
   });
@@ -179,12 +213,16 @@ function angleTolerance(c: Case, index: number, angle: number): number {
 
 /**
  * Re-judges a finding where the uncertainty run gives the 5–95 % interval of speeds that explain
- * the measured twist over every stated tolerance: consistent when the recorded speed lies inside
- * it, `more` when the whole interval lies above the recorded speed, `less` when below.
+ * the measured twist over every stated tolerance, by the same rule as `readTwistBack` with that
+ * interval in place of the speeds for the measured angle ∓ its tolerance: consistent when the
+ * interval meets the band on the recorded speed, `more` when it lies wholly above the band, `less`
+ * when wholly below. The band stays the recorded speed's (the case's ± or the default), so a
+ * measurement is judged against the same band with or without the Monte Carlo; only its basis says
+ * that the interval judged it.
  */
 export function judgeByInterval(f: TwistFinding, interval: [number, number] | null): TwistFinding {
   // The uncertainty run samples the energy balance; a finding read through the dynamic model keeps its own band.
   if (interval === null || f.model !== 'energy balance' || f.finding === 'no_loaded_shaft' || f.finding === 'unexplained') return f;
-  const finding: TwistFindingCode = f.recordedSpeed < interval[0] ? 'more' : f.recordedSpeed > interval[1] ? 'less' : 'consistent';
-  return { ...f, finding, meaning: MEANINGS[finding], speedRange: [interval[0], interval[1]], band: { low: f.recordedSpeed, high: f.recordedSpeed, basis: 'monte-carlo' } };
+  const finding: TwistFindingCode = interval[0] > f.band.high ? 'more' : interval[1] < f.band.low ? 'less' : 'consistent';
+  return { ...f, finding, meaning: meaningOf(finding, f.model, f.strengthBasis), speedRange: [interval[0], interval[1]], band: { low: f.band.low, high: f.band.high, basis: 'monte-carlo' } };
 }

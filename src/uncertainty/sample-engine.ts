@@ -2,7 +2,7 @@ import type { Case } from '../case/case.ts';
 import { buildShaftModel } from '../model/shaft-model.ts';
 import { energyMethodSide } from '../physics/energy-method.ts';
 import { speedForPermanentTwist, type ReadBackSide } from '../physics/read-back.ts';
-import { sideEndState } from '../results/analyse-plastic.ts';
+import { sideEndState, sidePermanentTwist } from '../results/analyse-plastic.ts';
 import { sideBalance } from '../results/side-balance.ts';
 import type { Metrics } from './monte-carlo.ts';
 
@@ -30,7 +30,7 @@ export function sampleMetrics(c: Case): Metrics {
     const b = sideBalance(side, c, inertia);
     const { state } = sideEndState(b, e.kineticEnergy);
     peakTorque = Math.max(peakTorque, state.torque);
-    permanentTwist = Math.max(permanentTwist, state.pieces.reduce((s, p) => s + p.permanentTwist, 0));
+    permanentTwist = Math.max(permanentTwist, sidePermanentTwist(state));
     readBack.push({ balance: b.balance, inertia, between: [] });
   }
   const speedsForMeasured = c.observed.permanentTwist.map((m) => {

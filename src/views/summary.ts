@@ -70,7 +70,7 @@ export function renderSummary(r: Investigation): string {
   const out: string[] = [];
   out.push(`${m.id}${m.title ? `  ${m.title}` : ''}`);
   out.push(
-    `Speed at the stop ${show(r.speed, 'speed', u, 4)}; stopped at "${r.case.stop.at}"; shear yield by ${r.case.analysis.criterion === 'max-shear' ? 'maximum shear (0.5·Sy)' : 'distortion energy (0.577·Sy)'}.`,
+    `Speed at the stop ${show(r.speed, 'speed', u, 4)}; stopped at "${r.case.stop.at}"; shear yield by ${r.case.analysis.criterion === 'max-shear' ? 'maximum shear (0.5·Sy)' : 'distortion energy (Sy/√3 ≈ 0.577·Sy)'}.`,
   );
   out.push('', ...findingLines(f, u));
   const pastYield = r.verdictYieldRatio >= 1 || r.yieldRatio >= 1 || r.verdict !== 'elastic';

@@ -37,4 +37,16 @@ describe('chainDrive: a drive as the chain sees it', () => {
     expect(tripped.runningTorque).toBe(0);
     expect(tripped.assumptions.join(' ')).toMatch(/no torque after the stop/);
   });
+
+  it('given only by its power, holds P/ω and warns that this is unconservative (a pulled-down motor gives 2–3 × rated)', () => {
+    // T = P/ω at the motor (shared REFERENCE.md 1.1.9); breakdown torque at least 200 % of rated
+    // for NEMA MG 1 design B (from memory, verify), so P/ω understates a motor pulled down.
+    const rated = chainDrive(station({ speedRatio: 4, rotorParts: [1], power: 6000 }), 0, w);
+    expect(torqueAt(rated.line, 0)).toBeCloseTo((4 * 6000) / (4 * w), 12);
+    expect(rated.warnings).toHaveLength(1);
+    expect(rated.warnings[0]).toMatch(/given only by its power.*unconservative.*2 to 3 times its rated torque.*drive\.torque or drive\.curve/);
+    for (const d of [{ runningTorque: 50 }, { power: 6000, torque: { kind: 'constant' as const, torque: 90 } }, { power: 6000, runningTorque: 50 }, {}]) {
+      expect(chainDrive(station({ speedRatio: 4, rotorParts: [1], ...d }), 0, w).warnings).toEqual([]);
+    }
+  });
 });

@@ -77,3 +77,46 @@ export function odexTorque(s: ChainSpec, times: number[], tol = 1e-11, torque?: 
   solver.solve(f, 0, y0, times[times.length - 1] + dt / 2, solver.grid(dt, record));
   return out.slice(0, times.length);
 }
+
+/**
+ * The reference: a Kelvin–Voigt shaft (spring k with a dashpot c in parallel) in series with a
+ * Coulomb slider of torque T_s, J at its free end, the other end stopped at once from ω0, as
+ * first-order ODEs integrated by odex (a general-purpose extrapolation solver, devDependency; its
+ * dense output locates the switches by bisection). Sticking: Jφ̈ = −(kφ + cφ̇), until kφ + cφ̇ = T_s.
+ * Sliding: Jφ̈ = −T_s and the spring twist x relaxes, kx + cẋ = T_s, until the slider's rate φ̇ − ẋ
+ * is 0. Slip work = T_s·(Δφ − Δx).
+ */
+export function odexSlip(J: number, k: number, c: number, Ts: number, w0: number): { start: number; slipWork: number } {
+  const solver = new Solver(3);
+  solver.absoluteTolerance = solver.relativeTolerance = 1e-12;
+  solver.denseOutput = true;
+  solver.maxSteps = 1e7;
+  const root = (f: (t: number, y: number[]) => number[], y0: number[], g: (y: number[]) => number, tEnd: number, fromZero = false) => {
+    let hit: { t: number; y: number[] } | undefined;
+    let prev = { t: 0, y: y0 };
+    if (!fromZero && g(y0) >= 0) return prev;
+    solver.solve(f, 0, y0, tEnd, (_n, xOld, x, y, dense) => {
+      if (x <= 0 || g(y) < 0) {
+        prev = { t: x, y: [...y] };
+        return true;
+      }
+      let [a, b] = [xOld, x];
+      const at = (t: number) => [0, 1, 2].map((i) => dense!(i, t));
+      for (let i = 0; i < 80; i++) {
+        const m = 0.5 * (a + b);
+        if (g(at(m)) < 0) a = m;
+        else b = m;
+      }
+      hit = { t: b, y: at(b) };
+      return false;
+    });
+    return hit ?? prev;
+  };
+  // Stick: y = [φ, φ̇, unused].
+  const stick = root((_t, y) => [y[1], -(k * y[0] + c * y[1]) / J, 0], [0, w0, 0], (y) => k * y[0] + c * y[1] - Ts, 1);
+  // Slide: y = [φ, φ̇, x], time from the slip's start.
+  const xRate = (y: number[]) => (c > 0 ? (Ts - k * y[2]) / c : 0);
+  const x0 = c > 0 ? stick.y[0] : Ts / k;
+  const slide = root((_t, y) => [y[1], -Ts / J, xRate(y)], [stick.y[0], stick.y[1], x0], (y) => -(y[1] - xRate(y)), 1, true);
+  return { start: stick.t, slipWork: Ts * (slide.y[0] - stick.y[0] - (slide.y[2] - x0)) };
+}

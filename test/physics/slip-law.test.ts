@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { integrateChain } from '../../src/physics/integrate-chain.ts';
 import { SlipLaw } from '../../src/physics/slip-law.ts';
-import { chain } from './chain-fixtures.ts';
+import { chain, odexSlip } from './chain-fixtures.ts';
 
 describe('SlipLaw: a friction torque limiter between the inertia and the jam', () => {
   // Shared REFERENCE.md 10.11 (derived): J = 1 kg·m², ω0 = 50 rad/s, k = 1e5 N·m/rad, T_s = 500 N·m:
@@ -55,5 +55,34 @@ describe('SlipLaw: a friction torque limiter between the inertia and the jam', (
     law.enter(0.003);
     expect(law.slipping).toBe(false);
     expect(law.torque(0.0025)).toBeCloseTo(100 - 1e5 * 0.0005, 9);
+  });
+});
+
+describe('SlipLaw with the shaft dashpot: damping acts on the slip as on a Kelvin–Voigt shaft in series with the slider (odex reference)', () => {
+  const [J, k, Ts, w0] = [1, 1e5, 5000, 50];
+  const wn = Math.sqrt(k / J);
+  const run = (zeta: number) => {
+    const c = ((2 * zeta) / wn) * k;
+    const law = new SlipLaw(k, Ts, 0, c);
+    const r = integrateChain(chain({ J: [0, J], k: [k], speed: w0, laws: [law], c: [c] }), { duration: 0.03, timeStep: 2e-6 });
+    const start = r.events.find((e) => e.what === 'starts to slip')!.time;
+    return { law, r, start, c };
+  };
+
+  for (const zeta of [0, 0.005, 0.05, 0.2]) {
+    it(`at ζ = ${100 * zeta} % starts to slip when odex's reference does and does its slip work within 0.02 %`, () => {
+      const { law, start, c } = run(zeta);
+      const ref = odexSlip(J, k, c, Ts, w0);
+      expect(Math.abs(start - ref.start)).toBeLessThan(1e-8);
+      expect(Math.abs(law.dissipated / ref.slipWork - 1)).toBeLessThan(2e-4);
+    });
+  }
+
+  it('takes less slip work and starts to slip earlier the more it is damped', () => {
+    const runs = [0, 0.005, 0.05, 0.2].map(run);
+    for (let i = 1; i < runs.length; i++) {
+      expect(runs[i].law.dissipated).toBeLessThan(runs[i - 1].law.dissipated);
+      expect(runs[i].start).toBeLessThanOrEqual(runs[i - 1].start);
+    }
   });
 });

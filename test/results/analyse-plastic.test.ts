@@ -57,6 +57,30 @@ describe('analyseCase past yield (Results.plastic)', () => {
     expect(r.plastic.brittleNotes.join(' ')).toMatch(/fractures near its ultimate strength without plastic twist/);
   });
 
+  it('reports no permanent twist for a piece or a side that breaks: its ends have parted', () => {
+    const material = ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa', 'fracture_strain: 0.05'];
+    const side = analyseCase(ep5Case({ speed: '1500 rpm', material })).plastic.sides[0];
+    expect(side.pieces[0].state.fractured).toBe(true);
+    expect(side.pieces[0].state.permanentTwist).toBe(0);
+    expect(side.pieces[0].surfaceOffset).toBe(0);
+    expect(side.permanentTwist).toBe(0);
+    expect(side.totalTwist).toBeGreaterThan(0);
+  });
+
+  it('judges a brittle (gray iron) piece by one criterion: its verdict ratio K_t·τ/S_ut reaches 1 exactly where it is predicted to break', () => {
+    // Maximum normal stress in pure shear: the bar breaks when K_t·τ reaches S_ut, τ = 16T/(πd³)
+    // (Shigley 9th ed. Sec. 3-12 and Sec. 5-8; from memory, confident). Before, the ratio stood on
+    // S_ut/√3 and called a shaft at 0.6–1.0 of its breaking stress "yielded".
+    const material = ['shear_modulus: 41.4 GPa', 'yield_strength: 207 MPa', 'tensile_strength: 207 MPa', 'elongation: 0.5 %'];
+    for (const rpm of [100, 120, 140, 160, 180, 200]) {
+      const r = analyseCase(ep5Case({ speed: `${rpm} rpm`, material }));
+      const tau = (16 * r.sides[0].peakTorque) / (Math.PI * 0.04 ** 3);
+      expect(rel(r.sides[0].pieces[0].yieldRatio, tau / 207e6)).toBeLessThan(1e-9);
+      expect(r.plastic.verdict === 'fracture predicted').toBe(tau >= 207e6);
+      expect(r.verdict).toBe(tau >= 207e6 ? 'fracture predicted' : 'elastic');
+    }
+  });
+
   it('does not apply kt to the net section, and says so', () => {
     const r = analyseCase(ep5Case({ speed: '170 rpm', segments: ['- { length: 500 mm, diameter: 40 mm, kt: 2 }'] }));
     expect(r.elasticVerdict).toBe('yielded');

@@ -130,6 +130,15 @@ describe('the largest shear strain of a piece that stays elastic', () => {
     expect(rel(r.dynamic.pieces[0].maxShearStrain, gamma)).toBeLessThan(0.01);
     expect((resultsToJson(r) as any).dynamic.segments[0].max_shear_strain).toBe(r.dynamic.pieces[0].maxShearStrain);
   });
+
+  it('of a brittle piece that broke is the elastic strain of the torque it broke at, T·c/(G·J_p), not zero', () => {
+    const r = analyseCase(parseCase(ep5('300 rpm', true).replace('aisi-1045-cd', 'gray-iron-30')));
+    const p = r.dynamic.pieces[0];
+    expect(p.broken).toBe(true);
+    const G = r.case.materials['gray-iron-30'].shearModulus!;
+    expect(p.maxShearStrain).toBeGreaterThan(0);
+    expect(rel(p.maxShearStrain, (p.peakTorque * 0.02) / (G * ((Math.PI * 0.04 ** 4) / 32)))).toBeLessThan(1e-9);
+  });
 });
 
 describe('the elastic check of a yielding dynamic model', () => {

@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { polarMoment } from '../../src/physics/torsion.ts';
+import { odexSlip } from '../physics/chain-fixtures.ts';
 
 const fixture = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 'utf8');
 
@@ -142,5 +143,46 @@ stations:
     const peak = (ramp: number) => analyseCase(parseCase(fixture.replace('  at: jam', `  at: jam\n  duration: ${ramp} ms`) + 'analysis: { shaft_inertia: false, damping_ratio: 0 }\n')).dynamic.peakTorque;
     const values = [0, 2, 5, 10, 20, 40].map(peak);
     for (let i = 1; i < values.length; i++) expect(values[i]).toBeLessThan(values[i - 1] * (1 + 1e-6));
+  });
+});
+
+describe('dynamicResult: a torque limiter in a massless shaft, damped', () => {
+  // The reference (test/physics/chain-fixtures.ts `odexSlip`, odex): the elastic shaft with its
+  // dashpot c = 2ζk/ω₁ in parallel, in series with the Coulomb slider, the flywheel at its end.
+  const J = 4;
+  const w0 = (400 * 2 * Math.PI) / 60;
+  const run = (zeta: number) => analyseCase(parseCase(limiterCase('3 kN*m', `analysis: { shaft_inertia: false, damping_ratio: ${zeta} }`)));
+
+  it('slips later, and more, the less it is damped; at ζ = 0, 0.5 %, 5 %, 20 % its slip energy and start are odex\'s within 0.1 %', () => {
+    const runs = [0, 0.005, 0.05, 0.2].map((z) => ({ z, r: run(z) }));
+    for (const { z, r } of runs) {
+      const k = 1 / r.sides[0].compliance;
+      const ref = odexSlip(J, k, ((2 * z) / Math.sqrt(k / J)) * k, 3000, w0);
+      const slip = r.dynamic.slips.find((s) => s.kind === 'torque limiter')!;
+      expect(Math.abs(slip.energy / ref.slipWork - 1)).toBeLessThan(1e-3);
+      expect(Math.abs(slip.firstSlip! - ref.start)).toBeLessThan(1e-3 * ref.start + 1e-9);
+    }
+    for (let i = 1; i < runs.length; i++) {
+      const [a, b] = [runs[i - 1].r, runs[i].r].map((r) => r.dynamic.slips.find((s) => s.kind === 'torque limiter')!);
+      expect(b.energy).toBeLessThan(a.energy);
+      expect(b.firstSlip!).toBeLessThan(a.firstSlip!);
+    }
+  });
+
+  it('reports each segment\'s largest shear strain, the elastic one of the slip torque: T·c/(G·J_p) (Shigley 9th ed. Sec. 3-12)', () => {
+    const c = parseCase(limiterCase('3 kN*m'));
+    const r = analyseCase(c);
+    const G = c.materials['aisi-4140-qt540'].shearModulus!;
+    const expected = [0.06, 0.05].map((d) => (r.dynamic.pieces[0].peakTorque * (d / 2)) / (G * polarMoment(d)));
+    expect(r.dynamic.pieces.map((p) => p.maxShearStrain)).toEqual(expected.map((e) => expect.closeTo(e, 12)));
+    expect(Math.abs(r.dynamic.pieces[0].peakTorque / 3000 - 1)).toBeLessThan(1e-6);
+  });
+});
+
+describe('a drive given only by its power', () => {
+  it('puts its warning in Results.warnings (the screw-conveyor sample: drive: { power: 15 hp })', () => {
+    const r = analyseCase(parseCase(readFileSync(new URL('../../sample-cases/screw-conveyor-jam-us.yaml', import.meta.url), 'utf8')));
+    expect(r.verdictBasis).toBe('dynamic model');
+    expect(r.warnings.filter((w) => /given only by its power.*unconservative/.test(w))).toHaveLength(1);
   });
 });

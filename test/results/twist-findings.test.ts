@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseCase } from '../../src/results/analyse-case.ts';
+import { investigate } from '../../src/results/investigate.ts';
 import { DEFAULT_SPEED_BAND, readTwistBack, type TwistRelation } from '../../src/results/twist-findings.ts';
 import { ep5Case } from '../data/ep5-case.ts';
 
@@ -145,5 +146,61 @@ describe('readTwistBack on any model\'s relation', () => {
     const [f] = readTwistBack(c, () => rel);
     expect(f.speedForMeasured).toBe(10);
     expect(f.beyondFracture).toBe(false);
+  });
+});
+
+describe('judgeByInterval: the Monte Carlo judges against the recorded speed\'s band, as the single run does', () => {
+  it('a twist whose speed lies inside the default ±10 % band is consistent with --samples 0 and with the Monte Carlo alike', () => {
+    // The measured 2.6° needs ω_m from the hand read-back (ep5SpeedFor: shared REFERENCE.md 3.1.6
+    // and 3.1.9, derived from Beer & Johnston Sec. 3.9–3.11); the recorded speed is set 5 % below
+    // it, inside the default band, with a small ± on the angle so the case asks for the Monte Carlo.
+    const wm = ep5SpeedFor((2.6 * Math.PI) / 180);
+    const recorded = ((wm / 1.05) * 60) / (2 * Math.PI);
+    const c = ep5Case({ speed: `${recorded} rpm`, observed: between(2.6, ' ± 0.05 deg'), analysis: ['strength_scatter: 0 %'] });
+    const single = investigate(c, { samples: 0 }).observedFindings.twist[0];
+    const sampled = investigate(c, { samples: 200 });
+    const f = sampled.observedFindings.twist[0];
+    const [lo, hi] = sampled.uncertainty!.observed[0].speedInterval!;
+    expect(lo).toBeGreaterThan(rpm(recorded));
+    expect(lo).toBeLessThan(single.band.high);
+    expect(Math.abs(single.speedForMeasured! / wm - 1)).toBeLessThan(0.005);
+    expect(single.finding).toBe('consistent');
+    expect(f.finding).toBe('consistent');
+    expect([f.band.low, f.band.high]).toEqual([single.band.low, single.band.high]);
+    expect(f.band.high - f.band.low).toBeCloseTo(2 * DEFAULT_SPEED_BAND * rpm(recorded), 9);
+  });
+
+  it('a twist that needs a speed above the band is "more" either way', () => {
+    const wm = ep5SpeedFor((2.6 * Math.PI) / 180);
+    const recorded = ((wm / 1.3) * 60) / (2 * Math.PI);
+    const c = ep5Case({ speed: `${recorded} rpm`, observed: between(2.6, ' ± 0.05 deg'), analysis: ['strength_scatter: 0 %'] });
+    expect(investigate(c, { samples: 0 }).observedFindings.twist[0].finding).toBe('more');
+    expect(investigate(c, { samples: 200 }).observedFindings.twist[0].finding).toBe('more');
+  });
+});
+
+describe('the words of a "less" finding follow the material\'s strength basis', () => {
+  const steel = ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa', 'tensile_strength: 630 MPa', 'elongation: 12 %', 'reduction_of_area: 35 %', 'density: 7850 kg/m^3'];
+  const less = (basis?: string, analysis?: string[]) =>
+    investigate(ep5Case({ observed: between(0.3, ' ± 0.05 deg'), material: basis ? [...steel, `strength_basis: ${basis}`] : steel, ...(analysis ? { analysis } : {}) }), { samples: 50 }).observedFindings.twist[0];
+
+  it('typical, with 0 % scatter: the mean strength, not a published minimum (with the Monte Carlo too)', () => {
+    const f = less('typical', ['strength_scatter: 0 %']);
+    expect(f.finding).toBe('less');
+    expect(f.strengthBasis).toBe('typical');
+    expect(f.meaning).toMatch(/typical \(mean\) strength used/);
+    expect(f.meaning).not.toMatch(/published minimum/);
+  });
+
+  it('minimum: the published minimum strength, which a real bar usually exceeds', () => {
+    const f = less('minimum');
+    expect(f.meaning).toMatch(/published minimum strength used, as a real bar usually is/);
+  });
+
+  it('no basis stated: the strength given in the case', () => {
+    const f = less();
+    expect(f.strengthBasis).toBe('case');
+    expect(f.meaning).toMatch(/the strength given in the case/);
+    expect(f.meaning).not.toMatch(/published minimum/);
   });
 });
