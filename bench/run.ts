@@ -2,6 +2,7 @@
 // second (same step, so the step count is equal and time per element-step shows the growth), then
 // times a general-purpose solver (odex, Gragg–Bulirsch–Stoer) on the 10-element chain to the same
 // accuracy, both measured against the chain's exact modal solution. Not a test: no assertions.
+import { benchChance } from './chance-bench.ts';
 import { benchPastYield } from './past-yield-bench.ts';
 import { benchUncertainty } from './uncertainty-bench.ts';
 import { Solver } from './odex-solver.ts';
@@ -123,4 +124,5 @@ console.log(`  odex tolerances tried, loosest first: ${sweep.join('; ')}.`);
 console.log('  (odex is explicit: its step is held down by the stiffest element at any tolerance, so it is slow even where it is loose.)');
 
 for (const line of benchUncertainty()) console.log(line);
+for (const line of benchChance()) console.log(line);
 for (const line of benchPastYield()) console.log(line);

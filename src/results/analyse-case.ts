@@ -22,6 +22,13 @@ export interface AnalyseOptions {
    * observations and would otherwise pay for the dynamic model's inversion).
    */
   readBack?: boolean;
+  /**
+   * The dynamic model's shaft elements, fixed at this count instead of refined (as
+   * `analysis.elements` would): a Monte Carlo sample takes the base run's `dynamic.elementTarget`
+   * rather than paying for a refinement of its own, since its inputs move the peaks by far less
+   * than the refinement tolerance moves them.
+   */
+  elements?: number;
 }
 
 const LOCAL_YIELD = 'The net section stays elastic, but the stress at a stress raiser (kt) passes yield: local yielding there, no measurable permanent twist; the spot matters for fatigue.';
@@ -31,7 +38,7 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
   const model = buildShaftModel(c);
   const warnings: string[] = [];
   const sides = model.sides.map((side) => energyMethodSide(side, c.speed, c.materials, c.analysis.criterion));
-  const dynamic = dynamicResult(c, model, sides);
+  const dynamic = dynamicResult(opts.elements === undefined ? c : { ...c, analysis: { ...c.analysis, elements: opts.elements } }, model, sides);
   const basis = verdictBasis(c, sides);
 
   for (const s of model.atStop) {

@@ -29,9 +29,12 @@ export function metricsOf(r: Results): Metrics {
   };
 }
 
-/** A dynamic-model sample: the verdict's stress / shear yield, the dynamic peak torque and stress. */
-export function dynamicMetrics(k: Case): Metrics {
-  const r = analyseCase(k, { readBack: false });
+/**
+ * A dynamic-model sample: the verdict's yield ratio, the dynamic peak torque and stress; `elements`
+ * fixes the dynamic model's element count (the base run's, so a sample pays for no refinement).
+ */
+export function dynamicMetrics(k: Case, elements?: number): Metrics {
+  const r = analyseCase(k, { readBack: false, ...(elements === undefined ? {} : { elements }) });
   return { yieldRatio: r.verdictYieldRatio, maxShearStress: r.dynamic.maxShearStress, peakTorque: r.dynamic.peakTorque };
 }
 
@@ -47,7 +50,9 @@ export function investigate(c: Case, opts: InvestigateOptions = {}): Results {
   const settings = { samples, seed: opts.seed ?? u.seed, strengthScatter: u.strengthScatter };
   const uncertainty = runUncertainty(c, sampleMetrics, settings);
   if (results.verdictBasis === 'dynamic model' && u.dynamicSamples > 0) {
-    uncertainty.dynamic = runDynamicUncertainty(c, dynamicMetrics, { ...settings, samples: u.dynamicSamples }, opts.onDynamicProgress);
+    const elements = results.dynamic.elementTarget;
+    const engine = (k: Case) => dynamicMetrics(k, elements);
+    uncertainty.dynamic = runDynamicUncertainty(c, engine, { ...settings, samples: u.dynamicSamples }, uncertainty.yieldRatioSamples, opts.onDynamicProgress);
   }
   if (results.pastYieldBasis === 'dynamic model' && uncertainty.observed.length > 0) {
     // The sampler runs the energy balance; its speeds behind a measured twist are not the dynamic

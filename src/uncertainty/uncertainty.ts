@@ -1,4 +1,5 @@
 import type { Case } from '../case/case.ts';
+import { controlVariateChance, monteCarloChance, type ChanceEstimate } from './chance.ts';
 import { uncertainInputs, type SpreadBasis } from './inputs.ts';
 import { monteCarlo, type Engine } from './monte-carlo.ts';
 import { p5p50p95 } from './percentiles.ts';
@@ -20,8 +21,10 @@ export interface Uncertainty {
   inputs: { path: string; mean: number; sd: number; basis: SpreadBasis }[];
   /** Toleranced fields the Monte Carlo does not vary (lengths, positions). */
   notVaried: string[];
-  /** Share of samples whose stress / shear yield is 1 or more. */
+  /** Share of samples whose yield ratio is 1 or more (`yieldChance.probability`). */
   yieldProbability: number;
+  /** The energy method's chance of a yield ratio of 1 or more, from its samples, with its 95 % interval. */
+  yieldChance: ChanceEstimate;
   percentiles: {
     yieldRatio: [number, number, number];
     maxShearStress: [number, number, number];
@@ -47,23 +50,39 @@ export interface Uncertainty {
 
 export interface DynamicUncertainty {
   samples: number;
-  /** Share of samples whose peak stress / shear yield over the window is 1 or more. */
+  /** The dynamic model's chance of a peak yield ratio of 1 or more (`yieldChance.probability`). */
   yieldProbability: number;
+  /**
+   * The dynamic model's chance of a peak yield ratio of 1 or more over the window, with its 95 %
+   * interval: its own samples, corrected by the energy method's samples of the same draws where
+   * there are more of those (`controlVariateChance`).
+   */
+  yieldChance: ChanceEstimate;
   percentiles: { yieldRatio: [number, number, number]; peakTorque: [number, number, number]; maxShearStress: [number, number, number] };
 }
 
 /**
  * The dynamic model's share of the uncertainty run: the case's inputs drawn `samples` times (same
  * seed as the main run) through `engine`; `onProgress(done, total)` lets a terminal show progress.
+ * `control`: the energy method's yield ratios from the main run (`Uncertainty.yieldRatioSamples`,
+ * same case, seed and strength scatter, so its first `samples` are the same draws, as `monteCarlo`
+ * draws each sample's inputs in turn from one seeded stream); its chance then helps the dynamic
+ * model's. Without it, the chance is the plain share.
  */
-export function runDynamicUncertainty(c: Case, engine: Engine, opts: UncertaintyOptions, onProgress?: (done: number, total: number) => void): DynamicUncertainty {
+export function runDynamicUncertainty(
+  c: Case,
+  engine: Engine,
+  opts: UncertaintyOptions,
+  control?: Float64Array,
+  onProgress?: (done: number, total: number) => void,
+): DynamicUncertainty {
   const { inputs } = uncertainInputs(c, opts.strengthScatter);
   const s = monteCarlo(c, inputs, engine, opts.samples, opts.seed, onProgress);
-  let yielded = 0;
-  for (const y of s.yieldRatio) if (y >= 1) yielded++;
+  const yieldChance = control ? controlVariateChance(s.yieldRatio, control) : monteCarloChance(s.yieldRatio);
   return {
     samples: opts.samples,
-    yieldProbability: yielded / opts.samples,
+    yieldProbability: yieldChance.probability,
+    yieldChance,
     percentiles: { yieldRatio: p5p50p95(s.yieldRatio), peakTorque: p5p50p95(s.peakTorque), maxShearStress: p5p50p95(s.maxShearStress) },
   };
 }
@@ -76,15 +95,15 @@ export function runDynamicUncertainty(c: Case, engine: Engine, opts: Uncertainty
 export function runUncertainty(c: Case, engine: Engine, opts: UncertaintyOptions): Uncertainty {
   const { inputs, notVaried } = uncertainInputs(c, opts.strengthScatter);
   const s = monteCarlo(c, inputs, engine, opts.samples, opts.seed);
-  let yielded = 0;
-  for (const y of s.yieldRatio) if (y >= 1) yielded++;
+  const yieldChance = monteCarloChance(s.yieldRatio);
   return {
     samples: opts.samples,
     seed: opts.seed,
     strengthScatter: opts.strengthScatter,
     inputs: inputs.map((i) => ({ path: i.path, mean: i.spread.mean, sd: i.spread.sd, basis: i.basis })),
     notVaried,
-    yieldProbability: yielded / opts.samples,
+    yieldProbability: yieldChance.probability,
+    yieldChance,
     percentiles: {
       yieldRatio: p5p50p95(s.yieldRatio),
       maxShearStress: p5p50p95(s.maxShearStress),

@@ -56,8 +56,11 @@ export function chanceSentence(f: Finding): string | undefined {
   const c = f.chance;
   if (!c) return undefined;
   const pct = (p: number) => `${sig(100 * p, 2)} %`;
-  const interval = c.interval ? ` (95 % interval ${pct(c.interval[0])} to ${pct(c.interval[1])})` : '';
-  const how = c.method === 'control-variates' ? `from ${c.runs} runs of the ${c.model}, corrected by the energy method's samples (control variates)` : `from ${c.runs} runs of the ${c.model}`;
+  const interval = ` (95 % interval ${pct(c.interval[0])} to ${pct(c.interval[1])})`;
+  const how =
+    c.method === 'control-variates'
+      ? `from ${c.runs} runs of the ${c.model}, corrected by ${c.controlSamples} energy-method samples of the same draws (control variates)`
+      : `the share of ${c.runs} runs of the ${c.model} that reach it`;
   return `Chance of yield under the case's tolerances: ${pct(c.probability)}${interval}, ${how}.`;
 }
 

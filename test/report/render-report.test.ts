@@ -59,7 +59,7 @@ describe('renderReport', () => {
       // figures (as a comparison), the incident's date, the machine's or the material's name.
       const finding = [show(f.elasticPeakTorque, 'torque', u), f.permanentTwist === undefined ? '' : show(f.permanentTwist, 'angle', u), sig((f.breakTime ?? 0) * 1000), `kt ${sig(f.piece.segment.kt)}`];
       const comparison = r.sides.map((s) => show(s.peakTorque, 'torque', u));
-      const chance = f.chance ? [sig(100 * f.chance.probability, 2), String(f.chance.runs), ...(f.chance.interval ?? []).map((x) => sig(100 * x, 2))] : [];
+      const chance = f.chance ? [sig(100 * f.chance.probability, 2), String(f.chance.runs), String(f.chance.controlSamples ?? ''), ...f.chance.interval.map((x) => sig(100 * x, 2))] : [];
       const context = [f.basisReason, f.disposition, r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[f.piece.segment.material].name, String(r.warnings.length)];
       const allowed = new Set([...expected, ...finding, ...comparison, ...chance, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
       for (const n of summary.replace(/side [AB]/g, '').replace(/95 % interval/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the summary`).toContain(n);

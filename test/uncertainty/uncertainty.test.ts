@@ -3,7 +3,10 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { investigate } from '../../src/results/investigate.ts';
-import { strengthSpread } from '../../src/uncertainty/inputs.ts';
+import { monteCarloChance } from '../../src/uncertainty/chance.ts';
+import { strengthSpread, uncertainInputs } from '../../src/uncertainty/inputs.ts';
+import { monteCarlo } from '../../src/uncertainty/monte-carlo.ts';
+import { sampleMetrics } from '../../src/uncertainty/sample-engine.ts';
 
 const fixture = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 'utf8');
 const withSpeed = (band: string, extra = '') => fixture.replace('speed: 150 rpm', `speed: 150 rpm ± ${band}`) + extra;
@@ -59,5 +62,27 @@ describe('how sure the finding is', () => {
   it('no tolerance, no uncertainty run; --samples 0 switches it off', () => {
     expect(investigate(parseCase(fixture)).uncertainty).toBeUndefined();
     expect(investigate(parseCase(withSpeed('3 %')), { samples: 0 }).uncertainty).toBeUndefined();
+  });
+});
+
+describe('the chance of yield from the samples', () => {
+  it('is the share of samples at 1 or more, with its Wilson interval, and yieldProbability is its point', () => {
+    const u = investigate(parseCase(withSpeed('6 %', 'analysis:\n  samples: 3000\n'))).uncertainty!;
+    expect(u.yieldChance).toEqual(monteCarloChance(u.yieldRatioSamples));
+    expect(u.yieldProbability).toBe(u.yieldChance.probability);
+  });
+
+  it('the first M samples of a run of N are the M samples of a run of M with the same seed (so the dynamic runs pair with them)', () => {
+    const c = parseCase(withSpeed('6 %', 'analysis:\n  samples: 10\n'));
+    const { inputs } = uncertainInputs(c, 0.07);
+    expect(inputs.length).toBe(2); // speed and yield strength: an even count of draws per sample
+    const odd = parseCase(withSpeed('6 %', 'analysis:\n  samples: 10\n').replace('      diameter: 50 mm', '      diameter: 50 mm ± 0.1 mm'));
+    for (const k of [c, odd]) {
+      const ins = uncertainInputs(k, 0.07).inputs;
+      const long = monteCarlo(k, ins, sampleMetrics, 500, 9);
+      const short = monteCarlo(k, ins, sampleMetrics, 37, 9);
+      expect(short.yieldRatio).toEqual(long.yieldRatio.subarray(0, 37));
+    }
+    expect(uncertainInputs(odd, 0.07).inputs.length).toBe(3);
   });
 });
