@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { parseCase } from '../src/case/parse-case.ts';
-import { dynamicMetrics, investigate } from '../src/results/investigate.ts';
+import { dynamicMetrics, investigate } from '../src/finding/investigate.ts';
 import { controlVariateChance } from '../src/uncertainty/chance.ts';
 import { uncertainInputs } from '../src/uncertainty/inputs.ts';
 import { monteCarlo } from '../src/uncertainty/monte-carlo.ts';

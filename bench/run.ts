@@ -6,9 +6,9 @@ import { benchChance } from './chance-bench.ts';
 import { benchPastYield } from './past-yield-bench.ts';
 import { benchUncertainty } from './uncertainty-bench.ts';
 import { Solver } from './odex-solver.ts';
-import { integrateChain } from '../src/physics/integrate-chain.ts';
+import { integrateChain } from '../src/physics/integrator/integrate-chain.ts';
 import { chainModes } from '../src/physics/modes.ts';
-import type { ChainSystem } from '../src/physics/chain-system.ts';
+import type { ChainSystem } from '../src/physics/integrator/chain-system.ts';
 import { uniformChain } from './uniform-chain.ts';
 
 const WINDOW = 1;

@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { parseCase } from '../src/case/parse-case.ts';
-import { investigate } from '../src/results/investigate.ts';
+import { investigate } from '../src/finding/investigate.ts';
 
 /** Times the Monte Carlo on a sample case with tolerances: samples through the same engine as `check`. */
 export function benchUncertainty(): string[] {

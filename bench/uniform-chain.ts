@@ -1,4 +1,4 @@
-import type { ChainSystem } from '../src/physics/chain-system.ts';
+import type { ChainSystem } from '../src/physics/integrator/chain-system.ts';
 import { ElasticLaw } from '../src/physics/torque-law.ts';
 import { polarMoment } from '../src/physics/torsion.ts';
 

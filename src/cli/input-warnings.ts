@@ -2,7 +2,7 @@ import { CaseError } from '../case/case-error.ts';
 import { checkPlausibility, formatInputWarning } from '../case/plausibility.ts';
 import type { LoadedCase } from '../io/load-case.ts';
 import type { InputWarnings } from '../results/input-warnings.ts';
-import type { Io } from './main.ts';
+import type { Io } from './io.ts';
 
 /**
  * The loaded case's plausibility warnings, before the engine runs: printed on stderr one line each

@@ -5,12 +5,9 @@ import { materialsCommand } from './commands/materials.ts';
 import { newCommand } from './commands/new.ts';
 import { resizeCommand } from './commands/resize.ts';
 import { version } from './version.ts';
+import type { Io } from './io.ts';
 
-/** Output channel of a command, so tests can run commands without a terminal. */
-export interface Io {
-  out: (text: string) => void;
-  err: (text: string) => void;
-}
+export type { Io } from './io.ts';
 
 /** Parses a whole-number option; commander reports the error and exits 2. */
 function wholeNumber(value: string): number {

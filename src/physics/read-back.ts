@@ -1,4 +1,4 @@
-import type { PlasticBalance } from './plastic-balance.ts';
+import type { PlasticBalance } from './plastic/plastic-balance.ts';
 import { bracketedRoot, growUntil } from './root-find.ts';
 
 /**

@@ -1,8 +1,7 @@
 import type { Case } from '../case/case.ts';
 import { resizeCase } from '../resize/resize-case.ts';
-import { withFinding } from '../finding/investigation.ts';
 import type { InputWarnings } from '../results/input-warnings.ts';
-import { investigate } from '../results/investigate.ts';
+import { investigate } from '../finding/investigate.ts';
 import type { ReportData } from './report-context.ts';
 
 /** Overrides from the command line, as `check` and `resize` take them. */
@@ -24,6 +23,6 @@ export interface ReportDataOptions {
  * (`resize`'s). Pure; the report's sections and figures only read it.
  */
 export function buildReportData(c: Case, opts: ReportDataOptions = {}): ReportData {
-  const results = withFinding(investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress, inputWarnings: opts.inputWarnings }));
+  const results = investigate(c, { samples: opts.samples, seed: opts.seed, onDynamicProgress: opts.onDynamicProgress, inputWarnings: opts.inputWarnings });
   return { results, resize: resizeCase(c, results, { factor: opts.factor }) };
 }

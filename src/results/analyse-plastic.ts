@@ -1,7 +1,7 @@
 import type { Case } from '../case/case.ts';
 import type { Side } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
-import { energyPerLength, plasticTorque, torqueAtTwistRate, yieldTorque, yieldTwistRate } from '../physics/plastic-torsion.ts';
+import { energyPerLength, plasticTorque, torqueAtTwistRate, yieldTorque, yieldTwistRate } from '../physics/plastic/plastic-torsion.ts';
 import type { MostStrained, PlasticPieceResult, PlasticResult, PlasticSideResult, PlasticVerdict } from './plastic-result.ts';
 import { sideBalance, type SideBalance } from './side-balance.ts';
 

@@ -1,6 +1,6 @@
 import type { Chain } from '../model/chain.ts';
-import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
-import { residualTwistRate, rigidity } from '../physics/plastic-torsion.ts';
+import { PlasticElementLaw } from '../physics/plastic/plastic-element-law.ts';
+import { residualTwistRate, rigidity } from '../physics/plastic/plastic-torsion.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import type { TorqueLaw } from '../physics/torque-law.ts';
 import { shearStress } from '../physics/torsion.ts';

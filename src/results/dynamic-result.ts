@@ -5,7 +5,7 @@ import type { SideResult } from '../physics/energy-method.ts';
 import { verdictShearStrength } from '../physics/shear-strength.ts';
 import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
-import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
+import { PlasticElementLaw } from '../physics/plastic/plastic-element-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
 import { modeFrequencies, type ModeFrequency } from './mode-convergence.ts';

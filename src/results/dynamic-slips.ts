@@ -1,6 +1,6 @@
 import type { Case } from '../case/case.ts';
 import type { Chain } from '../model/chain.ts';
-import type { IntegrationResult } from '../physics/integrate-chain.ts';
+import type { IntegrationResult } from '../physics/integrator/integrate-chain.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { SlipLaw } from '../physics/slip-law.ts';
 

@@ -2,7 +2,7 @@ import { DEFAULT_DYNAMIC_PLASTICITY, type Case } from '../case/case.ts';
 import { buildChain, type Chain } from '../model/chain.ts';
 import { sideModes, type SideMode } from '../model/chain-modes.ts';
 import type { ShaftModel, SideName } from '../model/shaft-model.ts';
-import { integrateChain, type IntegrationResult } from '../physics/integrate-chain.ts';
+import { integrateChain, type IntegrationResult } from '../physics/integrator/integrate-chain.ts';
 import { shaftElementLaw } from './shaft-element-law.ts';
 import { systemOf } from './system-of-chain.ts';
 

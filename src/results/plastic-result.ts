@@ -1,5 +1,5 @@
 import type { ShaftPiece, SideName } from '../model/shaft-model.ts';
-import type { PieceState } from '../physics/plastic-balance.ts';
+import type { PieceState } from '../physics/plastic/plastic-balance.ts';
 import type { PieceMaterialFacts } from './side-balance.ts';
 
 /** Net-section verdict of the energy balance past yield. */

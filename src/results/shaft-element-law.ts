@@ -1,8 +1,8 @@
 import type { Case } from '../case/case.ts';
 import type { Chain, ChainElement } from '../model/chain.ts';
 import { brittleFractureShear, fractureShearStrain, isBrittle } from '../physics/fracture.ts';
-import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
-import { SeriesBackbone, type SeriesPiece } from '../physics/series-backbone.ts';
+import { PlasticElementLaw } from '../physics/plastic/plastic-element-law.ts';
+import { SeriesBackbone, type SeriesPiece } from '../physics/plastic/series-backbone.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import type { TorqueLaw } from '../physics/torque-law.ts';
 import { shearStress } from '../physics/torsion.ts';

@@ -1,10 +1,10 @@
 import type { Case, Segment } from '../case/case.ts';
 import type { Side } from '../model/shaft-model.ts';
 import { brittleFractureShear, fractureShearStrain, isBrittle } from '../physics/fracture.ts';
-import { PlasticBalance, type BalancePiece } from '../physics/plastic-balance.ts';
-import type { TorsionLaw } from '../physics/plastic-torsion.ts';
+import { PlasticBalance, type BalancePiece } from '../physics/plastic/plastic-balance.ts';
+import type { TorsionLaw } from '../physics/plastic/plastic-torsion.ts';
 import { shearYield } from '../physics/shear-strength.ts';
-import { linearHardeningModulus } from '../physics/strain-hardening.ts';
+import { linearHardeningModulus } from '../physics/plastic/strain-hardening.ts';
 
 /**
  * A ductile segment's torque–twist law for the time-domain model, as the energy balance and the time-domain

@@ -1,6 +1,6 @@
 import type { Chain, ChainElement } from '../model/chain.ts';
 import type { SideName } from '../model/shaft-model.ts';
-import type { ChainSystem } from '../physics/chain-system.ts';
+import type { ChainSystem } from '../physics/integrator/chain-system.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { SlipLaw } from '../physics/slip-law.ts';
 import { ElasticLaw, type TorqueLaw } from '../physics/torque-law.ts';

@@ -1,5 +1,5 @@
 import type { Chain } from '../model/chain.ts';
-import { PlasticElementLaw } from '../physics/plastic-element-law.ts';
+import { PlasticElementLaw } from '../physics/plastic/plastic-element-law.ts';
 import type { ChainSolution } from './dynamic-solve.ts';
 
 /** The torque–twist path of one piece over the window, sampled as the histories are. */

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { PlasticBalance, type BalancePiece } from '../../src/physics/plastic-balance.ts';
-import { rigidity, yieldTorque, type TorsionLaw } from '../../src/physics/plastic-torsion.ts';
+import { PlasticBalance, type BalancePiece } from '../../src/physics/plastic/plastic-balance.ts';
+import { rigidity, yieldTorque, type TorsionLaw } from '../../src/physics/plastic/plastic-torsion.ts';
 import { energyAtSpeed, onsetSpeed, permanentTwistAtSpeed, speedForPermanentTwist, type ReadBackSide } from '../../src/physics/read-back.ts';
 
 const law = (c2: number, c1: number, tauY: number, h = 0): TorsionLaw => ({ outerRadius: c2, innerRadius: c1, shearModulus: 79.3e9, shearYield: tauY, hardeningModulus: h });

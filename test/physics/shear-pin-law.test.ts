@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { integrateChain } from '../../src/physics/integrate-chain.ts';
+import { integrateChain } from '../../src/physics/integrator/integrate-chain.ts';
 import { ShearPinLaw } from '../../src/physics/shear-pin-law.ts';
-import { chain } from './chain-fixtures.ts';
+import { chain } from './integrator/chain-fixtures.ts';
 
 describe('ShearPinLaw: a pin that parts and then carries nothing', () => {
   it('parts when the torque reaches its setting, located in time, and the inertia runs on with the rest of its energy', () => {

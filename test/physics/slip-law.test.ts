@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { integrateChain } from '../../src/physics/integrate-chain.ts';
+import { integrateChain } from '../../src/physics/integrator/integrate-chain.ts';
 import { SlipLaw } from '../../src/physics/slip-law.ts';
-import { chain, odexSlip } from './chain-fixtures.ts';
+import { chain, odexSlip } from './integrator/chain-fixtures.ts';
 
 describe('SlipLaw: a friction torque limiter between the inertia and the jam', () => {
   // Shared REFERENCE.md 10.11 (derived): J = 1 kg·m², ω0 = 50 rad/s, k = 1e5 N·m/rad, T_s = 500 N·m:

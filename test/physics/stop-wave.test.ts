@@ -1,9 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { integrateChain } from '../../src/physics/integrate-chain.ts';
+import { integrateChain } from '../../src/physics/integrator/integrate-chain.ts';
 import { stopWaveTorque } from '../../src/physics/stop-wave.ts';
 import { polarMoment } from '../../src/physics/torsion.ts';
-import { chain } from './chain-fixtures.ts';
+import { chain } from './integrator/chain-fixtures.ts';
 
 describe('stopWaveTorque: the torsional stress wave of a sudden stop', () => {
   it('is the torque behind the front in a long lumped shaft stopped at once at one end, found by integrating the chain', () => {

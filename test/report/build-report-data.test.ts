@@ -2,8 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { buildReportData } from '../../src/report/build-report-data.ts';
-import { investigate } from '../../src/results/investigate.ts';
-import { withFinding } from '../../src/finding/investigation.ts';
+import { investigate } from '../../src/finding/investigate.ts';
 import { resizeCase } from '../../src/resize/resize-case.ts';
 import { TOLERANCED_SAMPLE } from './report-fixtures.ts';
 
@@ -12,7 +11,7 @@ describe('buildReportData', () => {
 
   it('buildReportData gives the results of investigate and the resize of those very results', () => {
     const data = buildReportData(c, { samples: 1500, seed: 3, factor: 2 });
-    expect(data.results).toEqual(withFinding(investigate(c, { samples: 1500, seed: 3 })));
+    expect(data.results).toEqual(investigate(c, { samples: 1500, seed: 3 }));
     expect(data.results.uncertainty).toMatchObject({ samples: 1500, seed: 3 });
     expect(data.resize.results).toBe(data.results);
     expect(data.resize.designFactor).toBe(2);

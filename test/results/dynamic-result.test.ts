@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { polarMoment } from '../../src/physics/torsion.ts';
-import { odexSlip } from '../physics/chain-fixtures.ts';
+import { odexSlip } from '../physics/integrator/chain-fixtures.ts';
 
 const fixture = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 'utf8');
 

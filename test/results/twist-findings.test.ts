@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseCase } from '../../src/results/analyse-case.ts';
-import { investigate } from '../../src/results/investigate.ts';
+import { investigate } from '../../src/finding/investigate.ts';
 import { DEFAULT_SPEED_BAND, readTwistBack, type TwistRelation } from '../../src/results/twist-findings.ts';
 import { ep5Case } from '../data/ep5-case.ts';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { dynamicMetrics, investigate } from '../../src/results/investigate.ts';
+import { dynamicMetrics, investigate } from '../../src/finding/investigate.ts';
 import { runDynamicUncertainty } from '../../src/uncertainty/uncertainty.ts';
 import { rampedOneDisc } from '../helpers/ramped-one-disc.ts';
 

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
-import { dynamicMetrics, investigate } from '../../src/results/investigate.ts';
+import { dynamicMetrics, investigate } from '../../src/finding/investigate.ts';
 import { runDynamicUncertainty } from '../../src/uncertainty/uncertainty.ts';
 import { resultsToJson } from '../../src/views/results-json.ts';
 import { withFinding } from '../../src/finding/investigation.ts';
@@ -14,7 +14,7 @@ const text = readFileSync(new URL('../../sample-cases/screw-conveyor-jam-us.yaml
 describe('the uncertainty run through the dynamic model', () => {
   it('runs where the verdict stands on the dynamic model, and its JSON says how many samples', () => {
     const c = parseCase(text.concat('\nanalysis:\n  samples: 200\n  dynamic_samples: 6\n'));
-    const r = withFinding(investigate(c));
+    const r = investigate(c);
     expect(r.verdictBasis).toBe('dynamic model');
     expect(r.uncertainty!.dynamic!.samples).toBe(6);
     const j = resultsToJson(r) as { uncertainty: { dynamic: { samples: number; percentiles: { yield_ratio: number[] } } } };

@@ -2,7 +2,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
-import { investigate, metricsOf } from '../../src/results/investigate.ts';
+import { investigate, metricsOf } from '../../src/finding/investigate.ts';
 import { sampleMetrics } from '../../src/uncertainty/sample-engine.ts';
 
 const dir = new URL('../../sample-cases/', import.meta.url);

@@ -2,7 +2,7 @@ import { jStat } from 'jstat';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
-import { investigate } from '../../src/results/investigate.ts';
+import { investigate } from '../../src/finding/investigate.ts';
 import { monteCarloChance } from '../../src/uncertainty/chance.ts';
 import { strengthSpread, uncertainInputs } from '../../src/uncertainty/inputs.ts';
 import { monteCarlo } from '../../src/uncertainty/monte-carlo.ts';

@@ -1,15 +1,14 @@
 import { loadCase } from '../../io/load-case.ts';
-import { withFinding } from '../../finding/investigation.ts';
-import { investigate } from '../../results/investigate.ts';
+import { investigate } from '../../finding/investigate.ts';
 import { resultsToJson } from '../../views/results-json.ts';
 import { renderSummary } from '../../views/summary.ts';
 import { screenInputs } from '../input-warnings.ts';
-import type { Io } from '../main.ts';
+import type { Io } from '../io.ts';
 import { terminalProgress } from '../progress.ts';
 
 export function checkCommand(path: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }, io: Io): void {
   const loaded = loadCase(path);
   const inputWarnings = screenInputs(loaded, opts.strict, io);
-  const results = withFinding(investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings }));
+  const results = investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
   io.out(opts.json ? JSON.stringify(resultsToJson(results), null, 2) + '\n' : renderSummary(results));
 }

@@ -1,6 +1,6 @@
 import { MATERIAL_LIBRARY } from '../../materials/library.ts';
 import { renderMaterials } from '../../views/materials-table.ts';
-import type { Io } from '../main.ts';
+import type { Io } from '../io.ts';
 
 export function materialsCommand(opts: { json?: boolean }, io: Io): void {
   io.out(opts.json ? JSON.stringify(MATERIAL_LIBRARY, null, 2) + '\n' : renderMaterials(MATERIAL_LIBRARY));

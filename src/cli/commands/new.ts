@@ -1,5 +1,5 @@
 import { createCaseFolder } from '../../io/create-case-folder.ts';
-import type { Io } from '../main.ts';
+import type { Io } from '../io.ts';
 
 export function newCommand(folder: string, opts: { units: 'metric' | 'us' }, io: Io): void {
   const made = createCaseFolder(folder, opts.units);

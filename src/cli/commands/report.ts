@@ -16,7 +16,7 @@ import { runInfo } from '../../report/run-info.ts';
 import { reportTablesCsv } from '../../report/tables-csv.ts';
 import { findingSentence } from '../../views/finding-words.ts';
 import { screenInputs } from '../input-warnings.ts';
-import type { Io } from '../main.ts';
+import type { Io } from '../io.ts';
 import { version } from '../version.ts';
 import { terminalProgress } from '../progress.ts';
 

@@ -1,11 +1,10 @@
-import { withFinding } from '../../finding/investigation.ts';
 import { loadCase } from '../../io/load-case.ts';
 import { resizeCase } from '../../resize/resize-case.ts';
-import { investigate } from '../../results/investigate.ts';
+import { investigate } from '../../finding/investigate.ts';
 import { resizeToJson } from '../../views/resize-json.ts';
 import { renderResize } from '../../views/resize-table.ts';
 import { screenInputs } from '../input-warnings.ts';
-import type { Io } from '../main.ts';
+import type { Io } from '../io.ts';
 import { terminalProgress } from '../progress.ts';
 
 /**
@@ -16,7 +15,7 @@ import { terminalProgress } from '../progress.ts';
 export function resizeCommand(path: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number; strict?: boolean }, io: Io): void {
   const loaded = loadCase(path);
   const inputWarnings = screenInputs(loaded, opts.strict, io);
-  const results = withFinding(investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings }));
+  const results = investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
   const z = resizeCase(loaded.case, results, { factor: opts.factor });
   io.out(opts.json ? JSON.stringify(resizeToJson(z), null, 2) + '\n' : renderResize(z));
 }

@@ -1,4 +1,4 @@
-import { metricsOf } from '../../results/investigate.ts';
+import { metricsOf } from '../../finding/investigate.ts';
 import type { Results } from '../../results/results.ts';
 import { inDisplay, unitLabel, type DisplayKind } from '../../views/display-units.ts';
 import type { ReportTable } from './report-table.ts';

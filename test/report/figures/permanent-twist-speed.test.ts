@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../../src/case/parse-case.ts';
 import { analyseCase } from '../../../src/results/analyse-case.ts';
-import { investigate } from '../../../src/results/investigate.ts';
+import { investigate } from '../../../src/finding/investigate.ts';
 import { show } from '../../../src/views/display-units.ts';
 import { permanentTwistSpeedFigures } from '../../../src/report/figures/permanent-twist-speed.ts';
 import { ep5Case, ep5CaseText } from '../../data/ep5-case.ts';

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { Matrix, solve } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
-import { TridiagonalSolver } from '../../src/physics/tridiagonal.ts';
+import { TridiagonalSolver } from '../../../src/physics/integrator/tridiagonal.ts';
 
 describe('TridiagonalSolver', () => {
   it('solves diagonally dominant symmetric systems as ml-matrix does', () => {

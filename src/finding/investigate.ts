@@ -2,10 +2,11 @@ import type { Case } from '../case/case.ts';
 import type { Metrics } from '../uncertainty/monte-carlo.ts';
 import { sampleMetrics } from '../uncertainty/sample-engine.ts';
 import { runDynamicUncertainty, runUncertainty } from '../uncertainty/uncertainty.ts';
-import { judgeByInterval } from './twist-findings.ts';
-import { analyseCase } from './analyse-case.ts';
-import { withInputWarnings, type InputWarnings } from './input-warnings.ts';
-import type { Results } from './results.ts';
+import { judgeByInterval } from '../results/twist-findings.ts';
+import { analyseCase } from '../results/analyse-case.ts';
+import { withInputWarnings, type InputWarnings } from '../results/input-warnings.ts';
+import type { Results } from '../results/results.ts';
+import { withFinding, type Investigation } from './investigation.ts';
 
 /** Overrides from the command line. */
 export interface InvestigateOptions {
@@ -39,14 +40,14 @@ export function dynamicMetrics(k: Case, elements?: number): Metrics {
 }
 
 /**
- * The whole investigation of a case: the single run, and where the case states tolerances, how
- * sure its finding is. Pure.
+ * The whole investigation of a case: the single run, where the case states tolerances how sure
+ * its finding is, and the finding decided from both. Pure.
  */
-export function investigate(c: Case, opts: InvestigateOptions = {}): Results {
+export function investigate(c: Case, opts: InvestigateOptions = {}): Investigation {
   const results = withInputWarnings(analyseCase(c), opts.inputWarnings);
   const u = c.analysis.uncertainty;
   const samples = opts.samples ?? u.samples;
-  if (!u.wanted || samples === 0) return results;
+  if (!u.wanted || samples === 0) return withFinding(results);
   const settings = { samples, seed: opts.seed ?? u.seed, strengthScatter: u.strengthScatter };
   const uncertainty = runUncertainty(c, sampleMetrics, settings);
   if (results.verdictBasis === 'dynamic model' && u.dynamicSamples > 0) {
@@ -59,8 +60,8 @@ export function investigate(c: Case, opts: InvestigateOptions = {}): Results {
     // model's read-back, so they are left out rather than shown beside it.
     uncertainty.observed = [];
     const warnings = [...results.warnings, 'The uncertainty run samples the energy balance, not the dynamic model the twist read-back stands on, so each measured twist is judged against the band on the recorded speed and its own tolerance, not by a Monte Carlo interval.'];
-    return { ...results, uncertainty, warnings };
+    return withFinding({ ...results, uncertainty, warnings });
   }
   const twist = results.observedFindings.twist.map((f, k) => judgeByInterval(f, uncertainty.observed[k]?.speedInterval ?? null));
-  return { ...results, uncertainty, observedFindings: { ...results.observedFindings, twist } };
+  return withFinding({ ...results, uncertainty, observedFindings: { ...results.observedFindings, twist } });
 }

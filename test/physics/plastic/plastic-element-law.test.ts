@@ -1,12 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { integrateChain, type IntegrationResult } from '../../src/physics/integrate-chain.ts';
-import { PlasticBalance } from '../../src/physics/plastic-balance.ts';
-import { PlasticElementLaw } from '../../src/physics/plastic-element-law.ts';
-import { residualTwistRate, rigidity, torqueAtTwistRate, yieldTorque, type TorsionLaw } from '../../src/physics/plastic-torsion.ts';
-import { sectionTwistRate, SeriesBackbone } from '../../src/physics/series-backbone.ts';
-import { ElasticLaw, type TorqueLaw } from '../../src/physics/torque-law.ts';
-import { chain } from './chain-fixtures.ts';
+import { integrateChain, type IntegrationResult } from '../../../src/physics/integrator/integrate-chain.ts';
+import { PlasticBalance } from '../../../src/physics/plastic/plastic-balance.ts';
+import { PlasticElementLaw } from '../../../src/physics/plastic/plastic-element-law.ts';
+import { residualTwistRate, rigidity, torqueAtTwistRate, yieldTorque, type TorsionLaw } from '../../../src/physics/plastic/plastic-torsion.ts';
+import { sectionTwistRate, SeriesBackbone } from '../../../src/physics/plastic/series-backbone.ts';
+import { ElasticLaw, type TorqueLaw } from '../../../src/physics/torque-law.ts';
+import { chain } from '../integrator/chain-fixtures.ts';
 
 const law = (c2: number, tauY: number, h = 0): TorsionLaw => ({ outerRadius: c2, innerRadius: 0, shearModulus: 79.3e9, shearYield: tauY, hardeningModulus: h });
 const rel = (a: number, b: number) => Math.abs(a / b - 1);

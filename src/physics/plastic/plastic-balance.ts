@@ -1,5 +1,5 @@
 import { plasticTorque, energyPerLength, residualTwistRate, torqueAtTwistRate, twistRateAtTorque, yieldTorque, type TorsionLaw } from './plastic-torsion.ts';
-import { bracketedRoot, growUntil } from './root-find.ts';
+import { bracketedRoot, growUntil } from '../root-find.ts';
 
 /** One piece of shaft in a side's run, for the energy balance. */
 export interface BalancePiece {

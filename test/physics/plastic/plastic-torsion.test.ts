@@ -11,7 +11,7 @@ import {
   yieldTorque,
   yieldTwistRate,
   type TorsionLaw,
-} from '../../src/physics/plastic-torsion.ts';
+} from '../../../src/physics/plastic/plastic-torsion.ts';
 
 const law = (c2: number, c1: number, g: number, tauY: number, h = 0): TorsionLaw => ({ outerRadius: c2, innerRadius: c1, shearModulus: g, shearYield: tauY, hardeningModulus: h });
 const rel = (a: number, b: number) => Math.abs(a / b - 1);

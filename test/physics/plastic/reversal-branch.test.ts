@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { residualTwistRate, torqueAtTwistRate, yieldTwistRate, type TorsionLaw } from '../../src/physics/plastic-torsion.ts';
-import { branchTorque } from '../../src/physics/reversal-branch.ts';
+import { residualTwistRate, torqueAtTwistRate, yieldTwistRate, type TorsionLaw } from '../../../src/physics/plastic/plastic-torsion.ts';
+import { branchTorque } from '../../../src/physics/plastic/reversal-branch.ts';
 
 /**
  * An independent section model: the section cut into thin rings, each ring an elastic–perfectly

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { findMaterial } from '../../src/materials/library.ts';
-import { linearHardeningModulus } from '../../src/physics/strain-hardening.ts';
+import { findMaterial } from '../../../src/materials/library.ts';
+import { linearHardeningModulus } from '../../../src/physics/plastic/strain-hardening.ts';
 
 describe('linearHardeningModulus', () => {
   // Hand calculation for AISI 1045 CD (Shigley 9th ed. Table A-20: S_y = 530, S_ut = 630 MPa, 12 %;

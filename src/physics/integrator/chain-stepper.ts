@@ -1,10 +1,10 @@
 import type { ChainSystem } from './chain-system.ts';
 import { meanForce, updateAccelerations } from './chain-forces.ts';
 import { setPiece, type DriveState } from './drive-state.ts';
-import { pieceOf } from './motor-torque.ts';
-import { StopMotion } from './stop-motion.ts';
+import { pieceOf } from '../motor-torque.ts';
+import { StopMotion } from '../stop-motion.ts';
 import { TridiagonalSolver } from './tridiagonal.ts';
-import { ElasticLaw, type TorqueLaw } from './torque-law.ts';
+import { ElasticLaw, type TorqueLaw } from '../torque-law.ts';
 
 /**
  * One time step of the torsional chain by the trapezoidal rule (Newmark's average-acceleration

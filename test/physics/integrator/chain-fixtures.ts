@@ -1,10 +1,10 @@
 // Small chains for the integrator's tests, and the same chains as first-order systems for odex
 // (the general-purpose reference solver, bench/odex-solver.ts).
-import { Solver } from '../../bench/odex-solver.ts';
-import type { ChainSystem, SystemDrive } from '../../src/physics/chain-system.ts';
-import { torqueAt } from '../../src/physics/motor-torque.ts';
-import { StopMotion } from '../../src/physics/stop-motion.ts';
-import { ElasticLaw, type TorqueLaw } from '../../src/physics/torque-law.ts';
+import { Solver } from '../../../bench/odex-solver.ts';
+import type { ChainSystem, SystemDrive } from '../../../src/physics/integrator/chain-system.ts';
+import { torqueAt } from '../../../src/physics/motor-torque.ts';
+import { StopMotion } from '../../../src/physics/stop-motion.ts';
+import { ElasticLaw, type TorqueLaw } from '../../../src/physics/torque-law.ts';
 
 export interface ChainSpec {
   /** Inertias from the stop outward; the first is the stop node's. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { integrateChain } from '../../src/physics/integrate-chain.ts';
+import { integrateChain } from '../../../src/physics/integrator/integrate-chain.ts';
 import { chain } from './chain-fixtures.ts';
 
 const none = { speeds: [0], torques: [0] };

@@ -1,8 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { integrateChain, type IntegrationResult } from '../../src/physics/integrate-chain.ts';
-import type { TorqueLaw } from '../../src/physics/torque-law.ts';
-import { torqueForEnergy } from '../../src/physics/torsion.ts';
+import { integrateChain, type IntegrationResult } from '../../../src/physics/integrator/integrate-chain.ts';
+import type { TorqueLaw } from '../../../src/physics/torque-law.ts';
+import { torqueForEnergy } from '../../../src/physics/torsion.ts';
 import { chain, odexTorque } from './chain-fixtures.ts';
 
 const books = (r: IntegrationResult) => {

@@ -1,7 +1,7 @@
 import { holdingJamTorque, motorPieceValue, stuckBeltTorque } from './chain-forces.ts';
 import type { ChainStepper } from './chain-stepper.ts';
 import { setPiece, type DriveState } from './drive-state.ts';
-import { ElasticLaw } from './torque-law.ts';
+import { ElasticLaw } from '../torque-law.ts';
 
 /** Where an event comes from: an element's law, a drive's belt, the jam, or a drive's motor curve. */
 export type EventSource = { kind: 'element'; index: number } | { kind: 'belt'; index: number } | { kind: 'jam' } | { kind: 'motor'; index: number };

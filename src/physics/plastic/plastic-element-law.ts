@@ -1,5 +1,5 @@
 import type { SeriesBackbone } from './series-backbone.ts';
-import type { TorqueLaw } from './torque-law.ts';
+import type { TorqueLaw } from '../torque-law.ts';
 
 /** A reversal point of the element: twist rad, torque N·m. */
 interface Turn {

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { rigidity, tangentRigidity, torqueAtTwistRate, yieldTorque, type TorsionLaw } from '../../src/physics/plastic-torsion.ts';
-import { sectionTwistRate, SeriesBackbone } from '../../src/physics/series-backbone.ts';
+import { rigidity, tangentRigidity, torqueAtTwistRate, yieldTorque, type TorsionLaw } from '../../../src/physics/plastic/plastic-torsion.ts';
+import { sectionTwistRate, SeriesBackbone } from '../../../src/physics/plastic/series-backbone.ts';
 
 const law = (c2: number, c1: number, tauY: number, h = 0): TorsionLaw => ({ outerRadius: c2, innerRadius: c1, shearModulus: 79.3e9, shearYield: tauY, hardeningModulus: h });
 

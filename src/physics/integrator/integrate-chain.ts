@@ -3,7 +3,7 @@ import { ChainRecorder, type ChainHistory } from './chain-recorder.ts';
 import { chainEnergy, holdingJamTorque } from './chain-forces.ts';
 import { ChainStepper } from './chain-stepper.ts';
 import type { ChainSystem } from './chain-system.ts';
-import type { TorqueLaw } from './torque-law.ts';
+import type { TorqueLaw } from '../torque-law.ts';
 
 export interface IntegrationOptions {
   /** Simulated time from the stop's start, s. */

@@ -1,5 +1,5 @@
-import type { TorqueSpeedLine } from './motor-torque.ts';
-import type { TorqueLaw } from './torque-law.ts';
+import type { TorqueSpeedLine } from '../motor-torque.ts';
+import type { TorqueLaw } from '../torque-law.ts';
 
 /**
  * The torsional chain as the integrator takes it: numbers only, SI, everything at shaft speed.

@@ -1,4 +1,4 @@
-import type { Material } from '../materials/material.ts';
+import type { Material } from '../../materials/material.ts';
 
 /**
  * The slope dτ/dγ of a linear strain-hardening line in shear, Pa, from tensile data: the tensile

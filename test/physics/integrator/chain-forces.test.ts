@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { integrateChain } from '../../src/physics/integrate-chain.ts';
+import { integrateChain } from '../../../src/physics/integrator/integrate-chain.ts';
 import { chain, odexTorque, type ChainSpec } from './chain-fixtures.ts';
 
 describe('end-face torques next to an instantaneously stopped node', () => {

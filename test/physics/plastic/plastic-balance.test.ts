@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { PlasticBalance, type BalancePiece } from '../../src/physics/plastic-balance.ts';
-import { energyPerLength, plasticTorque, rigidity, yieldTorque, type TorsionLaw } from '../../src/physics/plastic-torsion.ts';
+import { PlasticBalance, type BalancePiece } from '../../../src/physics/plastic/plastic-balance.ts';
+import { energyPerLength, plasticTorque, rigidity, yieldTorque, type TorsionLaw } from '../../../src/physics/plastic/plastic-torsion.ts';
 
 const law = (c2: number, c1: number, g: number, tauY: number, h = 0): TorsionLaw => ({ outerRadius: c2, innerRadius: c1, shearModulus: g, shearYield: tauY, hardeningModulus: h });
 const piece = (length: number, l: TorsionLaw, fractureTwistRate = Infinity): BalancePiece => ({ length, law: l, fractureTwistRate });

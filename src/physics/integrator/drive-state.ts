@@ -1,4 +1,4 @@
-import { pieceSlope, pieceTorque, type TorqueSpeedLine } from './motor-torque.ts';
+import { pieceSlope, pieceTorque, type TorqueSpeedLine } from '../motor-torque.ts';
 
 /** A drive's state during the integration. */
 export interface DriveState {
