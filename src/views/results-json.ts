@@ -48,6 +48,7 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
 function dynamicJson(d: DynamicResult): Record<string, unknown> {
   return {
     natural_frequencies_Hz: d.naturalFrequencies,
+    modes: d.frequencies.map((m) => ({ side: m.side, frequency_Hz: m.frequency, refined_frequency_Hz: m.refinedFrequency, converged: m.converged, participation: m.participation })),
     peak_torque_Nm: d.peakTorque,
     max_shear_stress_Pa: d.maxShearStress,
     yield_ratio: d.yieldRatio,

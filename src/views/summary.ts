@@ -27,7 +27,9 @@ export function dynamicLines(r: Results, role: string): string[] {
         : `  side ${s.side}  peak torque ${show(s.dynamicPeakTorque, 'torque', u)} (elastic), stress / shear yield ${sig(s.dynamicYieldRatio)}`,
     );
   }
-  out.push(`  natural frequencies with the stop held: ${d.naturalFrequencies.slice(0, 3).map((f) => sig(f)).join(', ')} Hz`);
+  const modes = d.frequencies.slice(0, 3);
+  const rough = modes.some((m) => !m.converged) ? ' (* not resolved by this element count: low by more than 1 %)' : '';
+  out.push(`  natural frequencies with the stop held: ${modes.map((m) => `${sig(m.frequency)}${m.converged ? '' : '*'} Hz (side ${m.side})`).join(', ')}${rough}`);
   for (const s of d.slips) {
     const what = s.firstSlip === undefined ? 'did not slip' : `slipped ${showSlipAngle(s.angle, u)} and took ${show(s.energy, 'energy', u)}${s.slippingAtEnd ? ', still slipping at the end' : ''}`;
     out.push(`  ${s.element} (slip torque ${show(s.slipTorque, 'torque', u)}) ${what}`);
