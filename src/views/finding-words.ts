@@ -55,13 +55,20 @@ export function findingSentence(f: Finding, u: Units, text: Text = plain): strin
 export function chanceSentence(f: Finding): string | undefined {
   const c = f.chance;
   if (!c) return undefined;
-  const pct = (p: number) => `${sig(100 * p, 2)} %`;
+  const pct = (p: number) => `${percent(p)} %`;
   const interval = ` (95 % interval ${pct(c.interval[0])} to ${pct(c.interval[1])})`;
   const how =
     c.method === 'control-variates'
       ? `from ${c.runs} runs of the ${c.model}, corrected by ${c.controlSamples} energy-method samples of the same draws (control variates)`
       : `the share of ${c.runs} runs of the ${c.model} that reach it`;
   return `Chance of yield under the case's tolerances: ${pct(c.probability)}${interval}, ${how}.`;
+}
+
+/** A probability in per cent, with the digits that keep it off 0 and 100 where it is not either: 0.038, 99.96. */
+export function percent(p: number): string {
+  if (p <= 0 || p >= 1) return String(Math.round(100 * p));
+  if (p > 0.99) return String(Number((100 * p).toFixed(Math.max(1, Math.ceil(-Math.log10(1 - p)) - 2))));
+  return sig(100 * p, 2);
 }
 
 /** The finding's lines for a terminal: the verdict, why that model, the chance, what to do. */

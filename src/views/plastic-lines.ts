@@ -20,12 +20,17 @@ export function plasticLines(r: Results, role: string): string[] {
   const out: string[] = ['', `Past yield by the energy balance (${role}; ${law}; all of each side's energy into its shaft, nothing else acting):`];
   for (const s of p.sides) {
     const at = s.verdict === 'fracture predicted' ? ' at the break' : '';
-    out.push(`  Side ${s.side}  peak torque${at} ${show(s.peakTorque, 'torque', u)}, twist ${show(s.totalTwist, 'angle', u)}, permanent twist ${show(s.permanentTwist, 'angle', u)}, highest shear strain ${sig(s.maxShearStrain)}`);
+    const left = s.verdict === 'fracture predicted' ? 'broken: no permanent twist to measure' : `permanent twist ${show(s.permanentTwist, 'angle', u)}`;
+    out.push(`  Side ${s.side}  peak torque${at} ${show(s.peakTorque, 'torque', u)}, twist ${show(s.totalTwist, 'angle', u)}, ${left}, highest shear strain ${sig(s.maxShearStrain)}`);
     for (const piece of s.pieces) {
       // A piece that only grazes yield (a permanent twist no instrument resolves) is not listed.
       if (!piece.state.fractured && !(piece.yielded && piece.state.permanentTwist >= ANGLE_RESOLUTION)) continue;
       const fs = piece.fractureStrain === undefined ? 'fracture strain unknown' : `fracture at ${sig(piece.fractureStrain)}`;
-      out.push(`    ${describePlasticPiece(piece, u)}: permanent ${show(piece.state.permanentTwist, 'angle', u)} (surface offset ${show(piece.surfaceOffset, 'length', u)}, an axial line now at ${show(piece.helixAngle, 'angle', u)}), shear strain ${sig(piece.state.maxShearStrain)} (${fs})${piece.state.fractured ? ' BREAKS' : ''}`);
+      out.push(
+        piece.state.fractured
+          ? `    ${describePlasticPiece(piece, u)}: BREAKS, shear strain ${sig(piece.state.maxShearStrain)} (${fs})`
+          : `    ${describePlasticPiece(piece, u)}: permanent ${show(piece.state.permanentTwist, 'angle', u)} (surface offset ${show(piece.surfaceOffset, 'length', u)}, an axial line now at ${show(piece.helixAngle, 'angle', u)}), shear strain ${sig(piece.state.maxShearStrain)} (${fs})`,
+      );
     }
     out.push(`    energy before the first break ${Number.isFinite(s.fractureEnergy) ? show(s.fractureEnergy, 'energy', u) : 'none can break'}; the side has ${show(s.energy, 'energy', u)}`);
   }

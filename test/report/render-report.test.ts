@@ -7,6 +7,7 @@ import { plasticPiecesTable } from '../../src/report/tables/plastic-pieces-table
 import { plasticSidesTable } from '../../src/report/tables/plastic-sides-table.ts';
 import { markdownTable } from '../../src/report/tables/report-table.ts';
 import { show, sig } from '../../src/views/display-units.ts';
+import { percent } from '../../src/views/finding-words.ts';
 import { describePlasticPiece } from '../../src/views/plastic-lines.ts';
 import { defaultTemplate, fixture, RUN } from './report-fixtures.ts';
 
@@ -59,7 +60,7 @@ describe('renderReport', () => {
       // figures (as a comparison), the incident's date, the machine's or the material's name.
       const finding = [show(f.elasticPeakTorque, 'torque', u), f.permanentTwist === undefined ? '' : show(f.permanentTwist, 'angle', u), sig((f.breakTime ?? 0) * 1000), `kt ${sig(f.piece.segment.kt)}`];
       const comparison = r.sides.map((s) => show(s.peakTorque, 'torque', u));
-      const chance = f.chance ? [sig(100 * f.chance.probability, 2), String(f.chance.runs), String(f.chance.controlSamples ?? ''), ...f.chance.interval.map((x) => sig(100 * x, 2))] : [];
+      const chance = f.chance ? [percent(f.chance.probability), String(f.chance.runs), String(f.chance.controlSamples ?? ''), ...f.chance.interval.map(percent)] : [];
       const context = [f.basisReason, f.disposition, r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.materials[f.piece.segment.material].name, String(r.warnings.length)];
       const allowed = new Set([...expected, ...finding, ...comparison, ...chance, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
       for (const n of summary.replace(/side [AB]/g, '').replace(/95 % interval/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the summary`).toContain(n);
@@ -79,7 +80,7 @@ describe('renderReport', () => {
     const { md, results } = report('screw-conveyor-jam-us.yaml');
     expect(results.finding.basis).toBe('dynamic model');
     expect(results.finding.chance!.model).toBe('dynamic model');
-    expect(section(md, 'Summary')).toContain(`Chance of yield under the case's tolerances: ${sig(100 * results.finding.chance!.probability, 2)} %`);
+    expect(section(md, 'Summary')).toContain(`Chance of yield under the case's tolerances: ${percent(results.finding.chance!.probability)} %`);
     expect(section(md, 'Summary')).toContain(`runs of the dynamic model`);
   });
 
@@ -105,7 +106,7 @@ describe('renderReport', () => {
     expect(s).toContain('A stated ± band is taken as two standard deviations of a normal distribution');
     expect(s).toContain('A handbook minimum strength is taken as the 5th percentile of a normal distribution with a coefficient of variation of 7 %');
     expect(s).toContain(`| stress / shear yield (elastic method, kt applied) | — | ${sig(results.yieldRatio)} | ${u.percentiles.yieldRatio.map((v) => sig(v)).join(' | ')} |`);
-    expect(s).toContain(`**Chance of yield under the case's tolerances: ${sig(100 * results.finding.chance!.probability, 2)} %`);
+    expect(s).toContain(`**Chance of yield under the case's tolerances: ${percent(results.finding.chance!.probability)} %`);
     expect(s).toContain(`${sig(100 * u.yieldProbability, 3)} % of the ${u.samples} samples`);
     expect(s).toContain(`| 1 | yield strength of aisi-1045-cd | ${sig(u.sensitivity[0].low)} | ${sig(u.sensitivity[0].high)} |`);
     expect(s).toMatch(/\*\*Yield strength of aisi-1045-cd moves stress \/ shear yield most \(from .* across its band\): measure it better first\.\*\*/);
