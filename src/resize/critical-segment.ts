@@ -1,6 +1,6 @@
 import type { Case, Segment } from '../case/case.ts';
 import type { SideName } from '../model/shaft-model.ts';
-import { designRun } from './design-run.ts';
+import { designCheck, energyCheck, type DesignCheck } from './design-run.ts';
 import type { Results } from '../results/results.ts';
 import { bisect } from './bisect.ts';
 import { withDiameters } from './change-case.ts';
@@ -37,8 +37,8 @@ export interface CriticalSegmentOption {
   /** The smallest diameter that keeps every segment of the side within the factor, m; undefined when none does. */
   diameter?: number;
   stockDiameter?: number;
-  rerun?: Results;
-  stockRerun?: Results;
+  rerun?: DesignCheck;
+  stockRerun?: DesignCheck;
   /** Repeat-incident yield ratio against the segment's diameter, for the report's figure. */
   sweep: DiameterPoint[];
   /** Stock sizes within the sweep, m. */
@@ -57,7 +57,9 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
   const side = r.governing.side.side;
   const segment = r.governing.piece.piece.segment;
   const present = segment.diameter;
-  const runAt = (d: number) => designRun(withDiameters(c, new Map([[segment.index, d]])));
+  const changed = (d: number) => withDiameters(c, new Map([[segment.index, d]]));
+  const runAt = (d: number) => energyCheck(changed(d));
+  const checkAt = (d: number) => designCheck(changed(d));
   const target = 1 / designFactor;
   const excess = (d: number) => segmentYieldRatio(runAt(d), side, segment.index)! - target;
 
@@ -66,7 +68,7 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
   if (excess(present) > 0) for (let i = 0; i < 60 && excess(hi) > 0; i++) hi *= 2;
   else for (let i = 0; i < 60 && excess(lo) <= 0; i++) lo /= 2;
   const ownDiameter = bisect(excess, lo, hi);
-  const atOwn = runAt(ownDiameter);
+  const atOwn = checkAt(ownDiameter);
   const othersAtOwn = othersYieldRatio(atOwn, side, segment.index);
   const fits = othersAtOwn <= target * (1 + 1e-9);
   const verdict: CriticalVerdict = !fits ? 'others-critical' : ownDiameter < present ? 'present-keeps' : 'fits';
@@ -93,7 +95,7 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
     option.diameter = ownDiameter;
     option.stockDiameter = stockSizeUp(ownDiameter, c.units);
     option.rerun = atOwn;
-    option.stockRerun = runAt(option.stockDiameter);
+    option.stockRerun = checkAt(option.stockDiameter);
   }
   return option;
 }

@@ -1,5 +1,6 @@
 import type { SideName } from '../model/shaft-model.ts';
 import type { Results } from '../results/results.ts';
+import type { DesignCheck } from './design-run.ts';
 
 /** What an option does to a side's stiffness and, with it, to the torque and the natural frequency. */
 export interface StiffnessChange {
@@ -18,12 +19,12 @@ export interface StiffnessChange {
 /**
  * The change of one side between the present case and an option's rerun. Where the present
  * case's verdict stands on the dynamic model, the frequency is the ratio of the side's lowest
- * natural frequency with the stop held in the two dynamic models (both reruns compute them
- * anyway). Where the energy method is exact, it is the single-mass estimate ω_n = √(k/J) with the
+ * natural frequency with the stop held in the two dynamic models (the option's from its modes
+ * alone, `designCheck`). Where the energy method is exact, it is the single-mass estimate ω_n = √(k/J) with the
  * parts' inertia unchanged (Den Hartog, Mechanical Vibrations; from memory, confident), so it
  * scales as √(k_new/k_old).
  */
-export function stiffnessChange(present: Results, option: Results, side: SideName): StiffnessChange {
+export function stiffnessChange(present: Results, option: DesignCheck, side: SideName): StiffnessChange {
   const before = present.sides.find((s) => s.side === side)!;
   const after = option.sides.find((s) => s.side === side)!;
   const stiffness = before.compliance / after.compliance;
@@ -37,7 +38,7 @@ export function stiffnessChange(present: Results, option: Results, side: SideNam
 }
 
 /** A side's lowest natural frequency in the dynamic model, Hz; undefined if the side has no mode. */
-export function lowestFrequency(r: Results, side: SideName): number | undefined {
+export function lowestFrequency(r: Pick<DesignCheck, 'dynamic'>, side: SideName): number | undefined {
   const f = r.dynamic.frequencies.filter((m) => m.side === side).map((m) => m.frequency);
   return f.length > 0 ? Math.min(...f) : undefined;
 }
