@@ -1,9 +1,5 @@
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { CaseError } from '../case/case-error.ts';
-import { checkCommand } from './commands/check.ts';
-import { materialsCommand } from './commands/materials.ts';
-import { newCommand } from './commands/new.ts';
-import { resizeCommand } from './commands/resize.ts';
 import { version } from './version.ts';
 
 /** Output channel of a command, so tests can run commands without a terminal. */
@@ -54,7 +50,7 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--json', 'print one JSON object, SI units')
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
-    .action((file: string, opts: { json?: boolean; samples?: number; seed?: number }) => checkCommand(file, opts, io));
+    .action(async (file: string, opts: { json?: boolean; samples?: number; seed?: number }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io));
 
   program
     .command('resize')
@@ -62,20 +58,20 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--factor <N>', 'design factor on shear yield in a repeat of the incident (default: the case\'s, else 1.5)', designFactor)
     .option('--json', 'print the check --json object with resize added, SI units')
-    .action((file: string, opts: { factor?: number; json?: boolean }) => resizeCommand(file, opts, io));
+    .action(async (file: string, opts: { factor?: number; json?: boolean }) => (await import('./commands/resize.ts')).resizeCommand(file, opts, io));
 
   program
     .command('materials')
     .description('list the built-in materials and their sources')
     .option('--json', 'print the list as JSON, SI units')
-    .action((opts: { json?: boolean }) => materialsCommand(opts, io));
+    .action(async (opts: { json?: boolean }) => (await import('./commands/materials.ts')).materialsCommand(opts, io));
 
   program
     .command('new')
     .description('create a case folder from the templates: case.yaml with comments on what to measure, photos/, README.md')
     .argument('<folder>', 'the new case folder')
     .addOption(new Option('--units <units>', 'units of the case template').choices(['metric', 'us']).default('metric'))
-    .action((folder: string, opts: { units: 'metric' | 'us' }) => newCommand(folder, opts, io));
+    .action(async (folder: string, opts: { units: 'metric' | 'us' }) => (await import('./commands/new.ts')).newCommand(folder, opts, io));
 
   program
     .command('report')
@@ -87,11 +83,12 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
     .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number }) => {
-      // The report's libraries (plots, DOM, tables, Markdown, zip, browser) load only here, so check stays fast.
       const { reportCommand } = await import('./commands/report.ts');
       await reportCommand(file, opts, io, clock());
     });
 
+  // Each command loads its own modules when it runs (\`await import\`), so --help and a quick
+  // check load no more than they use; the report's libraries load only for report.
   try {
     await program.parseAsync(argv, { from: 'user' });
     return 0;
