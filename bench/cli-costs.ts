@@ -31,34 +31,32 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.len
 
 /**
  * `check`, `resize` and `report` of every sample case through the built CLI, each as its CPU time
- * (user + system) over that of a bare `node -e 0` timed just before it: medians of `rounds` rounds
- * of paired runs (each side two runs long, as /proc's clock counts in 10 ms).
+ * (user + system) over that of a bare `node -e 0` timed in the same round (three bare runs, as
+ * /proc's clock counts in 10 ms): medians over `rounds` rounds.
  */
 export function benchCliCosts(rounds = 3): string[] {
   const lines = ['', `CLI cost as CPU time over a bare \`node -e 0\` in the same round (median of ${rounds} rounds):`];
-  const ratio = (args: string[], cwd?: string) => {
-    const r: number[] = [];
+  const ratios = (commands: { args: string[]; cwd?: string }[]) => {
+    const r = commands.map(() => [] as number[]);
     const bare: number[] = [];
     for (let i = 0; i < rounds; i++) {
-      const b = cpuOf(['-e', '0'], 2);
+      const b = cpuOf(['-e', '0'], 3);
       bare.push(b);
-      r.push(cpuOf(args, 2, cwd) / b);
+      commands.forEach((c, k) => r[k].push(cpuOf(c.args, 1, c.cwd) / b));
     }
-    return { ratio: median(r), bare: median(bare) };
+    return { ratios: r.map(median), bare: median(bare) };
   };
-  const help = ratio([BIN, '--help']);
-  lines.push(`  --help ×${help.ratio.toFixed(2)} (bare node ${(help.bare * 1000).toFixed(0)} ms)`);
+  const help = ratios([{ args: [BIN, '--help'] }]);
+  lines.push(`  --help ×${help.ratios[0].toFixed(2)} (bare node ${(help.bare * 1000).toFixed(0)} ms CPU)`);
   lines.push(`  ${'case'.padEnd(36)} ${'check'.padStart(7)} ${'resize'.padStart(7)} ${'report'.padStart(7)}`);
   for (const f of readdirSync(SAMPLES).filter((x) => x.endsWith('.yaml')).sort()) {
     const dir = mkdtempSync(join(tmpdir(), 'shaftcase-bench-'));
     try {
       const file = join(dir, f);
       cpSync(join(SAMPLES, f), file);
-      const check = ratio([BIN, 'check', '--json', file]);
-      const resize = ratio([BIN, 'resize', file]);
       // Each report writes a new dated folder beside the copy of the case.
-      const report = ratio([BIN, 'report', file], dir);
-      lines.push(`  ${f.padEnd(36)} ${`×${check.ratio.toFixed(1)}`.padStart(7)} ${`×${resize.ratio.toFixed(1)}`.padStart(7)} ${`×${report.ratio.toFixed(1)}`.padStart(7)}`);
+      const [check, resize, report] = ratios([{ args: [BIN, 'check', '--json', file] }, { args: [BIN, 'resize', file] }, { args: [BIN, 'report', file], cwd: dir }]).ratios;
+      lines.push(`  ${f.padEnd(36)} ${`×${check.toFixed(1)}`.padStart(7)} ${`×${resize.toFixed(1)}`.padStart(7)} ${`×${report.toFixed(1)}`.padStart(7)}`);
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }
