@@ -20,16 +20,18 @@ export interface StiffnessChange {
  * The change of one side between the present case and an option's rerun. Where the present
  * case's verdict stands on the dynamic model, the frequency is the ratio of the side's lowest
  * natural frequency with the stop held in the two dynamic models (the option's from its modes
- * alone, `designCheck`). Where the energy method is exact, it is the single-mass estimate ω_n = √(k/J) with the
+ * alone, `designCheck`; the present's from `presentModes`, a chain cut as the option's, so an
+ * option that changes nothing gives exactly 1; by default the present result's own). Where the
+ * energy method is exact, it is the single-mass estimate ω_n = √(k/J) with the
  * parts' inertia unchanged (Den Hartog, Mechanical Vibrations; from memory, confident), so it
  * scales as √(k_new/k_old).
  */
-export function stiffnessChange(present: Results, option: DesignCheck, side: SideName): StiffnessChange {
+export function stiffnessChange(present: Results, option: DesignCheck, side: SideName, presentModes: Pick<DesignCheck, 'dynamic'> = present): StiffnessChange {
   const before = present.sides.find((s) => s.side === side)!;
   const after = option.sides.find((s) => s.side === side)!;
   const stiffness = before.compliance / after.compliance;
   const peakTorque = after.peakTorque / before.peakTorque;
-  const f0 = lowestFrequency(present, side);
+  const f0 = lowestFrequency(presentModes, side);
   const f1 = lowestFrequency(option, side);
   if (present.verdictBasis === 'dynamic model' && f0 !== undefined && f1 !== undefined) {
     return { stiffness, frequency: f1 / f0, peakTorque, frequencyMethod: 'dynamic model', method: `dynamic model, side ${side}'s lowest natural frequency with the stop held` };
