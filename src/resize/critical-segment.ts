@@ -51,7 +51,8 @@ const SWEEP_POINTS = 48;
  * Resizes only the most stressed segment (bore ratio kept). Its own stress falls as it grows, but a
  * stiffer segment raises the side's torque (T = √(2E/C)), so the others' stresses rise: the answer
  * is the diameter where its own yield ratio reaches 1/N, provided the others are then still within
- * it. Every trial diameter is a rerun of the engine.
+ * it. Every trial diameter is a rerun of the engine's energy method (what the search and the sweep
+ * read); the answer and its stock size are design checks with the dynamic model's modes too.
  */
 export function criticalSegment(c: Case, r: Results, designFactor: number): CriticalSegmentOption {
   const side = r.governing.side.side;
