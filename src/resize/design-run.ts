@@ -29,7 +29,8 @@ export interface DesignCheck {
   sides: SideResult[];
   /** Highest yield ratio over every side, the energy method's (as `Results.yieldRatio`). */
   yieldRatio: number;
-  dynamic: { frequencies: { side: SideName; frequency: number; participation: number }[] };
+  /** The dynamic model's natural frequencies with the stop held, Hz (found when first read). */
+  readonly dynamic: { frequencies: { side: SideName; frequency: number; participation: number }[] };
 }
 
 /** Modes kept per side and overall, as the dynamic model keeps them (src/results/dynamic-solve.ts, dynamic-result.ts). */
@@ -49,12 +50,25 @@ const MODE_ELEMENTS = 96;
  * the dynamic model does). A full rerun would integrate in time only to read these.
  */
 export function designCheck(c: Case): DesignCheck {
+  let dynamic: DesignCheck['dynamic'] | undefined;
+  return {
+    ...energyCheck(c),
+    // The modes are found when first read: only where the verdict stands on the dynamic model,
+    // and only for the options whose frequency change is shown.
+    get dynamic() {
+      dynamic ??= { frequencies: designModes(c) };
+      return dynamic;
+    },
+  };
+}
+
+function designModes(c: Case): DesignCheck['dynamic']['frequencies'] {
   const model = buildShaftModel(c);
   const shaftInertia = c.analysis.shaftInertia && c.shaft.segments.every((s) => c.materials[s.material].density !== undefined);
   const pieceCount = buildChain(c, model, { elements: 1, shaftInertia: false }).pieces.length;
   const target = !shaftInertia ? pieceCount : (c.analysis.elements ?? MODE_ELEMENTS);
   const modes = sideModes(buildChain(c, model, { elements: target, shaftInertia }), MODES_PER_SIDE);
-  return { ...energyCheck(c), dynamic: { frequencies: modes.slice(0, MODES_KEPT).map((m) => ({ side: m.side, frequency: m.frequency, participation: m.participation })) } };
+  return modes.slice(0, MODES_KEPT).map((m) => ({ side: m.side, frequency: m.frequency, participation: m.participation }));
 }
 
 /** The energy method alone on a changed case: what a search over a size reads. */

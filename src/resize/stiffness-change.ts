@@ -31,9 +31,11 @@ export function stiffnessChange(present: Results, option: DesignCheck, side: Sid
   const after = option.sides.find((s) => s.side === side)!;
   const stiffness = before.compliance / after.compliance;
   const peakTorque = after.peakTorque / before.peakTorque;
-  const f0 = lowestFrequency(presentModes, side);
-  const f1 = lowestFrequency(option, side);
-  if (present.verdictBasis === 'dynamic model' && f0 !== undefined && f1 !== undefined) {
+  // The modes are read only where the frequency is the dynamic model's (a design check finds them when read).
+  const dynamic = present.verdictBasis === 'dynamic model';
+  const f0 = dynamic ? lowestFrequency(presentModes, side) : undefined;
+  const f1 = dynamic ? lowestFrequency(option, side) : undefined;
+  if (f0 !== undefined && f1 !== undefined) {
     return { stiffness, frequency: f1 / f0, peakTorque, frequencyMethod: 'dynamic model', method: `dynamic model, side ${side}'s lowest natural frequency with the stop held` };
   }
   return { stiffness, frequency: Math.sqrt(stiffness), peakTorque, frequencyMethod: 'energy method', method: 'energy method, single-mass estimate √(k/J)' };
