@@ -1,9 +1,5 @@
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { CaseError } from '../case/case-error.ts';
-import { checkCommand } from './commands/check.ts';
-import { materialsCommand } from './commands/materials.ts';
-import { newCommand } from './commands/new.ts';
-import { resizeCommand } from './commands/resize.ts';
 import { version } from './version.ts';
 import type { Io } from './io.ts';
 
@@ -52,7 +48,7 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
-    .action((file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }) => checkCommand(file, opts, io));
+    .action(async (file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io));
 
   program
     .command('resize')
@@ -63,20 +59,20 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none), as for check', wholeNumber)
     .option('--seed <s>', 'seed of the Monte Carlo, as for check', wholeNumber)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
-    .action((file: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number; strict?: boolean }) => resizeCommand(file, opts, io));
+    .action(async (file: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number; strict?: boolean }) => (await import('./commands/resize.ts')).resizeCommand(file, opts, io));
 
   program
     .command('materials')
     .description('list the built-in materials and their sources')
     .option('--json', 'print the list as JSON, SI units')
-    .action((opts: { json?: boolean }) => materialsCommand(opts, io));
+    .action(async (opts: { json?: boolean }) => (await import('./commands/materials.ts')).materialsCommand(opts, io));
 
   program
     .command('new')
     .description('create a case folder from the templates: case.yaml with comments on what to measure, photos/, README.md')
     .argument('<folder>', 'the new case folder')
     .addOption(new Option('--units <units>', 'units of the case template').choices(['metric', 'us']).default('metric'))
-    .action((folder: string, opts: { units: 'metric' | 'us' }) => newCommand(folder, opts, io));
+    .action(async (folder: string, opts: { units: 'metric' | 'us' }) => (await import('./commands/new.ts')).newCommand(folder, opts, io));
 
   program
     .command('report')
@@ -89,11 +85,12 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
     .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number; strict?: boolean }) => {
-      // The report's libraries (plots, DOM, tables, Markdown, zip, browser) load only here, so check stays fast.
       const { reportCommand } = await import('./commands/report.ts');
       await reportCommand(file, opts, io, clock());
     });
 
+  // Each command loads its own modules when it runs (\`await import\`), so --help and a quick
+  // check load no more than they use; the report's libraries load only for report.
   try {
     await program.parseAsync(argv, { from: 'user' });
     return 0;

@@ -17,6 +17,8 @@ export interface InvestigateOptions {
   onDynamicProgress?: (done: number, total: number) => void;
   /** The case file's plausibility warnings, carried into the results' warnings. */
   inputWarnings?: InputWarnings;
+  /** false: no twist read-back (a view that shows no observations, such as the resize table). */
+  readBack?: boolean;
 }
 
 /** The numbers one Monte Carlo sample keeps, read from a full run (the sampling engine must agree with it). */
@@ -44,7 +46,7 @@ export function dynamicMetrics(k: Case, elements?: number): Metrics {
  * its finding is, and the finding decided from both. Pure.
  */
 export function investigate(c: Case, opts: InvestigateOptions = {}): Investigation {
-  const results = withInputWarnings(analyseCase(c), opts.inputWarnings);
+  const results = withInputWarnings(analyseCase(c, { readBack: opts.readBack }), opts.inputWarnings);
   const u = c.analysis.uncertainty;
   const samples = opts.samples ?? u.samples;
   if (!u.wanted || samples === 0) return withFinding(results);

@@ -1,6 +1,6 @@
 import type { Case, Segment } from '../case/case.ts';
 import type { SideName } from '../model/shaft-model.ts';
-import { designRun } from './design-run.ts';
+import { designCheck, energyCheck, type DesignCheck } from './design-run.ts';
 import type { Results } from '../results/results.ts';
 import { bisect } from './bisect.ts';
 import { withDiameters } from './change-case.ts';
@@ -37,8 +37,8 @@ export interface CriticalSegmentOption {
   /** The smallest diameter that keeps every segment of the side within the factor, m; undefined when none does. */
   diameter?: number;
   stockDiameter?: number;
-  rerun?: Results;
-  stockRerun?: Results;
+  rerun?: DesignCheck;
+  stockRerun?: DesignCheck;
   /** Repeat-incident stress / shear yield against the segment's diameter, for the report's figure. */
   sweep: DiameterPoint[];
   /** Stock sizes within the sweep, m. */
@@ -51,13 +51,16 @@ const SWEEP_POINTS = 48;
  * Resizes only the most stressed segment (bore ratio kept). Its own stress falls as it grows, but a
  * stiffer segment raises the side's torque (T = √(2E/C)), so the others' stresses rise: the answer
  * is the diameter where its own stress / shear yield reaches 1/N, provided the others are then still within
- * it. Every trial diameter is a rerun of the engine.
+ * it. Every trial diameter is a rerun of the engine's energy method (what the search and the sweep
+ * read); the answer and its stock size are design checks with the dynamic model's modes too.
  */
 export function criticalSegment(c: Case, r: Results, designFactor: number): CriticalSegmentOption {
   const side = r.governing.side.side;
   const segment = r.governing.piece.piece.segment;
   const present = segment.diameter;
-  const runAt = (d: number) => designRun(withDiameters(c, new Map([[segment.index, d]])));
+  const changed = (d: number) => withDiameters(c, new Map([[segment.index, d]]));
+  const runAt = (d: number) => energyCheck(changed(d));
+  const checkAt = (d: number) => designCheck(changed(d));
   const target = 1 / designFactor;
   const excess = (d: number) => segmentYieldRatio(runAt(d), side, segment.index)! - target;
 
@@ -66,7 +69,7 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
   if (excess(present) > 0) for (let i = 0; i < 60 && excess(hi) > 0; i++) hi *= 2;
   else for (let i = 0; i < 60 && excess(lo) <= 0; i++) lo /= 2;
   const ownDiameter = bisect(excess, lo, hi);
-  const atOwn = runAt(ownDiameter);
+  const atOwn = checkAt(ownDiameter);
   const othersAtOwn = othersYieldRatio(atOwn, side, segment.index);
   const fits = othersAtOwn <= target * (1 + 1e-9);
   const verdict: CriticalVerdict = !fits ? 'others-critical' : ownDiameter < present ? 'present-keeps' : 'fits';
@@ -93,7 +96,7 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
     option.diameter = ownDiameter;
     option.stockDiameter = stockSizeUp(ownDiameter, c.units);
     option.rerun = atOwn;
-    option.stockRerun = runAt(option.stockDiameter);
+    option.stockRerun = checkAt(option.stockDiameter);
   }
   return option;
 }

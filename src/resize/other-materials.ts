@@ -1,8 +1,7 @@
 import type { Case } from '../case/case.ts';
 import { MATERIAL_LIBRARY } from '../materials/library.ts';
 import type { Material } from '../materials/material.ts';
-import { designRun } from './design-run.ts';
-import type { Results } from '../results/results.ts';
+import { designCheck, type DesignCheck } from './design-run.ts';
 import { withShaftMaterial } from './change-case.ts';
 
 /** A library material for the whole shaft, same geometry, against a repeat of the incident. */
@@ -11,7 +10,7 @@ export interface MaterialOption {
   /** Highest stress / shear yield over every side in the rerun. */
   yieldRatio: number;
   keepsFactor: boolean;
-  rerun: Results;
+  rerun: DesignCheck;
 }
 
 /** Elongation below which a material is brittle and not offered for a shaft that must take a jam. */
@@ -32,7 +31,7 @@ export function otherMaterials(c: Case, designFactor: number): MaterialOption[] 
       !(present.size === 1 && present.has(m.key)),
   )
     .map((material) => {
-      const rerun = designRun(withShaftMaterial(c, material));
+      const rerun = designCheck(withShaftMaterial(c, material));
       return { material, yieldRatio: rerun.yieldRatio, keepsFactor: rerun.yieldRatio * designFactor <= 1 + 1e-12, rerun };
     })
     .sort((a, b) => a.yieldRatio - b.yieldRatio);

@@ -3,6 +3,7 @@ import type { Investigation } from '../finding/investigation.ts';
 import type { Results } from '../results/results.ts';
 import { runningTorque } from '../results/running-torque.ts';
 import { criticalSegment } from './critical-segment.ts';
+import { designCheck, type DesignCheck } from './design-run.ts';
 import { guardingRecommendations } from './guarding.ts';
 import { keyFuses } from './key-fuse.ts';
 import { otherMaterials } from './other-materials.ts';
@@ -31,7 +32,9 @@ export function resizeCase(c: Case, results: Investigation, options: ResizeOptio
   const { serviceFactor, maxScale } = c.analysis;
   const running = runningTorque(c);
   const side = results.governing.side.side;
-  const effects = (r: Results) => ({ running: runningCheck(r.case, running, designFactor), change: stiffnessChange(results, r, side) });
+  // The present case's modes from a chain cut as the options' are, for the frequency ratios.
+  const presentModes = results.verdictBasis === 'dynamic model' ? designCheck(c) : results;
+  const effects = (r: DesignCheck) => ({ running: runningCheck(r.case, running, designFactor), change: stiffnessChange(results, r, side, presentModes) });
 
   const scale = scaleSide(c, results, designFactor, maxScale);
   const critical = criticalSegment(c, results, designFactor);

@@ -1,6 +1,6 @@
 import type { Case, Segment } from '../case/case.ts';
 import type { SideName } from '../model/shaft-model.ts';
-import { designRun } from './design-run.ts';
+import { designCheck, type DesignCheck } from './design-run.ts';
 import type { Results } from '../results/results.ts';
 import { withDiameters } from './change-case.ts';
 import { sideOf, sideSegments } from './side-ratio.ts';
@@ -24,10 +24,10 @@ export interface ScaleSideOption {
   diameters: number[];
   /** The same rounded up to stock sizes, m. */
   stockDiameters: number[];
-  /** analyseCase on the scaled case, exact diameters. */
-  rerun: Results;
-  /** analyseCase on the case with the stock diameters. */
-  stockRerun: Results;
+  /** The design check of the scaled case, exact diameters. */
+  rerun: DesignCheck;
+  /** The design check of the case with the stock diameters. */
+  stockRerun: DesignCheck;
 }
 
 /**
@@ -55,7 +55,7 @@ export function scaleSide(c: Case, r: Results, designFactor: number, maxScale: n
     segments,
     diameters,
     stockDiameters,
-    rerun: designRun(withDiameters(c, map(diameters))),
-    stockRerun: designRun(withDiameters(c, map(stockDiameters))),
+    rerun: designCheck(withDiameters(c, map(diameters))),
+    stockRerun: designCheck(withDiameters(c, map(stockDiameters))),
   };
 }

@@ -3,23 +3,23 @@ import type { SideResult } from '../physics/energy-method.ts';
 import type { Results } from '../results/results.ts';
 
 /** The side of a result by name. */
-export function sideOf(r: Results, side: SideName): SideResult {
+export function sideOf(r: Pick<Results, 'sides'>, side: SideName): SideResult {
   return r.sides.find((s) => s.side === side)!;
 }
 
 /** The highest stress / shear yield on one side of a result. */
-export function sideYieldRatio(r: Results, side: SideName): number {
+export function sideYieldRatio(r: Pick<Results, 'sides'>, side: SideName): number {
   return Math.max(...sideOf(r, side).pieces.map((p) => p.yieldRatio));
 }
 
 /** The highest stress / shear yield of one segment's pieces on a side; undefined if it has none there. */
-export function segmentYieldRatio(r: Results, side: SideName, segment: number): number | undefined {
+export function segmentYieldRatio(r: Pick<Results, 'sides'>, side: SideName, segment: number): number | undefined {
   const ratios = sideOf(r, side).pieces.filter((p) => p.piece.segment.index === segment).map((p) => p.yieldRatio);
   return ratios.length > 0 ? Math.max(...ratios) : undefined;
 }
 
 /** The highest stress / shear yield on a side outside one segment (0 when the segment is the whole run). */
-export function othersYieldRatio(r: Results, side: SideName, segment: number): number {
+export function othersYieldRatio(r: Pick<Results, 'sides'>, side: SideName, segment: number): number {
   return Math.max(0, ...sideOf(r, side).pieces.filter((p) => p.piece.segment.index !== segment).map((p) => p.yieldRatio));
 }
 

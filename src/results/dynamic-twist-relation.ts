@@ -3,7 +3,8 @@ import type { ShaftModel } from '../model/shaft-model.ts';
 import { bracketedRoot } from '../physics/root-find.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
 import { solveDynamics } from './dynamic-solve.ts';
-import type { TwistRelation } from './twist-findings.ts';
+import { sideBalance } from './side-balance.ts';
+import { balanceTwistRelation, type TwistRelation } from './twist-findings.ts';
 
 /** Points of the figure's curve: each is one run of the dynamic model. */
 const CURVE_POINTS = 12;
@@ -15,6 +16,9 @@ const ONSET_TOLERANCE = 1e-3;
 const NONE = 1e-6;
 /** Speed steps upward when looking for a speed that leaves a twist: ×1.5, this many times. */
 const MAX_GROWTH = 24;
+/** Steps from the energy balance's onset when bracketing the dynamic model's: ×(1 ± this), a few times. */
+const ONSET_STEP = 0.1;
+const ONSET_STEPS = 4;
 const EPS = 1e-9;
 
 /**
@@ -66,9 +70,26 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
   let onsetSpeed: number | undefined;
   const onset = (): number => {
     if (onsetSpeed !== undefined) return onsetSpeed;
-    const b = bracket(NONE);
+    const b = onsetBracket() ?? bracket(NONE);
     onsetSpeed = b === undefined ? Infinity : bisect((w) => permanentAt(w) > NONE, b[0], b[1], ONSET_TOLERANCE);
     return onsetSpeed;
+  };
+  /**
+   * A narrow bracket of the dynamic model's onset around the energy balance's (closed form, the
+   * same laws with all of a side's energy into its shaft), which it lies near where little else
+   * takes energy: steps of 10 % from there, a few each way; undefined when that does not bracket it.
+   */
+  const onsetBracket = (): [number, number] | undefined => {
+    const guess = balanceTwistRelation(model.sides, model.sides.map((side, i) => sideBalance(side, c, sideInertia[i])), x1, x2)?.onset();
+    if (guess === undefined || !Number.isFinite(guess) || !(guess > 0)) return undefined;
+    const yields = permanentAt(guess) > NONE;
+    let w = guess;
+    for (let k = 0; k < ONSET_STEPS; k++) {
+      const next = yields ? w / (1 + ONSET_STEP) : w * (1 + ONSET_STEP);
+      if (yields !== permanentAt(next) > NONE) return yields ? [next, w] : [w, next];
+      w = next;
+    }
+    return undefined;
   };
   return {
     model: 'dynamic model',

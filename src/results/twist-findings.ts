@@ -55,8 +55,12 @@ export interface TwistFinding {
   strengthBasis: StrengthBasis;
   /** What the finding usually means, in plain words (no numbers: the views add them in the case's units). */
   meaning: string;
-  /** The speed → permanent-twist relation between the stations, for the figure. */
-  curve: { speed: number; permanentTwist: number }[];
+  /**
+   * The speed → permanent-twist relation between the stations, for the figure. Built when first
+   * read (through the dynamic model each point is a rerun, and only the report draws it); empty
+   * where no loaded shaft lies between the stations.
+   */
+  readonly curve: { speed: number; permanentTwist: number }[];
 }
 
 const MEANINGS: Record<TwistFindingCode, string> = {
@@ -158,6 +162,7 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
     const top = 1.3 * Math.max(c.speed, band.high, Number.isFinite(onset) ? onset : 0, speed ?? 0);
     const n = rel.curvePoints;
     const speeds = [...Array.from({ length: n + 1 }, (_, i) => (top * i) / n), c.speed, ...(speed === undefined ? [] : [speed]), ...(Number.isFinite(onset) && onset < top ? [onset] : [])].sort((a, b) => a - b);
+    let curve: TwistFinding['curve'] | undefined;
     return {
       ...base,
       model: rel.model,
@@ -170,7 +175,10 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
       beyondFracture: speed !== undefined && m.angle > 0 && rel.breaksAt(speed),
       finding,
       meaning: finding === 'unexplained' && rel.breaksBefore(m.angle) ? PAST_FRACTURE : meaningOf(finding, rel.model, strengthBasis),
-      curve: speeds.map((w) => ({ speed: w, permanentTwist: rel.permanentAt(w) })),
+      get curve() {
+        curve ??= speeds.map((w) => ({ speed: w, permanentTwist: rel.permanentAt(w) }));
+        return curve;
+      },
     };
   });
 }

@@ -120,7 +120,7 @@ export function keySentences(z: ResizeResult, k: KeyFuse): string[] {
 }
 
 /** " Side B is then at a stress / shear yield of 5.21, past the factor: …" for each other side a change leaves past N. */
-function otherSidesWords(z: ResizeResult, rerun: Results, side: string): string {
+function otherSidesWords(z: ResizeResult, rerun: Pick<ResizeResult['results'], 'sides'>, side: string): string {
   return rerun.sides
     .filter((s) => s.side !== side && sideYieldRatio(rerun, s.side) * z.designFactor > 1 + 1e-9)
     .map((s) => ` Side ${s.side} is then at a stress / shear yield of ${sig(sideYieldRatio(rerun, s.side))}, past the factor: it needs its own remedy.`)

@@ -28,9 +28,28 @@ function staticGraph(entry: string): { files: Set<string>; packages: Set<string>
 describe('start-up of the CLI', () => {
   it('the CLI entry reaches none of the report\'s packages through static imports', () => {
     const { files, packages } = staticGraph(join(SRC, 'cli', 'bin.ts'));
-    expect(files.size).toBeGreaterThan(10);
+    // The walk does follow the project's imports: a command reaches the engine.
+    expect(staticGraph(join(SRC, 'cli', 'commands', 'check.ts')).files.size).toBeGreaterThan(10);
     for (const p of REPORT_ONLY) expect([...packages], p).not.toContain(p);
     expect([...files].some((f) => f.includes('/src/report/'))).toBe(false);
+  });
+
+  it('--help and the arguments load no engine: the CLI entry reaches only the argument parser, the version and the error class', () => {
+    const { files, packages } = staticGraph(join(SRC, 'cli', 'bin.ts'));
+    const rel = [...files].map((f) => f.slice(SRC.length)).sort();
+    expect(rel).toEqual(['case/case-error.ts', 'cli/bin.ts', 'cli/main.ts', 'cli/version.ts']);
+    expect([...packages].sort()).toEqual(['commander', 'node:fs']);
+  });
+
+  it.each(['check', 'resize', 'materials', 'new'])('the %s command reaches none of the report\'s packages or modules', (command) => {
+    const { files, packages } = staticGraph(join(SRC, 'cli', 'commands', `${command}.ts`));
+    for (const p of REPORT_ONLY) expect([...packages], p).not.toContain(p);
+    expect([...files].some((f) => f.includes('/src/report/'))).toBe(false);
+  });
+
+  it('check --json does not load the terminal summary\'s views', () => {
+    const { files } = staticGraph(join(SRC, 'cli', 'commands', 'check.ts'));
+    expect([...files].some((f) => f.endsWith('/views/summary.ts'))).toBe(false);
   });
 
   it('the report command itself does reach them (so the check above looks at the right graph)', () => {

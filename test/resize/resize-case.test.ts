@@ -13,11 +13,23 @@ const load = (f: string) => {
   const c = parseCase(readFileSync(new URL(f, dir), 'utf8'), f);
   return { c, r: withFinding(analyseCase(c)) };
 };
+const made = new Map<string, ReturnType<typeof load> & { z: ReturnType<typeof resizeCase>; before: string; ratio: number }>();
+/** Each sample case analysed and resized at its own factor once for the file, with the case and ratio as they were before. */
+const resized = (f: string) => {
+  let m = made.get(f);
+  if (!m) {
+    const { c, r } = load(f);
+    const before = JSON.stringify(c);
+    const ratio = r.yieldRatio;
+    m = { c, r, before, ratio, z: resizeCase(c, r) };
+    made.set(f, m);
+  }
+  return m;
+};
 
 describe('resizeCase on every sample case', () => {
   it.each(samples)('%s: every option is there, and the scaled side\'s rerun confirms 1/N', (f) => {
-    const { c, r } = load(f);
-    const z = resizeCase(c, r);
+    const { r, z } = resized(f);
     expect(z.designFactor).toBe(1.5);
     expect(z.scaleSide.s).toBe(r.yieldRatio * 1.5);
     expect(rel(sideYieldRatio(z.scaleSide.rerun, z.scaleSide.side), 1 / 1.5)).toBeLessThan(1e-12);
@@ -28,18 +40,15 @@ describe('resizeCase on every sample case', () => {
   });
 
   it('the granulator and the screw conveyor carry a drive and a key; the edger has neither', () => {
-    const gr = load('granulator-tramp-metal.yaml');
-    const sc = load('screw-conveyor-jam-us.yaml');
-    const ed = load('edger-arbor-two-sides.yaml');
-    expect(resizeCase(gr.c, gr.r).keys.map((k) => k.station)).toEqual(['drive sheave']);
-    expect(resizeCase(sc.c, sc.r).limiter.min).toBeDefined();
-    const edger = resizeCase(ed.c, ed.r);
+    expect(resized('granulator-tramp-metal.yaml').z.keys.map((k) => k.station)).toEqual(['drive sheave']);
+    expect(resized('screw-conveyor-jam-us.yaml').z.limiter.min).toBeDefined();
+    const edger = resized('edger-arbor-two-sides.yaml').z;
     expect(edger.keys).toEqual([]);
     expect(edger.limiter.min).toBeUndefined();
   });
 
   it('--factor overrides the case\'s design factor; a factor below 1 is a bug to call with', () => {
-    const { c, r } = load('screw-conveyor-jam-us.yaml');
+    const { c, r } = resized('screw-conveyor-jam-us.yaml');
     const z = resizeCase(c, r, { factor: 2 });
     expect(z.designFactor).toBe(2);
     expect(z.scaleSide.s).toBe(r.yieldRatio * 2);
@@ -47,10 +56,7 @@ describe('resizeCase on every sample case', () => {
   });
 
   it('does not change the case or the results it is given', () => {
-    const { c, r } = load('granulator-tramp-metal.yaml');
-    const before = JSON.stringify(c);
-    const ratio = r.yieldRatio;
-    resizeCase(c, r);
+    const { c, r, before, ratio } = resized('granulator-tramp-metal.yaml');
     expect(JSON.stringify(c)).toBe(before);
     expect(r.yieldRatio).toBe(ratio);
   });

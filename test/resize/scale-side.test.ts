@@ -63,7 +63,7 @@ describe('scale the side: every segment of the governing side by s = yield_ratio
           return rel(sideYieldRatio(o.rerun, o.side), 1 / N) < 1e-10;
         },
       ),
-      { numRuns: 60 },
+      { numRuns: 25 },
     );
   });
 

@@ -17,6 +17,8 @@ describe('what an option does to the stiffness and natural frequency (energy-met
         // k = G·J_p/L, J_p = π(d⁴ − di⁴)/32 (REFERENCE 1.1.2, 1.1.5); ω_n = √(k/J) (REFERENCE 10.1).
         return rel(k.stiffness, s ** 4) < 1e-9 && rel(k.frequency, s ** 2) < 1e-9 && rel(k.peakTorque, s ** 2) < 1e-9;
       }),
+      // Each run is two solves of the whole engine; a few dozen scales prove the law.
+      { numRuns: 25 },
     );
   });
 

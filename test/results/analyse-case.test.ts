@@ -103,6 +103,9 @@ describe('the laws of the energy method', () => {
     d: fc.integer({ min: 10, max: 200 }),
     j: fc.double({ min: 0.01, max: 100, noNaN: true }),
   });
+  // Every run is two solves of the whole engine (the dynamic model included): a few dozen layouts
+  // prove each law; test/slow/energy-method-laws.test.ts runs the mirrored shaft at full strength.
+  const RUNS = { numRuns: 20 };
 
   it('peak stress is proportional to the speed at the stop', () => {
     fc.assert(
@@ -111,6 +114,7 @@ describe('the laws of the energy method', () => {
         const b = run({ rpm: rpm * k, segments: [[len, d, 0]], stations: [['jam', 0, 0], ['m', len, j]], stop: 'jam' });
         return Math.abs(b.maxShearStress / a.maxShearStress / k - 1) < 1e-9;
       }),
+      RUNS,
     );
   });
 
@@ -121,6 +125,7 @@ describe('the laws of the energy method', () => {
         const b = run({ rpm, segments: [[2 * len, d, 0]], stations: [['jam', 0, 0], ['m', 2 * len, j]], stop: 'jam' });
         return Math.abs((b.maxShearStress * Math.SQRT2) / a.maxShearStress - 1) < 1e-9;
       }),
+      RUNS,
     );
   });
 
@@ -131,6 +136,7 @@ describe('the laws of the energy method', () => {
         const [A, B] = r.sides;
         return r.sides.length === 2 && Math.abs(A.peakTorque / B.peakTorque - 1) < 1e-12 && Math.abs(A.twist / B.twist - 1) < 1e-12;
       }),
+      RUNS,
     );
   });
 
@@ -145,6 +151,7 @@ describe('the laws of the energy method', () => {
           Math.abs(fwd.maxShearStress / rev.maxShearStress - 1) < 1e-12
         );
       }),
+      RUNS,
     );
   });
 
@@ -155,6 +162,7 @@ describe('the laws of the energy method', () => {
         const hollow = run({ rpm, segments: [[len, d, Math.min(d - 1, Math.max(1, Math.round(d * ratio)))]], stations: [['jam', 0, 0], ['m', len, j]], stop: 'jam' });
         return hollow.sides[0].compliance > solid.sides[0].compliance && hollow.sides[0].peakTorque < solid.sides[0].peakTorque;
       }),
+      RUNS,
     );
   });
 });

@@ -1,14 +1,14 @@
 import { loadCase } from '../../io/load-case.ts';
 import { investigate } from '../../finding/investigate.ts';
 import { resultsToJson } from '../../views/results-json.ts';
-import { renderSummary } from '../../views/summary.ts';
 import { screenInputs } from '../input-warnings.ts';
 import type { Io } from '../io.ts';
 import { terminalProgress } from '../progress.ts';
 
-export function checkCommand(path: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }, io: Io): void {
+export async function checkCommand(path: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }, io: Io): Promise<void> {
   const loaded = loadCase(path);
   const inputWarnings = screenInputs(loaded, opts.strict, io);
   const results = investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
-  io.out(opts.json ? JSON.stringify(resultsToJson(results), null, 2) + '\n' : renderSummary(results));
+  // The terminal summary's views load only when it is printed.
+  io.out(opts.json ? JSON.stringify(resultsToJson(results), null, 2) + '\n' : (await import('../../views/summary.ts')).renderSummary(results));
 }

@@ -36,11 +36,12 @@ export interface ReportOptions {
 export async function reportCommand(path: string, opts: ReportOptions, io: Io, now: Date): Promise<void> {
   const loaded = loadCase(path);
   const inputWarnings = screenInputs(loaded, opts.strict, io);
+  // What is read from disk first, so a missing template or photo is reported before any computing.
+  const template = readTemplate(opts.template);
+  const photos = readPhotos(loaded.file, loaded.text, loaded.case.observed.photos);
   // Everything the report shows is computed here, once; rendering only reads it.
   const data = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
   const { results } = data;
-  const template = readTemplate(opts.template);
-  const photos = readPhotos(loaded.file, loaded.text, loaded.case.observed.photos);
   const run = runInfo(now, version());
   const source = { file: basename(loaded.file), text: loaded.text, sha256: loaded.sha256 };
 
