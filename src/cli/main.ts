@@ -96,7 +96,9 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     return 0;
   } catch (e) {
     if (e instanceof CaseError) {
-      io.err(`${e.message}\n${e.problems.length} problem${e.problems.length === 1 ? '' : 's'} in ${e.file}; nothing was written.\n`);
+      // Under --json a program reads the mistakes: one JSON object on stderr, same exit status.
+      if (argv.includes('--json')) io.err(JSON.stringify((await import('./case-error-json.ts')).caseErrorToJson(e)) + '\n');
+      else io.err(`${e.message}\n${e.problems.length} problem${e.problems.length === 1 ? '' : 's'} in ${e.file}; nothing was written.\n`);
       return 2;
     }
     if (e instanceof CommanderError) return e.exitCode === 0 ? 0 : 2;

@@ -16,17 +16,28 @@ export const CHROMIUM_ARGS = [
   '--disable-sync',
 ];
 
-export const INSTALL_CHROMIUM = 'install Debian\'s package: sudo apt-get install chromium';
+export const INSTALL_CHROMIUM = 'install Debian\'s package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM';
 
-/** The Chromium executable, or undefined when none is installed. The tool never downloads a browser. */
-export function findChromium(paths: readonly string[] = CHROMIUM_PATHS): string | undefined {
+/** The environment variable that names the browser for `--pdf`, before the Debian paths are tried. */
+export const CHROMIUM_ENV = 'SHAFTCASE_CHROMIUM';
+
+/**
+ * The Chromium executable: the one `SHAFTCASE_CHROMIUM` names (it must exist), else the first
+ * Debian path that exists; undefined when none is found. The tool never downloads a browser.
+ */
+export function findChromium(paths: readonly string[] = CHROMIUM_PATHS, named: string | undefined = process.env[CHROMIUM_ENV]): string | undefined {
+  if (named !== undefined && named !== '') return existsSync(named) ? named : undefined;
   return paths.find((p) => existsSync(p));
 }
 
 /** Thrown when a command needs Chromium and there is none. */
 export class ChromiumMissing extends Error {
-  constructor() {
-    super(`Chromium was not found at ${CHROMIUM_PATHS.join(' or ')}; ${INSTALL_CHROMIUM}`);
+  constructor(named: string | undefined = process.env[CHROMIUM_ENV]) {
+    super(
+      named
+        ? `Chromium was not found at ${named} (named by ${CHROMIUM_ENV}); give the path of a Chromium or Chrome executable, or unset it to use Debian's`
+        : `Chromium was not found at ${CHROMIUM_PATHS.join(' or ')}; ${INSTALL_CHROMIUM}`,
+    );
     this.name = 'ChromiumMissing';
   }
 }

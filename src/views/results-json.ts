@@ -2,6 +2,7 @@ import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { DynamicResult } from '../results/dynamic-result.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import { findingToJson } from './finding-json.ts';
+import { SCHEMA_VERSION } from './schema-version.ts';
 import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
 import type { Uncertainty } from '../uncertainty/uncertainty.ts';
 
@@ -18,6 +19,7 @@ import type { Uncertainty } from '../uncertainty/uncertainty.ts';
  */
 export function resultsToJson(r: Investigation): Record<string, unknown> {
   return {
+    schema_version: SCHEMA_VERSION,
     case_id: r.case.meta.id,
     speed_rad_s: r.speed,
     kinetic_energy_J: r.kineticEnergy,

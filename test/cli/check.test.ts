@@ -26,6 +26,7 @@ describe('shaftcase check', () => {
 
   it('--json prints the contract keys in SI', async () => {
     const j = JSON.parse((await cli('check', fixture, '--json')).out);
+    expect(j.schema_version).toBe(1);
     for (const key of ['case_id', 'speed_rad_s', 'kinetic_energy_J', 'max_shear_stress_Pa', 'shear_yield_Pa', 'yield_ratio', 'verdict', 'warnings', 'sides']) {
       expect(j).toHaveProperty(key);
     }
@@ -73,6 +74,17 @@ describe('shaftcase check', () => {
     expect(p.stderr).not.toMatch(/\n\s+at /);
   });
 
+  it('under --json a bad case file prints one JSON object on stderr with each mistake\'s code, place and field, and exits 2', () => {
+    const p = spawnSync(process.execPath, [bin, 'check', '--json', fileURLToPath(new URL('../data/bad-units.yaml', import.meta.url))], { encoding: 'utf8' });
+    expect(p.status).toBe(2);
+    expect(p.stdout).toBe('');
+    const j = JSON.parse(p.stderr);
+    expect(j.schema_version).toBe(1);
+    expect(j.errors.length).toBeGreaterThanOrEqual(1);
+    expect(j.error).toEqual(j.errors[0]);
+    expect(j.errors).toContainEqual(expect.objectContaining({ code: 'E_UNIT', line: 12, column: 17, field: 'shaft.segments[0].diameter', message: expect.stringMatching(/"50" has no unit/) }));
+  });
+
   it('a missing case file exits 2 with a plain message', async () => {
     const r = await cli('check', 'no/such/case.yaml');
     expect(r.status).toBe(2);
@@ -81,9 +93,15 @@ describe('shaftcase check', () => {
 
   it('materials lists at least twelve materials with their sources', async () => {
     const r = await cli('materials', '--json');
-    const list = JSON.parse(r.out);
+    const { schema_version, materials: list } = JSON.parse(r.out);
+    expect(schema_version).toBe(1);
     expect(list.length).toBeGreaterThanOrEqual(12);
     for (const m of list) expect(m.source).toMatch(/\w/);
+    // In the results' style: snake_case, SI in the key names.
+    const steel = list.find((m: { key: string }) => m.key === 'aisi-1045-cd');
+    expect(steel.yield_strength_Pa).toBeGreaterThan(1e8);
+    expect(steel.shear_modulus_Pa).toBeGreaterThan(7e10);
+    expect(Object.keys(steel).every((k) => /^[a-z0-9_]+(_Pa|_kg_m3)?$/.test(k))).toBe(true);
   });
 
   describe('plausibility warnings', () => {

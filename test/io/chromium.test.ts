@@ -17,12 +17,18 @@ if (missing && !inCI) console.warn('Browser test skipped: Chromium is not instal
 
 describe('finding Chromium', () => {
   it('findChromium gives the first path that exists, or undefined when none does', () => {
-    expect(findChromium(['/nonexistent/chromium'])).toBeUndefined();
-    expect(findChromium(['/nonexistent/chromium', process.execPath])).toBe(process.execPath);
+    expect(findChromium(['/nonexistent/chromium'], undefined)).toBeUndefined();
+    expect(findChromium(['/nonexistent/chromium', process.execPath], undefined)).toBe(process.execPath);
   });
 
-  it('a missing Chromium is explained with where it was looked for and how to install it', () => {
-    expect(new ChromiumMissing().message).toBe('Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian\'s package: sudo apt-get install chromium');
+  it('findChromium takes the browser SHAFTCASE_CHROMIUM names first, and only if it exists', () => {
+    expect(findChromium(['/nonexistent/chromium'], process.execPath)).toBe(process.execPath);
+    expect(findChromium([process.execPath], '/nonexistent/chrome')).toBeUndefined();
+  });
+
+  it('a missing Chromium is explained with where it was looked for and how to install or name one', () => {
+    expect(new ChromiumMissing(undefined).message).toBe("Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian's package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM");
+    expect(new ChromiumMissing('/opt/x/chrome').message).toMatch(/^Chromium was not found at \/opt\/x\/chrome \(named by SHAFTCASE_CHROMIUM\)/);
   });
 });
 
