@@ -25,12 +25,12 @@ describe('shaftcase report --pdf', () => {
 
   it('without Chromium, --pdf says so and how to install it, and writes the rest of the report', async () => {
     const { ChromiumMissing } = await vi.importActual<typeof import('../../src/io/chromium.ts')>('../../src/io/chromium.ts');
-    printPdf.mockRejectedValueOnce(new ChromiumMissing());
+    printPdf.mockRejectedValueOnce(new ChromiumMissing(undefined));
     const file = copyToTemp(SAMPLE);
     const run = await cli(['report', '--pdf', file]);
     expect(run.code).toBe(0);
     expect(run.err).toBe(
-      'report.pdf not written: Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian\'s package: sudo apt-get install chromium. The rest of the report is written; print report.html from a browser instead.\n',
+      'report.pdf not written: Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian\'s package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM. The rest of the report is written; print report.html from a browser instead.\n',
     );
     const folder = join(dirname(file), 'reports', '2026-12-01');
     expect(existsSync(join(folder, 'report.html'))).toBe(true);
