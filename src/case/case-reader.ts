@@ -3,6 +3,7 @@ import { parseQuantity, QuantityError, type Quantity, type Tolerance } from '../
 import { type QuantityKind, KIND_EXAMPLES } from '../units/unit-table.ts';
 import { formatPath, type CaseErrorCode, type CaseProblem, type SourcePosition } from './case-error.ts';
 import { didYouMean } from './did-you-mean.ts';
+import { KIND_LIMITS, type Limit } from './limits.ts';
 
 export type Path = readonly (string | number)[];
 
@@ -126,7 +127,7 @@ export class CaseReader {
   }
 
   /** A plain number (counts, ratios, factors). */
-  number(path: Path, opts: FieldOptions & { example: string; positive?: boolean; min?: number; integer?: boolean }): number | undefined {
+  number(path: Path, opts: FieldOptions & { example: string; positive?: boolean; min?: number; max?: number; integer?: boolean }): number | undefined {
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, opts.example);
@@ -141,7 +142,7 @@ export class CaseReader {
       this.fail('E_RANGE', path, `${v} is not a whole number; give ${opts.example}`);
       return undefined;
     }
-    if ((opts.positive && v <= 0) || (opts.min !== undefined && v < opts.min)) {
+    if ((opts.positive && v <= 0) || (opts.min !== undefined && v < opts.min) || (opts.max !== undefined && v > opts.max)) {
       this.fail('E_RANGE', path, `${v} is out of range; give ${opts.example}`);
       return undefined;
     }
@@ -161,11 +162,16 @@ export class CaseReader {
     return n.value;
   }
 
-  /** A quantity with its unit, converted to SI. `positive` rejects zero and negatives; `nonNegative` only negatives. */
+  /**
+   * A quantity with its unit, converted to SI. `positive` rejects zero and negatives; `nonNegative`
+   * only negatives. Its magnitude (unless zero) must lie within `limit` (default: the kind's, in
+   * src/case/limits.ts), and a ± band must be narrower than the value, so that the quantity it
+   * spans stays above zero.
+   */
   quantity(
     path: Path,
     kind: QuantityKind,
-    opts: FieldOptions & { positive?: boolean; nonNegative?: boolean; example?: string } = {},
+    opts: FieldOptions & { positive?: boolean; nonNegative?: boolean; example?: string; limit?: Limit } = {},
   ): Quantity | undefined {
     const n = this.node(path);
     const example = opts.example ?? KIND_EXAMPLES[kind];
@@ -192,7 +198,23 @@ export class CaseReader {
       this.fail('E_RANGE', path, `"${String(n.value)}" must be ${need}; give ${example}`);
       return undefined;
     }
-    if (q.tolerance) this.tolerances[formatPath(path)] = q.tolerance;
+    const limit = opts.limit ?? KIND_LIMITS[kind];
+    const size = Math.abs(q.value);
+    if (size !== 0 && (size < limit.min || size > limit.max)) {
+      this.fail('E_RANGE', path, `"${String(n.value)}" is out of range (${limit.text}); give ${example}`);
+      return undefined;
+    }
+    if (q.tolerance) {
+      const band = q.tolerance.kind === 'relative' ? q.tolerance.fraction * size : q.tolerance.value;
+      // A value that may be zero (a measured twist of "0 deg ± 0.5 deg") may carry a band down to
+      // zero; the Monte Carlo holds its draws at zero. One that must be positive needs a band
+      // narrower than itself.
+      if (!Number.isFinite(band) || (opts.positive && band >= size) || (!opts.positive && size !== 0 && band > size)) {
+        this.fail('E_RANGE', path, `"${String(n.value)}": the ± band is not narrower than the value, so the quantity could be zero or negative; give a band smaller than the value, such as "± 3 %"`);
+        return undefined;
+      }
+      this.tolerances[formatPath(path)] = q.tolerance;
+    }
     return q;
   }
 }

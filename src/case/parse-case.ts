@@ -47,7 +47,7 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const stopAt = stop.at;
 
   const caseMaterials = readCaseMaterials(r);
-  const used: Record<string, Material> = {};
+  const used: Record<string, Material> = Object.create(null); // keyed by the user's names: no prototype
   const shaft = readShaft(r, caseMaterials, used);
   const stations = readStations(r, shaft.length, caseMaterials, used);
   const observed = readObserved(r, stations);
@@ -87,12 +87,28 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
 function readMeta(r: CaseReader): CaseMeta {
   r.map(['case'], META_KEYS, { required: true, example: 'a mapping with at least id: "INC-0042"' });
   const meta: CaseMeta = { id: r.string(['case', 'id'], { required: true, example: 'an incident id such as "INC-2026-014"' }) ?? '' };
+  if (r.has(['case', 'id']) && meta.id.trim() === '') r.fail('E_MISSING', ['case', 'id'], 'is empty; give an incident id such as "INC-2026-014"');
   for (const key of META_KEYS.slice(1) as (keyof CaseMeta)[]) {
     const v = r.string(['case', key]);
     if (v !== undefined) meta[key] = v;
   }
-  if (meta.occurred !== undefined && !/^\d{4}-\d{2}-\d{2}([T ][0-9:.]+(Z|[+-]\d{2}:?\d{2})?)?$/.test(meta.occurred)) {
+  if (meta.occurred !== undefined && !isIsoDate(meta.occurred)) {
     r.fail('E_TYPE', ['case', 'occurred'], `"${meta.occurred}" is not an ISO date; give a date such as "2026-03-14" or "2026-03-14T06:40"`);
   }
   return meta;
+}
+
+/**
+ * An ISO 8601 date or local date-time that exists: `2026-03-14`, `2026-03-14T06:40`,
+ * `2026-03-14 06:40:12.5+01:00`. Not `2026-13-45` nor `2026-02-30T25:00`.
+ */
+export function isIsoDate(text: string): boolean {
+  const m = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.\d+)?)?(?:Z|[+-](\d{2}):?(\d{2}))?)?$/.exec(text);
+  if (!m) return false;
+  const [year, month, day] = [Number(m[1]), Number(m[2]), Number(m[3])];
+  const daysInMonth = new Date(Date.UTC(year, month, 0)).getUTCDate();
+  if (month < 1 || month > 12 || day < 1 || day > daysInMonth) return false;
+  if (m[4] !== undefined && (Number(m[4]) > 23 || Number(m[5]) > 59 || Number(m[6] ?? 0) > 59)) return false;
+  if (m[7] !== undefined && (Number(m[7]) > 14 || Number(m[8]) > 59)) return false;
+  return true;
 }
