@@ -3,7 +3,7 @@ import { parseQuantity, QuantityError, type Quantity, type Tolerance } from '../
 import { type QuantityKind, KIND_EXAMPLES } from '../units/unit-table.ts';
 import { formatPath, type CaseErrorCode, type CaseProblem, type SourcePosition } from './case-error.ts';
 import { didYouMean } from './did-you-mean.ts';
-import { KIND_LIMITS, type Limit } from './limits.ts';
+import { KIND_LIMITS, SIZE_LIMITS, type Limit } from './limits.ts';
 
 export type Path = readonly (string | number)[];
 
@@ -19,7 +19,7 @@ interface FieldOptions {
 export class CaseReader {
   readonly problems: CaseProblem[] = [];
   /** The ± bands of every quantity read, by field path. */
-  readonly tolerances: Record<string, Tolerance> = {};
+  readonly tolerances: Record<string, Tolerance> = Object.create(null);
 
   constructor(
     private readonly doc: Document,
@@ -92,8 +92,12 @@ export class CaseReader {
     return n.items.map((p) => (isScalar(p.key) ? String(p.key.value) : String(p.key)));
   }
 
-  /** Length of the list at `path`; 0 (with a problem if required) when absent or not a list. */
-  list(path: Path, opts: FieldOptions & { example?: string } = {}): number {
+  /**
+   * Length of the list at `path`; 0 (with a problem if required) when absent or not a list, and 0
+   * with a problem when it has more than `max` items (default `SIZE_LIMITS.listItems`), so no work
+   * is done on a list without bound.
+   */
+  list(path: Path, opts: FieldOptions & { example?: string; max?: number; what?: string } = {}): number {
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, opts.example ?? 'a list');
@@ -101,6 +105,11 @@ export class CaseReader {
     }
     if (!isSeq(n)) {
       this.fail('E_TYPE', path, `should be a list (items starting with "- "), not ${describe(n)}`);
+      return 0;
+    }
+    const max = opts.max ?? SIZE_LIMITS.listItems;
+    if (n.items.length > max) {
+      this.fail('E_RANGE', path, `has ${n.items.length} ${opts.what ?? 'items'}, more than the ${max} a case may have; ${opts.what ? `give at most ${max}` : 'shorten the list'}`);
       return 0;
     }
     return n.items.length;

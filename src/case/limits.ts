@@ -66,6 +66,8 @@ export const NUMBER_LIMITS = {
 export const SIZE_LIMITS = {
   /** Case file size, bytes. */
   fileBytes: 1_000_000,
+  /** Colons in the whole file: a bound on its keys checked before it is parsed. */
+  keysPerFile: 20_000,
   /** Keys in one YAML mapping. */
   keysPerMapping: 1000,
   /** Shaft segments. */

@@ -67,7 +67,7 @@ function readMotorTorque(r: CaseReader, path: Path): MotorTorqueSpec | undefined
     const t = r.quantity([...path, 'torque'], 'torque', { nonNegative: true, example: 'the motor\'s torque while it is pulled down, such as "580 N*m"' });
     return t && { kind: 'constant', torque: t.value };
   }
-  const n = r.list([...path, 'curve']);
+  const n = r.list([...path, 'curve'], { max: Infinity });
   if (n === 0 && !r.has([...path, 'curve'])) return undefined;
   if (n > SIZE_LIMITS.curvePoints) {
     r.fail('E_RANGE', [...path, 'curve'], `has ${n} points, more than ${SIZE_LIMITS.curvePoints}; give the curve's shape in fewer points, such as 5 to 20`);

@@ -1,7 +1,7 @@
 import type { Material } from '../materials/material.ts';
 import type { CaseReader } from './case-reader.ts';
 import type { Segment, Station } from './case.ts';
-import { NUMBER_LIMITS } from './limits.ts';
+import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
 const SEGMENT_KEYS = ['length', 'diameter', 'bore', 'material', 'kt', 'label', 'slip_torque', 'shear_torque'];
@@ -15,7 +15,7 @@ export function readShaft(
   const segments: Segment[] = [];
   if (!r.map(['shaft'], ['material', 'segments'], { required: true, example: 'a mapping with material and segments' })) return { segments, length: 0 };
   const shaftMaterial = r.string(['shaft', 'material']);
-  const n = r.list(['shaft', 'segments'], { required: true, example: 'a list of segments, each with length and diameter' });
+  const n = r.list(['shaft', 'segments'], { required: true, example: 'a list of segments, each with length and diameter', max: SIZE_LIMITS.segments, what: 'segments' });
   let position = 0;
   for (let i = 0; i < n; i++) {
     const path = ['shaft', 'segments', i];

@@ -4,7 +4,7 @@ import type { CaseReader } from './case-reader.ts';
 import type { Part, PartShape, Station } from './case.ts';
 import { readDrive } from './read-drive.ts';
 import { readKey } from './read-key.ts';
-import { NUMBER_LIMITS } from './limits.ts';
+import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
 const STATION_KEYS = ['name', 'at', 'parts', 'drive', 'key'];
@@ -24,7 +24,7 @@ export function readStations(
   used: Record<string, Material>,
 ): Station[] {
   const stations: Station[] = [];
-  const n = r.list(['stations'], { required: true, example: 'a list of stations, each with name, at and parts' });
+  const n = r.list(['stations'], { required: true, example: 'a list of stations, each with name, at and parts', max: SIZE_LIMITS.stations, what: 'stations' });
   const seen = new Map<string, number>();
   for (let i = 0; i < n; i++) {
     const path = ['stations', i];
@@ -39,7 +39,7 @@ export function readStations(
       r.fail('E_RANGE', [...path, 'at'], `lies off the shaft, which is ${Number((shaftLength * 1000).toPrecision(4))} mm long; give a distance from 0 to the shaft's length`);
     }
     const parts: Part[] = [];
-    const np = r.list([...path, 'parts']);
+    const np = r.list([...path, 'parts'], { max: SIZE_LIMITS.partsPerStation, what: 'parts' });
     for (let j = 0; j < np; j++) {
       const part = readPart(r, [...path, 'parts', j], caseMaterials, used);
       if (part) parts.push(part);

@@ -1,5 +1,6 @@
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { CaseError } from '../case/case-error.ts';
+import { NUMBER_LIMITS } from '../case/limits.ts';
 import { checkCommand } from './commands/check.ts';
 import { materialsCommand } from './commands/materials.ts';
 import { newCommand } from './commands/new.ts';
@@ -13,6 +14,13 @@ export type { Io } from './io.ts';
 function wholeNumber(value: string): number {
   if (!/^\d+$/.test(value)) throw new InvalidArgumentError(`"${value}" is not a whole number; give one such as 10000`);
   return Number(value);
+}
+
+/** Parses `--samples`: a whole number within the case format's limit (analysis.samples). */
+function sampleCount(value: string): number {
+  const n = wholeNumber(value);
+  if (n > NUMBER_LIMITS.samples[1]) throw new InvalidArgumentError(`${value} is more than ${NUMBER_LIMITS.samples[1]} samples; give one such as 10000`);
+  return n;
 }
 
 const stdio: Io = { out: (t) => process.stdout.write(t), err: (t) => process.stderr.write(t) };
@@ -49,7 +57,7 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .description('check a case file and print the impact torque, stress, twist and verdict')
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--json', 'print one JSON object, SI units')
-    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
     .action((file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }) => checkCommand(file, opts, io));
@@ -60,7 +68,7 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--factor <N>', 'design factor on shear yield in a repeat of the incident (default: the case\'s, else 1.5)', designFactor)
     .option('--json', 'print the check --json object with resize added, SI units')
-    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none), as for check', wholeNumber)
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none), as for check', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo, as for check', wholeNumber)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
     .action((file: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number; strict?: boolean }) => resizeCommand(file, opts, io));
@@ -84,7 +92,7 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--template <file>', "a site's own report template (Markdown with {{…}} placeholders, see templates/report.md)")
     .option('--pdf', 'also print report.pdf with Chromium (Debian package chromium)')
-    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')

@@ -39,6 +39,12 @@ export function fillTemplate(template: string, file: string, input: TemplateInpu
     let text = template.slice(last, t.index);
     checkStray(text, last, template, problems);
     last = t.index + t.raw.length;
+    if (t.raw.indexOf('{{', 2) >= 0) {
+      // "{{! note" or "{{case.id" left open runs on to the next placeholder's "}}" and would swallow it.
+      const what = t.comment ? 'a comment "{{!"' : 'a "{{"';
+      problems.push(problem(template, t.index, `${what} without its closing "}}" before the next "{{"; close it with "}}"`));
+      continue;
+    }
     if (t.comment) {
       // A line that holds only a comment goes away whole, newline included.
       const before = /[^\n]*$/.exec(out + text)![0];
@@ -70,7 +76,7 @@ export function fillTemplate(template: string, file: string, input: TemplateInpu
       if (!ids.includes(id)) problems.push(problem(template, index, `unknown section "${id}"; give one of ${ids.join(', ')}`));
       return '';
     }
-    if (name in input.fields) return input.fields[name];
+    if (Object.hasOwn(input.fields, name)) return input.fields[name]; // own keys only: {{constructor}} is no field
     problems.push(problem(template, index, `unknown placeholder {{${name}}}; give {{sections}}, {{section:ID}} or a field: ${Object.keys(input.fields).join(', ')}`));
     return '';
   }
