@@ -2,6 +2,7 @@ import { isMap, isScalar, LineCounter, parseDocument, visit, type Document } fro
 import type { Material } from '../materials/material.ts';
 import { CaseError, type CaseProblem } from './case-error.ts';
 import { CaseReader } from './case-reader.ts';
+import { controlCharacters } from './control-characters.ts';
 import { SIZE_LIMITS } from './limits.ts';
 import type { Case, CaseMeta } from './case.ts';
 import { readAnalysis } from './read-analysis.ts';
@@ -24,6 +25,8 @@ const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'inve
 export function parseCase(text: string, file = 'case.yaml'): Case {
   const tooBig = sizeProblem(text);
   if (tooBig) throw new CaseError(file, [tooBig]);
+  const controls = controlCharacters(text, 'E_TYPE', 'a case file');
+  if (controls.length > 0) throw new CaseError(file, controls);
   const lines = new LineCounter();
   // The yaml library's own check of unique keys is quadratic in the keys of a mapping; checkKeys
   // below does it in linear time, after the mapping's size is bounded.
@@ -161,3 +164,4 @@ function checkKeys(doc: Document, lines: LineCounter): CaseProblem[] {
   });
   return problems;
 }
+

@@ -1,4 +1,5 @@
 import { CaseError, type CaseProblem } from '../case/case-error.ts';
+import { controlCharacters } from '../case/control-characters.ts';
 
 /**
  * The report template's syntax (templates/report.md; a site passes its own with --template):
@@ -27,7 +28,8 @@ const TOKEN = /\{\{(!?)([\s\S]*?)\}\}/g;
 
 /** Fills a report template. Pure; `file` only names the template in error messages. */
 export function fillTemplate(template: string, file: string, input: TemplateInput): string {
-  const problems: CaseProblem[] = [];
+  const problems: CaseProblem[] = controlCharacters(template, 'E_TEMPLATE', 'a report template');
+  if (problems.length > 0) throw new CaseError(file, problems);
   const ids = input.knownSections ?? input.sections.map((s) => s.id);
   const tokens = [...template.matchAll(TOKEN)].map((m) => ({ index: m.index!, raw: m[0], comment: m[1] === '!', name: m[2].trim() }));
   const placed = new Set(tokens.filter((t) => !t.comment && t.name.startsWith('section:')).map((t) => t.name.slice('section:'.length).trim()));

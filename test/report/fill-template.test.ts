@@ -62,3 +62,10 @@ describe('fillTemplate: malformed templates and prototype names', () => {
     expect(() => fillTemplate(`X {{${name}}}\n`, 'site.md', input)).toThrow(new RegExp(`unknown placeholder \\{\\{${name}\\}\\}`));
   });
 });
+
+describe('fillTemplate: control characters', () => {
+  it('an escape sequence in a site template is refused with its position', () => {
+    const input: TemplateInput = { fields: {}, sections: [{ id: 'cautions', markdown: '## Cautions\n\nC.' }] };
+    expect(() => fillTemplate('# Site\n\nok \u001b[2J\n{{sections}}\n', 'site.md', input)).toThrow(/^site\.md:3:4: holds the control character U\+001B, which a report template may not hold/);
+  });
+});
