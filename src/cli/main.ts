@@ -1,6 +1,7 @@
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { CaseError } from '../case/case-error.ts';
 import { NUMBER_LIMITS } from '../case/limits.ts';
+import { sourceDateEpoch, SystemFault, UsageError } from './run-errors.ts';
 import { checkCommand } from './commands/check.ts';
 import { materialsCommand } from './commands/materials.ts';
 import { newCommand } from './commands/new.ts';
@@ -34,11 +35,11 @@ function designFactor(text: string): number {
 
 /**
  * The clock of a run: now, or the moment SOURCE_DATE_EPOCH gives (seconds since 1970, the
- * reproducible-builds convention) so a run can be repeated with the same date.
+ * reproducible-builds convention) so a run can be repeated with the same date. A malformed or
+ * out-of-range value is a `UsageError` (exit 2).
  */
 export function systemClock(): Date {
-  const epoch = process.env.SOURCE_DATE_EPOCH;
-  return epoch && /^\d+$/.test(epoch) ? new Date(Number(epoch) * 1000) : new Date();
+  return sourceDateEpoch(process.env.SOURCE_DATE_EPOCH) ?? new Date();
 }
 
 /**
@@ -111,6 +112,10 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
       return 2;
     }
     if (e instanceof CommanderError) return e.exitCode === 0 ? 0 : 2;
+    if (e instanceof UsageError || e instanceof SystemFault) {
+      io.err(`${e.message}\n`);
+      return e instanceof UsageError ? 2 : 1;
+    }
     throw e;
   }
 }
