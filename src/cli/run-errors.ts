@@ -10,12 +10,7 @@ export class UsageError extends Error {
   }
 }
 
-export class SystemFault extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = 'SystemFault';
-  }
-}
+export { SystemFault } from '../io/system-fault.ts';
 
 /** Latest moment SOURCE_DATE_EPOCH may give: 9999-12-31T23:59:59Z, the last with a four-digit year. */
 const MAX_EPOCH = 253_402_300_799;

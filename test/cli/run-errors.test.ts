@@ -36,3 +36,19 @@ describe('runMain with a bad SOURCE_DATE_EPOCH', () => {
     expect(err).toMatch(/^SOURCE_DATE_EPOCH="yesterday" is not a time; [^\n]*\n$/);
   });
 });
+
+describe('runMain: a file-system fault is one line and exit 1', () => {
+  it('report with a file where reports/ belongs', async () => {
+    const { mkdtempSync, copyFileSync, writeFileSync, readdirSync } = await import('node:fs');
+    const { join } = await import('node:path');
+    const { tmpdir } = await import('node:os');
+    const dir = mkdtempSync(join(tmpdir(), 'shaftcase-fault-'));
+    copyFileSync(new URL('../data/one-disc.yaml', import.meta.url), join(dir, 'case.yaml'));
+    writeFileSync(join(dir, 'reports'), 'x');
+    let err = '';
+    const code = await runMain(['report', dir], { out: () => {}, err: (t) => void (err += t) }, () => new Date('2026-12-01T10:00:00Z'));
+    expect(code).toBe(1);
+    expect(err).toMatch(/^cannot write the reports folder .*: a file stands where a folder must be; move that file away \(EEXIST\); nothing was written\n$/);
+    expect(readdirSync(dir).sort()).toEqual(['case.yaml', 'reports']);
+  });
+});
