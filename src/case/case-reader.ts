@@ -143,7 +143,11 @@ export class CaseReader {
       return undefined;
     }
     const v = isScalar(n) ? n.value : undefined;
-    if (typeof v !== 'number' || !Number.isFinite(v)) {
+    if (typeof v === 'number' && !Number.isFinite(v)) {
+      this.fail('E_RANGE', path, `is not a finite number (too large, or not a number at all); give ${opts.example}`);
+      return undefined;
+    }
+    if (typeof v !== 'number') {
       this.fail('E_TYPE', path, `${isScalar(n) ? `"${String(v)}"` : describe(n)} is not a plain number; give ${opts.example}`);
       return undefined;
     }
@@ -202,7 +206,11 @@ export class CaseReader {
       }
       throw e;
     }
-    if (!Number.isFinite(q.value) || (opts.positive && q.value <= 0) || (opts.nonNegative && q.value < 0)) {
+    if (!Number.isFinite(q.value)) {
+      this.fail('E_RANGE', path, `is not a finite number (too large, or not a number at all); give ${example}`);
+      return undefined;
+    }
+    if ((opts.positive && q.value <= 0) || (opts.nonNegative && q.value < 0)) {
       const need = opts.positive ? 'greater than zero' : 'zero or more';
       this.fail('E_RANGE', path, `"${String(n.value)}" must be ${need}; give ${example}`);
       return undefined;
