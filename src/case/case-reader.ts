@@ -3,6 +3,7 @@ import { parseQuantity, QuantityError, type Quantity, type Tolerance } from '../
 import { type QuantityKind, KIND_EXAMPLES } from '../units/unit-table.ts';
 import { formatPath, type CaseErrorCode, type CaseProblem, type SourcePosition } from './case-error.ts';
 import { didYouMean } from './did-you-mean.ts';
+import { KIND_LIMITS, SIZE_LIMITS, type Limit } from './limits.ts';
 
 export type Path = readonly (string | number)[];
 
@@ -18,7 +19,7 @@ interface FieldOptions {
 export class CaseReader {
   readonly problems: CaseProblem[] = [];
   /** The ± bands of every quantity read, by field path. */
-  readonly tolerances: Record<string, Tolerance> = {};
+  readonly tolerances: Record<string, Tolerance> = Object.create(null);
 
   constructor(
     private readonly doc: Document,
@@ -91,8 +92,12 @@ export class CaseReader {
     return n.items.map((p) => (isScalar(p.key) ? String(p.key.value) : String(p.key)));
   }
 
-  /** Length of the list at `path`; 0 (with a problem if required) when absent or not a list. */
-  list(path: Path, opts: FieldOptions & { example?: string } = {}): number {
+  /**
+   * Length of the list at `path`; 0 (with a problem if required) when absent or not a list, and 0
+   * with a problem when it has more than `max` items (default `SIZE_LIMITS.listItems`), so no work
+   * is done on a list without bound.
+   */
+  list(path: Path, opts: FieldOptions & { example?: string; max?: number; what?: string } = {}): number {
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, opts.example ?? 'a list');
@@ -100,6 +105,11 @@ export class CaseReader {
     }
     if (!isSeq(n)) {
       this.fail('E_TYPE', path, `should be a list (items starting with "- "), not ${describe(n)}`);
+      return 0;
+    }
+    const max = opts.max ?? SIZE_LIMITS.listItems;
+    if (n.items.length > max) {
+      this.fail('E_RANGE', path, `has ${n.items.length} ${opts.what ?? 'items'}, more than the ${max} a case may have; ${opts.what ? `give at most ${max}` : 'shorten the list'}`);
       return 0;
     }
     return n.items.length;
@@ -126,14 +136,18 @@ export class CaseReader {
   }
 
   /** A plain number (counts, ratios, factors). */
-  number(path: Path, opts: FieldOptions & { example: string; positive?: boolean; min?: number; integer?: boolean }): number | undefined {
+  number(path: Path, opts: FieldOptions & { example: string; positive?: boolean; min?: number; max?: number; integer?: boolean }): number | undefined {
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, opts.example);
       return undefined;
     }
     const v = isScalar(n) ? n.value : undefined;
-    if (typeof v !== 'number' || !Number.isFinite(v)) {
+    if (typeof v === 'number' && !Number.isFinite(v)) {
+      this.fail('E_RANGE', path, `is not a finite number (too large, or not a number at all); give ${opts.example}`);
+      return undefined;
+    }
+    if (typeof v !== 'number') {
       this.fail('E_TYPE', path, `${isScalar(n) ? `"${String(v)}"` : describe(n)} is not a plain number; give ${opts.example}`);
       return undefined;
     }
@@ -141,7 +155,7 @@ export class CaseReader {
       this.fail('E_RANGE', path, `${v} is not a whole number; give ${opts.example}`);
       return undefined;
     }
-    if ((opts.positive && v <= 0) || (opts.min !== undefined && v < opts.min)) {
+    if ((opts.positive && v <= 0) || (opts.min !== undefined && v < opts.min) || (opts.max !== undefined && v > opts.max)) {
       this.fail('E_RANGE', path, `${v} is out of range; give ${opts.example}`);
       return undefined;
     }
@@ -161,11 +175,16 @@ export class CaseReader {
     return n.value;
   }
 
-  /** A quantity with its unit, converted to SI. `positive` rejects zero and negatives; `nonNegative` only negatives. */
+  /**
+   * A quantity with its unit, converted to SI. `positive` rejects zero and negatives; `nonNegative`
+   * only negatives. Its magnitude (unless zero) must lie within `limit` (default: the kind's, in
+   * src/case/limits.ts), and a ± band must be narrower than the value, so that the quantity it
+   * spans stays above zero.
+   */
   quantity(
     path: Path,
     kind: QuantityKind,
-    opts: FieldOptions & { positive?: boolean; nonNegative?: boolean; example?: string } = {},
+    opts: FieldOptions & { positive?: boolean; nonNegative?: boolean; example?: string; limit?: Limit } = {},
   ): Quantity | undefined {
     const n = this.node(path);
     const example = opts.example ?? KIND_EXAMPLES[kind];
@@ -187,12 +206,32 @@ export class CaseReader {
       }
       throw e;
     }
-    if (!Number.isFinite(q.value) || (opts.positive && q.value <= 0) || (opts.nonNegative && q.value < 0)) {
+    if (!Number.isFinite(q.value)) {
+      this.fail('E_RANGE', path, `is not a finite number (too large, or not a number at all); give ${example}`);
+      return undefined;
+    }
+    if ((opts.positive && q.value <= 0) || (opts.nonNegative && q.value < 0)) {
       const need = opts.positive ? 'greater than zero' : 'zero or more';
       this.fail('E_RANGE', path, `"${String(n.value)}" must be ${need}; give ${example}`);
       return undefined;
     }
-    if (q.tolerance) this.tolerances[formatPath(path)] = q.tolerance;
+    const limit = opts.limit ?? KIND_LIMITS[kind];
+    const size = Math.abs(q.value);
+    if (size !== 0 && (size < limit.min || size > limit.max)) {
+      this.fail('E_RANGE', path, `"${String(n.value)}" is out of range (${limit.text}); give ${example}`);
+      return undefined;
+    }
+    if (q.tolerance) {
+      const band = q.tolerance.kind === 'relative' ? q.tolerance.fraction * size : q.tolerance.value;
+      // A value that may be zero (a measured twist of "0 deg ± 0.5 deg") may carry a band down to
+      // zero; the Monte Carlo holds its draws at zero. One that must be positive needs a band
+      // narrower than itself.
+      if (!Number.isFinite(band) || (opts.positive && band >= size) || (!opts.positive && size !== 0 && band > size)) {
+        this.fail('E_RANGE', path, `"${String(n.value)}": the ± band is not narrower than the value, so the quantity could be zero or negative; give a band smaller than the value, such as "± 3 %"`);
+        return undefined;
+      }
+      this.tolerances[formatPath(path)] = q.tolerance;
+    }
     return q;
   }
 }

@@ -1,7 +1,9 @@
-import { LineCounter, parseDocument } from 'yaml';
+import { isMap, isScalar, LineCounter, parseDocument, visit, type Document } from 'yaml';
 import type { Material } from '../materials/material.ts';
 import { CaseError, type CaseProblem } from './case-error.ts';
 import { CaseReader } from './case-reader.ts';
+import { controlCharacters } from './control-characters.ts';
+import { SIZE_LIMITS } from './limits.ts';
 import type { Case, CaseMeta } from './case.ts';
 import { readAnalysis } from './read-analysis.ts';
 import { checkDriveCurves } from './read-drive.ts';
@@ -21,8 +23,16 @@ const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'inve
  * the name used in messages.
  */
 export function parseCase(text: string, file = 'case.yaml'): Case {
+  const tooBig = sizeProblem(text);
+  if (tooBig) throw new CaseError(file, [tooBig]);
+  const controls = controlCharacters(text, 'E_TYPE', 'a case file');
+  if (controls.length > 0) throw new CaseError(file, controls);
   const lines = new LineCounter();
-  const doc = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: true });
+  // The yaml library's own check of unique keys is quadratic in the keys of a mapping; checkKeys
+  // below does it in linear time, after the mapping's size is bounded.
+  const doc = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: false });
+  const keyProblems = doc.errors.length === 0 ? checkKeys(doc, lines) : [];
+  if (keyProblems.length > 0) throw new CaseError(file, keyProblems);
   if (doc.errors.length > 0) {
     const problems: CaseProblem[] = doc.errors.map((e) => {
       const pos = lines.linePos(e.pos[0]);
@@ -47,7 +57,7 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const stopAt = stop.at;
 
   const caseMaterials = readCaseMaterials(r);
-  const used: Record<string, Material> = {};
+  const used: Record<string, Material> = Object.create(null); // keyed by the user's names: no prototype
   const shaft = readShaft(r, caseMaterials, used);
   const stations = readStations(r, shaft.length, caseMaterials, used);
   const observed = readObserved(r, stations);
@@ -87,12 +97,71 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
 function readMeta(r: CaseReader): CaseMeta {
   r.map(['case'], META_KEYS, { required: true, example: 'a mapping with at least id: "INC-0042"' });
   const meta: CaseMeta = { id: r.string(['case', 'id'], { required: true, example: 'an incident id such as "INC-2026-014"' }) ?? '' };
+  if (r.has(['case', 'id']) && meta.id.trim() === '') r.fail('E_MISSING', ['case', 'id'], 'is empty; give an incident id such as "INC-2026-014"');
   for (const key of META_KEYS.slice(1) as (keyof CaseMeta)[]) {
     const v = r.string(['case', key]);
     if (v !== undefined) meta[key] = v;
   }
-  if (meta.occurred !== undefined && !/^\d{4}-\d{2}-\d{2}([T ][0-9:.]+(Z|[+-]\d{2}:?\d{2})?)?$/.test(meta.occurred)) {
+  if (meta.occurred !== undefined && !isIsoDate(meta.occurred)) {
     r.fail('E_TYPE', ['case', 'occurred'], `"${meta.occurred}" is not an ISO date; give a date such as "2026-03-14" or "2026-03-14T06:40"`);
   }
   return meta;
 }
+
+/**
+ * An ISO 8601 date or local date-time that exists: `2026-03-14`, `2026-03-14T06:40`,
+ * `2026-03-14 06:40:12.5+01:00`. Not `2026-13-45` nor `2026-02-30T25:00`.
+ */
+export function isIsoDate(text: string): boolean {
+  const m = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.\d+)?)?(?:Z|[+-](\d{2}):?(\d{2}))?)?$/.exec(text);
+  if (!m) return false;
+  const [year, month, day] = [Number(m[1]), Number(m[2]), Number(m[3])];
+  const daysInMonth = new Date(Date.UTC(year, month, 0)).getUTCDate();
+  if (month < 1 || month > 12 || day < 1 || day > daysInMonth) return false;
+  if (m[4] !== undefined && (Number(m[4]) > 23 || Number(m[5]) > 59 || Number(m[6] ?? 0) > 59)) return false;
+  if (m[7] !== undefined && (Number(m[7]) > 14 || Number(m[8]) > 59)) return false;
+  return true;
+}
+
+/** The file's size, and a rough bound on its keys (colons), checked before it is parsed. */
+function sizeProblem(text: string): CaseProblem | undefined {
+  const bytes = Buffer.byteLength(text, 'utf8');
+  if (bytes > SIZE_LIMITS.fileBytes) {
+    return { code: 'E_RANGE', path: '', message: `the case file is ${(bytes / 1e6).toPrecision(3)} MB, more than the ${SIZE_LIMITS.fileBytes / 1e6} MB a case file may be; a case needs a few kilobytes: leave data tables and logs out of it` };
+  }
+  let colons = 0;
+  for (let i = text.indexOf(':'); i >= 0; i = text.indexOf(':', i + 1)) colons++;
+  if (colons > SIZE_LIMITS.keysPerFile) {
+    return { code: 'E_RANGE', path: '', message: `the case file holds ${colons} colons, more than the ${SIZE_LIMITS.keysPerFile} keys a case file may have; a case needs a few hundred` };
+  }
+  return undefined;
+}
+
+/** Every mapping: at most `SIZE_LIMITS.keysPerMapping` keys, each once. Linear in the keys. */
+function checkKeys(doc: Document, lines: LineCounter): CaseProblem[] {
+  const problems: CaseProblem[] = [];
+  const at = (offset: number | undefined) => {
+    const pos = lines.linePos(offset ?? 0);
+    return { line: pos.line, column: pos.col };
+  };
+  visit(doc, {
+    Map(_, map) {
+      if (map.items.length > SIZE_LIMITS.keysPerMapping) {
+        problems.push({ code: 'E_RANGE', path: '', message: `a mapping with ${map.items.length} keys, more than the ${SIZE_LIMITS.keysPerMapping} one mapping may have`, position: at(map.range?.[0]) });
+        return visit.BREAK;
+      }
+      const seen = new Set<string>();
+      for (const pair of map.items) {
+        const key = isScalar(pair.key) ? String(pair.key.value) : String(pair.key);
+        if (seen.has(key)) {
+          const range = isScalar(pair.key) || isMap(pair.key) ? pair.key.range : undefined;
+          problems.push({ code: 'E_YAML', path: '', message: `not valid YAML: the key "${key}" is given twice in one mapping; give each key once`, position: at(range?.[0]) });
+        }
+        seen.add(key);
+      }
+      return undefined;
+    },
+  });
+  return problems;
+}
+

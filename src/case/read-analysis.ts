@@ -1,4 +1,5 @@
 import type { CaseReader } from './case-reader.ts';
+import { NUMBER_LIMITS } from './limits.ts';
 import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Analysis, type Hardening, type Station, type YieldCriterion } from './case.ts';
 
 const ANALYSIS_KEYS = [
@@ -18,6 +19,11 @@ const ANALYSIS_KEYS = [
   'max_scale',
   'limiter_at',
 ];
+/** A coefficient of variation of strengths: at most 30 %, beyond which a normal spread of a strength is no model. */
+const SCATTER_LIMIT = { min: 1e-6, max: 0.3, text: '0.0001 % to 30 %' };
+/** The dynamic model's window: at most 10 s simulated (with at most MAX_STEPS steps, src/results/dynamic-solve.ts). */
+export const DURATION_LIMIT = { min: 1e-5, max: 10, text: '0.01 ms to 10 s' };
+
 /** More elements than this buy nothing a case file can measure and make `check` slow. */
 export const MAX_ELEMENTS = 2000;
 const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
@@ -40,10 +46,12 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
   r.map(['analysis'], ANALYSIS_KEYS);
   const criterion = (r.string(['analysis', 'criterion'], { allowed: CRITERIA }) ?? 'distortion-energy') as YieldCriterion;
   const hardening = (r.string(['analysis', 'hardening'], { allowed: HARDENING }) ?? 'none') as Hardening;
-  const samples = r.number(['analysis', 'samples'], { example: 'a whole number such as 10000', integer: true, min: 1 }) ?? 10_000;
-  const dynamicSamples = r.number(['analysis', 'dynamic_samples'], { example: 'a whole number such as 40, or 0 for none', integer: true, min: 0 }) ?? DEFAULT_DYNAMIC_SAMPLES;
-  const seed = r.number(['analysis', 'seed'], { example: 'a whole number such as 42', integer: true, min: 0 }) ?? 1;
-  const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, example: 'a coefficient of variation such as "7 %"' });
+  const [sMin, sMax] = NUMBER_LIMITS.samples;
+  const samples = r.number(['analysis', 'samples'], { example: `a whole number from ${sMin} to ${sMax}, such as 10000`, integer: true, min: sMin, max: sMax }) ?? 10_000;
+  const [dMin, dMax] = NUMBER_LIMITS.dynamicSamples;
+  const dynamicSamples = r.number(['analysis', 'dynamic_samples'], { example: `a whole number from ${dMin} to ${dMax}, such as 40, or 0 for none`, integer: true, min: dMin, max: dMax }) ?? DEFAULT_DYNAMIC_SAMPLES;
+  const seed = r.number(['analysis', 'seed'], { example: 'a whole number from 0 to 4294967295, such as 42', integer: true, min: NUMBER_LIMITS.seed[0], max: NUMBER_LIMITS.seed[1] }) ?? 1;
+  const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, limit: SCATTER_LIMIT, example: 'a coefficient of variation such as "7 %"' });
   const wanted = scatter !== undefined || Object.keys(r.tolerances).length > 0;
   const elements = r.number(['analysis', 'elements'], {
     example: `a whole number of shaft elements from 1 to ${MAX_ELEMENTS}, such as 40, or leave it out to refine automatically`,
@@ -57,6 +65,7 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
   const dynamicPlasticity = r.boolean(['analysis', 'dynamic_plasticity']) ?? DEFAULT_DYNAMIC_PLASTICITY;
   const damping = r.quantity(['analysis', 'damping_ratio'], 'fraction', {
     nonNegative: true,
+    limit: { min: 1e-6, max: 1e3, text: '0.0001 % up' }, // 1 and more: the message below
     example: 'a damping ratio such as 0.02 or "2 %"',
   });
   if (damping && damping.value >= 1) {
@@ -64,9 +73,10 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
   }
   const duration = r.quantity(['analysis', 'duration'], 'time', {
     positive: true,
+    limit: DURATION_LIMIT,
     example: 'the time to simulate from the stop, such as "0.5 s" or "300 ms"',
   });
-  const factor = (key: string, example: string) => r.number(['analysis', key], { example, min: 1 });
+  const factor = (key: string, example: string) => r.number(['analysis', key], { example, min: NUMBER_LIMITS.factor[0], max: NUMBER_LIMITS.factor[1] });
   const analysis: Analysis = {
     criterion,
     hardening,
@@ -74,9 +84,9 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
     dynamicPlasticity,
     dampingRatio: damping && damping.value < 1 ? damping.value : DEFAULT_DAMPING_RATIO,
     uncertainty: { wanted, samples, seed, strengthScatter: scatter?.value ?? DEFAULT_STRENGTH_SCATTER, dynamicSamples },
-    designFactor: factor('design_factor', 'a design factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.designFactor,
-    serviceFactor: factor('service_factor', 'a service factor of 1 or more, such as 1.5') ?? ANALYSIS_DEFAULTS.serviceFactor,
-    maxScale: factor('max_scale', 'the largest practical scale of the diameters, such as 1.3') ?? ANALYSIS_DEFAULTS.maxScale,
+    designFactor: factor('design_factor', 'a design factor of 1 or more (at most 10), such as 1.5') ?? ANALYSIS_DEFAULTS.designFactor,
+    serviceFactor: factor('service_factor', 'a service factor of 1 or more (at most 10), such as 1.5') ?? ANALYSIS_DEFAULTS.serviceFactor,
+    maxScale: factor('max_scale', 'the largest practical scale of the diameters, from 1 to 10, such as 1.3') ?? ANALYSIS_DEFAULTS.maxScale,
   };
   if (elements !== undefined && elements <= MAX_ELEMENTS) analysis.elements = elements;
   if (duration) analysis.duration = duration.value;

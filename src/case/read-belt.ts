@@ -1,5 +1,6 @@
 import type { CaseReader, Path } from './case-reader.ts';
 import type { BeltSpec } from './case.ts';
+import { NUMBER_LIMITS } from './limits.ts';
 
 const BELT_KEYS = ['slip_torque', 'wrap_angle', 'friction', 'groove_angle', 'tension', 'tight_side_tension', 'pulley_diameter'];
 const CAPSTAN_KEYS = ['wrap_angle', 'friction', 'pulley_diameter'];
@@ -28,7 +29,7 @@ export function readBelt(r: CaseReader, path: Path): BeltSpec | undefined {
   }
   for (const k of CAPSTAN_KEYS) if (!r.has([...path, k])) r.fail('E_MISSING', [...path, k], `is required with belt data; give ${capstanExample(k)}`);
   const wrap = r.quantity([...path, 'wrap_angle'], 'angle', { positive: true, example: capstanExample('wrap_angle') });
-  const friction = r.number([...path, 'friction'], { example: capstanExample('friction'), positive: true });
+  const friction = r.number([...path, 'friction'], { example: capstanExample('friction'), min: NUMBER_LIMITS.friction[0], max: NUMBER_LIMITS.friction[1] });
   const groove = r.quantity([...path, 'groove_angle'], 'angle', { positive: true, example: capstanExample('groove_angle') });
   const diameter = r.quantity([...path, 'pulley_diameter'], 'length', { positive: true, example: capstanExample('pulley_diameter') });
   if (wrap && wrap.value > 2 * Math.PI) r.fail('E_RANGE', [...path, 'wrap_angle'], `is more than a full turn; give the belt's wrap on the pulley, such as "160 deg"`);

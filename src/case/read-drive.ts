@@ -1,5 +1,6 @@
 import type { CaseReader, Path } from './case-reader.ts';
 import type { Drive, MotorTorqueSpec, Part, Station } from './case.ts';
+import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { readBelt } from './read-belt.ts';
 
 const DRIVE_KEYS = ['rotor_inertia', 'speed_ratio', 'power', 'running_torque', 'torque', 'curve', 'belt'];
@@ -14,7 +15,7 @@ const ROTOR_NAME = /\b(motor|rotor)\b/i;
  */
 export function readDrive(r: CaseReader, path: Path, parts: Part[]): Drive | undefined {
   if (!r.map(path, DRIVE_KEYS)) return undefined;
-  const givenRatio = r.number([...path, 'speed_ratio'], { example: 'the motor\'s speed over the shaft\'s, such as 3.52', positive: true });
+  const givenRatio = r.number([...path, 'speed_ratio'], { example: 'the motor\'s speed over the shaft\'s, from 0.001 to 1000, such as 3.52', min: NUMBER_LIMITS.speedRatio[0], max: NUMBER_LIMITS.speedRatio[1] });
   const rotorInertia = r.quantity([...path, 'rotor_inertia'], 'inertia', { positive: true, example: 'the rotor\'s inertia from the motor data sheet, such as "0.42 kg*m^2"' });
   const power = r.quantity([...path, 'power'], 'power', { positive: true });
   const running = r.quantity([...path, 'running_torque'], 'torque', { positive: true, example: 'the motor\'s normal running torque, such as "240 N*m"' });
@@ -66,8 +67,12 @@ function readMotorTorque(r: CaseReader, path: Path): MotorTorqueSpec | undefined
     const t = r.quantity([...path, 'torque'], 'torque', { nonNegative: true, example: 'the motor\'s torque while it is pulled down, such as "580 N*m"' });
     return t && { kind: 'constant', torque: t.value };
   }
-  const n = r.list([...path, 'curve']);
-  if (n === 0) return undefined;
+  const n = r.list([...path, 'curve'], { max: Infinity });
+  if (n === 0 && !r.has([...path, 'curve'])) return undefined;
+  if (n > SIZE_LIMITS.curvePoints) {
+    r.fail('E_RANGE', [...path, 'curve'], `has ${n} points, more than ${SIZE_LIMITS.curvePoints}; give the curve's shape in fewer points, such as 5 to 20`);
+    return undefined;
+  }
   if (n < 2) {
     r.fail('E_RANGE', [...path, 'curve'], 'give at least two points, from 0 rpm to the running speed, such as [{speed: 0 rpm, torque: 580 N*m}, {speed: 1480 rpm, torque: 290 N*m}]');
     return undefined;
@@ -77,7 +82,7 @@ function readMotorTorque(r: CaseReader, path: Path): MotorTorqueSpec | undefined
     const p = [...path, 'curve', i];
     if (!r.map(p, ['speed', 'torque'], { required: true, example: 'a point such as {speed: 1200 rpm, torque: 640 N*m}' })) continue;
     const speed = r.quantity([...p, 'speed'], 'angular_speed', { required: true, nonNegative: true, example: 'the motor\'s speed at this point, such as "1200 rpm"' });
-    const torque = r.quantity([...p, 'torque'], 'torque', { required: true, example: 'the motor\'s torque at this point, such as "640 N*m"' });
+    const torque = r.quantity([...p, 'torque'], 'torque', { required: true, nonNegative: true, example: 'the motor\'s torque at this point, zero or more, such as "640 N*m"' });
     if (!speed || !torque) continue;
     if (i === 0 && speed.value !== 0) r.fail('E_RANGE', [...p, 'speed'], 'the curve starts at standstill; give the locked-rotor point first, such as {speed: 0 rpm, torque: 580 N*m}');
     if (points.length > 0 && speed.value <= points[points.length - 1].speed) {

@@ -3,6 +3,7 @@ import { MATERIAL_FIELDS, type Material, type MaterialField } from '../materials
 import type { QuantityKind } from '../units/unit-table.ts';
 import type { CaseReader } from './case-reader.ts';
 import { didYouMean } from './did-you-mean.ts';
+import { ELONGATION_LIMIT, FRACTURE_STRAIN_LIMIT, MODULUS_LIMIT, REDUCTION_OF_AREA_LIMIT, type Limit } from './limits.ts';
 
 const FIELD_KINDS: Record<MaterialField, QuantityKind> = {
   shear_modulus: 'stress',
@@ -15,19 +16,34 @@ const FIELD_KINDS: Record<MaterialField, QuantityKind> = {
   fracture_strain: 'fraction',
 };
 
+/** Fields with limits of their own (the others keep their kind's). */
+const FIELD_LIMITS: Partial<Record<MaterialField, Limit>> = {
+  shear_modulus: MODULUS_LIMIT,
+  elastic_modulus: MODULUS_LIMIT,
+  elongation: ELONGATION_LIMIT,
+  reduction_of_area: REDUCTION_OF_AREA_LIMIT,
+  fracture_strain: FRACTURE_STRAIN_LIMIT,
+};
+
 const MATERIAL_KEYS = ['name', ...Object.keys(MATERIAL_FIELDS), 'strength_basis', 'source'];
 
-/** Case-local materials from `materials:`, keyed by name; they shadow library entries of the same key. */
+/**
+ * Case-local materials from `materials:`, keyed by name; they shadow library entries of the same
+ * key. The record has no prototype: a material may be named `__proto__` or `constructor`.
+ */
 export function readCaseMaterials(r: CaseReader): Record<string, Material> {
-  const out: Record<string, Material> = {};
+  const out: Record<string, Material> = Object.create(null);
   if (!r.map(['materials'], [...r.keys(['materials'])])) return out;
   for (const key of r.keys(['materials'])) {
     const path = ['materials', key];
     if (!r.map(path, MATERIAL_KEYS, { required: true })) continue;
     const m: Material = { key, name: r.string([...path, 'name']) ?? key, source: r.string([...path, 'source']) ?? 'given in the case file' };
     for (const [field, prop] of Object.entries(MATERIAL_FIELDS) as [MaterialField, keyof Material][]) {
-      const q = r.quantity([...path, field], FIELD_KINDS[field], { positive: true });
+      const q = r.quantity([...path, field], FIELD_KINDS[field], { positive: true, limit: FIELD_LIMITS[field] });
       if (q) (m as unknown as Record<string, number>)[prop] = q.value;
+    }
+    if (m.yieldStrength !== undefined && m.tensileStrength !== undefined && m.tensileStrength < m.yieldStrength) {
+      r.fail('E_MATERIAL', [...path, 'tensile_strength'], `is below the yield strength (${Number((m.yieldStrength / 1e6).toPrecision(4))} MPa); a tensile strength is at least the yield strength, such as "${Number(((m.yieldStrength * 1.2) / 1e6).toPrecision(3))} MPa"`);
     }
     const basis = r.string([...path, 'strength_basis'], { allowed: ['minimum', 'typical'] });
     if (basis) m.strengthBasis = basis as Material['strengthBasis'];
@@ -48,7 +64,7 @@ export function resolveMaterial(
   needs: readonly MaterialField[],
   used: Record<string, Material>,
 ): Material | undefined {
-  const m = caseMaterials[key] ?? findMaterial(key);
+  const m = Object.hasOwn(caseMaterials, key) ? caseMaterials[key] : findMaterial(key);
   if (!m) {
     const known = [...Object.keys(caseMaterials), ...MATERIAL_LIBRARY.map((x) => x.key)];
     const guess = didYouMean(key, known);

@@ -1,6 +1,7 @@
 import type { Material } from '../materials/material.ts';
 import type { CaseReader } from './case-reader.ts';
 import type { Segment, Station } from './case.ts';
+import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
 const SEGMENT_KEYS = ['length', 'diameter', 'bore', 'material', 'kt', 'label', 'slip_torque', 'shear_torque'];
@@ -14,7 +15,7 @@ export function readShaft(
   const segments: Segment[] = [];
   if (!r.map(['shaft'], ['material', 'segments'], { required: true, example: 'a mapping with material and segments' })) return { segments, length: 0 };
   const shaftMaterial = r.string(['shaft', 'material']);
-  const n = r.list(['shaft', 'segments'], { required: true, example: 'a list of segments, each with length and diameter' });
+  const n = r.list(['shaft', 'segments'], { required: true, example: 'a list of segments, each with length and diameter', max: SIZE_LIMITS.segments, what: 'segments' });
   let position = 0;
   for (let i = 0; i < n; i++) {
     const path = ['shaft', 'segments', i];
@@ -22,7 +23,7 @@ export function readShaft(
     const length = r.quantity([...path, 'length'], 'length', { required: true, positive: true });
     const diameter = r.quantity([...path, 'diameter'], 'length', { required: true, positive: true });
     const bore = r.quantity([...path, 'bore'], 'length', { nonNegative: true });
-    const kt = r.number([...path, 'kt'], { example: 'a factor of 1 or more, such as 1.6', min: 1 }) ?? 1;
+    const kt = r.number([...path, 'kt'], { example: 'a factor from 1 to 10, such as 1.6', min: NUMBER_LIMITS.kt[0], max: NUMBER_LIMITS.kt[1] }) ?? 1;
     const label = r.string([...path, 'label']);
     const protection = readProtection(r, path);
     const materialKey = r.string([...path, 'material']) ?? shaftMaterial;

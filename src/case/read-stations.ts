@@ -4,6 +4,7 @@ import type { CaseReader } from './case-reader.ts';
 import type { Part, PartShape, Station } from './case.ts';
 import { readDrive } from './read-drive.ts';
 import { readKey } from './read-key.ts';
+import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
 const STATION_KEYS = ['name', 'at', 'parts', 'drive', 'key'];
@@ -23,7 +24,7 @@ export function readStations(
   used: Record<string, Material>,
 ): Station[] {
   const stations: Station[] = [];
-  const n = r.list(['stations'], { required: true, example: 'a list of stations, each with name, at and parts' });
+  const n = r.list(['stations'], { required: true, example: 'a list of stations, each with name, at and parts', max: SIZE_LIMITS.stations, what: 'stations' });
   const seen = new Map<string, number>();
   for (let i = 0; i < n; i++) {
     const path = ['stations', i];
@@ -38,7 +39,7 @@ export function readStations(
       r.fail('E_RANGE', [...path, 'at'], `lies off the shaft, which is ${Number((shaftLength * 1000).toPrecision(4))} mm long; give a distance from 0 to the shaft's length`);
     }
     const parts: Part[] = [];
-    const np = r.list([...path, 'parts']);
+    const np = r.list([...path, 'parts'], { max: SIZE_LIMITS.partsPerStation, what: 'parts' });
     for (let j = 0; j < np; j++) {
       const part = readPart(r, [...path, 'parts', j], caseMaterials, used);
       if (part) parts.push(part);
@@ -62,8 +63,8 @@ function readPart(r: CaseReader, path: (string | number)[], caseMaterials: Recor
     return undefined;
   }
   if (!r.map(path, [...COMMON_PART_KEYS, ...SHAPE_KEYS[shape]], { required: true })) return undefined;
-  const count = r.number([...path, 'count'], { example: 'a whole number such as 2', integer: true, positive: true }) ?? 1;
-  const speedRatio = r.number([...path, 'speed_ratio'], { example: 'the part\'s speed over the shaft\'s, such as 2.5', positive: true }) ?? 1;
+  const count = r.number([...path, 'count'], { example: 'a whole number from 1 to 10000, such as 2', integer: true, min: NUMBER_LIMITS.count[0], max: NUMBER_LIMITS.count[1] }) ?? 1;
+  const speedRatio = r.number([...path, 'speed_ratio'], { example: 'the part\'s speed over the shaft\'s, from 0.001 to 1000, such as 2.5', min: NUMBER_LIMITS.speedRatio[0], max: NUMBER_LIMITS.speedRatio[1] }) ?? 1;
   const name = r.string([...path, 'name']) ?? `${shape} ${Number(path[3]) + 1}`;
   const ratedSpeed = r.quantity([...path, 'rated_speed'], 'angular_speed', { positive: true, example: 'the highest speed marked on the wheel, such as "3600 rpm"' });
   const base = { name, shape, count, speedRatio, ...(ratedSpeed ? { ratedSpeed: ratedSpeed.value } : {}) };

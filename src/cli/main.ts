@@ -1,5 +1,7 @@
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { CaseError } from '../case/case-error.ts';
+import { NUMBER_LIMITS } from '../case/limits.ts';
+import { sourceDateEpoch, SystemFault, UsageError } from './run-errors.ts';
 import { version } from './version.ts';
 import type { Io } from './io.ts';
 
@@ -9,6 +11,13 @@ export type { Io } from './io.ts';
 function wholeNumber(value: string): number {
   if (!/^\d+$/.test(value)) throw new InvalidArgumentError(`"${value}" is not a whole number; give one such as 10000`);
   return Number(value);
+}
+
+/** Parses `--samples`: a whole number within the case format's limit (analysis.samples). */
+function sampleCount(value: string): number {
+  const n = wholeNumber(value);
+  if (n > NUMBER_LIMITS.samples[1]) throw new InvalidArgumentError(`${value} is more than ${NUMBER_LIMITS.samples[1]} samples; give one such as 10000`);
+  return n;
 }
 
 const stdio: Io = { out: (t) => process.stdout.write(t), err: (t) => process.stderr.write(t) };
@@ -22,11 +31,11 @@ function designFactor(text: string): number {
 
 /**
  * The clock of a run: now, or the moment SOURCE_DATE_EPOCH gives (seconds since 1970, the
- * reproducible-builds convention) so a run can be repeated with the same date.
+ * reproducible-builds convention) so a run can be repeated with the same date. A malformed or
+ * out-of-range value is a `UsageError` (exit 2).
  */
 export function systemClock(): Date {
-  const epoch = process.env.SOURCE_DATE_EPOCH;
-  return epoch && /^\d+$/.test(epoch) ? new Date(Number(epoch) * 1000) : new Date();
+  return sourceDateEpoch(process.env.SOURCE_DATE_EPOCH) ?? new Date();
 }
 
 /**
@@ -45,7 +54,7 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .description('check a case file and print the impact torque, stress, twist and verdict')
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--json', 'print one JSON object, SI units')
-    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
     .action(async (file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io));
@@ -56,7 +65,7 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--factor <N>', 'design factor on shear yield in a repeat of the incident (default: the case\'s, else 1.5)', designFactor)
     .option('--json', 'print the check --json object with resize added, SI units')
-    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none), as for check', wholeNumber)
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none), as for check', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo, as for check', wholeNumber)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
     .action(async (file: string, opts: { factor?: number; json?: boolean; samples?: number; seed?: number; strict?: boolean }) => (await import('./commands/resize.ts')).resizeCommand(file, opts, io));
@@ -80,7 +89,7 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .argument('<case>', 'a case .yaml file or a case folder')
     .option('--template <file>', "a site's own report template (Markdown with {{…}} placeholders, see templates/report.md)")
     .option('--pdf', 'also print report.pdf with Chromium (Debian package chromium)')
-    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', wholeNumber)
+    .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
@@ -102,6 +111,10 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
       return 2;
     }
     if (e instanceof CommanderError) return e.exitCode === 0 ? 0 : 2;
+    if (e instanceof UsageError || e instanceof SystemFault) {
+      io.err(`${e.message}\n`);
+      return e instanceof UsageError ? 2 : 1;
+    }
     throw e;
   }
 }

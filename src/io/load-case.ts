@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import { CaseError } from '../case/case-error.ts';
 import type { Case } from '../case/case.ts';
 import { parseCase } from '../case/parse-case.ts';
+import { SIZE_LIMITS } from '../case/limits.ts';
 
 /** A case as read from disk: the checked case, the file it came from, its text and SHA-256. */
 export interface LoadedCase {
@@ -26,12 +27,50 @@ export function caseFilePath(path: string): string {
 /** Reads and checks a case file (or a case folder's `case.yaml`). Throws `CaseError` for the user's mistakes. */
 export function loadCase(path: string): LoadedCase {
   const file = caseFilePath(path);
-  let text: string;
+  let bytes: Buffer;
   try {
-    text = readFileSync(file, 'utf8');
+    const size = statSync(file).size;
+    if (size > SIZE_LIMITS.fileBytes) {
+      throw new CaseError(file, [{ code: 'E_FILE', path: '', message: `the case file is ${(size / 1e6).toPrecision(3)} MB, more than the ${SIZE_LIMITS.fileBytes / 1e6} MB a case file may be; a case needs a few kilobytes` }]);
+    }
+    bytes = readFileSync(file);
   } catch (e) {
-    const why = (e as NodeJS.ErrnoException).code === 'ENOENT' ? 'no such file' : (e as Error).message;
+    if (e instanceof CaseError) throw e;
+    const code = (e as NodeJS.ErrnoException).code;
+    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder without case.yaml' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
     throw new CaseError(file, [{ code: 'E_FILE', path: '', message: `cannot read the case file (${why}); give the path of a case .yaml file or a case folder` }]);
   }
+  const text = decodeUtf8(file, bytes);
   return { case: parseCase(text, file), file, text, sha256: createHash('sha256').update(text).digest('hex') };
+}
+
+/** The file's text; a file that is not UTF-8 is refused at its first bad byte, not read with replacement characters. */
+export function decodeUtf8(file: string, bytes: Uint8Array): string {
+  try {
+    // ignoreBOM keeps a byte-order mark in the text, as it always was (the SHA-256 is of the text).
+    return new TextDecoder('utf-8', { fatal: true, ignoreBOM: true }).decode(bytes);
+  } catch {
+    const at = firstBadOffset(bytes);
+    const before = new TextDecoder('utf-8').decode(bytes.subarray(0, at));
+    const line = before.split('\n').length;
+    const column = before.length - before.lastIndexOf('\n');
+    throw new CaseError(file, [{ code: 'E_FILE', path: '', message: 'is not UTF-8 text (a byte here is not valid UTF-8); save the file as UTF-8 in your editor', position: { line, column } }]);
+  }
+}
+
+/** Offset of the first byte that does not begin or continue a valid UTF-8 sequence. */
+function firstBadOffset(b: Uint8Array): number {
+  let i = 0;
+  while (i < b.length) {
+    const c = b[i];
+    const n = c < 0x80 ? 1 : c >= 0xc2 && c < 0xe0 ? 2 : c >= 0xe0 && c < 0xf0 ? 3 : c >= 0xf0 && c < 0xf5 ? 4 : 0;
+    if (n === 0 || i + n > b.length) return i;
+    try {
+      new TextDecoder('utf-8', { fatal: true }).decode(b.subarray(i, i + n));
+    } catch {
+      return i;
+    }
+    i += n;
+  }
+  return i;
 }

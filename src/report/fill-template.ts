@@ -1,4 +1,5 @@
 import { CaseError, type CaseProblem } from '../case/case-error.ts';
+import { controlCharacters } from '../case/control-characters.ts';
 
 /**
  * The report template's syntax (templates/report.md; a site passes its own with --template):
@@ -27,7 +28,8 @@ const TOKEN = /\{\{(!?)([\s\S]*?)\}\}/g;
 
 /** Fills a report template. Pure; `file` only names the template in error messages. */
 export function fillTemplate(template: string, file: string, input: TemplateInput): string {
-  const problems: CaseProblem[] = [];
+  const problems: CaseProblem[] = controlCharacters(template, 'E_TEMPLATE', 'a report template');
+  if (problems.length > 0) throw new CaseError(file, problems);
   const ids = input.knownSections ?? input.sections.map((s) => s.id);
   const tokens = [...template.matchAll(TOKEN)].map((m) => ({ index: m.index!, raw: m[0], comment: m[1] === '!', name: m[2].trim() }));
   const placed = new Set(tokens.filter((t) => !t.comment && t.name.startsWith('section:')).map((t) => t.name.slice('section:'.length).trim()));
@@ -39,6 +41,12 @@ export function fillTemplate(template: string, file: string, input: TemplateInpu
     let text = template.slice(last, t.index);
     checkStray(text, last, template, problems);
     last = t.index + t.raw.length;
+    if (t.raw.indexOf('{{', 2) >= 0) {
+      // "{{! note" or "{{case.id" left open runs on to the next placeholder's "}}" and would swallow it.
+      const what = t.comment ? 'a comment "{{!"' : 'a "{{"';
+      problems.push(problem(template, t.index, `${what} without its closing "}}" before the next "{{"; close it with "}}"`));
+      continue;
+    }
     if (t.comment) {
       // A line that holds only a comment goes away whole, newline included.
       const before = /[^\n]*$/.exec(out + text)![0];
@@ -70,7 +78,7 @@ export function fillTemplate(template: string, file: string, input: TemplateInpu
       if (!ids.includes(id)) problems.push(problem(template, index, `unknown section "${id}"; give one of ${ids.join(', ')}`));
       return '';
     }
-    if (name in input.fields) return input.fields[name];
+    if (Object.hasOwn(input.fields, name)) return input.fields[name]; // own keys only: {{constructor}} is no field
     problems.push(problem(template, index, `unknown placeholder {{${name}}}; give {{sections}}, {{section:ID}} or a field: ${Object.keys(input.fields).join(', ')}`));
     return '';
   }

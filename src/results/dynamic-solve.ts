@@ -108,6 +108,12 @@ function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boo
     h = duration / MAX_STEPS;
     notes.push(`The window of ${duration.toPrecision(3)} s is long for the lowest mode, so the time step was widened to ${(h * 1e6).toPrecision(3)} µs (${((2 * Math.PI) / omega1 / h).toFixed(0)} steps per lowest period).`);
   }
+  const fineSpan = Math.min(duration, c.stop.duration + steps.settle);
+  if (fineSpan / steps.fine > MAX_STEPS) {
+    // A long ramp at the step of the highest energetic mode would take without bound.
+    steps.fine = fineSpan / MAX_STEPS;
+    notes.push(`The stop's ramp of ${c.stop.duration.toPrecision(3)} s is long for the highest energetic mode, so its time step was widened to ${(steps.fine * 1e6).toPrecision(3)} µs.`);
+  }
   const run = integrateChain(sys, { duration, timeStep: h, fineStep: steps.fine, fineUntil: c.stop.duration + steps.settle, fineAfterEvent: steps.afterEvent });
   const piecePeak = chain.pieces.map(() => 0);
   const pieceTime = chain.pieces.map(() => 0);

@@ -26,10 +26,15 @@ export interface Samples {
   speedsForMeasured: Float64Array[];
 }
 
+/** Draws of one input below its floor before it is held there (never reached with the bands the reader lets through). */
+const MAX_REDRAWS = 1000;
+
 /**
  * Draws every input from its spread, runs the engine, keeps the metrics. Reproducible: the same
- * seed gives the same numbers. A draw that would make a size or strength non-positive is held at
- * 1 % of its nominal (the spreads are narrow, so this is a guard, not a model).
+ * seed gives the same numbers. Each spread is a normal truncated at 1 % of its nominal: a draw
+ * below that is drawn again (the case reader refuses a band as wide as the value, so this happens
+ * for at most about 2 % of draws, and does not pile samples up at the floor). A nominal of zero (a
+ * measured twist of "0 deg ± 0.5 deg") is held at zero or more: a reading cannot be negative.
  */
 export function monteCarlo(
   c: Case,
@@ -50,8 +55,10 @@ export function monteCarlo(
   for (let i = 0; i < samples; i++) {
     let k = c;
     for (const input of inputs) {
-      const v = input.spread.mean + input.spread.sd * z();
-      k = input.apply(k, Math.max(v, 0.01 * input.nominal));
+      const floor = 0.01 * input.nominal;
+      let v = input.spread.mean + input.spread.sd * z();
+      for (let tries = 0; floor > 0 && v < floor && tries < MAX_REDRAWS; tries++) v = input.spread.mean + input.spread.sd * z();
+      k = input.apply(k, Math.max(v, floor));
     }
     const m = engine(k);
     onProgress?.(i + 1, samples);

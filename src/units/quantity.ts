@@ -1,4 +1,4 @@
-import { KIND_EXAMPLES, kindsOfUnit, unitFactor, type QuantityKind } from './unit-table.ts';
+import { KIND_EXAMPLES, kindsOfUnit, nearestUnits, normaliseUnit, unitFactor, type QuantityKind } from './unit-table.ts';
 
 /** A stated tolerance on a measured value: a fraction of it, or a band in SI units. */
 export type Tolerance = { kind: 'relative'; fraction: number } | { kind: 'absolute'; value: number };
@@ -37,7 +37,10 @@ function factorOrThrow(unit: string, kind: QuantityKind, whole: string): number 
   if (others.length > 0) {
     throw new QuantityError(`"${whole}" is ${others[0].replace('_', ' ')}, not ${kind.replace('_', ' ')}; give ${KIND_EXAMPLES[kind]}`);
   }
-  throw new QuantityError(`"${whole}": unknown unit "${unit}"; give ${KIND_EXAMPLES[kind]}`);
+  const near = nearestUnits(unit, kind);
+  const caseOnly = near.length > 0 && near[0].toLowerCase() === normaliseUnit(unit).toLowerCase();
+  const hint = near.length === 0 ? '' : `; the nearest accepted ${near.length === 1 ? 'is' : 'are'} ${near.map((n) => `"${n}"`).join(', ')}${caseOnly ? ' (unit symbols are case-sensitive: M is mega, m milli, P peta, p pico)' : ''}`;
+  throw new QuantityError(`"${whole}": unknown unit "${unit}"${hint}; give ${KIND_EXAMPLES[kind]}`);
 }
 
 /**

@@ -120,15 +120,57 @@ export function normaliseUnit(unit: string): string {
     .replace(/(?<=[a-zA-Z])(2|3)(?=\*|\/)/g, '^$1');
 }
 
-/** The factor to SI for `unit` as a `kind`, or undefined. Exact spelling first, then case-blind if unambiguous. */
+/**
+ * Words of the trade (not SI symbols) that may be written in any case: "RPM", "PSI", "In", "Deg".
+ * An SI symbol's case is its meaning (m milli, M mega; p pico, P peta; Pa the pascal), so
+ * a spelling made of SI symbols is matched exactly: "50 Mm" is not 50 mm and "530 mPa" not MPa.
+ */
+const CASE_BLIND_WORDS = new Set(['rpm', 'r', 'rev', 'min', 'in', 'inch', 'ft', 'bar', 'psi', 'ksi', 'lb', 'lbf', 'slug', 'deg', 'hp']);
+
+/** Whether `spelling` (a table key) is made of trade words only, so its case does not matter. */
+export function isCaseBlind(spelling: string): boolean {
+  return spelling.split(/[*/^]|\d+/).filter((w) => w !== '').every((w) => CASE_BLIND_WORDS.has(w));
+}
+
+/**
+ * The factor to SI for `unit` as a `kind`, or undefined. Exact spelling first (also with the
+ * factors of a product swapped, "ft*lbf" for "lbf*ft"), then in any case for spellings made only
+ * of trade words (`isCaseBlind`). Own keys only: "constructor" is no unit.
+ */
 export function unitFactor(unit: string, kind: QuantityKind): number | undefined {
   const table = UNIT_FACTORS[kind];
   const u = normaliseUnit(unit);
-  if (u in table) return table[u];
+  if (Object.hasOwn(table, u)) return table[u];
   const swapped = u.includes('*') ? u.split('*').reverse().join('*') : u;
-  if (swapped in table) return table[swapped];
-  const blind = Object.keys(table).filter((k) => k.toLowerCase() === u.toLowerCase() || k.toLowerCase() === swapped.toLowerCase());
+  if (Object.hasOwn(table, swapped)) return table[swapped];
+  const blind = Object.keys(table).filter(
+    (k) => isCaseBlind(k) && (k.toLowerCase() === u.toLowerCase() || k.toLowerCase() === swapped.toLowerCase()),
+  );
   return blind.length === 1 ? table[blind[0]] : undefined;
+}
+
+/**
+ * The accepted spellings of `kind` nearest to `unit`, best first (at most three): those equal to it
+ * but for case first ("Mm" → "mm"), then those within two edits.
+ */
+export function nearestUnits(unit: string, kind: QuantityKind): string[] {
+  const u = normaliseUnit(unit);
+  const scored = Object.keys(UNIT_FACTORS[kind])
+    .map((k) => ({ k, d: k.toLowerCase() === u.toLowerCase() ? 0 : distance(k.toLowerCase(), u.toLowerCase()) + (distance(k, u) > distance(k.toLowerCase(), u.toLowerCase()) ? 0.5 : 0) }))
+    .filter((x) => x.d <= 2)
+    .sort((a, b) => a.d - b.d);
+  return scored.slice(0, 3).map((x) => x.k);
+}
+
+/** Levenshtein distance; unit spellings are short. */
+function distance(a: string, b: string): number {
+  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    const cur = [i];
+    for (let j = 1; j <= b.length; j++) cur[j] = Math.min(prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1));
+    prev = cur;
+  }
+  return prev[b.length];
 }
 
 /** The kinds `unit` belongs to (to tell "a length given in MPa" from a typo). */

@@ -42,3 +42,29 @@ describe('buildBundle', () => {
     await expect(buildBundle([{ path: '../x', data: enc('') }], DATE)).rejects.toThrow(/must stay inside the bundle: \.\.\/x/);
   });
 });
+
+describe('safeEntryPath(path) and distinctEntries(files)', () => {
+  it('keeps every entry inside the zip and legal on every platform', async () => {
+    const { safeEntryPath } = await import('../../src/report/bundle.ts');
+    expect(safeEntryPath('..\\..\\evil.yaml')).toBe('evil.yaml');
+    expect(safeEntryPath('photos/../../x.jpg')).toBe('x.jpg');
+    expect(safeEntryPath('/etc/passwd')).toBe('etc/passwd');
+    expect(safeEntryPath('C:\\Windows\\a.yaml')).toBe('C_/Windows/a.yaml');
+    expect(safeEntryPath('a<b>|?.yaml')).toBe('a_b___.yaml');
+    expect(safeEntryPath('CON.yaml')).toBe('_CON.yaml');
+    expect(safeEntryPath('name. ')).toBe('name');
+    expect(safeEntryPath('..')).toBe('_');
+  });
+
+  it('no file takes MANIFEST.txt\'s name or another\'s, compared without case', async () => {
+    const { distinctEntries } = await import('../../src/report/bundle.ts');
+    const d = new Uint8Array();
+    expect(distinctEntries([{ path: 'a.jpg', data: d }, { path: 'A.JPG', data: d }, { path: 'MANIFEST.txt', data: d }, { path: 'README', data: d }, { path: 'readme', data: d }]).map((f) => f.path)).toEqual([
+      'a.jpg',
+      'A-2.JPG',
+      'MANIFEST-2.txt',
+      'README',
+      'readme-2',
+    ]);
+  });
+});

@@ -48,3 +48,24 @@ describe('fillTemplate', () => {
     expect(fillTemplate('A\n\n{{section:method}}\n\nB {{section:cautions}}', 't.md', { ...fewer, knownSections: ['summary', 'method', 'cautions'] })).toBe('A\n\nB ## Cautions\n\nC.\n');
   });
 });
+
+describe('fillTemplate: malformed templates and prototype names', () => {
+  const input: TemplateInput = { fields: { 'case.id': 'T-1' }, sections: [{ id: 'summary', markdown: '## Summary\n\nS.' }, { id: 'cautions', markdown: '## Cautions\n\nC.' }] };
+
+  it('an unclosed comment is an error at its position, not a swallowed report', () => {
+    expect(() => fillTemplate('# Title\n\n  {{! draft note\n{{sections}}\n', 'site.md', input)).toThrow(/^site\.md:3:3: a comment "\{\{!" without its closing "\}\}"/);
+    expect(() => fillTemplate('# Title\n{{! never closed\n', 'site.md', input)).toThrow(/^site\.md:2:1: a "\{\{" without its closing "\}\}"/);
+    expect(() => fillTemplate('A {{case.id\n\n{{sections}}', 'site.md', input)).toThrow(/^site\.md:1:3: a "\{\{" without its closing/);
+  });
+
+  it.each(['constructor', '__proto__', 'toString', 'hasOwnProperty', 'valueOf'])('{{%s}} is an unknown placeholder, not a property of every object', (name) => {
+    expect(() => fillTemplate(`X {{${name}}}\n`, 'site.md', input)).toThrow(new RegExp(`unknown placeholder \\{\\{${name}\\}\\}`));
+  });
+});
+
+describe('fillTemplate: control characters', () => {
+  it('an escape sequence in a site template is refused with its position', () => {
+    const input: TemplateInput = { fields: {}, sections: [{ id: 'cautions', markdown: '## Cautions\n\nC.' }] };
+    expect(() => fillTemplate('# Site\n\nok \u001b[2J\n{{sections}}\n', 'site.md', input)).toThrow(/^site\.md:3:4: holds the control character U\+001B, which a report template may not hold/);
+  });
+});

@@ -50,3 +50,26 @@ describe('parseQuantity', () => {
     expect(parseQuantity('12 %', 'fraction').value).toBeCloseTo(0.12, 15);
   });
 });
+
+describe('parseQuantity: unit symbols keep their case', () => {
+  it('"50 Mm" is not 50 mm and "530000000000 mPa" is not MPa: each is refused with the nearest spellings', () => {
+    expect(() => parseQuantity('50 Mm', 'length')).toThrow(/unknown unit "Mm"; the nearest accepted are "mm", "m".*case-sensitive.*; give a length such as "40 mm"/);
+    expect(() => parseQuantity('530000000000 mPa', 'stress')).toThrow(/unknown unit "mPa"; the nearest accepted are "MPa", "Pa"/);
+    expect(() => parseQuantity('3 MM', 'length')).toThrow(/unknown unit "MM"/);
+    expect(() => parseQuantity('80 gpa', 'stress')).toThrow(/unknown unit "gpa"; the nearest accepted are "GPa"/);
+    expect(() => parseQuantity('2 KG', 'mass')).toThrow(/unknown unit "KG"/);
+  });
+
+  it('words of the trade are read in any case: RPM, PSI, KSI, IN, LB*FT^2', () => {
+    expect(parseQuantity('420 RPM', 'angular_speed').value).toBeCloseTo(parseQuantity('420 rpm', 'angular_speed').value, 12);
+    expect(parseQuantity('60 KSI', 'stress').value).toBe(parseQuantity('60 ksi', 'stress').value);
+    expect(parseQuantity('2 IN', 'length').value).toBe(parseQuantity('2 in', 'length').value);
+    expect(parseQuantity('4 LB*FT^2', 'inertia').value).toBe(parseQuantity('4 lb*ft^2', 'inertia').value);
+  });
+
+  it('names of the object prototype are no units', () => {
+    for (const u of ['constructor', 'toString', '__proto__', 'hasOwnProperty']) {
+      expect(() => parseQuantity(`40 ${u}`, 'length')).toThrow(new RegExp(`unknown unit "${u}"`));
+    }
+  });
+});
