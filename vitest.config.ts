@@ -1,7 +1,7 @@
 import { configDefaults, defineConfig } from 'vitest/config';
 
 /** Files that mock a module (vi.mock): they get a module graph of their own. */
-const MOCKING = ['test/cli/report-pdf.test.ts'];
+const MOCKING = ['test/cli/report-pdf.test.ts', 'test/io/write-report-faults.test.ts'];
 
 export default defineConfig({
   test: {
