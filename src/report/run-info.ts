@@ -4,7 +4,7 @@ export interface RunInfo {
   version: string;
   /** Local date of the run, `YYYY-MM-DD`; it names the report folder. */
   date: string;
-  /** Local time of the run, `HH:MM`. */
+  /** Local time of the run with its UTC offset, `HH:MM UTC+01:00`, so that a reader elsewhere knows the moment. */
   time: string;
   /** Local date and time with the UTC offset, ISO 8601: `2026-12-01T14:05:09+01:00`. */
   iso: string;
@@ -19,5 +19,5 @@ export function runInfo(now: Date, version: string): RunInfo {
   const offset = -now.getTimezoneOffset();
   const sign = offset >= 0 ? '+' : '-';
   const zone = `${sign}${pad(Math.floor(Math.abs(offset) / 60))}:${pad(Math.abs(offset) % 60)}`;
-  return { version, date, time, iso: `${date}T${time}:${pad(now.getSeconds())}${zone}` };
+  return { version, date, time: `${time} UTC${zone}`, iso: `${date}T${time}:${pad(now.getSeconds())}${zone}` };
 }
