@@ -7,7 +7,7 @@ describe('the library entry point', () => {
     for (const name of ['parseCase', 'loadCase', 'analyseCase', 'investigate', 'decideFinding', 'withFinding', 'resizeCase', 'resultsToJson', 'resizeToJson', 'findingToJson', 'findingSentence', 'renderSummary', 'writeCaseReport']) {
       expect(typeof (api as Record<string, unknown>)[name], name).toBe('function');
     }
-    expect(api.SCHEMA_VERSION).toBe(1);
+    expect(api.SCHEMA_VERSION).toBe(2);
   });
 
   it('investigate on a sample case gives the finding the JSON carries', () => {

@@ -6,6 +6,10 @@ import type { Engine } from './monte-carlo.ts';
 export interface Swing {
   /** Field path of the input. */
   input: string;
+  /** The input's value at the low end (mean − 2σ, floored at 1 % of nominal), SI. */
+  inputLow: number;
+  /** The input's value at the high end (mean + 2σ), SI. */
+  inputHigh: number;
   /** Stress / shear yield with the input at mean − 2σ (the low end of a stated band). */
   low: number;
   /** Stress / shear yield with the input at mean + 2σ. */
@@ -21,9 +25,11 @@ export interface Swing {
  */
 export function sensitivity(c: Case, inputs: readonly UncertainInput[], engine: Engine): Swing[] {
   const swings = inputs.map((input): Swing => {
-    const lo = engine(input.apply(c, Math.max(input.spread.mean - 2 * input.spread.sd, 0.01 * input.nominal)));
-    const hi = engine(input.apply(c, input.spread.mean + 2 * input.spread.sd));
-    const s: Swing = { input: input.path, low: lo.yieldRatio, high: hi.yieldRatio };
+    const inputLow = Math.max(input.spread.mean - 2 * input.spread.sd, 0.01 * input.nominal);
+    const inputHigh = input.spread.mean + 2 * input.spread.sd;
+    const lo = engine(input.apply(c, inputLow));
+    const hi = engine(input.apply(c, inputHigh));
+    const s: Swing = { input: input.path, inputLow, inputHigh, low: lo.yieldRatio, high: hi.yieldRatio };
     if (lo.permanentTwist !== undefined && hi.permanentTwist !== undefined) {
       s.twistLow = lo.permanentTwist;
       s.twistHigh = hi.permanentTwist;

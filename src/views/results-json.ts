@@ -106,6 +106,16 @@ function pieceJson(p: PieceResult): Record<string, unknown> {
   };
 }
 
+/** The 5th, 50th and 95th percentiles by name, so that a reader need not know the places of an array. */
+function named([p5, p50, p95]: readonly number[]): { p5: number; p50: number; p95: number } {
+  return { p5, p50, p95 };
+}
+
+/** One end of a sensitivity swing: the input's value there (SI, the input's own kind) and what it gives. */
+function swingEnd(value: number, yieldRatio: number, permanentTwist: number | undefined): Record<string, number> {
+  return { value, yield_ratio: yieldRatio, ...(permanentTwist !== undefined ? { permanent_twist_rad: permanentTwist } : {}) };
+}
+
 function uncertaintyJson(u: Uncertainty): Record<string, unknown> {
   return {
     samples: u.samples,
@@ -115,16 +125,15 @@ function uncertaintyJson(u: Uncertainty): Record<string, unknown> {
     not_varied: u.notVaried,
     yield_probability: u.yieldProbability,
     percentiles: {
-      yield_ratio: u.percentiles.yieldRatio,
-      max_shear_stress_Pa: u.percentiles.maxShearStress,
-      peak_torque_Nm: u.percentiles.peakTorque,
-      permanent_twist_rad: u.percentiles.permanentTwist ?? null,
+      yield_ratio: named(u.percentiles.yieldRatio),
+      max_shear_stress_Pa: named(u.percentiles.maxShearStress),
+      peak_torque_Nm: named(u.percentiles.peakTorque),
+      permanent_twist_rad: u.percentiles.permanentTwist ? named(u.percentiles.permanentTwist) : null,
     },
     sensitivity: u.sensitivity.map((s) => ({
       input: s.input,
-      low: s.low,
-      high: s.high,
-      ...(s.twistLow !== undefined ? { permanent_twist_low_rad: s.twistLow, permanent_twist_high_rad: s.twistHigh } : {}),
+      low: swingEnd(s.inputLow, s.low, s.twistLow),
+      high: swingEnd(s.inputHigh, s.high, s.twistHigh),
     })),
     observed: u.observed.map((o) => ({ between: o.between, speed_interval_rad_s: o.speedInterval, recorded_inside: o.recordedInside, unexplained_share: o.unexplainedShare })),
     ...(u.dynamic
@@ -133,9 +142,9 @@ function uncertaintyJson(u: Uncertainty): Record<string, unknown> {
             samples: u.dynamic.samples,
             yield_probability: u.dynamic.yieldProbability,
             percentiles: {
-              yield_ratio: u.dynamic.percentiles.yieldRatio,
-              peak_torque_Nm: u.dynamic.percentiles.peakTorque,
-              max_shear_stress_Pa: u.dynamic.percentiles.maxShearStress,
+              yield_ratio: named(u.dynamic.percentiles.yieldRatio),
+              peak_torque_Nm: named(u.dynamic.percentiles.peakTorque),
+              max_shear_stress_Pa: named(u.dynamic.percentiles.maxShearStress),
             },
           },
         }

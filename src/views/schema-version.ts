@@ -3,4 +3,4 @@
  * `materials --json`, the error object). Raised when a key is renamed or removed or its meaning
  * changes; adding a key does not raise it.
  */
-export const SCHEMA_VERSION = 1;
+export const SCHEMA_VERSION = 2;

@@ -26,7 +26,7 @@ describe('shaftcase check', () => {
 
   it('--json prints the contract keys in SI', async () => {
     const j = JSON.parse((await cli('check', fixture, '--json')).out);
-    expect(j.schema_version).toBe(1);
+    expect(j.schema_version).toBe(2);
     for (const key of ['case_id', 'speed_rad_s', 'kinetic_energy_J', 'max_shear_stress_Pa', 'shear_yield_Pa', 'yield_ratio', 'verdict', 'warnings', 'sides']) {
       expect(j).toHaveProperty(key);
     }
@@ -79,7 +79,7 @@ describe('shaftcase check', () => {
     expect(p.status).toBe(2);
     expect(p.stdout).toBe('');
     const j = JSON.parse(p.stderr);
-    expect(j.schema_version).toBe(1);
+    expect(j.schema_version).toBe(2);
     expect(j.errors.length).toBeGreaterThanOrEqual(1);
     expect(j.error).toEqual(j.errors[0]);
     expect(j.errors).toContainEqual(expect.objectContaining({ code: 'E_UNIT', line: 12, column: 17, field: 'shaft.segments[0].diameter', message: expect.stringMatching(/"50" has no unit/) }));
@@ -94,7 +94,7 @@ describe('shaftcase check', () => {
   it('materials lists at least twelve materials with their sources', async () => {
     const r = await cli('materials', '--json');
     const { schema_version, materials: list } = JSON.parse(r.out);
-    expect(schema_version).toBe(1);
+    expect(schema_version).toBe(2);
     expect(list.length).toBeGreaterThanOrEqual(12);
     for (const m of list) expect(m.source).toMatch(/\w/);
     // In the results' style: snake_case, SI in the key names.

@@ -33,7 +33,7 @@ describe('the packed package', () => {
     writeFileSync(join(app, 'tsconfig.json'), JSON.stringify({ compilerOptions: { module: 'NodeNext', moduleResolution: 'NodeNext', strict: true, outDir: 'out', types: ['node'], skipLibCheck: false }, files: ['use.ts'] }));
     execFileSync(join(root, 'node_modules', '.bin', 'tsc'), ['-p', '.'], { cwd: app, stdio: 'pipe' });
     const out = JSON.parse(execFileSync(process.execPath, [join(app, 'out', 'use.js')], { cwd: app, encoding: 'utf8' }));
-    expect(out.schema).toBe(1);
+    expect(out.schema).toBe(2);
     expect(['elastic', 'yielded locally', 'yielded', 'fracture predicted']).toContain(out.verdict);
     expect(out.ratio).toBeGreaterThan(0);
   });

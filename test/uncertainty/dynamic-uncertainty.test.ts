@@ -17,9 +17,9 @@ describe('the uncertainty run through the dynamic model', () => {
     const r = investigate(c);
     expect(r.verdictBasis).toBe('dynamic model');
     expect(r.uncertainty!.dynamic!.samples).toBe(6);
-    const j = resultsToJson(r) as { uncertainty: { dynamic: { samples: number; percentiles: { yield_ratio: number[] } } } };
+    const j = resultsToJson(r) as { uncertainty: { dynamic: { samples: number; percentiles: { yield_ratio: { p5: number; p50: number; p95: number } } } } };
     expect(j.uncertainty.dynamic.samples).toBe(6);
-    const [p5, p50, p95] = j.uncertainty.dynamic.percentiles.yield_ratio;
+    const { p5, p50, p95 } = j.uncertainty.dynamic.percentiles.yield_ratio;
     expect(p5).toBeLessThanOrEqual(p50);
     expect(p50).toBeLessThanOrEqual(p95);
   });
