@@ -7,6 +7,18 @@ import { KIND_LIMITS, SIZE_LIMITS, type Limit } from './limits.ts';
 
 export type Path = readonly (string | number)[];
 
+/** What a reader asked of a field: for the test that holds the readers to the case's description (case-shape.ts). */
+export type FieldRead =
+  | { type: 'mapping'; keys: readonly string[] }
+  | { type: 'list' }
+  | { type: 'text'; allowed?: readonly string[] }
+  | { type: 'number' }
+  | { type: 'boolean' }
+  | { type: 'quantity'; kind: QuantityKind };
+
+/** Told of every field a reader reads; see FieldRead. */
+export type ReadObserver = (path: Path, read: FieldRead) => void;
+
 interface FieldOptions {
   required?: boolean;
 }
@@ -24,6 +36,7 @@ export class CaseReader {
   constructor(
     private readonly doc: Document,
     private readonly lines: LineCounter,
+    private readonly observe?: ReadObserver,
   ) {}
 
   /** The node at `path`, or undefined when absent or null. */
@@ -65,6 +78,7 @@ export class CaseReader {
    * Returns whether a mapping is there.
    */
   map(path: Path, keys: readonly string[], opts: FieldOptions & { example?: string } = {}): boolean {
+    this.observe?.(path, { type: 'mapping', keys });
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, opts.example ?? `a mapping with ${keys.slice(0, 3).join(', ')}`);
@@ -98,6 +112,7 @@ export class CaseReader {
    * is done on a list without bound.
    */
   list(path: Path, opts: FieldOptions & { example?: string; max?: number; what?: string } = {}): number {
+    this.observe?.(path, { type: 'list' });
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, opts.example ?? 'a list');
@@ -117,6 +132,7 @@ export class CaseReader {
 
   /** A scalar as text; numbers and dates are taken as their text. */
   string(path: Path, opts: FieldOptions & { example?: string; allowed?: readonly string[] } = {}): string | undefined {
+    this.observe?.(path, { type: 'text', allowed: opts.allowed });
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, opts.example ?? 'a text');
@@ -137,6 +153,7 @@ export class CaseReader {
 
   /** A plain number (counts, ratios, factors). */
   number(path: Path, opts: FieldOptions & { example: string; positive?: boolean; min?: number; max?: number; integer?: boolean }): number | undefined {
+    this.observe?.(path, { type: 'number' });
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, opts.example);
@@ -163,6 +180,7 @@ export class CaseReader {
   }
 
   boolean(path: Path, opts: FieldOptions = {}): boolean | undefined {
+    this.observe?.(path, { type: 'boolean' });
     const n = this.node(path);
     if (n === undefined) {
       if (opts.required) this.missing(path, 'true or false');
@@ -186,6 +204,7 @@ export class CaseReader {
     kind: QuantityKind,
     opts: FieldOptions & { positive?: boolean; nonNegative?: boolean; example?: string; limit?: Limit } = {},
   ): Quantity | undefined {
+    this.observe?.(path, { type: 'quantity', kind });
     const n = this.node(path);
     const example = opts.example ?? KIND_EXAMPLES[kind];
     if (n === undefined) {

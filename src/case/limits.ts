@@ -51,6 +51,9 @@ export const REDUCTION_OF_AREA_LIMIT: Limit = { min: 1e-4, max: 0.99, text: '0.0
 export const FRACTURE_STRAIN_LIMIT: Limit = { min: 1e-4, max: 10, text: '0.0001 to 10' };
 
 /** Limits of the plain numbers: [min, max]. */
+/** More shaft elements than this buy nothing a case file can measure and make `check` slow. */
+export const MAX_ELEMENTS = 2000;
+
 export const NUMBER_LIMITS = {
   kt: [1, 10],
   speedRatio: [0.001, 1000],

@@ -1,7 +1,8 @@
 import { isMap, isScalar, LineCounter, parseDocument, visit, type Document } from 'yaml';
 import type { Material } from '../materials/material.ts';
 import { CaseError, type CaseProblem } from './case-error.ts';
-import { CaseReader } from './case-reader.ts';
+import { CaseReader, type ReadObserver } from './case-reader.ts';
+import { CASE_SHAPE, keysOf, META_SHAPE } from './case-shape.ts';
 import { controlCharacters } from './control-characters.ts';
 import { SIZE_LIMITS } from './limits.ts';
 import type { Case, CaseMeta } from './case.ts';
@@ -14,15 +15,15 @@ import { readStations } from './read-stations.ts';
 import { readStop } from './read-stop.ts';
 
 /** The top-level keys of a case file. */
-export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis', 'observed'] as const;
-const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'investigator', 'notes'];
+export const CASE_KEYS = keysOf(CASE_SHAPE);
+const META_KEYS = keysOf(META_SHAPE);
 
 /**
  * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
  * `CaseError` listing every problem with its line, column and field path. No I/O: `file` is only
  * the name used in messages.
  */
-export function parseCase(text: string, file = 'case.yaml'): Case {
+export function parseCase(text: string, file = 'case.yaml', observe?: ReadObserver): Case {
   const tooBig = sizeProblem(text);
   if (tooBig) throw new CaseError(file, [tooBig]);
   const controls = controlCharacters(text, 'E_TYPE', 'a case file');
@@ -45,7 +46,7 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
     });
     throw new CaseError(file, problems);
   }
-  const r = new CaseReader(doc, lines);
+  const r = new CaseReader(doc, lines, observe);
   if (!r.map([], CASE_KEYS, { required: true, example: 'a case file with case, speed, stop, shaft and stations' })) {
     throw new CaseError(file, r.problems);
   }

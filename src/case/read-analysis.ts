@@ -1,31 +1,15 @@
 import type { CaseReader } from './case-reader.ts';
-import { NUMBER_LIMITS } from './limits.ts';
+import { ANALYSIS_SHAPE, keysOf } from './case-shape.ts';
+import { MAX_ELEMENTS, NUMBER_LIMITS } from './limits.ts';
 import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Analysis, type Hardening, type Station, type YieldCriterion } from './case.ts';
 
-const ANALYSIS_KEYS = [
-  'criterion',
-  'hardening',
-  'elements',
-  'shaft_inertia',
-  'dynamic_plasticity',
-  'damping_ratio',
-  'duration',
-  'samples',
-  'dynamic_samples',
-  'seed',
-  'strength_scatter',
-  'design_factor',
-  'service_factor',
-  'max_scale',
-  'limiter_at',
-];
+const ANALYSIS_KEYS = keysOf(ANALYSIS_SHAPE);
 /** A coefficient of variation of strengths: at most 30 %, beyond which a normal spread of a strength is no model. */
 const SCATTER_LIMIT = { min: 1e-6, max: 0.3, text: '0.0001 % to 30 %' };
 /** The dynamic model's window: at most 10 s simulated (with at most MAX_STEPS steps, src/results/dynamic-solve.ts). */
 export const DURATION_LIMIT = { min: 1e-5, max: 10, text: '0.01 ms to 10 s' };
 
-/** More elements than this buy nothing a case file can measure and make `check` slow. */
-export const MAX_ELEMENTS = 2000;
+export { MAX_ELEMENTS };
 const CRITERIA: YieldCriterion[] = ['distortion-energy', 'max-shear'];
 const HARDENING: Hardening[] = ['none', 'linear'];
 

@@ -1,8 +1,9 @@
 import type { CaseReader, Path } from './case-reader.ts';
 import type { BeltSpec } from './case.ts';
+import { BELT_SHAPE, keysOf } from './case-shape.ts';
 import { NUMBER_LIMITS } from './limits.ts';
 
-const BELT_KEYS = ['slip_torque', 'wrap_angle', 'friction', 'groove_angle', 'tension', 'tight_side_tension', 'pulley_diameter'];
+const BELT_KEYS = keysOf(BELT_SHAPE);
 const CAPSTAN_KEYS = ['wrap_angle', 'friction', 'pulley_diameter'];
 
 /**

@@ -1,9 +1,10 @@
 import type { CaseReader, Path } from './case-reader.ts';
 import type { Drive, MotorTorqueSpec, Part, Station } from './case.ts';
+import { CURVE_POINT_SHAPE, DRIVE_SHAPE, keysOf } from './case-shape.ts';
 import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { readBelt } from './read-belt.ts';
 
-const DRIVE_KEYS = ['rotor_inertia', 'speed_ratio', 'power', 'running_torque', 'torque', 'curve', 'belt'];
+const DRIVE_KEYS = keysOf(DRIVE_SHAPE);
 /** Parts at a direct drive (speed ratio 1) whose names say they are the motor's rotor. */
 const ROTOR_NAME = /\b(motor|rotor)\b/i;
 
@@ -80,7 +81,7 @@ function readMotorTorque(r: CaseReader, path: Path): MotorTorqueSpec | undefined
   const points: { speed: number; torque: number }[] = [];
   for (let i = 0; i < n; i++) {
     const p = [...path, 'curve', i];
-    if (!r.map(p, ['speed', 'torque'], { required: true, example: 'a point such as {speed: 1200 rpm, torque: 640 N*m}' })) continue;
+    if (!r.map(p, keysOf(CURVE_POINT_SHAPE), { required: true, example: 'a point such as {speed: 1200 rpm, torque: 640 N*m}' })) continue;
     const speed = r.quantity([...p, 'speed'], 'angular_speed', { required: true, nonNegative: true, example: 'the motor\'s speed at this point, such as "1200 rpm"' });
     const torque = r.quantity([...p, 'torque'], 'torque', { required: true, nonNegative: true, example: 'the motor\'s torque at this point, zero or more, such as "640 N*m"' });
     if (!speed || !torque) continue;

@@ -1,9 +1,10 @@
 import type { Material } from '../materials/material.ts';
 import type { CaseReader, Path } from './case-reader.ts';
 import type { ShaftKey } from './case.ts';
+import { keysOf, KEY_SHAPE } from './case-shape.ts';
 import { resolveMaterial } from './read-materials.ts';
 
-const KEY_KEYS = ['width', 'height', 'length', 'material', 'hub_depth'];
+const KEY_KEYS = keysOf(KEY_SHAPE);
 
 /** A station's `key: {width, height, length, material, hub_depth?}`; undefined when absent or wrong. */
 export function readKey(r: CaseReader, path: Path, caseMaterials: Record<string, Material>, used: Record<string, Material>): ShaftKey | undefined {

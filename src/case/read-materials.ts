@@ -2,19 +2,10 @@ import { findMaterial, MATERIAL_LIBRARY } from '../materials/library.ts';
 import { MATERIAL_FIELDS, type Material, type MaterialField } from '../materials/material.ts';
 import type { QuantityKind } from '../units/unit-table.ts';
 import type { CaseReader } from './case-reader.ts';
+import { keysOf, MATERIAL_SHAPE, materialFieldKind } from './case-shape.ts';
 import { didYouMean } from './did-you-mean.ts';
 import { ELONGATION_LIMIT, FRACTURE_STRAIN_LIMIT, MODULUS_LIMIT, REDUCTION_OF_AREA_LIMIT, type Limit } from './limits.ts';
 
-const FIELD_KINDS: Record<MaterialField, QuantityKind> = {
-  shear_modulus: 'stress',
-  elastic_modulus: 'stress',
-  density: 'density',
-  yield_strength: 'stress',
-  tensile_strength: 'stress',
-  elongation: 'fraction',
-  reduction_of_area: 'fraction',
-  fracture_strain: 'fraction',
-};
 
 /** Fields with limits of their own (the others keep their kind's). */
 const FIELD_LIMITS: Partial<Record<MaterialField, Limit>> = {
@@ -25,7 +16,7 @@ const FIELD_LIMITS: Partial<Record<MaterialField, Limit>> = {
   fracture_strain: FRACTURE_STRAIN_LIMIT,
 };
 
-const MATERIAL_KEYS = ['name', ...Object.keys(MATERIAL_FIELDS), 'strength_basis', 'source'];
+const MATERIAL_KEYS = keysOf(MATERIAL_SHAPE);
 
 /**
  * Case-local materials from `materials:`, keyed by name; they shadow library entries of the same
@@ -39,7 +30,7 @@ export function readCaseMaterials(r: CaseReader): Record<string, Material> {
     if (!r.map(path, MATERIAL_KEYS, { required: true })) continue;
     const m: Material = { key, name: r.string([...path, 'name']) ?? key, source: r.string([...path, 'source']) ?? 'given in the case file' };
     for (const [field, prop] of Object.entries(MATERIAL_FIELDS) as [MaterialField, keyof Material][]) {
-      const q = r.quantity([...path, field], FIELD_KINDS[field], { positive: true, limit: FIELD_LIMITS[field] });
+      const q = r.quantity([...path, field], materialFieldKind(field), { positive: true, limit: FIELD_LIMITS[field] });
       if (q) (m as unknown as Record<string, number>)[prop] = q.value;
     }
     if (m.yieldStrength !== undefined && m.tensileStrength !== undefined && m.tensileStrength < m.yieldStrength) {

@@ -1,7 +1,8 @@
 import type { CaseReader } from './case-reader.ts';
+import { keysOf, OBSERVED_SHAPE, shapeAt, TWIST_SHAPE } from './case-shape.ts';
 import type { FractureType, Observed, Photo, Station, TwistMeasurement } from './case.ts';
 
-const OBSERVED_KEYS = ['permanent_twist', 'fracture', 'key', 'hub', 'other', 'notes', 'photos'];
+const OBSERVED_KEYS = keysOf(OBSERVED_SHAPE);
 const FRACTURE_TYPES: FractureType[] = ['none', 'transverse', 'helical', 'fatigue', 'unknown'];
 
 /** The `observed:` section: measured permanent twist, the fracture, free text and photos. */
@@ -13,14 +14,14 @@ export function readObserved(r: CaseReader, stations: readonly Station[]): Obser
   const nt = r.list(['observed', 'permanent_twist']);
   for (let i = 0; i < nt; i++) {
     const path = ['observed', 'permanent_twist', i];
-    if (!r.map(path, ['between', 'angle', 'method'], { required: true })) continue;
+    if (!r.map(path, keysOf(TWIST_SHAPE), { required: true })) continue;
     const between = readBetween(r, [...path, 'between'], names);
     const angle = r.quantity([...path, 'angle'], 'angle', { required: true, nonNegative: true, example: 'the measured offset, such as "3.5 deg"' });
     const method = r.string([...path, 'method']);
     if (between && angle) observed.permanentTwist.push({ between, angle: angle.value, method } satisfies TwistMeasurement);
   }
 
-  if (r.map(['observed', 'fracture'], ['type', 'at', 'notes'])) {
+  if (r.map(['observed', 'fracture'], keysOf(shapeAt(['fracture'], OBSERVED_SHAPE)!))) {
     const type = r.string(['observed', 'fracture', 'type'], { required: true, allowed: FRACTURE_TYPES, example: FRACTURE_TYPES.join(', ') }) as FractureType | undefined;
     let at: string | number | undefined = r.string(['observed', 'fracture', 'at']);
     if (at !== undefined && !names.includes(at)) {
@@ -40,7 +41,7 @@ export function readObserved(r: CaseReader, stations: readonly Station[]): Obser
   const np = r.list(['observed', 'photos']);
   for (let i = 0; i < np; i++) {
     const path = ['observed', 'photos', i];
-    if (!r.map(path, ['path', 'caption'], { required: true })) continue;
+    if (!r.map(path, keysOf(shapeAt(['photos', 0], OBSERVED_SHAPE)!), { required: true })) continue;
     const p = r.string([...path, 'path'], { required: true, example: 'a path inside the case folder such as "photos/keyway.jpg"' });
     if (p === undefined) continue;
     if (!isInsideFolder(p)) {

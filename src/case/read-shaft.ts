@@ -1,10 +1,11 @@
 import type { Material } from '../materials/material.ts';
 import type { CaseReader } from './case-reader.ts';
 import type { Segment, Station } from './case.ts';
+import { keysOf, SEGMENT_SHAPE, SHAFT_SHAPE } from './case-shape.ts';
 import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
-const SEGMENT_KEYS = ['length', 'diameter', 'bore', 'material', 'kt', 'label', 'slip_torque', 'shear_torque'];
+const SEGMENT_KEYS = keysOf(SEGMENT_SHAPE);
 
 /** The shaft's segments in order from its start, with positions accumulated. */
 export function readShaft(
@@ -13,7 +14,7 @@ export function readShaft(
   used: Record<string, Material>,
 ): { segments: Segment[]; length: number } {
   const segments: Segment[] = [];
-  if (!r.map(['shaft'], ['material', 'segments'], { required: true, example: 'a mapping with material and segments' })) return { segments, length: 0 };
+  if (!r.map(['shaft'], keysOf(SHAFT_SHAPE), { required: true, example: 'a mapping with material and segments' })) return { segments, length: 0 };
   const shaftMaterial = r.string(['shaft', 'material']);
   const n = r.list(['shaft', 'segments'], { required: true, example: 'a list of segments, each with length and diameter', max: SIZE_LIMITS.segments, what: 'segments' });
   let position = 0;

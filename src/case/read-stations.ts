@@ -4,17 +4,12 @@ import type { CaseReader } from './case-reader.ts';
 import type { Part, PartShape, Station } from './case.ts';
 import { readDrive } from './read-drive.ts';
 import { readKey } from './read-key.ts';
+import { keysOf, PART_SHAPE, STATION_SHAPE } from './case-shape.ts';
 import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
-const STATION_KEYS = ['name', 'at', 'parts', 'drive', 'key'];
-const COMMON_PART_KEYS = ['shape', 'name', 'count', 'speed_ratio', 'rated_speed'];
-const SHAPE_KEYS: Record<PartShape, string[]> = {
-  disc: ['diameter', 'thickness', 'bore', 'material', 'density'],
-  inertia: ['inertia'],
-  mass: ['mass', 'radius_of_gyration'],
-};
-const SHAPES = Object.keys(SHAPE_KEYS) as PartShape[];
+const STATION_KEYS = keysOf(STATION_SHAPE);
+const SHAPES: PartShape[] = ['disc', 'inertia', 'mass'];
 
 /** Stations with their parts and drives; each part's inertia worked out from its shape. */
 export function readStations(
@@ -59,10 +54,10 @@ export function readStations(
 function readPart(r: CaseReader, path: (string | number)[], caseMaterials: Record<string, Material>, used: Record<string, Material>): Part | undefined {
   const shape = r.string([...path, 'shape'], { required: true, allowed: SHAPES, example: 'one of disc, inertia, mass' }) as PartShape | undefined;
   if (!shape) {
-    r.map(path, [...COMMON_PART_KEYS, ...SHAPES.flatMap((s) => SHAPE_KEYS[s])]);
+    r.map(path, keysOf(PART_SHAPE));
     return undefined;
   }
-  if (!r.map(path, [...COMMON_PART_KEYS, ...SHAPE_KEYS[shape]], { required: true })) return undefined;
+  if (!r.map(path, keysOf(PART_SHAPE, shape), { required: true })) return undefined;
   const count = r.number([...path, 'count'], { example: 'a whole number from 1 to 10000, such as 2', integer: true, min: NUMBER_LIMITS.count[0], max: NUMBER_LIMITS.count[1] }) ?? 1;
   const speedRatio = r.number([...path, 'speed_ratio'], { example: 'the part\'s speed over the shaft\'s, from 0.001 to 1000, such as 2.5', min: NUMBER_LIMITS.speedRatio[0], max: NUMBER_LIMITS.speedRatio[1] }) ?? 1;
   const name = r.string([...path, 'name']) ?? `${shape} ${Number(path[3]) + 1}`;

@@ -1,7 +1,8 @@
 import type { CaseReader } from './case-reader.ts';
 import type { Stop } from './case.ts';
+import { keysOf, STOP_SHAPE } from './case-shape.ts';
 
-const STOP_KEYS = ['at', 'duration', 'torque_capacity'];
+const STOP_KEYS = keysOf(STOP_SHAPE);
 
 /** The `stop:` section: where the shaft stopped, how long the stop took, and what the jam could hold. */
 export function readStop(r: CaseReader): Partial<Stop> {

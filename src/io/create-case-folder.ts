@@ -1,5 +1,5 @@
 import { existsSync, mkdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { dirname, join, relative, sep } from 'node:path';
 import { CaseError } from '../case/case-error.ts';
 import { packageFile } from './package-files.ts';
 import { writeNewFile } from './write-new-file.ts';
@@ -38,7 +38,8 @@ export function createCaseFolder(folder: string, units: 'metric' | 'us'): Create
   ];
   for (const [target, template] of files) {
     try {
-      writeNewFile(target, readFileSync(packageFile(template)));
+      const text = readFileSync(packageFile(template), 'utf8');
+      writeNewFile(target, target === caseFile ? schemaComment(caseFile) + text : text);
       created.push(target);
     } catch (e) {
       if ((e as NodeJS.ErrnoException).code !== 'EEXIST') throw e;
@@ -47,4 +48,14 @@ export function createCaseFolder(folder: string, units: 'metric' | 'us'): Create
     }
   }
   return { caseFile, created, kept };
+}
+
+/**
+ * The first line of a new case file: the editor's YAML language server checks and completes the
+ * case as it is typed against the installed schema, found by a path relative to the case (so it
+ * works offline and moves with a project that keeps the tool in its node_modules).
+ */
+export function schemaComment(caseFile: string): string {
+  const rel = relative(dirname(caseFile), packageFile('schemas/case.schema.json')).split(sep).join('/');
+  return `# yaml-language-server: $schema=${rel}\n`;
 }

@@ -1,5 +1,5 @@
 import { existsSync, readFileSync, statSync, writeFileSync, mkdirSync } from 'node:fs';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { createCaseFolder } from '../../src/io/create-case-folder.ts';
 import { tempFolder } from './io-fixtures.ts';
@@ -12,6 +12,17 @@ describe('createCaseFolder', () => {
     expect(statSync(join(dir, 'photos')).isDirectory()).toBe(true);
     expect(readFileSync(join(dir, 'case.yaml'), 'utf8')).toMatch(/^units: us /m);
     expect(readFileSync(join(dir, 'README.md'), 'utf8')).toMatch(/^# Case folder/);
+  });
+
+  it('a new case file opens with the editor\'s schema comment: a relative path to the installed case schema', () => {
+    const dir = join(tempFolder(), 'INC-S');
+    createCaseFolder(dir, 'metric');
+    const first = readFileSync(join(dir, 'case.yaml'), 'utf8').split('\n')[0];
+    const m = /^# yaml-language-server: \$schema=(\S+)$/.exec(first);
+    expect(m).not.toBeNull();
+    expect(m![1].startsWith('/')).toBe(false);
+    const schema = JSON.parse(readFileSync(resolve(dir, m![1]), 'utf8'));
+    expect(schema.title).toBe('shaftcase case file');
   });
 
   it('createCaseFolder refuses a folder that holds a case and leaves it as it was', () => {
