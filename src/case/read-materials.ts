@@ -1,6 +1,5 @@
 import { findMaterial, MATERIAL_LIBRARY } from '../materials/library.ts';
 import { MATERIAL_FIELDS, type Material, type MaterialField } from '../materials/material.ts';
-import type { QuantityKind } from '../units/unit-table.ts';
 import type { CaseReader } from './case-reader.ts';
 import { keysOf, MATERIAL_SHAPE, materialFieldKind } from './case-shape.ts';
 import { didYouMean } from './did-you-mean.ts';

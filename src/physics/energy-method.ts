@@ -1,4 +1,4 @@
-import type { Case, Part, YieldCriterion } from '../case/case.ts';
+import type { Part, YieldCriterion } from '../case/case.ts';
 import type { Material } from '../materials/material.ts';
 import type { ShaftPiece, Side, SideName } from '../model/shaft-model.ts';
 import { kineticEnergy, reflectedInertia } from './inertia.ts';

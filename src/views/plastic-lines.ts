@@ -1,5 +1,4 @@
 import type { Results } from '../results/results.ts';
-import type { PlasticPieceResult } from '../results/plastic-result.ts';
 import type { TwistFinding } from '../results/twist-findings.ts';
 import { ANGLE_RESOLUTION, show, sig } from './display-units.ts';
 import { describePlasticPiece } from './piece-span.ts';

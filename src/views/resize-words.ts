@@ -1,7 +1,6 @@
 import type { Case } from '../case/case.ts';
 import type { KeyFuse } from '../resize/key-fuse.ts';
 import type { ResizeResult } from '../resize/resize-result.ts';
-import type { Results } from '../results/results.ts';
 import { sideYieldRatio } from '../resize/side-ratio.ts';
 import type { RunningCheck } from '../resize/running-check.ts';
 import { show, sig } from './display-units.ts';

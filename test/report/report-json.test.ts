@@ -3,7 +3,6 @@ import { reportJson } from '../../src/report/report-json.ts';
 import { resizeToJson } from '../../src/views/resize-json.ts';
 import { resultsToJson } from '../../src/views/results-json.ts';
 import { fixture, RUN } from './report-fixtures.ts';
-import { withFinding } from '../../src/finding/investigation.ts';
 
 describe('reportJson', () => {
   it('reportJson is what check --json prints, plus resize, the inputs, the version, the run time and the case hash', () => {

@@ -160,7 +160,7 @@ describe('judgeByInterval: the Monte Carlo judges against the recorded speed\'s 
     const single = investigate(c, { samples: 0 }).observedFindings.twist[0];
     const sampled = investigate(c, { samples: 200 });
     const f = sampled.observedFindings.twist[0];
-    const [lo, hi] = sampled.uncertainty!.observed[0].speedInterval!;
+    const [lo] = sampled.uncertainty!.observed[0].speedInterval!;
     expect(lo).toBeGreaterThan(rpm(recorded));
     expect(lo).toBeLessThan(single.band.high);
     expect(Math.abs(single.speedForMeasured! / wm - 1)).toBeLessThan(0.005);

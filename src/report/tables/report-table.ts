@@ -32,7 +32,7 @@ export function columnHeader(c: TableColumn): string {
 /** The table as Markdown, numbers rounded to their column's significant figures, text escaped. */
 export function markdownTable(t: ReportTable): string {
   const cell = (v: Cell, c: TableColumn) => (v === null ? '—' : typeof v === 'number' ? sig(v, c.digits ?? 3) : escapeMarkdown(v) || '—');
-  const align = t.columns.map((c, i) => (t.rows.some((r) => typeof r[i] === 'number') ? '---:' : ':---'));
+  const align = t.columns.map((_, i) => (t.rows.some((r) => typeof r[i] === 'number') ? '---:' : ':---'));
   const lines = [
     `| ${t.columns.map((c) => escapeMarkdown(columnHeader(c))).join(' | ')} |`,
     `| ${align.join(' | ')} |`,
