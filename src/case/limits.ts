@@ -83,4 +83,8 @@ export const SIZE_LIMITS = {
   curvePoints: 200,
   /** Measured twists, photos. */
   listItems: 200,
+  /** One photo, bytes: the HTML carries each photo inside it, so a camera's full-size file is refused. */
+  photoBytes: 15_000_000,
+  /** All the photos of a case together, bytes. */
+  photosBytes: 60_000_000,
 } as const;

@@ -2,6 +2,7 @@ import { readFileSync, realpathSync, statSync } from 'node:fs';
 import { dirname, extname, isAbsolute, posix, relative, resolve } from 'node:path';
 import { CaseError, type CaseProblem } from '../case/case-error.ts';
 import type { Photo } from '../case/case.ts';
+import { SIZE_LIMITS } from '../case/limits.ts';
 import { positionInText } from '../case/source-position.ts';
 
 /** A photo of the case read from disk. */
@@ -21,10 +22,13 @@ const MEDIA_TYPES: Record<string, string> = { '.jpg': 'image/jpeg', '.jpeg': 'im
  * here the real path (links followed) must also lie inside it, and each photo must exist. Every
  * problem is a CaseError pointing at the photo's line in the case file.
  */
+const mb = (bytes: number) => `${Number((bytes / 1e6).toPrecision(3))} MB`;
+
 export function readPhotos(caseFile: string, caseText: string, photos: readonly Photo[]): PhotoFile[] {
   const folder = realpathSync(dirname(caseFile));
   const problems: CaseProblem[] = [];
   const files: PhotoFile[] = [];
+  let total = 0;
   photos.forEach((photo, i) => {
     const path = ['observed', 'photos', i, 'path'];
     const fail = (message: string) => problems.push({ code: 'E_FILE', path: `observed.photos[${i}].path`, message, position: positionInText(caseText, path) });
@@ -41,8 +45,19 @@ export function readPhotos(caseFile: string, caseText: string, photos: readonly 
       fail(`"${photo.path}" leads outside the case folder (to ${real}, through a link); copy the photo itself into the case's photos/ folder`);
       return;
     }
-    if (!statSync(real).isFile()) {
+    const stat = statSync(real);
+    if (!stat.isFile()) {
       fail(`"${photo.path}" is not a file; give the path of a photo such as "photos/keyway.jpg"`);
+      return;
+    }
+    // Sizes are checked before a byte is read: the report carries each photo inside its HTML.
+    if (stat.size > SIZE_LIMITS.photoBytes) {
+      fail(`"${photo.path}" is ${mb(stat.size)}, more than the ${mb(SIZE_LIMITS.photoBytes)} one photo may be; save a smaller copy (about 2000 pixels across is plenty for a report) and give its path`);
+      return;
+    }
+    total += stat.size;
+    if (total > SIZE_LIMITS.photosBytes) {
+      fail(`with "${photo.path}" the photos come to ${mb(total)}, more than the ${mb(SIZE_LIMITS.photosBytes)} a case's photos may be together; save smaller copies or leave some out`);
       return;
     }
     files.push({ photo, path: posix.normalize(photo.path.replace(/\\/g, '/')), data: readFileSync(real), mediaType: MEDIA_TYPES[extname(real).toLowerCase()] });

@@ -1,4 +1,4 @@
-import { mkdirSync, symlinkSync, writeFileSync } from 'node:fs';
+import { mkdirSync, symlinkSync, truncateSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { CaseError } from '../../src/case/case-error.ts';
@@ -21,6 +21,22 @@ function caseFolder(): string {
 }
 
 describe('readPhotos', () => {
+  it('a photo past 15 MB, or photos past 60 MB together, are refused at their line before they are read', () => {
+    const dir = caseFolder();
+    writeFileSync(join(dir, 'photos', 'key.png'), TINY_PNG);
+    writeFileSync(join(dir, 'photos', 'missing.jpg'), '');
+    truncateSync(join(dir, 'photos', 'missing.jpg'), 15_000_001); // sparse: no disk is written
+    expect(() => readPhotos(join(dir, 'case.yaml'), TEXT, [{ path: 'photos/key.png' }, { path: 'photos/missing.jpg' }])).toThrow(
+      /case\.yaml:5:13 observed\.photos\[1\]\.path: "photos\/missing\.jpg" is 15 MB, more than the 15 MB one photo may be; save a smaller copy/,
+    );
+    const many = Array.from({ length: 5 }, (_, i) => ({ path: `photos/p${i}.jpg` }));
+    for (const p of many) {
+      writeFileSync(join(dir, p.path), '');
+      truncateSync(join(dir, p.path), 14_000_000);
+    }
+    expect(() => readPhotos(join(dir, 'case.yaml'), TEXT, many)).toThrow(/with "photos\/p4\.jpg" the photos come to 70 MB, more than the 60 MB a case's photos may be together/);
+  });
+
   it('readPhotos reads each photo with its media type and its path inside the case folder', () => {
     const dir = caseFolder();
     writeFileSync(join(dir, 'photos', 'key.png'), TINY_PNG);
