@@ -11,12 +11,11 @@ describe('parseCase bounds the work before it starts', () => {
     expect(problems(big)).toMatch(/^case\.yaml: the case file is 1\.00 MB, more than the 1 MB a case file may be/);
   });
 
-  it('30 000 keys in one mapping are refused quickly (linear time), a mapping of 1500 at its first key', () => {
+  it('30 000 keys are refused by a count of the colons before the file is parsed, a mapping of 1500 at its first key', () => {
+    // Refused before the YAML parser sees it, so its quadratic check of unique keys never runs (no timing here: the suite never fails for being slow).
     const keys = Array.from({ length: 30_000 }, (_, i) => `  k${i}: 1`).join('\n');
-    const t = performance.now();
     const out = problems(base.replace('case:\n  id: T-1', `case:\n  id: T-1\n${keys}`));
-    expect(performance.now() - t).toBeLessThan(5000);
-    expect(out).toMatch(/more than the 20000 keys a case file may have|a mapping with 30001 keys, more than the 1000/);
+    expect(out).toMatch(/^case\.yaml: the case file holds \d+ colons, more than the 20000 keys a case file may have/);
     const some = Array.from({ length: 1500 }, (_, i) => `  k${i}: 1`).join('\n');
     expect(problems(base.replace('case:\n  id: T-1', `case:\n  id: T-1\n${some}`))).toMatch(/^case\.yaml:3:3: a mapping with 1501 keys, more than the 1000 one mapping may have/);
   });
