@@ -1,6 +1,6 @@
 import { enterEvent, eventSources, eventValues, locateEvent, type ChainEvent } from './chain-events.ts';
 import { ChainRecorder, type ChainHistory } from './chain-recorder.ts';
-import { chainEnergy, holdingJamTorque } from './chain-forces.ts';
+import { chainEnergy, holdingJamTorque, motorPieceValue } from './chain-forces.ts';
 import { ChainStepper } from './chain-stepper.ts';
 import type { ChainSystem } from './chain-system.ts';
 import type { TorqueLaw } from '../torque-law.ts';
@@ -119,8 +119,19 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     if (rampEnd > st.t * (1 + 1e-12) + 1e-15 && rampEnd < st.t + h) h = rampEnd - st.t;
     st.trial(h);
     eventValues(st, sources, evT);
+    // A motor passing a point of its curve is located only at standstill (its time is reported: the
+    // motor stalls, or is driven backwards). Elsewhere the curve's torque is continuous at its points
+    // (only the slope changes), so the step's error from the old piece is of second order in the
+    // step, and a motor settled at a point (a free motor at its curve's end) would otherwise be
+    // located anew every step. The piece is changed at the step's end instead (see below).
     let violated = false;
-    for (let k = 0; k < K; k++) if (evT[k] > 0) violated = true;
+    let motorPassed = false;
+    for (let k = 0; k < K; k++) {
+      if (evT[k] <= 0) continue;
+      const src = sources[k];
+      if (src.kind === 'motor' && !passesStandstill(st, st.drives[src.index])) motorPassed = true;
+      else violated = true;
+    }
     if (violated && burst < MAX_EVENTS_AT_ONE_INSTANT) {
       sources.forEach((src, k) => (direction[k] = src.kind === 'motor' ? Math.sign(st.motorSpeed(st.drives[src.index], true) - st.motorSpeed(st.drives[src.index], false)) : 0));
       const hit = locateEvent(st, sources, h, ev0, evT);
@@ -141,10 +152,20 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     }
     const last = st.t + h >= T * (1 - 1e-12);
     const jam = measure(last || rec.due(st.t + h));
+    if (motorPassed) sources.forEach((src, k) => (direction[k] = src.kind === 'motor' ? Math.sign(st.motorSpeed(st.drives[src.index], true) - st.motorSpeed(st.drives[src.index], false)) : 0));
     st.commit();
     steps++;
     rec.record(h, belt, jam, last);
-    ev0.set(evT);
+    if (motorPassed) {
+      sources.forEach((src, k) => {
+        if (src.kind !== 'motor') return;
+        const d = st.drives[src.index];
+        // Onto the piece that holds the speed now, one point at a time (each a point passed).
+        for (let guard = 0; guard <= d.line.speeds.length && motorPieceValue(st, d) > 0; guard++) enter(k, direction[k]);
+      });
+      st.refreshStart();
+      eventValues(st, sources, ev0);
+    } else ev0.set(evT);
     if (Math.abs(st.t - burstTime) >= 1e-9 * h0) burst = 0;
   }
 
@@ -175,4 +196,10 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
       released,
     },
   };
+}
+
+/** Whether the motor's trial speed leaves its piece through the curve's point at standstill. */
+function passesStandstill(st: ChainStepper, d: ChainStepper['drives'][number]): boolean {
+  const w = st.motorSpeed(d, true);
+  return (w > d.hi && d.hi === 0) || (w < d.lo && d.lo === 0);
 }
