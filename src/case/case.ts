@@ -82,6 +82,26 @@ export interface Station {
   drive?: Drive;
   /** The key that holds this station's hub on the shaft (`key:`), where the case gives one. */
   key?: ShaftKey;
+  /** The shrink or press fit that holds this station's hub on the shaft (`fit:`), where the case gives one. */
+  fit?: HubFit;
+}
+
+/**
+ * A shrink or press fit of the station's hub on the shaft. The seat's diameter, the shaft's bore
+ * and the shaft's material are the shaft's at the station (the segment toward the stop where the
+ * station stands on a shoulder).
+ */
+export interface HubFit {
+  /** Diametral interference, m: the shaft's diameter less the hub's bore before assembly. */
+  interference: number;
+  /** The hub's outer diameter over the seat, m. */
+  hubOuterDiameter: number;
+  /** Length of the fit along the shaft, m. */
+  length: number;
+  /** Coefficient of friction at the seat. */
+  friction: number;
+  /** The hub's material key into `Case.materials`; it has an elastic modulus and Poisson's ratio. */
+  hubMaterial: string;
 }
 
 /** A parallel key (square or rectangular) between a hub and the shaft (Shigley 9th ed. Sec. 7-7). */

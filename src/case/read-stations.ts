@@ -4,10 +4,11 @@ import type { CaseReader } from './case-reader.ts';
 import type { Part, PartShape, Station } from './case.ts';
 import { readDrive } from './read-drive.ts';
 import { readKey } from './read-key.ts';
+import { readFit } from './read-fit.ts';
 import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
-const STATION_KEYS = ['name', 'at', 'parts', 'drive', 'key'];
+const STATION_KEYS = ['name', 'at', 'parts', 'drive', 'key', 'fit'];
 const COMMON_PART_KEYS = ['shape', 'name', 'count', 'speed_ratio', 'rated_speed'];
 const SHAPE_KEYS: Record<PartShape, string[]> = {
   disc: ['diameter', 'thickness', 'bore', 'material', 'density'],
@@ -46,10 +47,12 @@ export function readStations(
     }
     const drive = r.has([...path, 'drive']) ? readDrive(r, [...path, 'drive'], parts) : undefined;
     const key = readKey(r, [...path, 'key'], caseMaterials, used);
+    const fit = readFit(r, [...path, 'fit'], caseMaterials, used);
     if (name !== undefined && at) {
       const station: Station = { name, at: Math.min(at.value, shaftLength), parts };
       if (drive) station.drive = drive;
       if (key) station.key = key;
+      if (fit) station.fit = fit;
       stations.push(station);
     }
   }

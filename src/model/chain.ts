@@ -2,6 +2,7 @@ import type { Case, Segment, Station } from '../case/case.ts';
 import { reflectedInertia } from '../physics/inertia.ts';
 import { compliance, shaftInertia } from '../physics/torsion.ts';
 import { chainDrive, type ChainDrive } from './chain-drive.ts';
+import { fitCapacity } from './fit-capacity.ts';
 import { cutAtStations, type ShaftModel, type ShaftPiece, type SideName } from './shaft-model.ts';
 
 /** A node of the lumped torsional chain. */
@@ -27,8 +28,11 @@ export interface ChainElement {
   /** Indices into `Chain.pieces` it lies in. */
   pieces: number[];
   side: SideName;
-  /** A torque limiter or shear pin in this element, from its segment. */
-  device?: { kind: 'torque limiter' | 'shear pin'; torque: number; segment: Segment };
+  /**
+   * A torque limiter or shear pin in this element, from its segment; or the shrink fit of the
+   * station at the element's far end (`station`), which slips like a limiter.
+   */
+  device?: { kind: 'torque limiter' | 'shear pin' | 'hub fit'; torque: number; segment: Segment; station?: string };
 }
 
 /** A piece of shaft (a segment cut at stations) inside the chain, with its side. */
@@ -132,7 +136,32 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
       if (right > EPS) nodes[nodes.length - 1].inertia += shaftInertia(rho(seg), right, seg.diameter, seg.bore);
     }
   }
+  placeFits(c, nodes, elements, stopNode);
   return { nodes, elements, pieces, stopNode, drives, shaftInertia: opts.shaftInertia };
+}
+
+/**
+ * A shrink or press fit at the chain's end on either side (the farthest loaded station) slips like
+ * a limiter on the element next to that end node: all the torque that element carries passes
+ * through the hub (less the shaft's own inertia lumped on the end node, a small share). A fit at a
+ * station inside the chain carries only its own parts' torque, which no one element holds, so the
+ * dynamic model leaves it rigid and the fit is checked against the torque through it afterwards
+ * (src/results/hub-fits.ts). A fit at the stop is the jam's own slip (see `stopOf` in
+ * src/results/dynamic-solve.ts).
+ */
+function placeFits(c: Case, nodes: ChainNode[], elements: ChainElement[], stopNode: number): void {
+  const ends = [0, nodes.length - 1].filter((i) => i !== stopNode);
+  for (const i of ends) {
+    const e = i === 0 ? 0 : elements.length - 1;
+    if (e < 0 || e >= elements.length) continue;
+    for (const name of nodes[i].stations) {
+      const s = c.stations.find((x) => x.name === name)!;
+      if (!s.fit) continue;
+      const cap = fitCapacity(c, s);
+      const el = elements[e];
+      if (!el.device || cap.slipTorque < el.device.torque) el.device = { kind: 'hub fit', torque: cap.slipTorque, segment: cap.seat, station: s.name };
+    }
+  }
 }
 
 /** Parts at a station at shaft speed, less a belt drive's rotor (which sits behind its belt). */

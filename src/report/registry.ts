@@ -14,6 +14,7 @@ import { observationsSection } from './sections/observations.ts';
 import { findingsSection } from './sections/findings.ts';
 import { howSureSection } from './sections/how-sure.ts';
 import { dynamicsSection } from './sections/dynamics.ts';
+import { keysAndFitsSection } from './sections/keys-and-fits.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
@@ -51,6 +52,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   methodSection,
   resultsSection,
   dynamicsSection,
+  keysAndFitsSection,
   materialSection,
   observationsSection,
   findingsSection,

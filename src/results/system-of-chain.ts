@@ -35,7 +35,7 @@ export function systemOf(
     return w ? ((2 * dampingRatio) / w) * el.stiffness : 0;
   });
   const laws: TorqueLaw[] = chain.elements.map((el, e) => {
-    if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e], damping[e]);
+    if (el.device?.kind === 'torque limiter' || el.device?.kind === 'hub fit') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e], damping[e]);
     if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
     return shaftLaw?.(el, initialTwist[e]) ?? new ElasticLaw(el.stiffness);
   });
