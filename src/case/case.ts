@@ -143,6 +143,10 @@ export interface Drive {
   torque?: MotorTorqueSpec;
   /** A belt between the motor and this station's pulley, which can slip. */
   belt?: BeltSpec;
+  /** Time from the stop after which the drive or the motor's overload cuts the torque, s (`trip_after`). */
+  tripAfter?: number;
+  /** Most torque the drive lets the motor give, at the motor shaft, N·m (`torque_limit`: a drive's current limit). */
+  torqueLimit?: number;
 }
 
 /** A constant torque, or a speed–torque curve by points (motor speed rad/s, torque N·m), speeds rising from 0. */

@@ -15,6 +15,7 @@ import { findingsSection } from './sections/findings.ts';
 import { howSureSection } from './sections/how-sure.ts';
 import { dynamicsSection } from './sections/dynamics.ts';
 import { keysAndFitsSection } from './sections/keys-and-fits.ts';
+import { driveProtectionSection } from './sections/drive-protection.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
@@ -53,6 +54,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   resultsSection,
   dynamicsSection,
   keysAndFitsSection,
+  driveProtectionSection,
   materialSection,
   observationsSection,
   findingsSection,

@@ -103,6 +103,8 @@ export interface DynamicResult {
   /** Located events in time order, as sentences (the first `MAX_EVENTS_KEPT`; `eventCount` says how many there were). */
   events: { time: number; text: string }[];
   eventCount: number;
+  /** Each drive's protection: its torque limit at the motor shaft, N·m, and when it tripped, s from the stop (undefined: it did not trip in the window). */
+  protection: { station: string; torqueLimit?: number; tripAfter?: number; trippedAt?: number }[];
   /**
    * Whether the shaft elements carried their law past yield (analysis.dynamic_plasticity): the
    * elastic–plastic law of ductile material, or the brittle element's break at its fracture torque.
@@ -201,6 +203,11 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     belts: chain.drives.flatMap((d) => (d.belt ? [{ station: d.station, slip: d.belt }] : [])),
     events,
     eventCount: shown.length,
+    protection: chain.drives.flatMap((d, i) =>
+      d.drive.tripAfter === undefined && d.drive.torqueLimit === undefined
+        ? []
+        : [{ station: d.station, ...optional('torqueLimit', d.drive.torqueLimit), ...optional('tripAfter', d.drive.tripAfter), ...optional('trippedAt', run.events.find((e) => e.source.kind === 'motor' && e.source.index === i && e.what.startsWith('trips'))?.time) }],
+    ),
     plasticity: plasticLaws.length > 0 || run.laws.some((l) => l instanceof ShearPinLaw && l.kind === 'shaft'),
     yielded: plasticLaws.some((l) => l.yielded),
     fractured: damage.some((d) => d.broken),

@@ -179,6 +179,8 @@ function defaultDuration(c: Case, chain: Chain, omega1: number): number {
   });
   for (const d of chain.drives) if (d.belt) times.push((d.rotorInertia * c.speed) / d.belt.slipTorque);
   if (c.stop.torqueCapacity !== undefined) times.push((inertiaOf(() => true) * c.speed) / c.stop.torqueCapacity);
-  const slipTime = Math.max(0, ...times);
-  return Math.min(MAX_DEFAULT_DURATION, Math.max(c.stop.duration + 8 * T1, slipTime + 4 * T1));
+  // A drive that trips drives the slip until then; afterwards the friction brings the rest to rest.
+  const trip = Math.max(0, ...c.stations.map((s) => s.drive?.tripAfter ?? 0));
+  const slipTime = Math.max(0, ...times) + (times.length > 0 ? trip : 0);
+  return Math.min(MAX_DEFAULT_DURATION, Math.max(c.stop.duration + 8 * T1, trip + 8 * T1, slipTime + 4 * T1));
 }

@@ -47,6 +47,6 @@ export function systemOf(
     initialTwist,
     speed,
     stop: { node: P, duration: stop.duration, ...(stop.torqueCapacity !== undefined ? { torqueCapacity: stop.torqueCapacity } : {}) },
-    drives: chain.drives.map((d) => ({ node: d.node, line: d.line, rotorInertia: d.rotorInertia, ...(d.belt ? { beltSlipTorque: d.belt.slipTorque } : {}) })),
+    drives: chain.drives.map((d) => ({ node: d.node, line: d.line, rotorInertia: d.rotorInertia, ...(d.belt ? { beltSlipTorque: d.belt.slipTorque } : {}), ...(d.drive.tripAfter !== undefined ? { tripAfter: d.drive.tripAfter } : {}) })),
   };
 }

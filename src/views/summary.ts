@@ -35,6 +35,11 @@ export function dynamicLines(r: Results, role: string): string[] {
     const what = s.firstSlip === undefined ? 'did not slip' : `slipped ${showSlipAngle(s.angle, u)} and took ${show(s.energy, 'energy', u)}${s.slippingAtEnd ? ', still slipping at the end' : ''}`;
     out.push(`  ${s.element} (slip torque ${show(s.slipTorque, 'torque', u)}) ${what}`);
   }
+  for (const p of d.protection) {
+    const limit = p.torqueLimit === undefined ? '' : `held to ${show(p.torqueLimit, 'torque', u)} at the motor`;
+    const trip = p.tripAfter === undefined ? '' : p.trippedAt === undefined ? `set to trip at ${sig(p.tripAfter * 1000)} ms, after the window` : `tripped at ${sig(p.trippedAt * 1000)} ms`;
+    out.push(`  drive at "${p.station}" ${[limit, trip].filter(Boolean).join(', ')}`);
+  }
   for (const p of d.pins) {
     out.push(`  ${p.element} (${show(p.shearTorque, 'torque', u)}) ${p.partedAt === undefined ? 'held' : `parted at ${sig(p.partedAt * 1000)} ms`}`);
   }
