@@ -71,6 +71,18 @@ export interface Segment {
   slipTorque?: number;
   /** Torque at which a shear pin or breakaway element in this segment parts, N·m; afterwards it carries nothing. */
   shearTorque?: number;
+  /** A coupling in series within this segment (`coupling:`). */
+  coupling?: Coupling;
+}
+
+/** A shaft coupling from its data sheet: a spring in series with the segment's own shaft. */
+export interface Coupling {
+  /** Torsional stiffness, N·m/rad; undefined: rigid (no compliance of its own). */
+  stiffness?: number;
+  /** Rated (nominal) torque, N·m. */
+  ratedTorque: number;
+  /** The most torque it may take now and then (the maker's maximum or peak torque), N·m; undefined: not given. */
+  peakTorque?: number;
 }
 
 export interface Station {

@@ -10,7 +10,7 @@ import { checkDriveCurves } from './read-drive.ts';
 import { checkFitSeat } from './read-fit.ts';
 import { seatSegment } from '../model/hub-seat.ts';
 import { readCaseMaterials } from './read-materials.ts';
-import { checkProtectedSegments, readShaft } from './read-shaft.ts';
+import { checkCouplingSegments, checkProtectedSegments, readShaft } from './read-shaft.ts';
 import { readObserved } from './read-observed.ts';
 import { readStations } from './read-stations.ts';
 import { readStop } from './read-stop.ts';
@@ -79,6 +79,7 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   if (r.problems.length === 0) {
     checkDriveCurves(r, stations, speed!.value);
     checkProtectedSegments(r, shaft.segments, stations);
+    checkCouplingSegments(r, shaft.segments, stations);
     const stopPosition = stations.find((s) => s.name === stopAt)!.at;
     stations.forEach((s, i) => {
       if (!s.fit) return;

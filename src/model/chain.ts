@@ -28,6 +28,8 @@ export interface ChainElement {
   /** Indices into `Chain.pieces` it lies in. */
   pieces: number[];
   side: SideName;
+  /** The segment whose flexible coupling is in series in this element (its stiffness is in `stiffness`). */
+  coupling?: Segment;
   /**
    * A torque limiter or shear pin in this element, from its segment; or the shrink fit of the
    * station at the element's far end (`station`), which slips like a limiter.
@@ -97,7 +99,10 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
         const a = p.piece.start + (len * j) / n;
         const b = j === n - 1 ? p.piece.end : p.piece.start + (len * (j + 1)) / n;
         const seg = p.piece.segment;
-        elements.push({ start: a, end: b, stiffness: 1 / compliance(b - a, G(p.piece), seg.diameter, seg.bore), inertia: shaftInertia(rho(seg), b - a, seg.diameter, seg.bore), pieces: [i], side: p.side });
+        // A coupling's spring goes in series on the middle element of its piece.
+        const kc = j === Math.floor((n - 1) / 2) ? seg.coupling?.stiffness : undefined;
+        const C = compliance(b - a, G(p.piece), seg.diameter, seg.bore) + (kc ? 1 / kc : 0);
+        elements.push({ start: a, end: b, stiffness: 1 / C, inertia: shaftInertia(rho(seg), b - a, seg.diameter, seg.bore), pieces: [i], side: p.side, ...(kc ? { coupling: seg } : {}) });
         positions.push(b);
       }
     });
@@ -106,8 +111,9 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
     positions.push(...at);
     for (let k = 0; k + 1 < at.length; k++) {
       const inRun = pieces.flatMap((p, i) => (p.piece.start >= at[k] - EPS && p.piece.end <= at[k + 1] + EPS ? [i] : []));
-      const C = inRun.reduce((s, i) => s + compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore), 0);
-      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])) });
+      const C = inRun.reduce((s, i) => s + compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore) + (pieces[i].piece.segment.coupling?.stiffness ? 1 / pieces[i].piece.segment.coupling!.stiffness! : 0), 0);
+      const coupled = inRun.map((i) => pieces[i].piece.segment).find((g) => g.coupling?.stiffness);
+      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])), ...(coupled ? { coupling: coupled } : {}) });
     }
   }
   placeDevices(elements, pieces);

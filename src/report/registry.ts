@@ -16,6 +16,7 @@ import { howSureSection } from './sections/how-sure.ts';
 import { dynamicsSection } from './sections/dynamics.ts';
 import { keysAndFitsSection } from './sections/keys-and-fits.ts';
 import { driveProtectionSection } from './sections/drive-protection.ts';
+import { couplingsSection } from './sections/couplings.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
@@ -55,6 +56,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   dynamicsSection,
   keysAndFitsSection,
   driveProtectionSection,
+  couplingsSection,
   materialSection,
   observationsSection,
   findingsSection,

@@ -13,6 +13,7 @@ import { balanceTwistRelation, readTwistBack } from './twist-findings.ts';
 import { verdictBasis } from './verdict-basis.ts';
 import { hubFits } from './hub-fits.ts';
 import { keyChecks } from './key-checks.ts';
+import { couplingChecks } from './coupling-checks.ts';
 
 /** Share of a side's energy above which the shaft's own kinetic energy is worth a warning. */
 const SHAFT_ENERGY_WARNING = 0.05;
@@ -123,6 +124,10 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     if (!f.inDynamicModel) warnings.push(`The shrink fit at "${f.station}" sits between other loaded stations, so the dynamic model holds it rigid; it is checked afterwards against the peak torque of the shaft next to it${f.upperBound ? ', an upper bound of what its hub carried' : ''}.`);
   }
 
+  if (c.shaft.segments.some((s) => s.coupling?.stiffness) && plastic.verdict !== 'elastic') {
+    warnings.push('The energy balance past yield puts all of a side\'s energy into its shaft and leaves the coupling\'s compliance out, so with a flexible coupling its figures are an upper bound; the element that holds the coupling stays elastic in the dynamic model.');
+  }
+
   // How the other model compares is the views' comparison (like for like), not part of the reason.
   const reason = basis.reason;
 
@@ -146,6 +151,7 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     dynamic,
     keys: keyChecks(c, basis.basis, sides, dynamic),
     fits,
+    couplings: couplingChecks(c, basis.basis, sides, dynamic),
     warnings,
     cautions: CAUTIONS,
   };

@@ -9,6 +9,7 @@ import type { DynamicResult } from './dynamic-result.ts';
 import type { VerdictBasis } from './verdict-basis.ts';
 import type { FitCheck } from './hub-fits.ts';
 import type { KeyCheck } from './key-checks.ts';
+import type { CouplingCheck } from './coupling-checks.ts';
 
 /**
  * The case's verdict. `elastic`: no yield anywhere; `yielded`: the net section yields and takes a
@@ -76,6 +77,8 @@ export interface Results {
   keys: KeyCheck[];
   /** Each station's shrink or press fit at the incident torque (empty without fits). */
   fits: FitCheck[];
+  /** Each segment's coupling against the incident torque (empty without couplings). */
+  couplings: CouplingCheck[];
   /** Warnings about the model's fit to the case, in plain words; the case file's plausibility warnings first, where the CLI carries them in. */
   warnings: string[];
   /** The case file's plausibility warnings (`checkPlausibility`), where the CLI carried them in (`withInputWarnings`). */

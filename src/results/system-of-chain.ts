@@ -37,6 +37,8 @@ export function systemOf(
   const laws: TorqueLaw[] = chain.elements.map((el, e) => {
     if (el.device?.kind === 'torque limiter' || el.device?.kind === 'hub fit') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e], damping[e]);
     if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
+    // An element with a coupling in series stays elastic: the plastic law's backbone is the shaft's alone.
+    if (el.coupling) return new ElasticLaw(el.stiffness);
     return shaftLaw?.(el, initialTwist[e]) ?? new ElasticLaw(el.stiffness);
   });
   return {

@@ -24,6 +24,7 @@ export function verdictBasis(c: Case, sides: readonly SideResult[]): { basis: Ve
     belts > 0 ? (belts === 1 ? 'a belt that can slip' : `${belts} belts that can slip`) : '',
     c.stop.torqueCapacity !== undefined ? 'a jam that can slip' : '',
     c.stations.some((s) => s.fit) ? 'a shrink or press fit that can slip' : '',
+    c.shaft.segments.some((s) => s.coupling?.stiffness) ? 'a flexible coupling' : '',
   ].filter(Boolean);
   if (slip.length > 0) why.push(`the case has ${joinAnd(slip)}`);
   if (why.length === 0) {

@@ -1,5 +1,6 @@
 import type { FitCheck } from '../results/hub-fits.ts';
 import type { KeyCheck } from '../results/key-checks.ts';
+import type { CouplingCheck } from '../results/coupling-checks.ts';
 
 /** A key at the incident torque, SI, each strength's basis in words beside the number it sets. */
 export function keyCheckJson(k: KeyCheck): Record<string, unknown> {
@@ -35,5 +36,19 @@ export function fitCheckJson(f: FitCheck): Record<string, unknown> {
     hub_yield_strength_Pa: f.hubYieldStrength ?? null,
     shaft_yield_torque_Nm: Number.isFinite(f.shaftYieldTorque) ? f.shaftYieldTorque : null,
     slips_before_shaft_yields: f.slipsBeforeShaftYields,
+  };
+}
+
+/** A coupling against the incident torque, SI. */
+export function couplingCheckJson(k: CouplingCheck): Record<string, unknown> {
+  return {
+    segment: k.segment.index,
+    label: k.segment.label ?? null,
+    stiffness_Nm_per_rad: k.stiffness ?? null,
+    rated_torque_Nm: k.ratedTorque,
+    peak_rating_Nm: k.peakRating ?? null,
+    torque_Nm: k.torque,
+    rated_ratio: k.ratedRatio,
+    capacity_ratio: k.capacityRatio,
   };
 }

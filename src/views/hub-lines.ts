@@ -21,3 +21,16 @@ export function hubSentences(r: Results): string[] {
   }
   return out;
 }
+
+/** One sentence per coupling against the incident torque, in the case's units; empty without couplings. */
+export function couplingSentences(r: Results): string[] {
+  const u = r.case.units;
+  return r.couplings.map((k) => {
+    const seg = k.segment.label ? `"${k.segment.label}"` : `segment ${k.segment.index + 1}`;
+    const kind = k.stiffness === undefined ? 'rigid coupling' : `coupling of ${show(k.stiffness, 'stiffness', u)}`;
+    const rating = k.peakRating === undefined ? `its rated torque ${show(k.ratedTorque, 'torque', u)} (no maximum torque given)` : `its maximum torque ${show(k.peakRating, 'torque', u)} (rated ${show(k.ratedTorque, 'torque', u)})`;
+    const verdict = k.capacityRatio > 1 ? 'past what the maker allows: inspect or replace it' : 'within what the maker allows';
+    const soft = k.stiffness === undefined ? '' : ' An elastomeric coupling\'s stiffness rises with load and falls with temperature; the data-sheet figure is a mean.';
+    return `The ${kind} in ${seg} carried ${show(k.torque, 'torque', u)}, ${sig(k.capacityRatio)} × ${rating}: ${verdict}.${soft}`;
+  });
+}

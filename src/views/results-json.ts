@@ -2,7 +2,7 @@ import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { DynamicResult } from '../results/dynamic-result.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import { findingToJson } from './finding-json.ts';
-import { fitCheckJson, keyCheckJson } from './hub-json.ts';
+import { couplingCheckJson, fitCheckJson, keyCheckJson } from './hub-json.ts';
 import { SCHEMA_VERSION } from './schema-version.ts';
 import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
 import type { Uncertainty } from '../uncertainty/uncertainty.ts';
@@ -45,6 +45,7 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
     dynamic: dynamicJson(r.dynamic),
     keys: r.keys.map(keyCheckJson),
     fits: r.fits.map(fitCheckJson),
+    couplings: r.couplings.map(couplingCheckJson),
     finding: findingToJson(r.finding, r.case.units),
   };
 }

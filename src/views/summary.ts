@@ -8,7 +8,7 @@ import { show, sig } from './display-units.ts';
 import { renderUncertaintyLines } from './uncertainty-summary.ts';
 import { observedLines, plasticLines } from './plastic-lines.ts';
 import { showSlipAngle } from './slip-angle.ts';
-import { hubSentences } from './hub-lines.ts';
+import { couplingSentences, hubSentences } from './hub-lines.ts';
 
 /**
  * The dynamic model's numbers: per side the peak torque as carried (capped past yield) and, like for
@@ -94,6 +94,8 @@ export function renderSummary(r: Investigation): string {
   }
   const hubs = hubSentences(r);
   if (hubs.length > 0) out.push('', 'Keys and hub fits at the incident torque:', ...hubs.map((h) => `  - ${h}`));
+  const couplings = couplingSentences(r);
+  if (couplings.length > 0) out.push('', 'Couplings at the incident torque:', ...couplings.map((h) => `  - ${h}`));
   const sure = renderUncertaintyLines(r);
   if (sure.length > 0) out.push('', ...sure);
   out.push(...observedLines(r));
