@@ -17,6 +17,7 @@ import { dynamicsSection } from './sections/dynamics.ts';
 import { keysAndFitsSection } from './sections/keys-and-fits.ts';
 import { driveProtectionSection } from './sections/drive-protection.ts';
 import { couplingsSection } from './sections/couplings.ts';
+import { driveTrainSection } from './sections/drive-train.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
@@ -57,6 +58,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   keysAndFitsSection,
   driveProtectionSection,
   couplingsSection,
+  driveTrainSection,
   materialSection,
   observationsSection,
   findingsSection,

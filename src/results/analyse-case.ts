@@ -14,6 +14,7 @@ import { verdictBasis } from './verdict-basis.ts';
 import { hubFits } from './hub-fits.ts';
 import { keyChecks } from './key-checks.ts';
 import { couplingChecks } from './coupling-checks.ts';
+import { driveTrainElements } from './drive-train.ts';
 
 /** Share of a side's energy above which the shaft's own kinetic energy is worth a warning. */
 const SHAFT_ENERGY_WARNING = 0.05;
@@ -120,6 +121,8 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
   };
 
   const fits = hubFits(c, basis.basis, sides, dynamic);
+  const keys = keyChecks(c, basis.basis, sides, dynamic);
+  const couplings = couplingChecks(c, basis.basis, sides, dynamic);
   for (const f of fits) {
     if (!f.inDynamicModel) warnings.push(`The shrink fit at "${f.station}" sits between other loaded stations, so the dynamic model holds it rigid; it is checked afterwards against the peak torque of the shaft next to it${f.upperBound ? ', an upper bound of what its hub carried' : ''}.`);
   }
@@ -149,9 +152,10 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     verdictBasis: basis.basis,
     verdictReason: reason,
     dynamic,
-    keys: keyChecks(c, basis.basis, sides, dynamic),
+    keys,
     fits,
-    couplings: couplingChecks(c, basis.basis, sides, dynamic),
+    couplings,
+    driveTrain: driveTrainElements(basis.basis, sides, dynamic, keys, fits, couplings),
     warnings,
     cautions: CAUTIONS,
   };

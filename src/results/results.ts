@@ -10,6 +10,7 @@ import type { VerdictBasis } from './verdict-basis.ts';
 import type { FitCheck } from './hub-fits.ts';
 import type { KeyCheck } from './key-checks.ts';
 import type { CouplingCheck } from './coupling-checks.ts';
+import type { DriveTrainElement } from './drive-train.ts';
 
 /**
  * The case's verdict. `elastic`: no yield anywhere; `yielded`: the net section yields and takes a
@@ -79,6 +80,8 @@ export interface Results {
   fits: FitCheck[];
   /** Each segment's coupling against the incident torque (empty without couplings). */
   couplings: CouplingCheck[];
+  /** Every element of the drive train with its capacity and the torque it carried (unordered: the finding orders them). */
+  driveTrain: DriveTrainElement[];
   /** Warnings about the model's fit to the case, in plain words; the case file's plausibility warnings first, where the CLI carries them in. */
   warnings: string[];
   /** The case file's plausibility warnings (`checkPlausibility`), where the CLI carried them in (`withInputWarnings`). */

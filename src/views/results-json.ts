@@ -2,6 +2,7 @@ import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { DynamicResult } from '../results/dynamic-result.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import { findingToJson } from './finding-json.ts';
+import { driveTrainJson } from './drive-train-table.ts';
 import { couplingCheckJson, fitCheckJson, keyCheckJson } from './hub-json.ts';
 import { SCHEMA_VERSION } from './schema-version.ts';
 import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
@@ -46,6 +47,7 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
     keys: r.keys.map(keyCheckJson),
     fits: r.fits.map(fitCheckJson),
     couplings: r.couplings.map(couplingCheckJson),
+    drive_train: driveTrainJson(r.finding),
     finding: findingToJson(r.finding, r.case.units),
   };
 }

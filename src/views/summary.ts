@@ -9,6 +9,8 @@ import { renderUncertaintyLines } from './uncertainty-summary.ts';
 import { observedLines, plasticLines } from './plastic-lines.ts';
 import { showSlipAngle } from './slip-angle.ts';
 import { couplingSentences, hubSentences } from './hub-lines.ts';
+import { driveTrainRows, hasDriveTrain } from './drive-train-table.ts';
+import { textTable } from './text-table.ts';
 
 /**
  * The dynamic model's numbers: per side the peak torque as carried (capped past yield) and, like for
@@ -96,6 +98,10 @@ export function renderSummary(r: Investigation): string {
   if (hubs.length > 0) out.push('', 'Keys and hub fits at the incident torque:', ...hubs.map((h) => `  - ${h}`));
   const couplings = couplingSentences(r);
   if (couplings.length > 0) out.push('', 'Couplings at the incident torque:', ...couplings.map((h) => `  - ${h}`));
+  if (hasDriveTrain(f)) {
+    out.push('', 'What gave way first (the drive train, weakest first; torques at shaft speed):');
+    out.push(...textTable([['order', 'element', 'capacity', 'torque', 'ratio', 'gives way when it'], ...driveTrainRows(f, u)]).map((l) => `  ${l}`));
+  }
   const sure = renderUncertaintyLines(r);
   if (sure.length > 0) out.push('', ...sure);
   out.push(...observedLines(r));
