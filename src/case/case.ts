@@ -73,6 +73,8 @@ export interface Segment {
   shearTorque?: number;
   /** A coupling in series within this segment (`coupling:`). */
   coupling?: Coupling;
+  /** Backlash in this segment (a gear mesh's or a coupling's play), rad: no torque across the gap (`backlash:`). */
+  backlash?: number;
 }
 
 /** A shaft coupling from its data sheet: a spring in series with the segment's own shaft. */

@@ -4,7 +4,7 @@ import type { Segment, Station } from './case.ts';
 import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
-const SEGMENT_KEYS = ['length', 'diameter', 'bore', 'material', 'kt', 'label', 'slip_torque', 'shear_torque', 'coupling'];
+const SEGMENT_KEYS = ['length', 'diameter', 'bore', 'material', 'kt', 'label', 'slip_torque', 'shear_torque', 'coupling', 'backlash'];
 const COUPLING_KEYS = ['stiffness', 'rated_torque', 'peak_torque'];
 
 /** The shaft's segments in order from its start, with positions accumulated. */
@@ -28,6 +28,10 @@ export function readShaft(
     const label = r.string([...path, 'label']);
     const protection = readProtection(r, path);
     const coupling = readCoupling(r, [...path, 'coupling']);
+    const backlash = r.quantity([...path, 'backlash'], 'angle', { positive: true, example: 'the play at this shaft, measured by rocking it with the other side held (dial gauge on a radius: arc ÷ radius), such as "0.5 deg"' });
+    if (backlash && (protection.slipTorque !== undefined || protection.shearTorque !== undefined)) {
+      r.fail('E_MODEL', [...path, 'backlash'], 'a segment with a limiter or shear pin cannot also hold the backlash; split the segment and put the backlash on its own piece');
+    }
     const materialKey = r.string([...path, 'material']) ?? shaftMaterial;
     if (diameter && bore && bore.value >= diameter.value) {
       r.fail('E_RANGE', [...path, 'bore'], `the bore must be smaller than the diameter (${fmtMm(diameter.value)}); give a bore such as "${fmtMm(diameter.value * 0.5)}", or leave it out for a solid segment`);
@@ -54,6 +58,7 @@ export function readShaft(
       kt,
       ...protection,
       ...(coupling ? { coupling } : {}),
+      ...(backlash ? { backlash: backlash.value } : {}),
     });
     position += length.value;
   }
@@ -109,9 +114,11 @@ export function checkProtectedSegments(r: CaseReader, segments: readonly Segment
  */
 export function checkCouplingSegments(r: CaseReader, segments: readonly Segment[], stations: readonly Station[]): void {
   for (const seg of segments) {
-    if (!seg.coupling) continue;
-    const inside = stations.find((s) => s.at > seg.start + 1e-9 && s.at < seg.end - 1e-9);
-    if (inside) r.fail('E_MODEL', ['shaft', 'segments', seg.index, 'coupling'], `station "${inside.name}" lies inside this segment, so it is unclear which side of the coupling it is on; split the segment at the station and put the coupling on one of the pieces`);
+    for (const key of ['coupling', 'backlash'] as const) {
+      if (seg[key] === undefined) continue;
+      const inside = stations.find((s) => s.at > seg.start + 1e-9 && s.at < seg.end - 1e-9);
+      if (inside) r.fail('E_MODEL', ['shaft', 'segments', seg.index, key], `station "${inside.name}" lies inside this segment, so it is unclear which side of the ${key === 'coupling' ? 'coupling' : 'gap'} it is on; split the segment at the station and put the ${key} on one of the pieces`);
+    }
   }
 }
 

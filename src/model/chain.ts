@@ -30,6 +30,8 @@ export interface ChainElement {
   side: SideName;
   /** The segment whose flexible coupling is in series in this element (its stiffness is in `stiffness`). */
   coupling?: Segment;
+  /** A gap in this element from its segment's `backlash`, rad. */
+  backlash?: { gap: number; segment: Segment };
   /**
    * A torque limiter or shear pin in this element, from its segment; or the shrink fit of the
    * station at the element's far end (`station`), which slips like a limiter.
@@ -143,7 +145,28 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
     }
   }
   placeFits(c, nodes, elements, stopNode);
+  placeBacklash(elements, pieces);
   return { nodes, elements, pieces, stopNode, drives, shaftInertia: opts.shaftInertia };
+}
+
+/** A segment's backlash goes on the middle one of its elements on each side (as a limiter does). */
+function placeBacklash(elements: ChainElement[], pieces: ChainPiece[]): void {
+  const groups = new Map<string, number[]>();
+  elements.forEach((el, e) => {
+    for (const i of el.pieces) {
+      const seg = pieces[i].piece.segment;
+      if (seg.backlash === undefined) continue;
+      const key = `${seg.index}:${el.side}`;
+      const list = groups.get(key) ?? [];
+      if (!list.includes(e)) list.push(e);
+      groups.set(key, list);
+    }
+  });
+  for (const list of groups.values()) {
+    const el = elements[list[Math.floor((list.length - 1) / 2)]];
+    const seg = el.pieces.map((i) => pieces[i].piece.segment).find((s) => s.backlash !== undefined)!;
+    el.backlash = { gap: seg.backlash!, segment: seg };
+  }
 }
 
 /**

@@ -18,6 +18,7 @@ import { keysAndFitsSection } from './sections/keys-and-fits.ts';
 import { driveProtectionSection } from './sections/drive-protection.ts';
 import { couplingsSection } from './sections/couplings.ts';
 import { driveTrainSection } from './sections/drive-train.ts';
+import { backlashSection } from './sections/backlash.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
@@ -58,6 +59,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   keysAndFitsSection,
   driveProtectionSection,
   couplingsSection,
+  backlashSection,
   driveTrainSection,
   materialSection,
   observationsSection,

@@ -66,6 +66,7 @@ function dynamicJson(d: DynamicResult): Record<string, unknown> {
     segments: d.pieces.map((p) => ({ from_m: p.piece.start, to_m: p.piece.end, peak_torque_Nm: p.peakTorque, elastic_peak_torque_Nm: p.elasticPeakTorque, shear_stress_Pa: p.shearStress, yield_ratio: p.yieldRatio, permanent_twist_rad: p.permanentTwist, max_shear_strain: p.maxShearStrain, broken: p.broken, break_time_s: p.breakTime ?? null })),
     slip: d.slips.map((s) => ({ element: s.element, energy_J: s.energy, angle_rad: s.angle })),
     events: d.events.map((e) => ({ time_s: e.time, event: e.text })),
+    backlash: d.gaps.map((g) => ({ segment: g.segment.index, label: g.segment.label ?? null, gap_rad: g.gap, contacts: g.contacts })),
     protection: d.protection.map((p) => ({ station: p.station, torque_limit_Nm: p.torqueLimit ?? null, trip_after_s: p.tripAfter ?? null, tripped_at_s: p.trippedAt ?? null })),
   };
 }

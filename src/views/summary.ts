@@ -37,6 +37,9 @@ export function dynamicLines(r: Results, role: string): string[] {
     const what = s.firstSlip === undefined ? 'did not slip' : `slipped ${showSlipAngle(s.angle, u)} and took ${show(s.energy, 'energy', u)}${s.slippingAtEnd ? ', still slipping at the end' : ''}`;
     out.push(`  ${s.element} (slip torque ${show(s.slipTorque, 'torque', u)}) ${what}`);
   }
+  for (const g of d.gaps) {
+    out.push(`  backlash of ${show(g.gap, 'angle', u)} in ${g.segment.label ? `"${g.segment.label}"` : `segment ${g.segment.index + 1}`}: closed ${g.contacts} time${g.contacts === 1 ? '' : 's'} (taken fully open at the stop where no running torque held it closed)`);
+  }
   for (const p of d.protection) {
     const limit = p.torqueLimit === undefined ? '' : `held to ${show(p.torqueLimit, 'torque', u)} at the motor`;
     const trip = p.tripAfter === undefined ? '' : p.trippedAt === undefined ? `set to trip at ${sig(p.tripAfter * 1000)} ms, after the window` : `tripped at ${sig(p.trippedAt * 1000)} ms`;
