@@ -51,8 +51,11 @@ export function hubTorque(c: Case, s: Station, basis: VerdictBasis, sides: reado
  */
 export function shaftYieldTorqueToStop(c: Case, s: Station): number {
   const stopAt = c.stations.find((x) => x.name === c.stop.at)!.at;
-  const lo = Math.min(s.at, stopAt);
-  const hi = Math.max(s.at, stopAt);
+  // A hub at the stop holds the shaft of both sides: the whole loaded run.
+  const loaded = c.stations.filter((x) => x.parts.length > 0 && Math.abs(x.at - stopAt) > EPS).map((x) => x.at);
+  const atStop = Math.abs(s.at - stopAt) <= EPS;
+  const lo = atStop ? Math.min(stopAt, ...loaded) : Math.min(s.at, stopAt);
+  const hi = atStop ? Math.max(stopAt, ...loaded) : Math.max(s.at, stopAt);
   let least = Infinity;
   for (const p of cutAtStations(c.shaft.segments, c.stations)) {
     if (p.start < lo - EPS || p.end > hi + EPS || p.end - p.start <= EPS) continue;
