@@ -30,8 +30,8 @@ describe('BacklashLaw: a gap, then an elastic stop', () => {
   it('carries no torque inside the gap and k·(θ − end) beyond it', () => {
     const law = new BacklashLaw(1000, -0.01, 0, -0.01);
     expect(law.torque(-0.005)).toBe(0);
-    expect(law.leave(-0.005, 0)).toBeLessThan(0);
-    expect(law.leave(0.001, 0)).toBeGreaterThan(0);
+    expect(law.leave(-0.005)).toBeLessThan(0);
+    expect(law.leave(0.001)).toBeGreaterThan(0);
     expect(law.enter(0.001)).toBe('closes its gap');
     expect(law.torque(0.002)).toBeCloseTo(2, 12);
     expect(law.energy(0.002)).toBeCloseTo(0.002, 12);
