@@ -56,6 +56,17 @@ export const SEGMENT_SHAPE = mapping(
     label: text('A name for the segment, such as "sheave seat".', 'sheave seat'),
     slip_torque: quantity('torque', 'The slip setting of a friction torque limiter or slip coupling in this segment.', '1500 N*m'),
     shear_torque: quantity('torque', 'The torque at which a shear pin in this segment parts.', '2200 N*m'),
+    coupling: {
+      shape: mapping(
+        {
+          stiffness: quantity('stiffness', "The coupling's dynamic torsional stiffness (data sheet); left out for a rigid coupling.", '120 kN*m/rad'),
+          rated_torque: quantity('torque', "The coupling's rated torque (data sheet).", '4 kN*m', true),
+          peak_torque: quantity('torque', "The coupling's maximum torque (data sheet).", '8 kN*m'),
+        },
+        'A coupling within this segment, in series with its shaft.',
+      ),
+    },
+    backlash: quantity('angle', 'The play at this shaft (a gap in the gearing or a worn coupling), measured by rocking it with the other side held.', '0.5 deg'),
   },
   'One length of the shaft with one diameter, from the shaft’s start.',
 );
@@ -118,6 +129,8 @@ export const DRIVE_SHAPE = mapping(
     torque: quantity('torque', "The motor's torque while it is pulled down (constant).", '580 N*m'),
     curve: { shape: { type: 'list', of: CURVE_POINT_SHAPE, min: 2, about: "The motor's speed–torque curve from 0 rpm up to its synchronous speed." } },
     belt: { shape: BELT_SHAPE },
+    trip_after: quantity('time', "The time from the stop after which the drive or its overload relay cut the motor (the drive's fault log).", '250 ms'),
+    torque_limit: quantity('torque', "The most torque the drive lets the motor give (its current limit, at the motor shaft).", '300 N*m'),
   },
   'A motor that keeps driving at this station.',
 );
@@ -133,6 +146,17 @@ export const KEY_SHAPE = mapping(
   "The key that joins this station's hub to the shaft.",
 );
 
+export const FIT_SHAPE = mapping(
+  {
+    interference: quantity('length', 'The diametral interference: shaft diameter less hub bore (from the drawing’s fit).', '0.05 mm', true),
+    hub_outer_diameter: quantity('length', "The hub's outer diameter over the seat.", '110 mm', true),
+    length: quantity('length', 'The length of the fit along the shaft.', '60 mm', true),
+    friction: { shape: { type: 'number', min: L.friction[0], max: L.friction[1], about: 'The coefficient of friction at the seat.' }, example: 0.12, required: true },
+    hub_material: text("The hub's material.", 'aisi-1045-hr', true),
+  },
+  "A shrink or press fit of this station's hub on the shaft.",
+);
+
 export const STATION_SHAPE = mapping(
   {
     name: text('The station’s name, used by stop.at and observed twist.', 'rotor', true),
@@ -140,11 +164,15 @@ export const STATION_SHAPE = mapping(
     parts: { shape: { type: 'list', of: PART_SHAPE, about: 'The rotating parts at this station.' } },
     drive: { shape: DRIVE_SHAPE },
     key: { shape: KEY_SHAPE },
+    fit: { shape: FIT_SHAPE },
   },
   'A place on the shaft: a hub, the jam, a motor.',
 );
 
-const FIELD_KINDS: Record<MaterialField, QuantityKind> = {
+/** Material fields given with a unit (Poisson's ratio is a plain number). */
+type QuantityField = Exclude<MaterialField, 'poisson_ratio'>;
+
+const FIELD_KINDS: Record<QuantityField, QuantityKind> = {
   shear_modulus: 'stress',
   elastic_modulus: 'stress',
   density: 'density',
@@ -154,7 +182,7 @@ const FIELD_KINDS: Record<MaterialField, QuantityKind> = {
   reduction_of_area: 'fraction',
   fracture_strain: 'fraction',
 };
-const FIELD_EXAMPLES: Record<MaterialField, string> = {
+const FIELD_EXAMPLES: Record<QuantityField, string> = {
   shear_modulus: '80 GPa',
   elastic_modulus: '205 GPa',
   density: '7850 kg/m^3',
@@ -166,14 +194,19 @@ const FIELD_EXAMPLES: Record<MaterialField, string> = {
 };
 
 /** The kind of quantity each material field holds. */
-export function materialFieldKind(field: MaterialField): QuantityKind {
+export function materialFieldKind(field: QuantityField): QuantityKind {
   return FIELD_KINDS[field];
 }
 
 export const MATERIAL_SHAPE = mapping(
   {
     name: text("The material's name.", 'AISI 1045 steel, cold drawn'),
-    ...Object.fromEntries((Object.keys(MATERIAL_FIELDS) as MaterialField[]).map((f) => [f, quantity(FIELD_KINDS[f], f.replaceAll('_', ' '), FIELD_EXAMPLES[f])])),
+    ...Object.fromEntries(
+      (Object.keys(MATERIAL_FIELDS) as MaterialField[]).map((f) => [
+        f,
+        f === 'poisson_ratio' ? { shape: { type: 'number', min: 0, max: 0.499, about: "Poisson's ratio (data sheet)." }, example: 0.29 } : quantity(FIELD_KINDS[f], f.replaceAll('_', ' '), FIELD_EXAMPLES[f]),
+      ]),
+    ),
     strength_basis: { shape: { type: 'text', allowed: ['minimum', 'typical'], about: 'Whether the strengths are published minima or typical (mean) values.' }, example: 'minimum' },
     source: text('Where the values come from (a mill certificate, a handbook with its edition).', 'mill certificate 4471-B'),
   },

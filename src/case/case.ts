@@ -71,6 +71,20 @@ export interface Segment {
   slipTorque?: number;
   /** Torque at which a shear pin or breakaway element in this segment parts, N·m; afterwards it carries nothing. */
   shearTorque?: number;
+  /** A coupling in series within this segment (`coupling:`). */
+  coupling?: Coupling;
+  /** Backlash in this segment (a gear mesh's or a coupling's play), rad: no torque across the gap (`backlash:`). */
+  backlash?: number;
+}
+
+/** A shaft coupling from its data sheet: a spring in series with the segment's own shaft. */
+export interface Coupling {
+  /** Torsional stiffness, N·m/rad; undefined: rigid (no compliance of its own). */
+  stiffness?: number;
+  /** Rated (nominal) torque, N·m. */
+  ratedTorque: number;
+  /** The most torque it may take now and then (the maker's maximum or peak torque), N·m; undefined: not given. */
+  peakTorque?: number;
 }
 
 export interface Station {
@@ -82,6 +96,26 @@ export interface Station {
   drive?: Drive;
   /** The key that holds this station's hub on the shaft (`key:`), where the case gives one. */
   key?: ShaftKey;
+  /** The shrink or press fit that holds this station's hub on the shaft (`fit:`), where the case gives one. */
+  fit?: HubFit;
+}
+
+/**
+ * A shrink or press fit of the station's hub on the shaft. The seat's diameter, the shaft's bore
+ * and the shaft's material are the shaft's at the station (the segment toward the stop where the
+ * station stands on a shoulder).
+ */
+export interface HubFit {
+  /** Diametral interference, m: the shaft's diameter less the hub's bore before assembly. */
+  interference: number;
+  /** The hub's outer diameter over the seat, m. */
+  hubOuterDiameter: number;
+  /** Length of the fit along the shaft, m. */
+  length: number;
+  /** Coefficient of friction at the seat. */
+  friction: number;
+  /** The hub's material key into `Case.materials`; it has an elastic modulus and Poisson's ratio. */
+  hubMaterial: string;
 }
 
 /** A parallel key (square or rectangular) between a hub and the shaft (Shigley 9th ed. Sec. 7-7). */
@@ -123,6 +157,10 @@ export interface Drive {
   torque?: MotorTorqueSpec;
   /** A belt between the motor and this station's pulley, which can slip. */
   belt?: BeltSpec;
+  /** Time from the stop after which the drive or the motor's overload cuts the torque, s (`trip_after`). */
+  tripAfter?: number;
+  /** Most torque the drive lets the motor give, at the motor shaft, N·m (`torque_limit`: a drive's current limit). */
+  torqueLimit?: number;
 }
 
 /** A constant torque, or a speed–torque curve by points (motor speed rad/s, torque N·m), speeds rising from 0. */

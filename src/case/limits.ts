@@ -35,6 +35,7 @@ export const KIND_LIMITS: Record<QuantityKind, Limit> = {
   power: { min: 1, max: 1e9, text: '1 W to 1 GW' },
   energy: { min: 1e-3, max: 1e10, text: '0.001 J to 1e10 J' },
   force: { min: 1e-2, max: 1e8, text: '0.01 N to 1e8 N' },
+  stiffness: { min: 1, max: 1e12, text: '1 N*m/rad to 1e12 N*m/rad' },
   fraction: { min: 1e-6, max: 1, text: '0.0001 % to 100 %' },
 };
 

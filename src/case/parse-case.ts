@@ -8,8 +8,10 @@ import { SIZE_LIMITS } from './limits.ts';
 import type { Case, CaseMeta } from './case.ts';
 import { readAnalysis } from './read-analysis.ts';
 import { checkDriveCurves } from './read-drive.ts';
+import { checkFitSeat } from './read-fit.ts';
+import { seatSegment } from '../model/hub-seat.ts';
 import { readCaseMaterials } from './read-materials.ts';
-import { checkProtectedSegments, readShaft } from './read-shaft.ts';
+import { checkCouplingSegments, checkProtectedSegments, readShaft } from './read-shaft.ts';
 import { readObserved } from './read-observed.ts';
 import { readStations } from './read-stations.ts';
 import { readStop } from './read-stop.ts';
@@ -78,6 +80,13 @@ export function parseCase(text: string, file = 'case.yaml', observe?: ReadObserv
   if (r.problems.length === 0) {
     checkDriveCurves(r, stations, speed!.value);
     checkProtectedSegments(r, shaft.segments, stations);
+    checkCouplingSegments(r, shaft.segments, stations);
+    const stopPosition = stations.find((s) => s.name === stopAt)!.at;
+    stations.forEach((s, i) => {
+      if (!s.fit) return;
+      const seat = seatSegment(shaft.segments, s.at, stopPosition);
+      checkFitSeat(r, ['stations', i, 'fit'], s.fit, seat.diameter, used[seat.material]);
+    });
   }
   if (r.problems.length > 0) throw new CaseError(file, r.problems);
 

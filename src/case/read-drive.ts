@@ -22,6 +22,8 @@ export function readDrive(r: CaseReader, path: Path, parts: Part[]): Drive | und
   const running = r.quantity([...path, 'running_torque'], 'torque', { positive: true, example: 'the motor\'s normal running torque, such as "240 N*m"' });
   const torque = readMotorTorque(r, path);
   const belt = r.has([...path, 'belt']) ? readBelt(r, [...path, 'belt']) : undefined;
+  const tripAfter = r.quantity([...path, 'trip_after'], 'time', { positive: true, example: 'the time from the stop after which the drive or overload relay cut the motor, from the drive\'s fault log, such as "250 ms"' });
+  const torqueLimit = r.quantity([...path, 'torque_limit'], 'torque', { positive: true, example: 'the most torque the drive lets the motor give (its current limit as a torque, at the motor shaft), such as "300 N*m"' });
 
   const geared = [...new Set(parts.filter((p) => p.speedRatio !== 1).map((p) => p.speedRatio))];
   let speedRatio = givenRatio ?? 1;
@@ -55,6 +57,8 @@ export function readDrive(r: CaseReader, path: Path, parts: Part[]): Drive | und
   if (running) drive.runningTorque = running.value;
   if (torque) drive.torque = torque;
   if (belt) drive.belt = belt;
+  if (tripAfter) drive.tripAfter = tripAfter.value;
+  if (torqueLimit) drive.torqueLimit = torqueLimit.value;
   return drive;
 }
 

@@ -29,12 +29,16 @@ export function readCaseMaterials(r: CaseReader): Record<string, Material> {
     if (!r.map(path, MATERIAL_KEYS, { required: true })) continue;
     const m: Material = { key, name: r.string([...path, 'name']) ?? key, source: r.string([...path, 'source']) ?? 'given in the case file' };
     for (const [field, prop] of Object.entries(MATERIAL_FIELDS) as [MaterialField, keyof Material][]) {
+      if (field === 'poisson_ratio') continue;
       const q = r.quantity([...path, field], materialFieldKind(field), { positive: true, limit: FIELD_LIMITS[field] });
       if (q) (m as unknown as Record<string, number>)[prop] = q.value;
     }
     if (m.yieldStrength !== undefined && m.tensileStrength !== undefined && m.tensileStrength < m.yieldStrength) {
       r.fail('E_MATERIAL', [...path, 'tensile_strength'], `is below the yield strength (${Number((m.yieldStrength / 1e6).toPrecision(4))} MPa); a tensile strength is at least the yield strength, such as "${Number(((m.yieldStrength * 1.2) / 1e6).toPrecision(3))} MPa"`);
     }
+    // A plain number: every isotropic solid has -1 < ν < 0.5; metals lie near 0.2–0.35.
+    const nu = r.number([...path, 'poisson_ratio'], { example: 'Poisson\'s ratio from the material\'s data sheet, from 0 to 0.5, such as 0.29', min: 0, max: 0.499 });
+    if (nu !== undefined) m.poissonRatio = nu;
     const basis = r.string([...path, 'strength_basis'], { allowed: ['minimum', 'typical'] });
     if (basis) m.strengthBasis = basis as Material['strengthBasis'];
     out[key] = m;
@@ -82,6 +86,7 @@ function exampleOf(field: MaterialField): string {
   const examples: Record<MaterialField, string> = {
     shear_modulus: 'shear_modulus: "79.3 GPa"',
     elastic_modulus: 'elastic_modulus: "207 GPa"',
+    poisson_ratio: 'poisson_ratio: 0.29',
     density: 'density: "7850 kg/m^3"',
     yield_strength: 'yield_strength: "530 MPa"',
     tensile_strength: 'tensile_strength: "630 MPa"',

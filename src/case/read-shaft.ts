@@ -1,11 +1,12 @@
 import type { Material } from '../materials/material.ts';
 import type { CaseReader } from './case-reader.ts';
 import type { Segment, Station } from './case.ts';
-import { keysOf, SEGMENT_SHAPE, SHAFT_SHAPE } from './case-shape.ts';
+import { keysOf, SEGMENT_SHAPE, SHAFT_SHAPE, shapeAt } from './case-shape.ts';
 import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
 const SEGMENT_KEYS = keysOf(SEGMENT_SHAPE);
+const COUPLING_KEYS = keysOf(shapeAt(['coupling'], SEGMENT_SHAPE)!);
 
 /** The shaft's segments in order from its start, with positions accumulated. */
 export function readShaft(
@@ -27,6 +28,11 @@ export function readShaft(
     const kt = r.number([...path, 'kt'], { example: 'a factor from 1 to 10, such as 1.6', min: NUMBER_LIMITS.kt[0], max: NUMBER_LIMITS.kt[1] }) ?? 1;
     const label = r.string([...path, 'label']);
     const protection = readProtection(r, path);
+    const coupling = readCoupling(r, [...path, 'coupling']);
+    const backlash = r.quantity([...path, 'backlash'], 'angle', { positive: true, example: 'the play at this shaft, measured by rocking it with the other side held (dial gauge on a radius: arc ÷ radius), such as "0.5 deg"' });
+    if (backlash && (protection.slipTorque !== undefined || protection.shearTorque !== undefined)) {
+      r.fail('E_MODEL', [...path, 'backlash'], 'a segment with a limiter or shear pin cannot also hold the backlash; split the segment and put the backlash on its own piece');
+    }
     const materialKey = r.string([...path, 'material']) ?? shaftMaterial;
     if (diameter && bore && bore.value >= diameter.value) {
       r.fail('E_RANGE', [...path, 'bore'], `the bore must be smaller than the diameter (${fmtMm(diameter.value)}); give a bore such as "${fmtMm(diameter.value * 0.5)}", or leave it out for a solid segment`);
@@ -52,6 +58,8 @@ export function readShaft(
       material: material.key,
       kt,
       ...protection,
+      ...(coupling ? { coupling } : {}),
+      ...(backlash ? { backlash: backlash.value } : {}),
     });
     position += length.value;
   }
@@ -70,6 +78,23 @@ function readProtection(r: CaseReader, path: (string | number)[]): Pick<Segment,
 }
 
 /**
+ * A segment's `coupling: { stiffness, rated_torque, peak_torque }` from the coupling's data sheet;
+ * no stiffness: a rigid coupling, checked for its rating only.
+ */
+function readCoupling(r: CaseReader, path: (string | number)[]): Segment['coupling'] {
+  if (!r.map(path, COUPLING_KEYS, { example: 'a mapping such as { stiffness: 120 kN*m/rad, rated_torque: 4 kN*m, peak_torque: 8 kN*m }' })) return undefined;
+  const stiffness = r.quantity([...path, 'stiffness'], 'stiffness', { positive: true, example: 'the coupling\'s dynamic torsional stiffness from its data sheet, such as "120 kN*m/rad" or "2100 N*m/deg"' });
+  const rated = r.quantity([...path, 'rated_torque'], 'torque', { required: true, positive: true, example: 'the coupling\'s rated (nominal) torque from its data sheet, such as "4 kN*m"' });
+  const peak = r.quantity([...path, 'peak_torque'], 'torque', { positive: true, example: 'the coupling\'s maximum (peak) torque from its data sheet, such as "8 kN*m"' });
+  if (rated && peak && peak.value < rated.value) {
+    r.fail('E_RANGE', [...path, 'peak_torque'], `is below the rated torque; a coupling's maximum torque is at least its rated one, often 2 to 3 times it, such as "${Number((rated.value * 2).toPrecision(3))} N*m"`);
+    return undefined;
+  }
+  if (!rated) return undefined;
+  return { ratedTorque: rated.value, ...(stiffness ? { stiffness: stiffness.value } : {}), ...(peak ? { peakTorque: peak.value } : {}) };
+}
+
+/**
  * A limiter or shear pin sits somewhere in its segment; a station with parts inside that segment
  * would leave unclear which side of the device the parts are on. Call with no problems left.
  */
@@ -80,6 +105,20 @@ export function checkProtectedSegments(r: CaseReader, segments: readonly Segment
     if (inside) {
       const key = seg.slipTorque !== undefined ? 'slip_torque' : 'shear_torque';
       r.fail('E_MODEL', ['shaft', 'segments', seg.index, key], `station "${inside.name}" with parts lies inside this segment, so it is unclear which side of the ${key === 'slip_torque' ? 'limiter' : 'shear pin'} its parts are on; split the segment at the station and put ${key} on the piece that holds the device`);
+    }
+  }
+}
+
+/**
+ * A coupling sits somewhere in its segment; a station inside that segment (the stop among them)
+ * would leave unclear on which side of the coupling it is. Call with no problems left.
+ */
+export function checkCouplingSegments(r: CaseReader, segments: readonly Segment[], stations: readonly Station[]): void {
+  for (const seg of segments) {
+    for (const key of ['coupling', 'backlash'] as const) {
+      if (seg[key] === undefined) continue;
+      const inside = stations.find((s) => s.at > seg.start + 1e-9 && s.at < seg.end - 1e-9);
+      if (inside) r.fail('E_MODEL', ['shaft', 'segments', seg.index, key], `station "${inside.name}" lies inside this segment, so it is unclear which side of the ${key === 'coupling' ? 'coupling' : 'gap'} it is on; split the segment at the station and put the ${key} on one of the pieces`);
     }
   }
 }

@@ -5,6 +5,7 @@ import type { Part, PartShape, Station } from './case.ts';
 import { readDrive } from './read-drive.ts';
 import { readKey } from './read-key.ts';
 import { keysOf, PART_SHAPE, STATION_SHAPE } from './case-shape.ts';
+import { readFit } from './read-fit.ts';
 import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
@@ -41,10 +42,12 @@ export function readStations(
     }
     const drive = r.has([...path, 'drive']) ? readDrive(r, [...path, 'drive'], parts) : undefined;
     const key = readKey(r, [...path, 'key'], caseMaterials, used);
+    const fit = readFit(r, [...path, 'fit'], caseMaterials, used);
     if (name !== undefined && at) {
       const station: Station = { name, at: Math.min(at.value, shaftLength), parts };
       if (drive) station.drive = drive;
       if (key) station.key = key;
+      if (fit) station.fit = fit;
       stations.push(station);
     }
   }

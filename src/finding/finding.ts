@@ -8,6 +8,7 @@ import type { SideName, ShaftPiece } from '../model/shaft-model.ts';
 import { isBrittle } from '../physics/fracture.ts';
 import { firstBrokenPiece, type DynamicPiece } from '../results/dynamic-result.ts';
 import type { Results } from '../results/results.ts';
+import type { DriveTrainElement } from '../results/drive-train.ts';
 import type { TwistFindingCode } from '../results/twist-findings.ts';
 import { findingChance, type FindingChance } from './finding-chance.ts';
 
@@ -65,6 +66,18 @@ export interface Finding {
   measured: MeasuredTwistFinding[];
   /** What to do next, one line. */
   disposition: string;
+  /**
+   * Every element of the drive train in the order it would have given way: highest torque over
+   * capacity first (`order` 1), so the first is the weakest, shaft or not.
+   */
+  driveTrain: OrderedElement[];
+  /** The weakest element of the drive train (`driveTrain[0]`). */
+  weakest: OrderedElement | undefined;
+}
+
+/** A drive-train element with its place in the order of giving way (1: first). */
+export interface OrderedElement extends DriveTrainElement {
+  order: number;
 }
 
 /** Decides the finding from the results. Pure. */
@@ -76,6 +89,7 @@ export function decideFinding(r: Results): Finding {
   const g = governingPiece(r, broke);
   const material = r.case.materials[g.piece.segment.material];
   const brittle = isBrittle(material);
+  const driveTrain = orderDriveTrain(r);
   return {
     verdict,
     basis,
@@ -100,7 +114,18 @@ export function decideFinding(r: Results): Finding {
       speedForMeasured: f.speedForMeasured,
     })),
     disposition: disposition(verdict, brittle),
+    driveTrain,
+    weakest: driveTrain[0],
   };
+}
+
+/**
+ * The drive train in the order of giving way: by torque over capacity, highest first; at equal
+ * ratios the lower capacity first (it goes at the lower torque). A device that slipped or parted
+ * stands at a ratio of at least 1, so it comes before anything that held.
+ */
+function orderDriveTrain(r: Results): OrderedElement[] {
+  return [...r.driveTrain].sort((a, b) => b.ratio - a.ratio || a.capacity - b.capacity).map((e, i) => ({ ...e, order: i + 1 }));
 }
 
 /** The verdict with the local and the through-section yield told apart. */

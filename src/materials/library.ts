@@ -8,8 +8,8 @@ const LB_PER_IN3 = 0.45359237 / 0.0254 ** 3;
 // Elastic constants of the steel, stainless, aluminium and gray-iron classes: Shigley's Mechanical
 // Engineering Design, 9th ed. (Budynas & Nisbett, 2011), Table A-5 (from memory, confident).
 // A-5's G is listed, not computed from E and ν; we keep the listed value.
-const CARBON_STEEL = { elasticModulus: 207 * GPa, shearModulus: 79.3 * GPa, density: 0.282 * LB_PER_IN3 };
-const A5 = 'elastic constants and density: Shigley 9th ed. Table A-5 (from memory, confident)';
+const CARBON_STEEL = { elasticModulus: 207 * GPa, shearModulus: 79.3 * GPa, poissonRatio: 0.292, density: 0.282 * LB_PER_IN3 };
+const A5 = 'elastic constants (E, G, Poisson\'s ratio) and density: Shigley 9th ed. Table A-5 (from memory, confident)';
 const A20 = 'strengths: Shigley 9th ed. Table A-20, estimated ASTM minimum (from memory, confident; reduction of area from memory, verify)';
 
 /**
@@ -122,69 +122,75 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     name: 'Type 304 stainless steel, annealed bar',
     elasticModulus: 193 * GPa,
     shearModulus: 77 * GPa,
+    poissonRatio: 0.29,
     density: 8000,
     yieldStrength: 205 * MPa,
     tensileStrength: 515 * MPa,
     elongation: 0.4,
     reductionOfArea: 0.5,
     strengthBasis: 'minimum',
-    source: 'strengths: ASTM A276 minima (from memory, confident); E, G, density: typical producer data for 304 (from memory, verify)',
+    source: 'strengths: ASTM A276 minima (from memory, confident); E, G, Poisson\'s ratio 0.29, density: typical producer data for 304 (from memory, verify; Shigley 9th ed. Table A-5 gives 0.305 for the stainless class)',
   },
   {
     key: 'ss-316-annealed',
     name: 'Type 316 stainless steel, annealed bar',
     elasticModulus: 193 * GPa,
     shearModulus: 77 * GPa,
+    poissonRatio: 0.29,
     density: 8000,
     yieldStrength: 205 * MPa,
     tensileStrength: 515 * MPa,
     elongation: 0.4,
     reductionOfArea: 0.5,
     strengthBasis: 'minimum',
-    source: 'strengths: ASTM A276 minima (from memory, confident); E, G, density: typical producer data (from memory, verify)',
+    source: 'strengths: ASTM A276 minima (from memory, confident); E, G, Poisson\'s ratio 0.29, density: typical producer data (from memory, verify; Shigley 9th ed. Table A-5 gives 0.305 for the stainless class)',
   },
   {
     key: 'ss-17-4ph-h1150',
     name: '17-4PH stainless steel (UNS S17400), condition H1150',
     elasticModulus: 197 * GPa,
     shearModulus: 77 * GPa,
+    poissonRatio: 0.27,
     density: 7810,
     yieldStrength: 725 * MPa,
     tensileStrength: 930 * MPa,
     elongation: 0.16,
     reductionOfArea: 0.5,
     strengthBasis: 'minimum',
-    source: 'ASTM A564 minima and producer data bulletin (from memory, verify)',
+    source: 'ASTM A564 minima and producer data bulletin, Poisson\'s ratio 0.27 from the same bulletin (from memory, verify)',
   },
   {
     key: 'al-6061-t6',
     name: 'Aluminium alloy 6061-T6',
     elasticModulus: 68.9 * GPa,
     shearModulus: 26.0 * GPa,
+    poissonRatio: 0.33,
     density: 2700,
     yieldStrength: 276 * MPa,
     tensileStrength: 310 * MPa,
     elongation: 0.17,
     strengthBasis: 'typical',
-    source: 'Aluminum Association typical values (from memory, confident)',
+    source: 'Aluminum Association typical values, Poisson\'s ratio 0.33 (from memory, confident)',
   },
   {
     key: 'al-7075-t6',
     name: 'Aluminium alloy 7075-T6',
     elasticModulus: 71.7 * GPa,
     shearModulus: 26.9 * GPa,
+    poissonRatio: 0.33,
     density: 2810,
     yieldStrength: 503 * MPa,
     tensileStrength: 572 * MPa,
     elongation: 0.11,
     strengthBasis: 'typical',
-    source: 'Aluminum Association typical values (from memory, confident)',
+    source: 'Aluminum Association typical values, Poisson\'s ratio 0.33 (from memory, confident)',
   },
   {
     key: 'gray-iron-30',
     name: 'Gray cast iron, ASTM A48 class 30',
     elasticModulus: 100 * GPa,
     shearModulus: 41.4 * GPa,
+    poissonRatio: 0.211,
     density: 0.26 * LB_PER_IN3,
     // Gray iron has no yield point; its tensile strength stands in so a shaft check still has a
     // limit, and the plastic analysis treats it as brittle (elongation below 5 %).
@@ -192,19 +198,20 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     tensileStrength: 207 * MPa,
     elongation: 0.005,
     strengthBasis: 'minimum',
-    source: 'tensile strength: ASTM A48 class 30 minimum (from memory, confident); elastic constants Shigley 9th ed. Table A-5 (from memory, confident); no yield point, tensile strength used as the limit',
+    source: 'tensile strength: ASTM A48 class 30 minimum (from memory, confident); elastic constants and Poisson\'s ratio Shigley 9th ed. Table A-5 (from memory, confident); no yield point, tensile strength used as the limit',
   },
   {
     key: 'ductile-iron-65-45-12',
     name: 'Ductile iron, ASTM A536 grade 65-45-12',
     elasticModulus: 169 * GPa,
     shearModulus: 64 * GPa,
+    poissonRatio: 0.275,
     density: 7100,
     yieldStrength: 310 * MPa,
     tensileStrength: 448 * MPa,
     elongation: 0.12,
     strengthBasis: 'minimum',
-    source: 'strengths: ASTM A536 (the grade names the minimum tensile, yield and elongation; from memory, confident); E, G, density from memory, verify',
+    source: 'strengths: ASTM A536 (the grade names the minimum tensile, yield and elongation; from memory, confident); E, G, Poisson\'s ratio 0.275, density: typical producer data (from memory, verify)',
   },
 ];
 

@@ -14,6 +14,8 @@ export interface Material {
   yieldStrength?: number;
   /** Ultimate tensile strength S_ut, Pa. */
   tensileStrength?: number;
+  /** Poisson's ratio ν (a shrink or press fit's contact pressure needs it). */
+  poissonRatio?: number;
   /** Elongation at break, fraction (0.12 = 12 %). */
   elongation?: number;
   /** Reduction of area at break, fraction. */
@@ -30,6 +32,7 @@ export interface Material {
 export const MATERIAL_FIELDS = {
   shear_modulus: 'shearModulus',
   elastic_modulus: 'elasticModulus',
+  poisson_ratio: 'poissonRatio',
   density: 'density',
   yield_strength: 'yieldStrength',
   tensile_strength: 'tensileStrength',

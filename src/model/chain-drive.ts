@@ -1,6 +1,6 @@
 import type { Drive, Station } from '../case/case.ts';
 import { reflectedInertia } from '../physics/inertia.ts';
-import { motorLine, reflectLine, torqueAt, type TorqueSpeedLine } from '../physics/motor-torque.ts';
+import { capLine, motorLine, reflectLine, torqueAt, type TorqueSpeedLine } from '../physics/motor-torque.ts';
 import { beltSlip, type BeltSlip } from '../physics/slip.ts';
 
 /** A drive as the chain carries it: everything at the machine shaft. */
@@ -67,6 +67,13 @@ export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainD
       if (spec.kind === 'constant' && spec.torque > 0) assumptions.push(`The shaft at "${s.name}" is taken to be untwisted before the stop (no running torque given).`);
     }
   }
+  let line = motorLine(spec);
+  if (d.torqueLimit !== undefined) {
+    line = capLine(line, d.torqueLimit);
+    assumptions.push(`The drive at "${s.name}" holds the motor's torque to at most ${Number(d.torqueLimit.toPrecision(4))} N·m at the motor shaft (its torque limit).`);
+    if (running > d.torqueLimit * (1 + 1e-9)) warnings.push(`The running torque at "${s.name}" is above the drive's torque limit; the shaft is taken to run at the running torque given, and the limit applies from the stop.`);
+  }
+  if (d.tripAfter !== undefined) assumptions.push(`The drive at "${s.name}" trips ${Number((d.tripAfter * 1000).toPrecision(4))} ms after the stop begins; from then on the motor gives no torque.`);
   const rotorInertia = d.rotorParts.reduce((sum, i) => sum + reflectedInertia(s.parts[i].inertia, s.parts[i].speedRatio) * s.parts[i].count, 0);
   return {
     station: s.name,
@@ -74,7 +81,7 @@ export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainD
     drive: d,
     rotorInertia,
     ...(d.belt ? { belt: beltSlip(d.belt) } : {}),
-    line: reflectLine(motorLine(spec), r),
+    line: reflectLine(line, r),
     runningTorque: running * r,
     assumptions,
     warnings,

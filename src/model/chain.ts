@@ -2,6 +2,7 @@ import type { Case, Segment, Station } from '../case/case.ts';
 import { reflectedInertia } from '../physics/inertia.ts';
 import { compliance, shaftInertia } from '../physics/torsion.ts';
 import { chainDrive, type ChainDrive } from './chain-drive.ts';
+import { fitCapacity } from './fit-capacity.ts';
 import { cutAtStations, type ShaftModel, type ShaftPiece, type SideName } from './shaft-model.ts';
 
 /** A node of the lumped torsional chain. */
@@ -27,8 +28,15 @@ export interface ChainElement {
   /** Indices into `Chain.pieces` it lies in. */
   pieces: number[];
   side: SideName;
-  /** A torque limiter or shear pin in this element, from its segment. */
-  device?: { kind: 'torque limiter' | 'shear pin'; torque: number; segment: Segment };
+  /** The segment whose flexible coupling is in series in this element (its stiffness is in `stiffness`). */
+  coupling?: Segment;
+  /** A gap in this element from its segment's `backlash`, rad. */
+  backlash?: { gap: number; segment: Segment };
+  /**
+   * A torque limiter or shear pin in this element, from its segment; or the shrink fit of the
+   * station at the element's far end (`station`), which slips like a limiter.
+   */
+  device?: { kind: 'torque limiter' | 'shear pin' | 'hub fit'; torque: number; segment: Segment; station?: string };
 }
 
 /** A piece of shaft (a segment cut at stations) inside the chain, with its side. */
@@ -93,7 +101,10 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
         const a = p.piece.start + (len * j) / n;
         const b = j === n - 1 ? p.piece.end : p.piece.start + (len * (j + 1)) / n;
         const seg = p.piece.segment;
-        elements.push({ start: a, end: b, stiffness: 1 / compliance(b - a, G(p.piece), seg.diameter, seg.bore), inertia: shaftInertia(rho(seg), b - a, seg.diameter, seg.bore), pieces: [i], side: p.side });
+        // A coupling's spring goes in series on the middle element of its piece.
+        const kc = j === Math.floor((n - 1) / 2) ? seg.coupling?.stiffness : undefined;
+        const C = compliance(b - a, G(p.piece), seg.diameter, seg.bore) + (kc ? 1 / kc : 0);
+        elements.push({ start: a, end: b, stiffness: 1 / C, inertia: shaftInertia(rho(seg), b - a, seg.diameter, seg.bore), pieces: [i], side: p.side, ...(kc ? { coupling: seg } : {}) });
         positions.push(b);
       }
     });
@@ -102,8 +113,9 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
     positions.push(...at);
     for (let k = 0; k + 1 < at.length; k++) {
       const inRun = pieces.flatMap((p, i) => (p.piece.start >= at[k] - EPS && p.piece.end <= at[k + 1] + EPS ? [i] : []));
-      const C = inRun.reduce((s, i) => s + compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore), 0);
-      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])) });
+      const C = inRun.reduce((s, i) => s + compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore) + (pieces[i].piece.segment.coupling?.stiffness ? 1 / pieces[i].piece.segment.coupling!.stiffness! : 0), 0);
+      const coupled = inRun.map((i) => pieces[i].piece.segment).find((g) => g.coupling?.stiffness);
+      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])), ...(coupled ? { coupling: coupled } : {}) });
     }
   }
   placeDevices(elements, pieces);
@@ -132,7 +144,53 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
       if (right > EPS) nodes[nodes.length - 1].inertia += shaftInertia(rho(seg), right, seg.diameter, seg.bore);
     }
   }
+  placeFits(c, nodes, elements, stopNode);
+  placeBacklash(elements, pieces);
   return { nodes, elements, pieces, stopNode, drives, shaftInertia: opts.shaftInertia };
+}
+
+/** A segment's backlash goes on the middle one of its elements on each side (as a limiter does). */
+function placeBacklash(elements: ChainElement[], pieces: ChainPiece[]): void {
+  const groups = new Map<string, number[]>();
+  elements.forEach((el, e) => {
+    for (const i of el.pieces) {
+      const seg = pieces[i].piece.segment;
+      if (seg.backlash === undefined) continue;
+      const key = `${seg.index}:${el.side}`;
+      const list = groups.get(key) ?? [];
+      if (!list.includes(e)) list.push(e);
+      groups.set(key, list);
+    }
+  });
+  for (const list of groups.values()) {
+    const el = elements[list[Math.floor((list.length - 1) / 2)]];
+    const seg = el.pieces.map((i) => pieces[i].piece.segment).find((s) => s.backlash !== undefined)!;
+    el.backlash = { gap: seg.backlash!, segment: seg };
+  }
+}
+
+/**
+ * A shrink or press fit at the chain's end on either side (the farthest loaded station) slips like
+ * a limiter on the element next to that end node: all the torque that element carries passes
+ * through the hub (less the shaft's own inertia lumped on the end node, a small share). A fit at a
+ * station inside the chain carries only its own parts' torque, which no one element holds, so the
+ * dynamic model leaves it rigid and the fit is checked against the torque through it afterwards
+ * (src/results/hub-fits.ts). A fit at the stop is the jam's own slip (see `stopOf` in
+ * src/results/dynamic-solve.ts).
+ */
+function placeFits(c: Case, nodes: ChainNode[], elements: ChainElement[], stopNode: number): void {
+  const ends = [0, nodes.length - 1].filter((i) => i !== stopNode);
+  for (const i of ends) {
+    const e = i === 0 ? 0 : elements.length - 1;
+    if (e < 0 || e >= elements.length) continue;
+    for (const name of nodes[i].stations) {
+      const s = c.stations.find((x) => x.name === name)!;
+      if (!s.fit) continue;
+      const cap = fitCapacity(c, s);
+      const el = elements[e];
+      if (!el.device || cap.slipTorque < el.device.torque) el.device = { kind: 'hub fit', torque: cap.slipTorque, segment: cap.seat, station: s.name };
+    }
+  }
 }
 
 /** Parts at a station at shaft speed, less a belt drive's rotor (which sits behind its belt). */

@@ -75,7 +75,11 @@ export function energyMethodSide(
   const pieceCompliance = side.pieces.map((p) =>
     compliance(p.end - p.start, materials[p.segment.material].shearModulus!, p.segment.diameter, p.segment.bore),
   );
-  const totalCompliance = pieceCompliance.reduce((a, b) => a + b, 0);
+  // A coupling is a spring in series with the shaft: its compliance 1/k_c adds to the side's
+  // (springs in series, shared reference 1.1.5 and 10.12; from memory, confident). A coupling's
+  // segment holds no station, so it is one piece.
+  const couplings = side.pieces.reduce((sum, p) => sum + (p.segment.coupling?.stiffness ? 1 / p.segment.coupling.stiffness : 0), 0);
+  const totalCompliance = pieceCompliance.reduce((a, b) => a + b, 0) + couplings;
   const peakTorque = torqueForEnergy(energy, totalCompliance);
 
   const pieces = side.pieces.map((piece, i): PieceResult => {

@@ -102,4 +102,14 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     formula: 'inch = 0.0254 m, pound = 0.45359237 kg, g = 9.80665 m/s²',
     source: 'NIST Special Publication 811 (2008), Appendix B.8',
   },
+  {
+    what: 'Contact pressure of a shrink or press fit (thick-walled cylinders)',
+    formula: 'p = (δ_d/2) / [ (R/E_o)·((r_o² + R²)/(r_o² − R²) + ν_o) + (R/E_i)·((R² + r_i²)/(R² − r_i²) − ν_i) ]',
+    source: "Shigley's Mechanical Engineering Design, 9th ed., Sec. 3-16, Eq. (3-56) (from memory; equation number: verify)",
+  },
+  {
+    what: 'Torque a shrink or press fit holds before it slips',
+    formula: 'T = π·μ·p·d²·L/2',
+    source: 'Shigley 9th ed., Sec. 7-8 (from memory, confident; section number: verify)',
+  },
 ];

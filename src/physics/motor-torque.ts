@@ -62,3 +62,28 @@ export function outsidePiece(line: TorqueSpeedLine, j: number, speed: number): n
   const hi = j >= line.speeds.length ? Infinity : line.speeds[j];
   return Math.max(lo - speed, speed - hi);
 }
+
+/**
+ * The line held to at most `limit` (a drive's current limit, as a torque): where a piece crosses
+ * the limit a point is put at the crossing, so the capped line is still piecewise linear and its
+ * breakpoints are the integrator's events. Torques below the limit are kept as they are.
+ */
+export function capLine(line: TorqueSpeedLine, limit: number): TorqueSpeedLine {
+  const speeds: number[] = [];
+  const torques: number[] = [];
+  const n = line.speeds.length;
+  for (let i = 0; i < n; i++) {
+    if (i > 0) {
+      const t0 = line.torques[i - 1];
+      const t1 = line.torques[i];
+      if ((t0 - limit) * (t1 - limit) < 0) {
+        const w = line.speeds[i - 1] + ((limit - t0) / (t1 - t0)) * (line.speeds[i] - line.speeds[i - 1]);
+        speeds.push(w);
+        torques.push(limit);
+      }
+    }
+    speeds.push(line.speeds[i]);
+    torques.push(Math.min(line.torques[i], limit));
+  }
+  return { speeds, torques };
+}

@@ -14,6 +14,11 @@ import { observationsSection } from './sections/observations.ts';
 import { findingsSection } from './sections/findings.ts';
 import { howSureSection } from './sections/how-sure.ts';
 import { dynamicsSection } from './sections/dynamics.ts';
+import { keysAndFitsSection } from './sections/keys-and-fits.ts';
+import { driveProtectionSection } from './sections/drive-protection.ts';
+import { couplingsSection } from './sections/couplings.ts';
+import { driveTrainSection } from './sections/drive-train.ts';
+import { backlashSection } from './sections/backlash.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
@@ -51,6 +56,11 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   methodSection,
   resultsSection,
   dynamicsSection,
+  keysAndFitsSection,
+  driveProtectionSection,
+  couplingsSection,
+  backlashSection,
+  driveTrainSection,
   materialSection,
   observationsSection,
   findingsSection,

@@ -11,6 +11,10 @@ import { balancePieceOf, type PlasticResult } from './plastic-result.ts';
 import type { ElasticVerdict, Results, Verdict } from './results.ts';
 import { balanceTwistRelation, readTwistBack } from './twist-findings.ts';
 import { verdictBasis } from './verdict-basis.ts';
+import { hubFits } from './hub-fits.ts';
+import { keyChecks } from './key-checks.ts';
+import { couplingChecks } from './coupling-checks.ts';
+import { driveTrainElements } from './drive-train.ts';
 
 /** Share of a side's energy above which the shaft's own kinetic energy is worth a warning. */
 const SHAFT_ENERGY_WARNING = 0.05;
@@ -116,6 +120,17 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     fracture: readFracture(c, pastYieldInTime ? dynamicFracturePrediction(dynamic, plastic, verdict) : balanceFracturePrediction(plastic)),
   };
 
+  const fits = hubFits(c, basis.basis, sides, dynamic);
+  const keys = keyChecks(c, basis.basis, sides, dynamic);
+  const couplings = couplingChecks(c, basis.basis, sides, dynamic);
+  for (const f of fits) {
+    if (!f.inDynamicModel) warnings.push(`The shrink fit at "${f.station}" sits between other loaded stations, so the dynamic model holds it rigid; it is checked afterwards against the peak torque of the shaft next to it${f.upperBound ? ', an upper bound of what its hub carried' : ''}.`);
+  }
+
+  if (c.shaft.segments.some((s) => s.coupling?.stiffness) && plastic.verdict !== 'elastic') {
+    warnings.push('The energy balance past yield puts all of a side\'s energy into its shaft and leaves the coupling\'s compliance out, so with a flexible coupling its figures are an upper bound; the element that holds the coupling stays elastic in the dynamic model.');
+  }
+
   // How the other model compares is the views' comparison (like for like), not part of the reason.
   const reason = basis.reason;
 
@@ -137,6 +152,10 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     verdictBasis: basis.basis,
     verdictReason: reason,
     dynamic,
+    keys,
+    fits,
+    couplings,
+    driveTrain: driveTrainElements(basis.basis, sides, dynamic, keys, fits, couplings),
     warnings,
     cautions: CAUTIONS,
   };

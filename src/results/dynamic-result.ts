@@ -1,4 +1,4 @@
-import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Case } from '../case/case.ts';
+import { DEFAULT_DAMPING_RATIO, DEFAULT_DYNAMIC_PLASTICITY, type Case, type Segment } from '../case/case.ts';
 import type { Chain } from '../model/chain.ts';
 import type { ShaftModel, ShaftPiece, SideName } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
@@ -6,6 +6,7 @@ import { verdictShearStrength } from '../physics/shear-strength.ts';
 import type { BeltSlip } from '../physics/slip.ts';
 import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic/plastic-element-law.ts';
+import { BacklashLaw } from '../physics/backlash-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
 import { modeFrequencies, type ModeFrequency } from './mode-convergence.ts';
@@ -103,6 +104,10 @@ export interface DynamicResult {
   /** Located events in time order, as sentences (the first `MAX_EVENTS_KEPT`; `eventCount` says how many there were). */
   events: { time: number; text: string }[];
   eventCount: number;
+  /** Each gap (a segment's backlash): the segment, the gap, rad, and how often it closed. */
+  gaps: { segment: Segment; gap: number; contacts: number }[];
+  /** Each drive's protection: its torque limit at the motor shaft, N·m, and when it tripped, s from the stop (undefined: it did not trip in the window). */
+  protection: { station: string; torqueLimit?: number; tripAfter?: number; trippedAt?: number }[];
   /**
    * Whether the shaft elements carried their law past yield (analysis.dynamic_plasticity): the
    * elastic–plastic law of ductile material, or the brittle element's break at its fracture torque.
@@ -201,6 +206,15 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     belts: chain.drives.flatMap((d) => (d.belt ? [{ station: d.station, slip: d.belt }] : [])),
     events,
     eventCount: shown.length,
+    gaps: chain.elements.flatMap((el, e) => {
+      const law = run.laws[e];
+      return el.backlash && law instanceof BacklashLaw ? [{ segment: el.backlash.segment, gap: el.backlash.gap, contacts: law.contacts }] : [];
+    }),
+    protection: chain.drives.flatMap((d, i) =>
+      d.drive.tripAfter === undefined && d.drive.torqueLimit === undefined
+        ? []
+        : [{ station: d.station, ...optional('torqueLimit', d.drive.torqueLimit), ...optional('tripAfter', d.drive.tripAfter), ...optional('trippedAt', run.events.find((e) => e.source.kind === 'motor' && e.source.index === i && e.what.startsWith('trips'))?.time) }],
+    ),
     plasticity: plasticLaws.length > 0 || run.laws.some((l) => l instanceof ShearPinLaw && l.kind === 'shaft'),
     yielded: plasticLaws.some((l) => l.yielded),
     fractured: damage.some((d) => d.broken),

@@ -3,12 +3,13 @@ import type { Chain } from '../model/chain.ts';
 import type { IntegrationResult } from '../physics/integrator/integrate-chain.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { SlipLaw } from '../physics/slip-law.ts';
+import { jamWithFit } from './fit-at-stop.ts';
 
 /** What a slip element (torque limiter, belt, soft jam) did over the incident. */
 export interface SlipOutcome {
   /** The element in words: 'the torque limiter in "coupling"', 'the belt at "drive sheave"'. */
   element: string;
-  kind: 'torque limiter' | 'belt' | 'jam';
+  kind: 'torque limiter' | 'hub fit' | 'belt' | 'jam';
   /** Chain element index, for a limiter. */
   elementIndex?: number;
   /** Slip torque at the shaft, N·m. */
@@ -33,7 +34,9 @@ export interface PinOutcome {
 }
 
 /** The limiters, belts, soft jam and shear pins of a solved chain, with what each did. */
-export function slipOutcomes(c: Case, chain: Chain, run: IntegrationResult): { slips: SlipOutcome[]; pins: PinOutcome[] } {
+export function slipOutcomes(asGiven: Case, chain: Chain, run: IntegrationResult): { slips: SlipOutcome[]; pins: PinOutcome[] } {
+  const c = jamWithFit(asGiven);
+  const fitAtStop = c !== asGiven && c.stop.torqueCapacity !== asGiven.stop.torqueCapacity;
   const first = (pred: (e: IntegrationResult['events'][number]) => boolean) => run.events.find(pred)?.time;
   const slips: SlipOutcome[] = [];
   const pins: PinOutcome[] = [];
@@ -43,9 +46,10 @@ export function slipOutcomes(c: Case, chain: Chain, run: IntegrationResult): { s
     const where = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
     const law = run.laws[e];
     if (law instanceof SlipLaw) {
+      const fit = el.device.kind === 'hub fit';
       slips.push({
-        element: `the torque limiter in ${where}`,
-        kind: 'torque limiter',
+        element: fit ? `the shrink fit at "${el.device.station}"` : `the torque limiter in ${where}`,
+        kind: fit ? 'hub fit' : 'torque limiter',
         elementIndex: e,
         slipTorque: law.slipTorque,
         energy: law.dissipated,
@@ -72,7 +76,7 @@ export function slipOutcomes(c: Case, chain: Chain, run: IntegrationResult): { s
   });
   if (run.jam && c.stop.torqueCapacity !== undefined) {
     slips.push({
-      element: `the jam at "${c.stop.at}"`,
+      element: fitAtStop ? `the shrink fit at "${c.stop.at}" (the shaft turning in the held hub)` : `the jam at "${c.stop.at}"`,
       kind: 'jam',
       slipTorque: c.stop.torqueCapacity,
       energy: run.jam.slipWork,

@@ -3,6 +3,7 @@ import { buildChain, type Chain } from '../model/chain.ts';
 import { sideModes, type SideMode } from '../model/chain-modes.ts';
 import type { ShaftModel, SideName } from '../model/shaft-model.ts';
 import { integrateChain, type IntegrationResult } from '../physics/integrator/integrate-chain.ts';
+import { jamWithFit } from './fit-at-stop.ts';
 import { shaftElementLaw } from './shaft-element-law.ts';
 import { systemOf } from './system-of-chain.ts';
 
@@ -51,7 +52,8 @@ const MAX_DEFAULT_DURATION = 2;
  * peak torque of every piece changes by less than 0.5 % (bounded by a work budget), or at the
  * case's fixed `analysis.elements`; without shaft inertia, the one chain of stations.
  */
-export function solveDynamics(c: Case, model: ShaftModel): DynamicSolve {
+export function solveDynamics(asGiven: Case, model: ShaftModel): DynamicSolve {
+  const c = jamWithFit(asGiven);
   const notes: string[] = [];
   let shaftInertiaOn = c.analysis.shaftInertia;
   if (shaftInertiaOn && c.shaft.segments.some((s) => c.materials[s.material].density === undefined)) {
@@ -171,12 +173,14 @@ function defaultDuration(c: Case, chain: Chain, omega1: number): number {
   const inertiaOf = (keep: (i: number) => boolean) => chain.nodes.reduce((s, n, i) => s + (keep(i) ? n.inertia + rotorAt(i) : 0), 0);
   const times: number[] = [];
   chain.elements.forEach((el, e) => {
-    if (el.device?.kind !== 'torque limiter') return;
+    if (el.device?.kind !== 'torque limiter' && el.device?.kind !== 'hub fit') return;
     const beyond = inertiaOf((i) => (e < P ? i <= e : i > e));
     times.push((beyond * c.speed) / el.device.torque);
   });
   for (const d of chain.drives) if (d.belt) times.push((d.rotorInertia * c.speed) / d.belt.slipTorque);
   if (c.stop.torqueCapacity !== undefined) times.push((inertiaOf(() => true) * c.speed) / c.stop.torqueCapacity);
-  const slipTime = Math.max(0, ...times);
-  return Math.min(MAX_DEFAULT_DURATION, Math.max(c.stop.duration + 8 * T1, slipTime + 4 * T1));
+  // A drive that trips drives the slip until then; afterwards the friction brings the rest to rest.
+  const trip = Math.max(0, ...c.stations.map((s) => s.drive?.tripAfter ?? 0));
+  const slipTime = Math.max(0, ...times) + (times.length > 0 ? trip : 0);
+  return Math.min(MAX_DEFAULT_DURATION, Math.max(c.stop.duration + 8 * T1, trip + 8 * T1, slipTime + 4 * T1));
 }

@@ -7,6 +7,10 @@ import type { PlasticResult } from './plastic-result.ts';
 import type { TwistFinding } from './twist-findings.ts';
 import type { DynamicResult } from './dynamic-result.ts';
 import type { VerdictBasis } from './verdict-basis.ts';
+import type { FitCheck } from './hub-fits.ts';
+import type { KeyCheck } from './key-checks.ts';
+import type { CouplingCheck } from './coupling-checks.ts';
+import type { DriveTrainElement } from './drive-train.ts';
 
 /**
  * The case's verdict. `elastic`: no yield anywhere; `yielded`: the net section yields and takes a
@@ -70,6 +74,14 @@ export interface Results {
   verdictReason: string;
   /** The lumped torsional chain solved in time, beside the energy method. */
   dynamic: DynamicResult;
+  /** Each station's key at the incident torque (empty without keys). */
+  keys: KeyCheck[];
+  /** Each station's shrink or press fit at the incident torque (empty without fits). */
+  fits: FitCheck[];
+  /** Each segment's coupling against the incident torque (empty without couplings). */
+  couplings: CouplingCheck[];
+  /** Every element of the drive train with its capacity and the torque it carried (unordered: the finding orders them). */
+  driveTrain: DriveTrainElement[];
   /** Warnings about the model's fit to the case, in plain words; the case file's plausibility warnings first, where the CLI carries them in. */
   warnings: string[];
   /** The case file's plausibility warnings (`checkPlausibility`), where the CLI carried them in (`withInputWarnings`). */

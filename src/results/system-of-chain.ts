@@ -1,6 +1,7 @@
 import type { Chain, ChainElement } from '../model/chain.ts';
 import type { SideName } from '../model/shaft-model.ts';
 import type { ChainSystem } from '../physics/integrator/chain-system.ts';
+import { BacklashLaw } from '../physics/backlash-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { SlipLaw } from '../physics/slip-law.ts';
 import { ElasticLaw, type TorqueLaw } from '../physics/torque-law.ts';
@@ -30,13 +31,28 @@ export function systemOf(
     else for (let e = P; e < d.node; e++) torque[e] += d.runningTorque;
   }
   const initialTwist = Float64Array.from(chain.elements, (el, e) => torque[e] / el.stiffness);
+  // A gap: held closed by a running torque through it; with none, taken fully open against the
+  // impact's sense (the worst case: the load side crosses all of it before the stop bites). The
+  // inertia beyond the stop runs ahead on side B (twist rising) and behind on side A.
+  const gaps = chain.elements.map((el, e) => {
+    if (!el.backlash) return undefined;
+    const g = el.backlash.gap;
+    const sense = torque[e] !== 0 ? Math.sign(torque[e]) : el.side === 'B' ? 1 : -1;
+    const [lo, hi] = sense > 0 ? [-g, 0] : [0, g];
+    if (torque[e] === 0) initialTwist[e] = sense > 0 ? lo : hi;
+    return { lo, hi };
+  });
   const damping = Float64Array.from(chain.elements, (el) => {
     const w = lowest[el.side];
     return w ? ((2 * dampingRatio) / w) * el.stiffness : 0;
   });
   const laws: TorqueLaw[] = chain.elements.map((el, e) => {
-    if (el.device?.kind === 'torque limiter') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e], damping[e]);
+    if (el.device?.kind === 'torque limiter' || el.device?.kind === 'hub fit') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e], damping[e]);
     if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);
+    const gap = gaps[e];
+    if (gap) return new BacklashLaw(el.stiffness, gap.lo, gap.hi, initialTwist[e]);
+    // An element with a coupling in series stays elastic: the plastic law's backbone is the shaft's alone.
+    if (el.coupling) return new ElasticLaw(el.stiffness);
     return shaftLaw?.(el, initialTwist[e]) ?? new ElasticLaw(el.stiffness);
   });
   return {
@@ -47,6 +63,6 @@ export function systemOf(
     initialTwist,
     speed,
     stop: { node: P, duration: stop.duration, ...(stop.torqueCapacity !== undefined ? { torqueCapacity: stop.torqueCapacity } : {}) },
-    drives: chain.drives.map((d) => ({ node: d.node, line: d.line, rotorInertia: d.rotorInertia, ...(d.belt ? { beltSlipTorque: d.belt.slipTorque } : {}) })),
+    drives: chain.drives.map((d) => ({ node: d.node, line: d.line, rotorInertia: d.rotorInertia, ...(d.belt ? { beltSlipTorque: d.belt.slipTorque } : {}), ...(d.drive.tripAfter !== undefined ? { tripAfter: d.drive.tripAfter } : {}) })),
   };
 }

@@ -23,6 +23,9 @@ export function verdictBasis(c: Case, sides: readonly SideResult[]): { basis: Ve
     pins > 0 ? (pins === 1 ? 'a shear pin' : `${pins} shear pins`) : '',
     belts > 0 ? (belts === 1 ? 'a belt that can slip' : `${belts} belts that can slip`) : '',
     c.stop.torqueCapacity !== undefined ? 'a jam that can slip' : '',
+    c.stations.some((s) => s.fit) ? 'a shrink or press fit that can slip' : '',
+    c.shaft.segments.some((s) => s.coupling?.stiffness) ? 'a flexible coupling' : '',
+    c.shaft.segments.some((s) => s.backlash !== undefined) ? 'backlash' : '',
   ].filter(Boolean);
   if (slip.length > 0) why.push(`the case has ${joinAnd(slip)}`);
   if (why.length === 0) {

@@ -21,6 +21,7 @@ export type QuantityKind =
   | 'power'
   | 'energy'
   | 'force'
+  | 'stiffness'
   | 'fraction';
 
 const INCH = 0.0254;
@@ -82,6 +83,18 @@ export const UNIT_FACTORS: Record<QuantityKind, Record<string, number>> = {
   power: { W: 1, kW: 1e3, MW: 1e6, hp: 550 * POUND_FORCE * FOOT },
   energy: { J: 1, kJ: 1e3, 'ft*lbf': POUND_FORCE * FOOT, 'in*lbf': POUND_FORCE * INCH },
   force: { N: 1, kN: 1e3, lbf: POUND_FORCE },
+  // Torsional stiffness, torque per angle: a coupling maker's data sheet gives it per radian or per degree.
+  stiffness: {
+    'N*m/rad': 1,
+    'kN*m/rad': 1e3,
+    'MN*m/rad': 1e6,
+    'N*m/deg': 180 / Math.PI,
+    'kN*m/deg': (180 / Math.PI) * 1e3,
+    'lbf*ft/rad': POUND_FORCE * FOOT,
+    'lbf*in/rad': POUND_FORCE * INCH,
+    'lbf*ft/deg': (POUND_FORCE * FOOT * 180) / Math.PI,
+    'lbf*in/deg': (POUND_FORCE * INCH * 180) / Math.PI,
+  },
   fraction: { '%': 0.01 },
 };
 
@@ -99,6 +112,7 @@ export const KIND_EXAMPLES: Record<QuantityKind, string> = {
   power: 'a power such as "22 kW" or "30 hp"',
   energy: 'an energy such as "500 J" or "370 ft*lbf"',
   force: 'a force such as "1200 N" or "270 lbf"',
+  stiffness: 'a torsional stiffness such as "120 kN*m/rad" or "2100 N*m/deg"',
   fraction: 'a percentage such as "12 %"',
 };
 

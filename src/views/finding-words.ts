@@ -1,3 +1,4 @@
+import { weakestSentence } from './drive-train-table.ts';
 import type { Finding, FindingVerdict } from '../finding/finding.ts';
 import type { Results } from '../results/results.ts';
 import { show, sig } from './display-units.ts';
@@ -76,6 +77,8 @@ export function findingLines(f: Finding, u: Units): string[] {
   const out = [`Finding: ${findingSentence(f, u)}`, `  Why this model: ${f.basisReason}`];
   const chance = chanceSentence(f);
   if (chance) out.push(`  ${chance}`);
+  const weakest = weakestSentence(f, u);
+  if (weakest) out.push(`  ${weakest}`);
   out.push(`  What to do: ${f.disposition}`);
   return out;
 }

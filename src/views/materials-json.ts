@@ -13,6 +13,7 @@ export function materialsToJson(list: readonly Material[]): Record<string, unkno
       name: m.name,
       shear_modulus_Pa: m.shearModulus ?? null,
       elastic_modulus_Pa: m.elasticModulus ?? null,
+      poisson_ratio: m.poissonRatio ?? null,
       density_kg_m3: m.density ?? null,
       yield_strength_Pa: m.yieldStrength ?? null,
       tensile_strength_Pa: m.tensileStrength ?? null,

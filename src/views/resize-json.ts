@@ -1,3 +1,4 @@
+import type { YieldCriterion } from '../case/case.ts';
 import type { KeyFuse, KeyStress } from '../resize/key-fuse.ts';
 import type { ResizeResult } from '../resize/resize-result.ts';
 import type { RunningCheck } from '../resize/running-check.ts';
@@ -74,8 +75,8 @@ export function resizeJson(z: ResizeResult): Record<string, unknown> {
       slip_segment: l.slip.segment ?? null,
       reason: limiterSentences(z).join(' '),
     },
-    key: z.keys.length > 0 ? keyJson(z.keys[0]) : null,
-    keys: z.keys.map(keyJson),
+    key: z.keys.length > 0 ? keyJson(z.keys[0], z.results.case.analysis.criterion) : null,
+    keys: z.keys.map((k) => keyJson(k, z.results.case.analysis.criterion)),
     rated_speed: z.ratedSpeed.map((w) => ({ station: w.station, part: w.part, speed_rad_s: w.speed, rated_speed_rad_s: w.ratedSpeed, over: w.over })),
     guarding: z.guarding.map((g) => `${g.topic}: ${g.text}`),
     notes: z.notes,
@@ -92,14 +93,16 @@ function runningJson(r: RunningCheck): Record<string, unknown> {
   };
 }
 
-function keyJson(k: KeyFuse): Record<string, unknown> {
+function keyJson(k: KeyFuse, criterion: YieldCriterion): Record<string, unknown> {
   const stress = (s: KeyStress) => ({ torque_Nm: s.torque, shear_stress_Pa: s.shearStress, bearing_stress_Pa: s.bearingStress, shear_ratio: s.shearRatio, bearing_ratio: s.bearingRatio });
   return {
     station: k.station,
     shaft_diameter_m: k.segment.diameter,
     ...stress(k.incident),
     shears_before_shaft_yields: k.shearsBeforeShaftYields,
+    shear_ratio_basis: criterion === 'max-shear' ? 'shear yield 0.5·Sy (maximum shear)' : 'shear yield Sy/√3 (distortion energy)',
     shear_off_torque_Nm: k.shearOffTorque,
+    shear_off_basis: k.shearOffBasis,
     crush_torque_Nm: k.crushTorque,
     shaft_yield_torque_Nm: k.shaftYieldTorque,
     at_limiter: k.atLimiter ? stress(k.atLimiter) : null,

@@ -32,7 +32,11 @@ export function scaleSideSentence(z: ResizeResult): string {
   const o = z.scaleSide;
   const u = z.results.case.units;
   const sizes = o.segments.map((g, i) => `${segName(g)} Ø${showDiameter(g.diameter, u)} → ${showDiameter(o.diameters[i], u)} (stock ${showDiameter(o.stockDiameters[i], u)})`).join('; ');
-  const head = `Scale side ${o.side}: every segment of the side by s = ${sig(o.presentYieldRatio)} × ${sig(z.designFactor)} = ${sig(o.s, 4)}, bores with them (stress falls as 1/s in the energy method): ${sizes}.${z.results.finding.basis === 'dynamic model' ? ` ${sig(o.presentYieldRatio)} is the energy method's stress / shear yield, the design check's, which leans to the high side here; the finding's model gives ${sig(z.results.finding.yieldRatio)}.` : ''}`;
+  const coupled = o.segments.some((g) => g.coupling?.stiffness !== undefined);
+  const how = coupled
+    ? `s = ${sig(o.s, 4)}, found by rerunning the energy method (the flexible coupling's compliance does not scale with the shaft, so stress falls faster than 1/s)`
+    : `s = ${sig(o.presentYieldRatio)} × ${sig(z.designFactor)} = ${sig(o.s, 4)}, bores with them (stress falls as 1/s in the energy method)`;
+  const head = `Scale side ${o.side}: every segment of the side by ${how}: ${sizes}.${z.results.finding.basis === 'dynamic model' ? ` ${sig(o.presentYieldRatio)} is the energy method's stress / shear yield, the design check's, which leans to the high side here; the finding's model gives ${sig(z.results.finding.yieldRatio)}.` : ''}`;
   const rerun = `Rerun: side ${o.side}'s stress / shear yield ${sig(sideYieldRatio(o.rerun, o.side), 4)} at the exact sizes, ${sig(sideYieldRatio(o.stockRerun, o.side), 4)} at the stock sizes; peak torque ${show(o.stockRerun.sides.find((s) => s.side === o.side)!.peakTorque, 'torque', u)}.`;
   const otherWords = otherSidesWords(z, o.stockRerun, o.side);
   if (!o.needed) return `${head} ${rerun} The present shaft already keeps the factor (s ≤ 1): no larger shaft is needed for a repeat of this incident; do not make it smaller on this basis alone.${otherWords}`;

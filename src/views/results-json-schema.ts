@@ -133,6 +133,24 @@ const CHECK: Record<string, Json> = {
     duration_s: num('The simulated window, s.'),
     elements: { type: 'integer', description: 'Shaft elements.' },
   }),
+  keys: list("Each station's key at the torque it carried: shear and bearing against its strengths, the torque that shears it.", open('One key.', { station: str('Its station.'), torque_Nm: num('The torque through it, N·m.'), shear_ratio: num('Shear stress over the shear strength it is judged by.'), shear_off_torque_Nm: num('The torque that shears it off, N·m.') })),
+  fits: list('Each shrink or press fit: contact pressure (Lamé), the torque that slips it, whether it slipped.', open('One fit.', { station: str('Its station.'), contact_pressure_Pa: num('Contact pressure, Pa.'), slip_torque_Nm: num('The torque that slips it, N·m.'), slipped: { type: 'boolean' } })),
+  couplings: list('Each coupling against its rating.', open('One coupling.', { segment: { type: 'integer' }, rated_torque_Nm: num('Rated torque, N·m.'), torque_Nm: num('The torque it carried, N·m.') })),
+  drive_train: list('Every element of the drive train in the order it would give way (the finding orders them).', {
+    type: 'object',
+    properties: {
+      element: str('The element.'),
+      kind: str('Its kind (shaft, key, fit, coupling, limiter, pin).'),
+      station_or_segment: str('Where it sits.'),
+      capacity_Nm: orNull(num('The torque at which it gives way, N·m at shaft speed.')),
+      gives_way_by: str('How it gives way.'),
+      torque_Nm: num('The torque it carried in the incident, N·m at shaft speed.'),
+      ratio: num('Torque over capacity.'),
+      order: { type: 'integer', description: '1 for the first to give way.' },
+    },
+    required: ['element', 'kind', 'station_or_segment', 'capacity_Nm', 'torque_Nm', 'ratio', 'order'],
+    additionalProperties: false,
+  }),
   finding: FINDING,
 };
 

@@ -2,6 +2,8 @@ import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { DynamicResult } from '../results/dynamic-result.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import { findingToJson } from './finding-json.ts';
+import { driveTrainJson } from './drive-train-table.ts';
+import { couplingCheckJson, fitCheckJson, keyCheckJson } from './hub-json.ts';
 import { SCHEMA_VERSION } from './schema-version.ts';
 import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
 import type { Uncertainty } from '../uncertainty/uncertainty.ts';
@@ -42,6 +44,10 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
     observed_fracture: observedFractureToJson(r.observedFindings),
     ...(r.uncertainty ? { uncertainty: uncertaintyJson(r.uncertainty) } : {}),
     dynamic: dynamicJson(r.dynamic),
+    keys: r.keys.map(keyCheckJson),
+    fits: r.fits.map(fitCheckJson),
+    couplings: r.couplings.map(couplingCheckJson),
+    drive_train: driveTrainJson(r.finding),
     finding: findingToJson(r.finding, r.case.units),
   };
 }
@@ -60,6 +66,8 @@ function dynamicJson(d: DynamicResult): Record<string, unknown> {
     segments: d.pieces.map((p) => ({ from_m: p.piece.start, to_m: p.piece.end, peak_torque_Nm: p.peakTorque, elastic_peak_torque_Nm: p.elasticPeakTorque, shear_stress_Pa: p.shearStress, yield_ratio: p.yieldRatio, permanent_twist_rad: p.permanentTwist, max_shear_strain: p.maxShearStrain, broken: p.broken, break_time_s: p.breakTime ?? null })),
     slip: d.slips.map((s) => ({ element: s.element, energy_J: s.energy, angle_rad: s.angle })),
     events: d.events.map((e) => ({ time_s: e.time, event: e.text })),
+    backlash: d.gaps.map((g) => ({ segment: g.segment.index, label: g.segment.label ?? null, gap_rad: g.gap, contacts: g.contacts })),
+    protection: d.protection.map((p) => ({ station: p.station, torque_limit_Nm: p.torqueLimit ?? null, trip_after_s: p.tripAfter ?? null, tripped_at_s: p.trippedAt ?? null })),
   };
 }
 

@@ -8,6 +8,9 @@ import { show, sig } from './display-units.ts';
 import { renderUncertaintyLines } from './uncertainty-summary.ts';
 import { observedLines, plasticLines } from './plastic-lines.ts';
 import { showSlipAngle } from './slip-angle.ts';
+import { couplingSentences, hubSentences } from './hub-lines.ts';
+import { driveTrainRows, hasDriveTrain } from './drive-train-table.ts';
+import { textTable } from './text-table.ts';
 
 /**
  * The dynamic model's numbers: per side the peak torque as carried (capped past yield) and, like for
@@ -33,6 +36,14 @@ export function dynamicLines(r: Results, role: string): string[] {
   for (const s of d.slips) {
     const what = s.firstSlip === undefined ? 'did not slip' : `slipped ${showSlipAngle(s.angle, u)} and took ${show(s.energy, 'energy', u)}${s.slippingAtEnd ? ', still slipping at the end' : ''}`;
     out.push(`  ${s.element} (slip torque ${show(s.slipTorque, 'torque', u)}) ${what}`);
+  }
+  for (const g of d.gaps) {
+    out.push(`  backlash of ${show(g.gap, 'angle', u)} in ${g.segment.label ? `"${g.segment.label}"` : `segment ${g.segment.index + 1}`}: closed ${g.contacts} time${g.contacts === 1 ? '' : 's'} (taken fully open at the stop where no running torque held it closed)`);
+  }
+  for (const p of d.protection) {
+    const limit = p.torqueLimit === undefined ? '' : `held to ${show(p.torqueLimit, 'torque', u)} at the motor`;
+    const trip = p.tripAfter === undefined ? '' : p.trippedAt === undefined ? `set to trip at ${sig(p.tripAfter * 1000)} ms, after the window` : `tripped at ${sig(p.trippedAt * 1000)} ms`;
+    out.push(`  drive at "${p.station}" ${[limit, trip].filter(Boolean).join(', ')}`);
   }
   for (const p of d.pins) {
     out.push(`  ${p.element} (${show(p.shearTorque, 'torque', u)}) ${p.partedAt === undefined ? 'held' : `parted at ${sig(p.partedAt * 1000)} ms`}`);
@@ -85,6 +96,14 @@ export function renderSummary(r: Investigation): string {
     out.push('Energy method (the finding\'s model: all of a side\'s kinetic energy into its shaft at once):');
     out.push(...energyMethodLines(r));
     if (pastYield) out.push(...plasticLines(r, 'the finding\'s model past yield'));
+  }
+  const hubs = hubSentences(r);
+  if (hubs.length > 0) out.push('', 'Keys and hub fits at the incident torque:', ...hubs.map((h) => `  - ${h}`));
+  const couplings = couplingSentences(r);
+  if (couplings.length > 0) out.push('', 'Couplings at the incident torque:', ...couplings.map((h) => `  - ${h}`));
+  if (hasDriveTrain(f)) {
+    out.push('', 'What gave way first (the drive train, weakest first; torques at shaft speed):');
+    out.push(...textTable([['order', 'element', 'capacity', 'torque', 'ratio', 'gives way when it'], ...driveTrainRows(f, u)]).map((l) => `  ${l}`));
   }
   const sure = renderUncertaintyLines(r);
   if (sure.length > 0) out.push('', ...sure);

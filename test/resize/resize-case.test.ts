@@ -31,7 +31,10 @@ describe('resizeCase on every sample case', () => {
   it.each(samples)('%s: every option is there, and the scaled side\'s rerun confirms 1/N', (f) => {
     const { r, z } = resized(f);
     expect(z.designFactor).toBe(1.5);
-    expect(z.scaleSide.s).toBe(r.yieldRatio * 1.5);
+    // The law s = yield_ratio·N holds for shaft alone; a flexible coupling's s comes by bisection.
+    const coupled = z.scaleSide.segments.some((g) => g.coupling?.stiffness !== undefined);
+    if (!coupled) expect(z.scaleSide.s).toBe(r.yieldRatio * 1.5);
+    else expect(z.scaleSide.s).toBeLessThan(r.yieldRatio * 1.5);
     expect(rel(sideYieldRatio(z.scaleSide.rerun, z.scaleSide.side), 1 / 1.5)).toBeLessThan(1e-12);
     expect(z.materials.length).toBeGreaterThan(5);
     expect(z.limiter.max).toBeGreaterThan(0);

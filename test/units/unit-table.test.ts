@@ -47,6 +47,13 @@ describe('unit factors', () => {
     expect(Math.abs(unitFactor(unit, kind)! - ref) / ref).toBeLessThan(1e-6);
   });
 
+  it('torsional stiffness: lbf·in/rad is 0.1129848 N·m/rad (shared reference §12, derived) and a degree is π/180 rad', () => {
+    expect(unitFactor('lbf*in/rad', 'stiffness')! / 0.1129848 - 1).toBeLessThan(1e-6);
+    expect(unitFactor('N*m/deg', 'stiffness')).toBeCloseTo(180 / Math.PI, 12);
+    expect(unitFactor('lbf*ft/deg', 'stiffness')! / ((1.3558179483314 * 180) / Math.PI)).toBeCloseTo(1, 12);
+    expect(unitFactor('kN·m/rad', 'stiffness')).toBe(1e3);
+  });
+
   it('normaliseUnit brings typed spellings to the table\'s', () => {
     expect(normaliseUnit('kg·m²')).toBe('kg*m^2');
     expect(normaliseUnit('lb ft2')).toBe('lb*ft^2');

@@ -44,4 +44,6 @@ export interface SystemDrive {
   rotorInertia: number;
   /** Belt slip torque at the shaft, N·m; undefined: no belt (the rotor is rigidly part of the node). */
   beltSlipTorque?: number;
+  /** Time from the stop's start at which the drive's protection cuts the motor's torque, s; undefined: never. */
+  tripAfter?: number;
 }

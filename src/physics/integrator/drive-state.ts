@@ -1,4 +1,4 @@
-import { pieceSlope, pieceTorque, type TorqueSpeedLine } from '../motor-torque.ts';
+import { pieceOf, pieceSlope, pieceTorque, type TorqueSpeedLine } from '../motor-torque.ts';
 
 /** A drive's state during the integration. */
 export interface DriveState {
@@ -41,4 +41,13 @@ export function setPiece(d: DriveState, j: number): void {
 /** The motor's torque at speed w on its current piece, N·m at the shaft. */
 export function motorTorque(d: DriveState, w: number): number {
   return d.base + d.slope * w;
+}
+
+/** A motor with no torque at any speed: what a drive gives once its protection has tripped. */
+const TRIPPED: TorqueSpeedLine = { speeds: [0], torques: [0] };
+
+/** Cuts the drive's torque for good (its overload or drive trips): its line becomes zero at every speed. */
+export function tripDrive(d: DriveState, motorSpeed: number): void {
+  d.line = TRIPPED;
+  setPiece(d, pieceOf(TRIPPED, motorSpeed));
 }

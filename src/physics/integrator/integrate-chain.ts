@@ -2,6 +2,7 @@ import { enterEvent, eventSources, eventValues, locateEvent, type ChainEvent } f
 import { ChainRecorder, type ChainHistory } from './chain-recorder.ts';
 import { chainEnergy, holdingJamTorque, motorPieceValue } from './chain-forces.ts';
 import { ChainStepper } from './chain-stepper.ts';
+import { tripDrive } from './drive-state.ts';
 import type { ChainSystem } from './chain-system.ts';
 import type { TorqueLaw } from '../torque-law.ts';
 
@@ -107,7 +108,25 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
   let burst = 0;
   let burstTime = -1;
   const direction = new Float64Array(K);
+  // A drive's trip is an event at a known time: the step lands on it, and from there the motor
+  // gives no torque. Checked once a step, over the drives only.
+  const tripAt = sys.drives.map((d) => d.tripAfter ?? Infinity);
+  const tripped = sys.drives.map(() => false);
+  let nextTrip = Math.min(Infinity, ...tripAt);
   while (st.t < T * (1 - 1e-12)) {
+    if (st.t >= nextTrip * (1 - 1e-12) - 1e-15) {
+      for (let j = 0; j < st.drives.length; j++) {
+        if (tripped[j] || st.t < tripAt[j] * (1 - 1e-12) - 1e-15) continue;
+        tripped[j] = true;
+        tripDrive(st.drives[j], st.motorSpeed(st.drives[j], false));
+        events.push({ time: st.t, source: { kind: 'motor', index: j }, what: 'trips: its torque is cut off' });
+      }
+      nextTrip = Math.min(Infinity, ...tripAt.filter((_, j) => !tripped[j]));
+      st.dirty = true;
+      fineUntil = Math.max(fineUntil, st.t + (opts.fineAfterEvent ?? 0));
+      st.refreshStart();
+      eventValues(st, sources, ev0);
+    }
     // Steps end on the grid of the step in use, so an event's short step is followed by one that
     // brings the grid back (samples and the peak parabola then fall on equal steps).
     const hNow = st.t < fineUntil ? hFine : h0;
@@ -117,6 +136,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     // A step within rounding of the regular one is the regular one (the factorisation is kept).
     if (Math.abs(h - hNow) <= 1e-9 * hNow) h = hNow;
     if (rampEnd > st.t * (1 + 1e-12) + 1e-15 && rampEnd < st.t + h) h = rampEnd - st.t;
+    if (nextTrip > st.t * (1 + 1e-12) + 1e-15 && nextTrip < st.t + h) h = nextTrip - st.t;
     st.trial(h);
     eventValues(st, sources, evT);
     // A motor passing a point of its curve is located only at standstill (its time is reported: the

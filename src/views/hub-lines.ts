@@ -1,0 +1,36 @@
+import type { Results } from '../results/results.ts';
+import { show, sig } from './display-units.ts';
+
+/** One sentence per key and per fit at the incident torque, in the case's units; empty without either. */
+export function hubSentences(r: Results): string[] {
+  const u = r.case.units;
+  const out: string[] = [];
+  for (const k of r.keys) {
+    const at = `${show(k.torque, 'torque', u)}${k.upperBound ? ' (an upper bound)' : ''}`;
+    out.push(
+      `Key at "${k.station}" (shaft Ø${show(k.shaftDiameter, 'length', u)}) at the incident's ${at}: shear ${show(k.shearStress, 'stress', u)}, ${sig(k.shearRatio)} × its ${k.shearYieldBasis}; bearing ${show(k.bearingStress, 'stress', u)}, ${sig(k.bearingRatio)} × its yield. It shears off at about ${show(k.shearOffTorque, 'torque', u)} (its ${k.shearOffBasis}) and crushes at ${show(k.crushTorque, 'torque', u)}; the shaft to the stop yields at ${show(k.shaftYieldTorque, 'torque', u)}.`,
+    );
+  }
+  for (const f of r.fits) {
+    const at = `${show(f.torque, 'torque', u)}${f.upperBound ? ' (an upper bound)' : ''}`;
+    const fuse = f.slipsBeforeShaftYields ? `below the ${show(f.shaftYieldTorque, 'torque', u)} at which the shaft to the stop yields: the fit is the fuse` : `above the ${show(f.shaftYieldTorque, 'torque', u)} at which the shaft to the stop yields: the shaft yields first`;
+    const hoop = f.hubYieldStrength === undefined ? '' : ` Hoop stress at the hub's bore ${show(f.hubHoopStress, 'stress', u)}, ${sig(f.hubHoopStress / f.hubYieldStrength)} × the hub's yield strength.`;
+    out.push(
+      `Shrink fit at "${f.station}": contact pressure ${show(f.contactPressure, 'stress', u)} (thick-cylinder relations), slip torque ${show(f.slipTorque, 'torque', u)}, ${fuse}. Torque through the hub ${at}: it ${f.slipped ? 'slipped' : 'held'}${f.inDynamicModel ? ' (the dynamic model let it slip as a slip element)' : ''}.${hoop}`,
+    );
+  }
+  return out;
+}
+
+/** One sentence per coupling against the incident torque, in the case's units; empty without couplings. */
+export function couplingSentences(r: Results): string[] {
+  const u = r.case.units;
+  return r.couplings.map((k) => {
+    const seg = k.segment.label ? `"${k.segment.label}"` : `segment ${k.segment.index + 1}`;
+    const kind = k.stiffness === undefined ? 'rigid coupling' : `coupling of ${show(k.stiffness, 'stiffness', u)}`;
+    const rating = k.peakRating === undefined ? `its rated torque ${show(k.ratedTorque, 'torque', u)} (no maximum torque given)` : `its maximum torque ${show(k.peakRating, 'torque', u)} (rated ${show(k.ratedTorque, 'torque', u)})`;
+    const verdict = k.capacityRatio > 1 ? 'past what the maker allows: inspect or replace it' : 'within what the maker allows';
+    const soft = k.stiffness === undefined ? '' : ' An elastomeric coupling\'s stiffness rises with load and falls with temperature; the data-sheet figure is a mean.';
+    return `The ${kind} in ${seg} carried ${show(k.torque, 'torque', u)}, ${sig(k.capacityRatio)} × ${rating}: ${verdict}.${soft}`;
+  });
+}
