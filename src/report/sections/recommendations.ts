@@ -1,6 +1,6 @@
 import type { ResizeResult } from '../../resize/resize-result.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from '../../views/resize-rows.ts';
-import { criticalSegmentSentence, factorSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from '../../views/resize-words.ts';
+import { criticalSegmentSentence, factorSentence, flaggedOptions, recommendedSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from '../../views/resize-words.ts';
 import { findingSentence } from '../../views/finding-words.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
@@ -20,7 +20,11 @@ export const recommendationsSection: ReportSection = {
       e(factorSentence(resize)),
       optionsTable(resize),
       e("Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate."),
+      `**${e(recommendedSentence(resize))}**`,
+      e(`The rule: ${resize.pickRule}`),
     ];
+    const flagged = flaggedOptions(resize);
+    if (flagged.length > 0) out.push(`### ${e('Flagged: why these options are not advisable')}`, bulletList(flagged.map((o) => e(`${o.name}: ${o.flags.join('; ')}.`))));
     const part = (title: string, lines: readonly string[]) => out.push(`### ${e(title)}`, bulletList(lines.map(e)));
     part('Scale the side', [scaleSideSentence(resize)]);
     part('Resize the critical segment only', [criticalSegmentSentence(resize)]);

@@ -19,7 +19,10 @@ describe('the report section "Recommendations: what goes back in"', () => {
     const rows = md.split('\n').filter((l) => l.startsWith('| '));
     expect(rows).toHaveLength(optionRows(z).length + 2); // headings, rule, one row per option
     expect(md).toMatch(/### Guarding and restart/);
-    expect(md).toMatch(/ring-tested/);
+    expect(md).toMatch(/Restart to a written procedure/);
+    expect(md).not.toMatch(/ring-tested/);
+    expect(md).toMatch(/\*\*Recommended: none of the options alone/);
+    expect(md).toMatch(/### Flagged: why these options are not advisable/);
     expect(md).toMatch(/### What the options rest on/);
   });
 
@@ -31,7 +34,7 @@ describe('the report section "Recommendations: what goes back in"', () => {
   it('renders to HTML with one table of the options', () => {
     const html = new MarkdownIt().render(section(granulator).md);
     expect(html.match(/<table>/g)).toHaveLength(1);
-    expect(html).toMatch(/<td>Torque limiter at &quot;drive sheave&quot;<\/td>/);
+    expect(html).toMatch(/<td>Torque limiter at &quot;drive sheave&quot; \(flagged\)<\/td>/);
   });
 
   it('escapes the case\'s own text: names and labels cannot break the table or add markup', () => {
