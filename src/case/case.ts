@@ -31,6 +31,11 @@ export interface CaseMeta {
   /** ISO date or date-time, as written. */
   occurred?: string;
   machine?: string;
+  /**
+   * The plant's tag of the machine (or shaft), the same in every case of it: `shaftcase log` groups
+   * incidents by it and adds up their fatigue damage.
+   */
+  asset?: string;
   site?: string;
   ticket?: string;
   investigator?: string;

@@ -15,7 +15,7 @@ import { readStop } from './read-stop.ts';
 
 /** The top-level keys of a case file. */
 export const CASE_KEYS = ['case', 'units', 'speed', 'stop', 'materials', 'shaft', 'stations', 'analysis', 'observed'] as const;
-const META_KEYS = ['id', 'title', 'occurred', 'machine', 'site', 'ticket', 'investigator', 'notes'];
+const META_KEYS = ['id', 'title', 'occurred', 'machine', 'asset', 'site', 'ticket', 'investigator', 'notes'];
 
 /**
  * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
@@ -105,6 +105,7 @@ function readMeta(r: CaseReader): CaseMeta {
   if (meta.occurred !== undefined && !isIsoDate(meta.occurred)) {
     r.fail('E_TYPE', ['case', 'occurred'], `"${meta.occurred}" is not an ISO date; give a date such as "2026-03-14" or "2026-03-14T06:40"`);
   }
+  if (meta.asset !== undefined && meta.asset.trim() === '') r.fail('E_MISSING', ['case', 'asset'], 'is empty; give the machine\'s asset tag, the same in every case of that machine, such as "GR-4 rotor shaft"');
   return meta;
 }
 

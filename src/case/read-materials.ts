@@ -3,6 +3,7 @@ import { MATERIAL_FIELDS, type Material, type MaterialField } from '../materials
 import type { QuantityKind } from '../units/unit-table.ts';
 import type { CaseReader } from './case-reader.ts';
 import { didYouMean } from './did-you-mean.ts';
+import { CYCLIC_FIELDS, readCyclicProperties } from './read-cyclic-properties.ts';
 import { ELONGATION_LIMIT, FRACTURE_STRAIN_LIMIT, MODULUS_LIMIT, REDUCTION_OF_AREA_LIMIT, type Limit } from './limits.ts';
 
 const FIELD_KINDS: Record<MaterialField, QuantityKind> = {
@@ -25,7 +26,7 @@ const FIELD_LIMITS: Partial<Record<MaterialField, Limit>> = {
   fracture_strain: FRACTURE_STRAIN_LIMIT,
 };
 
-const MATERIAL_KEYS = ['name', ...Object.keys(MATERIAL_FIELDS), 'strength_basis', 'source'];
+const MATERIAL_KEYS = ['name', ...Object.keys(MATERIAL_FIELDS), ...Object.keys(CYCLIC_FIELDS), 'strength_basis', 'source'];
 
 /**
  * Case-local materials from `materials:`, keyed by name; they shadow library entries of the same
@@ -45,6 +46,8 @@ export function readCaseMaterials(r: CaseReader): Record<string, Material> {
     if (m.yieldStrength !== undefined && m.tensileStrength !== undefined && m.tensileStrength < m.yieldStrength) {
       r.fail('E_MATERIAL', [...path, 'tensile_strength'], `is below the yield strength (${Number((m.yieldStrength / 1e6).toPrecision(4))} MPa); a tensile strength is at least the yield strength, such as "${Number(((m.yieldStrength * 1.2) / 1e6).toPrecision(3))} MPa"`);
     }
+    const cyclic = readCyclicProperties(r, path);
+    if (cyclic) m.cyclic = cyclic;
     const basis = r.string([...path, 'strength_basis'], { allowed: ['minimum', 'typical'] });
     if (basis) m.strengthBasis = basis as Material['strengthBasis'];
     out[key] = m;

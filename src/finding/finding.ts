@@ -10,6 +10,7 @@ import { firstBrokenPiece, type DynamicPiece } from '../results/dynamic-result.t
 import type { Results } from '../results/results.ts';
 import type { TwistFindingCode } from '../results/twist-findings.ts';
 import { findingChance, type FindingChance } from './finding-chance.ts';
+import { incidentFatigue, type IncidentFatigue } from './incident-fatigue.ts';
 
 /**
  * The states of a shaft after the incident, in the trade's words. `yielded locally`: the net section
@@ -65,6 +66,8 @@ export interface Finding {
   measured: MeasuredTwistFinding[];
   /** What to do next, one line. */
   disposition: string;
+  /** The incident's fatigue at the governing piece's stress raiser: its cycles and damage. */
+  fatigue: IncidentFatigue;
 }
 
 /** Decides the finding from the results. Pure. */
@@ -100,6 +103,7 @@ export function decideFinding(r: Results): Finding {
       speedForMeasured: f.speedForMeasured,
     })),
     disposition: disposition(verdict, brittle),
+    fatigue: incidentFatigue(material, g.piece.segment.kt, g.shearStress, g.elasticTorque, r.dynamic.histories),
   };
 }
 

@@ -1,0 +1,41 @@
+import type { IncidentFatigue } from '../finding/incident-fatigue.ts';
+import type { NotchCycle } from '../physics/fatigue/notch-damage.ts';
+
+/**
+ * The `fatigue` object of every JSON output: the incident's fatigue at the finding's governing
+ * stress raiser, SI. `damage` is the Miner fraction of the crack-initiation life this incident used
+ * (jam and ring-down); `jam_cycle` is the jam alone, rest → peak → rest.
+ */
+export function fatigueToJson(z: IncidentFatigue): Record<string, unknown> {
+  const p = z.properties;
+  return {
+    kt: z.kt,
+    nominal_shear_stress_Pa: z.nominalShearStress,
+    properties_source: z.propertiesSource,
+    properties: {
+      elastic_modulus_Pa: p.elasticModulus,
+      cyclic_strength_coefficient_Pa: p.cyclicStrengthCoefficient,
+      cyclic_hardening_exponent: p.cyclicHardeningExponent,
+      fatigue_strength_coefficient_Pa: p.fatigueStrengthCoefficient,
+      fatigue_strength_exponent: p.fatigueStrengthExponent,
+      fatigue_ductility_coefficient: p.fatigueDuctilityCoefficient,
+      fatigue_ductility_exponent: p.fatigueDuctilityExponent,
+    },
+    jam_cycle: cycleJson(z.jamCycle),
+    ring_down: z.ringDown,
+    cycles: z.cycles.map(cycleJson),
+    damage: z.damage,
+    notes: z.notes,
+  };
+}
+
+function cycleJson(c: NotchCycle): Record<string, unknown> {
+  return {
+    nominal_equivalent_stress_range_Pa: c.nominalRange,
+    count: c.count,
+    strain_amplitude: c.strainAmplitude,
+    life_cycles: c.life.cycles ?? null,
+    beyond: c.life.beyond ?? null,
+    damage: c.damage,
+  };
+}
