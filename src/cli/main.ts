@@ -98,6 +98,15 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
       await reportCommand(file, opts, io, clock());
     });
 
+  program
+    .command('log')
+    .description('the incident log of every case under a folder: one row per incident, rollups and the fatigue they add up to per asset')
+    .argument('<dir>', 'a folder of case files and case folders')
+    .option('--csv', 'print one CSV row per incident')
+    .option('--json', 'print one JSON object, SI units')
+    .option('--html <file>', 'also write a self-contained page with the figures (a new file, never overwritten)')
+    .action(async (dir: string, opts: { csv?: boolean; json?: boolean; html?: string }) => (await import('./commands/log.ts')).logCommand(dir, opts, io, clock()));
+
   // Each command loads its own modules when it runs (\`await import\`), so --help and a quick
   // check load no more than they use; the report's libraries load only for report.
   try {
