@@ -66,7 +66,7 @@ export function incidentFatigue(material: Material, kt: number, elasticStress: n
   const cycles = notchCycles(rainflow(nominal), kt, properties).sort((a, b) => b.nominalRange - a.nominalRange);
   const jamCycle = notchCycles([{ range: peakEq, mean: peakEq / 2, count: 1 }], kt, properties)[0];
   notes.push('Torsion enters the strain–life relation as the von Mises equivalent (√3·τ), Neuber\'s rule on the equivalent stress with the segment\'s kt; mean stress is left out.');
-  if (ringDown) notes.push('The ring-down is the dynamic model\'s torque history of the most loaded piece, in the governing piece\'s nominal stress per torque, its largest sample put at the elastic peak (Neuber\'s rule takes the stress an elastic analysis gives), counted by rainflow (ASTM E1049); the history is kept at a few hundred samples, so small late cycles may be missed.');
+  if (ringDown) notes.push('The ring-down is the dynamic model\'s torque history of the most loaded piece, in the governing piece\'s nominal stress per torque, its largest sample put at the elastic peak (Neuber\'s rule takes the stress an elastic analysis gives), counted by rainflow (ASTM E1049); the history is kept at a few hundred samples, so small late cycles may be missed. The model holds the stop in both senses, so a rebound that would lift a one-sided jam off is counted in full, and the count ends with the model\'s window: an upper estimate where the ring-down dominates.');
   return { kt, nominalShearStress, propertiesSource, properties, cycles, jamCycle, damage: minerSum(cycles.map((c) => c.damage)), ringDown, notes };
 }
 
