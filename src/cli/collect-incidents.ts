@@ -1,4 +1,4 @@
-import { dirname, relative } from 'node:path';
+import { dirname, isAbsolute, relative } from 'node:path';
 import { CaseError } from '../case/case-error.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import { investigate } from '../finding/investigate.ts';
@@ -24,7 +24,7 @@ export function collectIncidents(dir: string, known: ReadonlyMap<string, { loade
   const rows: IncidentRow[] = [];
   const notes: string[] = found.truncated.map((t) => `The search ${t} (README, Limits).`);
   for (const file of found.files) {
-    const shown = relative(process.cwd(), file) || file;
+    const shown = display(file);
     const given = known.get(file);
     let loaded: LoadedCase;
     try {
@@ -43,7 +43,7 @@ export function collectIncidents(dir: string, known: ReadonlyMap<string, { loade
     }
     const report = newestReport(file, dirname(file));
     if (report && report.json.case_sha256 === loaded.sha256 && hasLogFields(report.json)) {
-      rows.push(incidentRow(report.json, meta, { caseFile: file, report: relative(process.cwd(), report.folder) || report.folder, source: 'report' }));
+      rows.push(incidentRow(report.json, meta, { caseFile: file, report: display(report.folder), source: 'report' }));
       continue;
     }
     const why = !report ? 'no report yet' : report.json.case_sha256 !== loaded.sha256 ? 'its newest report was made from another version of the case file' : 'its newest report has no fatigue estimate';
@@ -51,4 +51,10 @@ export function collectIncidents(dir: string, known: ReadonlyMap<string, { loade
     rows.push(incidentRow(resultsToJson(investigate(loaded.case, { samples: 0 })), meta, { caseFile: file, report: null, source: 'engine' }));
   }
   return { rows, notes };
+}
+
+/** A path as the reader gave it: relative to the working folder when it lies below it, else absolute. */
+function display(path: string): string {
+  const rel = relative(process.cwd(), path);
+  return rel === '' || rel.startsWith('..') || isAbsolute(rel) ? path : rel;
 }

@@ -2,9 +2,9 @@ import type { IncidentLog } from '../log/build-log.ts';
 import { show, sig } from './display-units.ts';
 import { textTable } from './text-table.ts';
 
-/** The share of life as the log shows it: "12 %", "<1 %" for damage done below a percent. */
+/** The share of life as the log shows it: "12 %", two significant figures below a percent ("0.33 %"). */
 export function damagePercent(d: number): string {
-  if (d > 0 && d < 0.01) return '<1 %';
+  if (d > 0 && d < 0.01) return `${sig(d * 100, 2)} %`;
   return `${Math.round(d * 100)} %`;
 }
 
