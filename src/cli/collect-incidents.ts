@@ -1,4 +1,4 @@
-import { dirname, isAbsolute, relative } from 'node:path';
+import { dirname, isAbsolute, relative, resolve } from 'node:path';
 import { CaseError } from '../case/case-error.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import { investigate } from '../finding/investigate.ts';
@@ -17,7 +17,7 @@ export interface CollectedIncidents {
  * One row per case under `dir`: from the case's newest report where it was made from the case file
  * as it is now and carries the fatigue estimate, else from the engine (no Monte Carlo: the log
  * reads no chance), saying so. A case that does not read is skipped with its first problem.
- * `known` gives cases already investigated (by file), used as they are.
+ * `known` gives cases already investigated (by resolved path), used as they are.
  */
 export function collectIncidents(dir: string, known: ReadonlyMap<string, { loaded: LoadedCase; results: Investigation }> = new Map()): CollectedIncidents {
   const found = findCases(dir);
@@ -25,7 +25,7 @@ export function collectIncidents(dir: string, known: ReadonlyMap<string, { loade
   const notes: string[] = found.truncated.map((t) => `The search ${t} (README, Limits).`);
   for (const file of found.files) {
     const shown = display(file);
-    const given = known.get(file);
+    const given = known.get(resolve(file));
     let loaded: LoadedCase;
     try {
       loaded = given?.loaded ?? loadCase(file);
@@ -38,17 +38,17 @@ export function collectIncidents(dir: string, known: ReadonlyMap<string, { loade
     }
     const meta = loaded.case.meta;
     if (given) {
-      rows.push(incidentRow(resultsToJson(given.results), meta, { caseFile: file, report: null, source: 'engine' }));
+      rows.push(incidentRow(resultsToJson(given.results), meta, { caseFile: resolve(file), report: null, source: 'engine' }));
       continue;
     }
     const report = newestReport(file, dirname(file));
     if (report && report.json.case_sha256 === loaded.sha256 && hasLogFields(report.json)) {
-      rows.push(incidentRow(report.json, meta, { caseFile: file, report: display(report.folder), source: 'report' }));
+      rows.push(incidentRow(report.json, meta, { caseFile: resolve(file), report: display(report.folder), source: 'report' }));
       continue;
     }
     const why = !report ? 'no report yet' : report.json.case_sha256 !== loaded.sha256 ? 'its newest report was made from another version of the case file' : 'its newest report has no fatigue estimate';
     notes.push(`${meta.id} (${shown}): ${why}; the engine ran on the case file.`);
-    rows.push(incidentRow(resultsToJson(investigate(loaded.case, { samples: 0 })), meta, { caseFile: file, report: null, source: 'engine' }));
+    rows.push(incidentRow(resultsToJson(investigate(loaded.case, { samples: 0 })), meta, { caseFile: resolve(file), report: null, source: 'engine' }));
   }
   return { rows, notes };
 }

@@ -15,6 +15,7 @@ import { findingsSection } from './sections/findings.ts';
 import { howSureSection } from './sections/how-sure.ts';
 import { dynamicsSection } from './sections/dynamics.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
+import { fatigueSection } from './sections/fatigue.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
 import { appendixSection } from './sections/appendix.ts';
@@ -55,6 +56,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   observationsSection,
   findingsSection,
   howSureSection,
+  fatigueSection,
   recommendationsSection,
   cautionsSection,
   sourcesSection,

@@ -1,4 +1,5 @@
 import type { IncidentFatigue } from '../finding/incident-fatigue.ts';
+import type { AssetHistory } from '../log/asset-history.ts';
 import type { NotchCycle } from '../physics/fatigue/notch-damage.ts';
 
 /**
@@ -37,5 +38,21 @@ function cycleJson(c: NotchCycle): Record<string, unknown> {
     life_cycles: c.life.cycles ?? null,
     beyond: c.life.beyond ?? null,
     damage: c.damage,
+  };
+}
+
+/** `asset_history`: the case's place in its asset's history where the CLI looked (check, report). */
+export function assetHistoryToJson(h: AssetHistory): Record<string, unknown> {
+  return {
+    asset: h.asset,
+    position: h.position,
+    incidents: h.incidents,
+    damage: h.incidentDamage,
+    asset_damage: h.assetDamage,
+    jams_left: h.finding.jamsLeft ?? null,
+    inspect: h.finding.inspect,
+    finding: h.finding.sentence,
+    searched: h.searched,
+    others: h.others.map((o) => ({ id: o.id, occurred: o.occurred, damage: o.damage })),
   };
 }

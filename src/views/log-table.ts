@@ -2,8 +2,9 @@ import type { IncidentLog } from '../log/build-log.ts';
 import { show, sig } from './display-units.ts';
 import { textTable } from './text-table.ts';
 
-/** The share of life as the log shows it: "12 %", two significant figures below a percent ("0.33 %"). */
+/** The share of life as the log shows it: "12 %", two significant figures below a percent ("0.33 %"), "less than 0.01 %" below that. */
 export function damagePercent(d: number): string {
+  if (d > 0 && d < 1e-4) return 'less than 0.01 %';
   if (d > 0 && d < 0.01) return `${sig(d * 100, 2)} %`;
   return `${Math.round(d * 100)} %`;
 }

@@ -1,7 +1,7 @@
 import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { DynamicResult } from '../results/dynamic-result.ts';
 import type { Investigation } from '../finding/investigation.ts';
-import { fatigueToJson } from './fatigue-json.ts';
+import { assetHistoryToJson, fatigueToJson } from './fatigue-json.ts';
 import { findingToJson } from './finding-json.ts';
 import { SCHEMA_VERSION } from './schema-version.ts';
 import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
@@ -46,6 +46,7 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
     finding: findingToJson(r.finding, r.case.units),
     asset: r.case.meta.asset ?? null,
     fatigue: fatigueToJson(r.finding.fatigue),
+    ...(r.assetHistory ? { asset_history: assetHistoryToJson(r.assetHistory) } : {}),
   };
 }
 

@@ -98,4 +98,33 @@ describe('shaftcase log', () => {
     expect(r.err).toMatch(/is not a folder; give the folder that holds the case files/);
     expect(existsSync(join(dir, 'nothing-here'))).toBe(false);
   });
+
+  it('check of a case with case.asset shows its place in the history the log finds; its damage and the asset\'s sum are the log\'s', async () => {
+    const file = join(dir, 'cv7', 'jam-d.yaml'); // DEMO-CV7-03
+    const text = await cli(['check', file]);
+    expect(text.out).toMatch(/This is incident 3 of 4 of CV-7 head shaft found under .*cv7; it added [\d.]+ %, and the asset's Miner sum is \d+ %\./);
+    expect(text.out).toMatch(/crack test .* decides; a shaft near its estimated life is inspected before it goes back in/);
+    const j = JSON.parse((await cli(['check', '--json', file])).out);
+    const log = JSON.parse(json.out);
+    expect(j.asset_history.asset_damage).toBeCloseTo(log.assets[0].damage, 14);
+    expect(j.asset_history.damage).toBe(j.fatigue.damage);
+    expect(j.asset_history.damage).toBe(log.incidents.find((r: { id: string }) => r.id === 'DEMO-CV7-03').damage);
+    expect(j.asset_history.others.map((o: { id: string }) => o.id)).toEqual(['DEMO-CV7-01', 'DEMO-CV7-02', 'DEMO-CV7-04']);
+  });
+
+  it('a case without case.asset has no history in check --json', async () => {
+    const j = JSON.parse((await cli(['check', '--json', join(dir, 'other', 'INC-1')])).out);
+    expect(j.asset).toBeNull();
+    expect(j.asset_history).toBeUndefined();
+    expect(j.fatigue.damage).toBeGreaterThanOrEqual(0);
+  });
+
+  it('the report of a case with case.asset has the fatigue section with the asset\'s history, and results.json carries it', () => {
+    const folder = join(dir, 'cv7', 'reports', '2026-12-01');
+    const md = readFileSync(join(folder, 'report.md'), 'utf8');
+    expect(md).toMatch(/## Fatigue: what this jam used up[\s\S]*### This asset's history\n\nThis is incident 2 of 4 of CV-7 head shaft/);
+    const results = JSON.parse(readFileSync(join(folder, 'results.json'), 'utf8'));
+    expect(results.asset_history.position).toBe(2);
+    expect(results.asset).toBe('CV-7 head shaft');
+  });
 });

@@ -15,6 +15,7 @@ import { reportJson } from '../../report/report-json.ts';
 import { runInfo } from '../../report/run-info.ts';
 import { reportTablesCsv } from '../../report/tables-csv.ts';
 import { findingSentence } from '../../views/finding-words.ts';
+import { withAssetHistory } from '../asset-history.ts';
 import { screenInputs } from '../input-warnings.ts';
 import type { Io } from '../io.ts';
 import { version } from '../version.ts';
@@ -40,7 +41,9 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
   const template = readTemplate(opts.template);
   const photos = readPhotos(loaded.file, loaded.text, loaded.case.observed.photos);
   // Everything the report shows is computed here, once; rendering only reads it.
-  const data = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
+  const computed = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
+  // A case of an asset: its place in the history, from the cases around it.
+  const data = { ...computed, results: withAssetHistory(loaded, computed.results) };
   const { results } = data;
   const run = runInfo(now, version());
   const source = { file: basename(loaded.file), text: loaded.text, sha256: loaded.sha256 };
