@@ -74,7 +74,8 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .command('materials')
     .description('list the built-in materials and their sources')
     .option('--json', 'print the list as JSON, SI units')
-    .action(async (opts: { json?: boolean }) => (await import('./commands/materials.ts')).materialsCommand(opts, io));
+    .option('--yaml', "print the list in the case file's form (materials:), to start a case's or a site's own from")
+    .action(async (opts: { json?: boolean; yaml?: boolean }) => (await import('./commands/materials.ts')).materialsCommand(opts, io));
 
   program
     .command('new')
