@@ -23,6 +23,10 @@ export interface Case {
   observed: Observed;
   /** The ± bands stated in the case, by field path (`speed`, `shaft.segments[0].diameter`). */
   tolerances: Record<string, Tolerance>;
+  /** The site's materials catalogue the case read (materials.yaml up the tree, or --materials FILE): its name and SHA-256. */
+  materialCatalogue?: { file: string; sha256: string };
+  /** Where one material definition overrides another (case over site over built-in), in plain words. */
+  materialWarnings?: string[];
 }
 
 export interface CaseMeta {

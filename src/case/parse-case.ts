@@ -8,6 +8,8 @@ import type { Case, CaseMeta } from './case.ts';
 import { readAnalysis } from './read-analysis.ts';
 import { checkDriveCurves } from './read-drive.ts';
 import { readCaseMaterials } from './read-materials.ts';
+import { overrideWarnings, type SiteCatalogue } from './site-materials.ts';
+import { findMaterial } from '../materials/library.ts';
 import { checkProtectedSegments, readShaft } from './read-shaft.ts';
 import { readObserved } from './read-observed.ts';
 import { readStations } from './read-stations.ts';
@@ -20,9 +22,11 @@ const META_KEYS = ['id', 'title', 'occurred', 'machine', 'asset', 'site', 'ticke
 /**
  * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
  * `CaseError` listing every problem with its line, column and field path. No I/O: `file` is only
- * the name used in messages.
+ * the name used in messages. `site` is the site's materials catalogue: the case's own materials
+ * take precedence over it, and it over the built-in library, with a warning where one overrides
+ * another.
  */
-export function parseCase(text: string, file = 'case.yaml'): Case {
+export function parseCase(text: string, file = 'case.yaml', site?: SiteCatalogue): Case {
   const tooBig = sizeProblem(text);
   if (tooBig) throw new CaseError(file, [tooBig]);
   const controls = controlCharacters(text, 'E_TYPE', 'a case file');
@@ -56,7 +60,8 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
   const stop = readStop(r);
   const stopAt = stop.at;
 
-  const caseMaterials = readCaseMaterials(r);
+  const ownMaterials = readCaseMaterials(r);
+  const caseMaterials: Record<string, Material> = Object.assign(Object.create(null), site?.materials ?? {}, ownMaterials);
   const used: Record<string, Material> = Object.create(null); // keyed by the user's names: no prototype
   const shaft = readShaft(r, caseMaterials, used);
   const stations = readStations(r, shaft.length, caseMaterials, used);
@@ -91,6 +96,8 @@ export function parseCase(text: string, file = 'case.yaml'): Case {
     analysis,
     observed,
     tolerances: { ...r.tolerances },
+    ...(site ? { materialCatalogue: { file: site.file, sha256: site.sha256 } } : {}),
+    materialWarnings: overrideWarnings(Object.keys(used), new Set(Object.keys(ownMaterials)), site, (k) => findMaterial(k) !== undefined),
   };
 }
 

@@ -32,13 +32,13 @@ const MATERIAL_KEYS = ['name', ...Object.keys(MATERIAL_FIELDS), ...Object.keys(C
  * Case-local materials from `materials:`, keyed by name; they shadow library entries of the same
  * key. The record has no prototype: a material may be named `__proto__` or `constructor`.
  */
-export function readCaseMaterials(r: CaseReader): Record<string, Material> {
+export function readCaseMaterials(r: CaseReader, defaultSource = 'given in the case file'): Record<string, Material> {
   const out: Record<string, Material> = Object.create(null);
   if (!r.map(['materials'], [...r.keys(['materials'])])) return out;
   for (const key of r.keys(['materials'])) {
     const path = ['materials', key];
     if (!r.map(path, MATERIAL_KEYS, { required: true })) continue;
-    const m: Material = { key, name: r.string([...path, 'name']) ?? key, source: r.string([...path, 'source']) ?? 'given in the case file' };
+    const m: Material = { key, name: r.string([...path, 'name']) ?? key, source: r.string([...path, 'source']) ?? defaultSource };
     for (const [field, prop] of Object.entries(MATERIAL_FIELDS) as [MaterialField, keyof Material][]) {
       const q = r.quantity([...path, field], FIELD_KINDS[field], { positive: true, limit: FIELD_LIMITS[field] });
       if (q) (m as unknown as Record<string, number>)[prop] = q.value;

@@ -56,8 +56,9 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--json', 'print one JSON object, SI units')
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
+    .option('--materials <file>', "the site's materials catalogue (default: the nearest materials.yaml in the case's folder or above)")
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
-    .action(async (file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io));
+    .action(async (file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean; materials?: string }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io));
 
   program
     .command('resize')
@@ -93,8 +94,9 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
+    .option('--materials <file>', "the site's materials catalogue (default: the nearest materials.yaml in the case's folder or above)")
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
-    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number; strict?: boolean }) => {
+    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number; strict?: boolean; materials?: string }) => {
       const { reportCommand } = await import('./commands/report.ts');
       await reportCommand(file, opts, io, clock());
     });

@@ -45,6 +45,7 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
     dynamic: dynamicJson(r.dynamic),
     finding: findingToJson(r.finding, r.case.units),
     asset: r.case.meta.asset ?? null,
+    materials_catalogue: r.case.materialCatalogue ? { file: r.case.materialCatalogue.file, sha256: r.case.materialCatalogue.sha256 } : null,
     fatigue: fatigueToJson(r.finding.fatigue),
     ...(r.assetHistory ? { asset_history: assetHistoryToJson(r.assetHistory) } : {}),
   };

@@ -5,8 +5,8 @@ import { screenInputs } from '../input-warnings.ts';
 import type { Io } from '../io.ts';
 import { terminalProgress } from '../progress.ts';
 
-export async function checkCommand(path: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }, io: Io): Promise<void> {
-  const loaded = loadCase(path);
+export async function checkCommand(path: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean; materials?: string }, io: Io): Promise<void> {
+  const loaded = loadCase(path, { materials: opts.materials });
   const inputWarnings = screenInputs(loaded, opts.strict, io);
   const investigation = investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
   // A case of an asset: its place in the history, from the cases around it (the log's modules load only then).

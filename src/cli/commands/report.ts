@@ -31,11 +31,13 @@ export interface ReportOptions {
   factor?: number;
   /** Plausibility warnings become errors (exit 2), as for `check`. */
   strict?: boolean;
+  /** The site's materials catalogue (else materials.yaml up the tree). */
+  materials?: string;
 }
 
 /** `shaftcase report CASE`: a new dated report folder and its zip beside the case. */
 export async function reportCommand(path: string, opts: ReportOptions, io: Io, now: Date): Promise<void> {
-  const loaded = loadCase(path);
+  const loaded = loadCase(path, { materials: opts.materials });
   const inputWarnings = screenInputs(loaded, opts.strict, io);
   // What is read from disk first, so a missing template or photo is reported before any computing.
   const template = readTemplate(opts.template);
@@ -73,9 +75,9 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
     }
   }
 
-  const written = await writeReport({ caseFile: loaded.file, caseText: loaded.text, photos, files, date: run.date, ranAt: now });
+  const written = await writeReport({ caseFile: loaded.file, caseText: loaded.text, photos, files, date: run.date, ranAt: now, ...(loaded.site ? { siteCatalogue: loaded.site.text } : {}) });
   const lines = [`Wrote the report ${written.folder}/`, ...files.map((f) => `  ${f.path}`)];
-  lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
+  lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${loaded.site ? 'the materials catalogue, ' : ''}${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
   lines.push(`Open ${written.folder}/report.html`);
   lines.push(`Finding: ${findingSentence(results.finding, results.case.units)}`);
   io.out(lines.join('\n') + '\n');
