@@ -1,7 +1,7 @@
 import { MATERIAL_FIELDS, type MaterialField } from '../materials/material.ts';
 import type { QuantityKind } from '../units/unit-table.ts';
 import type { Path } from './case-reader.ts';
-import { MAX_ELEMENTS, NUMBER_LIMITS } from './limits.ts';
+import { CYCLIC_LIMITS, MAX_ELEMENTS, NUMBER_LIMITS } from './limits.ts';
 
 const L = NUMBER_LIMITS;
 
@@ -207,6 +207,13 @@ export const MATERIAL_SHAPE = mapping(
         f === 'poisson_ratio' ? { shape: { type: 'number', min: 0, max: 0.499, about: "Poisson's ratio (data sheet)." }, example: 0.29 } : quantity(FIELD_KINDS[f], f.replaceAll('_', ' '), FIELD_EXAMPLES[f]),
       ]),
     ),
+    // The cyclic constants (all six or none; read-cyclic-properties.ts): K′ and σ′_f with a unit, the others plain numbers.
+    cyclic_strength_coefficient: quantity('stress', 'K′, the cyclic stress–strain curve’s coefficient.', '1344 MPa'),
+    cyclic_hardening_exponent: { shape: { type: 'number', min: CYCLIC_LIMITS.cyclic_hardening_exponent[0], max: CYCLIC_LIMITS.cyclic_hardening_exponent[1], about: 'n′, the cyclic hardening exponent.' }, example: 0.18 },
+    fatigue_strength_coefficient: quantity('stress', 'σ′_f, the fatigue strength coefficient.', '1227 MPa'),
+    fatigue_strength_exponent: { shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_strength_exponent[0], max: CYCLIC_LIMITS.fatigue_strength_exponent[1], about: 'b, the fatigue strength exponent (negative).' }, example: -0.095 },
+    fatigue_ductility_coefficient: { shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_ductility_coefficient[0], max: CYCLIC_LIMITS.fatigue_ductility_coefficient[1], about: 'ε′_f, the fatigue ductility coefficient.' }, example: 1.0 },
+    fatigue_ductility_exponent: { shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_ductility_exponent[0], max: CYCLIC_LIMITS.fatigue_ductility_exponent[1], about: 'c, the fatigue ductility exponent (negative).' }, example: -0.66 },
     strength_basis: { shape: { type: 'text', allowed: ['minimum', 'typical'], about: 'Whether the strengths are published minima or typical (mean) values.' }, example: 'minimum' },
     source: text('Where the values come from (a mill certificate, a handbook with its edition).', 'mill certificate 4471-B'),
   },
@@ -276,6 +283,7 @@ export const META_SHAPE = mapping(
     title: text('A one-line title.', 'Granulator jammed on tramp metal'),
     occurred: { shape: { type: 'text', date: true, about: 'When the stop happened (ISO 8601 date or date-time).' }, example: '2026-03-14T06:40' },
     machine: text('The machine.', 'Granulator G-2'),
+    asset: text("The machine's asset tag, the same in every case of that machine (the incident log groups by it).", 'GR-4 rotor shaft'),
     site: text('The site.'),
     ticket: text('The maintenance ticket.', 'WO-88412'),
     investigator: text('Who investigated.'),

@@ -23,6 +23,10 @@ export interface Case {
   observed: Observed;
   /** The ± bands stated in the case, by field path (`speed`, `shaft.segments[0].diameter`). */
   tolerances: Record<string, Tolerance>;
+  /** The site's materials catalogue the case read (materials.yaml up the tree, or --materials FILE): its name and SHA-256. */
+  materialCatalogue?: { file: string; sha256: string };
+  /** Where one material definition overrides another (case over site over built-in), in plain words. */
+  materialWarnings?: string[];
 }
 
 export interface CaseMeta {
@@ -31,6 +35,11 @@ export interface CaseMeta {
   /** ISO date or date-time, as written. */
   occurred?: string;
   machine?: string;
+  /**
+   * The plant's tag of the machine (or shaft), the same in every case of it: `shaftcase log` groups
+   * incidents by it and adds up their fatigue damage.
+   */
+  asset?: string;
   site?: string;
   ticket?: string;
   investigator?: string;

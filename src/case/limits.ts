@@ -51,6 +51,18 @@ export const REDUCTION_OF_AREA_LIMIT: Limit = { min: 1e-4, max: 0.99, text: '0.0
 /** A fracture shear strain as a plain number: above zero, at most 10 (pure copper in torsion reaches about 5). */
 export const FRACTURE_STRAIN_LIMIT: Limit = { min: 1e-4, max: 10, text: '0.0001 to 10' };
 
+/**
+ * The strain–life constants as plain numbers, [min, max]: wide bands about the published values of
+ * metals (n′ 0.05–0.3, b −0.05 to −0.15, c −0.4 to −0.9, ε′_f 0.05–2 in Dowling, 4th ed., Table
+ * 14.1; from memory); K′ and σ′_f are strengths (1 MPa to 5 GPa).
+ */
+export const CYCLIC_LIMITS = {
+  cyclic_hardening_exponent: [0.01, 0.6],
+  fatigue_strength_exponent: [-0.3, -0.01],
+  fatigue_ductility_coefficient: [0.001, 10],
+  fatigue_ductility_exponent: [-1.5, -0.1],
+} as const;
+
 /** Limits of the plain numbers: [min, max]. */
 /** More shaft elements than this buy nothing a case file can measure and make `check` slow. */
 export const MAX_ELEMENTS = 2000;

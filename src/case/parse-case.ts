@@ -12,6 +12,8 @@ import { checkFitSeat } from './read-fit.ts';
 import { seatSegment } from '../model/hub-seat.ts';
 import { readCaseMaterials } from './read-materials.ts';
 import { checkCouplingSegments, checkProtectedSegments, readShaft } from './read-shaft.ts';
+import { overrideWarnings, type SiteCatalogue } from './site-materials.ts';
+import { findMaterial } from '../materials/library.ts';
 import { readObserved } from './read-observed.ts';
 import { readStations } from './read-stations.ts';
 import { readStop } from './read-stop.ts';
@@ -23,9 +25,11 @@ const META_KEYS = keysOf(META_SHAPE);
 /**
  * Parses and checks a case file's text. Returns the checked case (SI, names resolved) or throws a
  * `CaseError` listing every problem with its line, column and field path. No I/O: `file` is only
- * the name used in messages.
+ * the name used in messages. `site` is the site's materials catalogue: the case's own materials
+ * take precedence over it, and it over the built-in library, with a warning where one overrides
+ * another.
  */
-export function parseCase(text: string, file = 'case.yaml', observe?: ReadObserver): Case {
+export function parseCase(text: string, file = 'case.yaml', site?: SiteCatalogue, observe?: ReadObserver): Case {
   const tooBig = sizeProblem(text);
   if (tooBig) throw new CaseError(file, [tooBig]);
   const controls = controlCharacters(text, 'E_TYPE', 'a case file');
@@ -59,7 +63,8 @@ export function parseCase(text: string, file = 'case.yaml', observe?: ReadObserv
   const stop = readStop(r);
   const stopAt = stop.at;
 
-  const caseMaterials = readCaseMaterials(r);
+  const ownMaterials = readCaseMaterials(r);
+  const caseMaterials: Record<string, Material> = Object.assign(Object.create(null), site?.materials ?? {}, ownMaterials);
   const used: Record<string, Material> = Object.create(null); // keyed by the user's names: no prototype
   const shaft = readShaft(r, caseMaterials, used);
   const stations = readStations(r, shaft.length, caseMaterials, used);
@@ -101,6 +106,8 @@ export function parseCase(text: string, file = 'case.yaml', observe?: ReadObserv
     analysis,
     observed,
     tolerances: { ...r.tolerances },
+    ...(site ? { materialCatalogue: { file: site.file, sha256: site.sha256 } } : {}),
+    materialWarnings: overrideWarnings(Object.keys(used), new Set(Object.keys(ownMaterials)), site, (k) => findMaterial(k) !== undefined),
   };
 }
 
@@ -115,6 +122,7 @@ function readMeta(r: CaseReader): CaseMeta {
   if (meta.occurred !== undefined && !isIsoDate(meta.occurred)) {
     r.fail('E_TYPE', ['case', 'occurred'], `"${meta.occurred}" is not an ISO date; give a date such as "2026-03-14" or "2026-03-14T06:40"`);
   }
+  if (meta.asset !== undefined && meta.asset.trim() === '') r.fail('E_MISSING', ['case', 'asset'], 'is empty; give the machine\'s asset tag, the same in every case of that machine, such as "GR-4 rotor shaft"');
   return meta;
 }
 

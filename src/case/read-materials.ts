@@ -3,6 +3,7 @@ import { MATERIAL_FIELDS, type Material, type MaterialField } from '../materials
 import type { CaseReader } from './case-reader.ts';
 import { keysOf, MATERIAL_SHAPE, materialFieldKind } from './case-shape.ts';
 import { didYouMean } from './did-you-mean.ts';
+import { readCyclicProperties } from './read-cyclic-properties.ts';
 import { ELONGATION_LIMIT, FRACTURE_STRAIN_LIMIT, MODULUS_LIMIT, REDUCTION_OF_AREA_LIMIT, type Limit } from './limits.ts';
 
 
@@ -21,13 +22,13 @@ const MATERIAL_KEYS = keysOf(MATERIAL_SHAPE);
  * Case-local materials from `materials:`, keyed by name; they shadow library entries of the same
  * key. The record has no prototype: a material may be named `__proto__` or `constructor`.
  */
-export function readCaseMaterials(r: CaseReader): Record<string, Material> {
+export function readCaseMaterials(r: CaseReader, defaultSource = 'given in the case file'): Record<string, Material> {
   const out: Record<string, Material> = Object.create(null);
   if (!r.map(['materials'], [...r.keys(['materials'])])) return out;
   for (const key of r.keys(['materials'])) {
     const path = ['materials', key];
     if (!r.map(path, MATERIAL_KEYS, { required: true })) continue;
-    const m: Material = { key, name: r.string([...path, 'name']) ?? key, source: r.string([...path, 'source']) ?? 'given in the case file' };
+    const m: Material = { key, name: r.string([...path, 'name']) ?? key, source: r.string([...path, 'source']) ?? defaultSource };
     for (const [field, prop] of Object.entries(MATERIAL_FIELDS) as [MaterialField, keyof Material][]) {
       if (field === 'poisson_ratio') continue;
       const q = r.quantity([...path, field], materialFieldKind(field), { positive: true, limit: FIELD_LIMITS[field] });
@@ -39,6 +40,8 @@ export function readCaseMaterials(r: CaseReader): Record<string, Material> {
     // A plain number: every isotropic solid has -1 < ν < 0.5; metals lie near 0.2–0.35.
     const nu = r.number([...path, 'poisson_ratio'], { example: 'Poisson\'s ratio from the material\'s data sheet, from 0 to 0.5, such as 0.29', min: 0, max: 0.499 });
     if (nu !== undefined) m.poissonRatio = nu;
+    const cyclic = readCyclicProperties(r, path);
+    if (cyclic) m.cyclic = cyclic;
     const basis = r.string([...path, 'strength_basis'], { allowed: ['minimum', 'typical'] });
     if (basis) m.strengthBasis = basis as Material['strengthBasis'];
     out[key] = m;

@@ -56,8 +56,9 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--json', 'print one JSON object, SI units')
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
+    .option('--materials <file>', "the site's materials catalogue (default: the nearest materials.yaml in the case's folder or above)")
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
-    .action(async (file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io));
+    .action(async (file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean; materials?: string }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io));
 
   program
     .command('resize')
@@ -74,7 +75,8 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .command('materials')
     .description('list the built-in materials and their sources')
     .option('--json', 'print the list as JSON, SI units')
-    .action(async (opts: { json?: boolean }) => (await import('./commands/materials.ts')).materialsCommand(opts, io));
+    .option('--yaml', "print the list in the case file's form (materials:), to start a case's or a site's own from")
+    .action(async (opts: { json?: boolean; yaml?: boolean }) => (await import('./commands/materials.ts')).materialsCommand(opts, io));
 
   program
     .command('new')
@@ -92,11 +94,21 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none)', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
+    .option('--materials <file>', "the site's materials catalogue (default: the nearest materials.yaml in the case's folder or above)")
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
-    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number; strict?: boolean }) => {
+    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number; strict?: boolean; materials?: string }) => {
       const { reportCommand } = await import('./commands/report.ts');
       await reportCommand(file, opts, io, clock());
     });
+
+  program
+    .command('log')
+    .description('the incident log of every case under a folder: one row per incident, rollups and the fatigue they add up to per asset')
+    .argument('<dir>', 'a folder of case files and case folders')
+    .option('--csv', 'print one CSV row per incident')
+    .option('--json', 'print one JSON object, SI units')
+    .option('--html <file>', 'also write a self-contained page with the figures (a new file, never overwritten)')
+    .action(async (dir: string, opts: { csv?: boolean; json?: boolean; html?: string }) => (await import('./commands/log.ts')).logCommand(dir, opts, io, clock()));
 
   // Each command loads its own modules when it runs (\`await import\`), so --help and a quick
   // check load no more than they use; the report's libraries load only for report.

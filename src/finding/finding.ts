@@ -11,6 +11,7 @@ import type { Results } from '../results/results.ts';
 import type { DriveTrainElement } from '../results/drive-train.ts';
 import type { TwistFindingCode } from '../results/twist-findings.ts';
 import { findingChance, type FindingChance } from './finding-chance.ts';
+import { incidentFatigue, type IncidentFatigue } from './incident-fatigue.ts';
 
 /**
  * The states of a shaft after the incident, in the trade's words. `yielded locally`: the net section
@@ -73,6 +74,8 @@ export interface Finding {
   driveTrain: OrderedElement[];
   /** The weakest element of the drive train (`driveTrain[0]`). */
   weakest: OrderedElement | undefined;
+  /** The incident's fatigue at the governing piece's stress raiser: its cycles and damage. */
+  fatigue: IncidentFatigue;
 }
 
 /** A drive-train element with its place in the order of giving way (1: first). */
@@ -116,6 +119,7 @@ export function decideFinding(r: Results): Finding {
     disposition: disposition(verdict, brittle),
     driveTrain,
     weakest: driveTrain[0],
+    fatigue: incidentFatigue(material, g.piece.segment.kt, g.shearStress, g.elasticTorque, r.dynamic.histories),
   };
 }
 

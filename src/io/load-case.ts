@@ -1,10 +1,11 @@
 import { createHash } from 'node:crypto';
 import { readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { basename, dirname, join, resolve } from 'node:path';
 import { CaseError } from '../case/case-error.ts';
 import type { Case } from '../case/case.ts';
 import { parseCase } from '../case/parse-case.ts';
 import { SIZE_LIMITS } from '../case/limits.ts';
+import { parseSiteCatalogue, type SiteCatalogue } from '../case/site-materials.ts';
 
 /** A case as read from disk: the checked case, the file it came from, its text and SHA-256. */
 export interface LoadedCase {
@@ -13,6 +14,51 @@ export interface LoadedCase {
   file: string;
   text: string;
   sha256: string;
+  /** The site's materials catalogue the case read, with its path and text (the report bundles it). */
+  site?: { path: string; text: string; catalogue: SiteCatalogue };
+}
+
+/** The site catalogue's name, looked for in the case's folder and each folder above it. */
+export const SITE_CATALOGUE = 'materials.yaml';
+/** How many folders up the search goes (far more than any plant's folder tree). */
+const SITE_SEARCH_LEVELS = 64;
+
+/** The nearest materials.yaml in the folder of `caseFile` or above it; undefined when there is none. */
+export function findSiteCatalogue(caseFile: string): string | undefined {
+  let dir = dirname(resolve(caseFile));
+  for (let i = 0; i < SITE_SEARCH_LEVELS; i++) {
+    const candidate = join(dir, SITE_CATALOGUE);
+    try {
+      if (statSync(candidate).isFile()) return candidate;
+    } catch {
+      // not here
+    }
+    const up = dirname(dir);
+    if (up === dir) return undefined;
+    dir = up;
+  }
+  return undefined;
+}
+
+/** Reads and checks a site catalogue. Throws `CaseError` (naming the catalogue) for its mistakes. */
+export function loadSiteCatalogue(path: string): NonNullable<LoadedCase['site']> {
+  let bytes: Buffer;
+  try {
+    if (statSync(path).size > SIZE_LIMITS.fileBytes) throw new CaseError(path, [{ code: 'E_FILE', path: '', message: `the materials catalogue is more than ${SIZE_LIMITS.fileBytes / 1e6} MB; a catalogue needs a few kilobytes` }]);
+    bytes = readFileSync(path);
+  } catch (e) {
+    if (e instanceof CaseError) throw e;
+    const code = (e as NodeJS.ErrnoException).code;
+    throw new CaseError(path, [{ code: 'E_FILE', path: '', message: `cannot read the materials catalogue (${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message}); give the path of a materials .yaml file` }]);
+  }
+  const text = decodeUtf8(path, bytes);
+  try {
+    return { path, text, catalogue: parseSiteCatalogue(text, basename(path), createHash('sha256').update(text).digest('hex')) };
+  } catch (e) {
+    // The messages name the catalogue by its path, as a case file's name its file.
+    if (e instanceof CaseError) throw new CaseError(path, e.problems);
+    throw e;
+  }
 }
 
 /** Where the case file of `path` is: the path itself, or `case.yaml` inside a case folder. */
@@ -24,8 +70,12 @@ export function caseFilePath(path: string): string {
   }
 }
 
-/** Reads and checks a case file (or a case folder's `case.yaml`). Throws `CaseError` for the user's mistakes. */
-export function loadCase(path: string): LoadedCase {
+/**
+ * Reads and checks a case file (or a case folder's `case.yaml`) with the site's materials
+ * catalogue: `materials` names it, else the nearest materials.yaml up the tree is read, if any.
+ * Throws `CaseError` for the user's mistakes.
+ */
+export function loadCase(path: string, opts: { materials?: string } = {}): LoadedCase {
   const file = caseFilePath(path);
   let bytes: Buffer;
   try {
@@ -41,7 +91,9 @@ export function loadCase(path: string): LoadedCase {
     throw new CaseError(file, [{ code: 'E_FILE', path: '', message: `cannot read the case file (${why}); give the path of a case .yaml file or a case folder` }]);
   }
   const text = decodeUtf8(file, bytes);
-  return { case: parseCase(text, file), file, text, sha256: createHash('sha256').update(text).digest('hex') };
+  const sitePath = opts.materials ?? findSiteCatalogue(file);
+  const site = sitePath === undefined ? undefined : loadSiteCatalogue(sitePath);
+  return { case: parseCase(text, file, site?.catalogue), file, text, sha256: createHash('sha256').update(text).digest('hex'), ...(site ? { site } : {}) };
 }
 
 /** The file's text; a file that is not UTF-8 is refused at its first bad byte, not read with replacement characters. */

@@ -18,6 +18,8 @@ export interface WriteReportInput {
   caseFile: string;
   caseText: string;
   photos: readonly PhotoFile[];
+  /** The site's materials catalogue the case read: bundled beside the case file as materials.yaml, so the bundle reproduces the report. */
+  siteCatalogue?: string;
   files: readonly ReportFile[];
   /** The case's id: the start of the folder's name, made safe for a file name (`fileSafeId`). */
   caseId: string;
@@ -43,8 +45,9 @@ const STALE_AFTER_MS = 24 * 3600 * 1000;
 
 /**
  * Writes a new report folder `reports/ID-DATE[-N]/` beside the case file (ID the case's id made
- * safe for a file name, `reportBaseName`), and `reports/ID-DATE[-N].zip`
- * with the folder, the case file, its photos and MANIFEST.txt. Nothing is ever overwritten or
+ * safe for a file name, `reportBaseName`), and `reports/ID-DATE[-N].zip` with the folder, the case
+ * file, the site's materials catalogue where the case read one, its photos and MANIFEST.txt.
+ * Nothing is ever overwritten or
  * deleted. The folder is written under a hidden temporary name with the finished zip inside it
  * (under a hidden name); the folder is renamed into place (a rename onto a folder that holds
  * anything fails, so the folder's name is the run's claim), and the zip is then linked beside it
@@ -84,6 +87,7 @@ export async function writeReport(input: WriteReportInput): Promise<WrittenRepor
       const bundle: BundleFile[] = [
         ...input.files.map((f) => ({ path: `${REPORTS_FOLDER}/${name}/${f.path}`, data: bytes(f.data) })),
         { path: safeEntryPath(basename(input.caseFile)), data: bytes(input.caseText) },
+        ...(input.siteCatalogue === undefined ? [] : [{ path: 'materials.yaml', data: bytes(input.siteCatalogue) }]),
         ...input.photos.map((p) => ({ path: safeEntryPath(p.path), data: p.data })),
       ];
       writeFileSync(join(temp, PENDING_ZIP), await buildBundle(bundle, input.ranAt));

@@ -1,3 +1,8 @@
+import type { StrainLifeProperties } from '../physics/fatigue/strain-life-properties.ts';
+
+/** A material's cyclic stress–strain and strain–life constants (E is the material's own). */
+export type CyclicProperties = Omit<StrainLifeProperties, 'elasticModulus'>;
+
 /** A material's properties, SI. Optional fields are those some uses do not need. */
 export interface Material {
   /** Key used in case files, e.g. `aisi-1045-cd`. */
@@ -22,6 +27,11 @@ export interface Material {
   reductionOfArea?: number;
   /** Outer-fibre shear strain at which a round bar breaks in torsion, rad (dimensionless); overrides the estimate from reduction of area. */
   fractureStrain?: number;
+  /**
+   * Cyclic and strain–life constants (K′, n′, σ′_f, b, ε′_f, c) from the case, all six or none;
+   * without them the fatigue of a jam estimates them from the tensile strength.
+   */
+  cyclic?: CyclicProperties;
   /** Whether the strengths are published minima or typical (mean) values. */
   strengthBasis?: 'minimum' | 'typical';
   /** Where each value comes from, with "from memory" where it is recalled rather than read. */

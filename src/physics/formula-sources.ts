@@ -112,4 +112,19 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     formula: 'T = π·μ·p·d²·L/2',
     source: 'Shigley 9th ed., Sec. 7-8 (from memory, confident; section number: verify)',
   },
+  {
+    what: 'Local stress and strain range at a notch (fatigue of a jam)',
+    formula: 'Δσ·Δε = (kt·ΔS)²/E on the Masing branch Δε = Δσ/E + 2(Δσ/2K′)^(1/n′); torsion as the von Mises equivalent √3·τ',
+    source: 'Neuber, J. Appl. Mech. 28, 1961; Dowling, Mechanical Behavior of Materials, 4th ed., Ch. 12 and 14; Socie & Marquis, Multiaxial Fatigue, 2000 (from memory)',
+  },
+  {
+    what: 'Life to crack initiation at a strain amplitude',
+    formula: 'ε_a = (σ′_f/E)(2N)^b + ε′_f(2N)^c; constants where the case gives none by the uniform material law (steel: σ′_f = 1.5 S_u, b = −0.087, ε′_f = 0.59ψ, c = −0.58, K′ = 1.65 S_u, n′ = 0.15)',
+    source: 'Coffin–Manson–Basquin as in Dowling 4th ed., Ch. 14; Bäumel & Seeger, Materials Data for Cyclic Loading, Suppl. 1, 1990 (from memory)',
+  },
+  {
+    what: 'Cycles of the ring-down and the damage they add',
+    formula: 'rainflow counting; D = Σ nᵢ/Nᵢ',
+    source: 'ASTM E1049-85 (2017), Sec. 5.4.4; Palmgren 1924, Miner 1945 (from memory)',
+  },
 ];

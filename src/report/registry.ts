@@ -20,6 +20,7 @@ import { couplingsSection } from './sections/couplings.ts';
 import { driveTrainSection } from './sections/drive-train.ts';
 import { backlashSection } from './sections/backlash.ts';
 import { recommendationsSection } from './sections/recommendations.ts';
+import { fatigueSection } from './sections/fatigue.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
 import { appendixSection } from './sections/appendix.ts';
@@ -65,6 +66,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   observationsSection,
   findingsSection,
   howSureSection,
+  fatigueSection,
   recommendationsSection,
   cautionsSection,
   sourcesSection,

@@ -40,7 +40,7 @@ const LOCAL_YIELD = 'The net section stays elastic, but the stress at a stress r
 /** Runs the engine on a checked case. Pure: no I/O, no clock. */
 export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
   const model = buildShaftModel(c);
-  const warnings: string[] = [];
+  const warnings: string[] = [...(c.materialWarnings ?? [])];
   const sides = model.sides.map((side) => energyMethodSide(side, c.speed, c.materials, c.analysis.criterion));
   const dynamic = dynamicResult(opts.elements === undefined ? c : { ...c, analysis: { ...c.analysis, elements: opts.elements } }, model, sides);
   const basis = verdictBasis(c, sides);

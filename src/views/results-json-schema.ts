@@ -151,6 +151,10 @@ const CHECK: Record<string, Json> = {
     required: ['element', 'kind', 'station_or_segment', 'capacity_Nm', 'torque_Nm', 'ratio', 'order'],
     additionalProperties: false,
   }),
+  asset: orNull(str("The machine's asset tag (case.asset).")),
+  materials_catalogue: orNull(open("The site's materials catalogue the case read: its file and SHA-256.", { file: str('Its file.'), sha256: str('Its SHA-256.') })),
+  fatigue: open('The fatigue of this jam at the governing stress raiser: its cycles, life and damage (Miner fraction).'),
+  asset_history: open("This incident's place in its asset's history (where the log finds the other incidents)."),
   finding: FINDING,
 };
 
@@ -166,7 +170,7 @@ const REPORT: Record<string, Json> = {
 
 /** The JSON Schema of `check --json` and results.json. */
 export function resultsJsonSchema(): Json {
-  const required = Object.keys(CHECK).filter((k) => k !== 'uncertainty');
+  const required = Object.keys(CHECK).filter((k) => k !== 'uncertainty' && k !== 'asset_history');
   return {
     $schema: 'https://json-schema.org/draft/2020-12/schema',
     title: 'shaftcase results (check --json, results.json)',

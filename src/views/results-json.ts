@@ -1,6 +1,7 @@
 import type { PieceResult, SideResult } from '../physics/energy-method.ts';
 import type { DynamicResult } from '../results/dynamic-result.ts';
 import type { Investigation } from '../finding/investigation.ts';
+import { assetHistoryToJson, fatigueToJson } from './fatigue-json.ts';
 import { findingToJson } from './finding-json.ts';
 import { driveTrainJson } from './drive-train-table.ts';
 import { couplingCheckJson, fitCheckJson, keyCheckJson } from './hub-json.ts';
@@ -49,6 +50,10 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
     couplings: r.couplings.map(couplingCheckJson),
     drive_train: driveTrainJson(r.finding),
     finding: findingToJson(r.finding, r.case.units),
+    asset: r.case.meta.asset ?? null,
+    materials_catalogue: r.case.materialCatalogue ? { file: r.case.materialCatalogue.file, sha256: r.case.materialCatalogue.sha256 } : null,
+    fatigue: fatigueToJson(r.finding.fatigue),
+    ...(r.assetHistory ? { asset_history: assetHistoryToJson(r.assetHistory) } : {}),
   };
 }
 

@@ -1,3 +1,4 @@
+import { assetHistorySentences, FATIGUE_CAUTIONS, fatigueSentence } from './fatigue-words.ts';
 import type { PieceResult } from '../physics/energy-method.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import type { Results } from '../results/results.ts';
@@ -108,6 +109,9 @@ export function renderSummary(r: Investigation): string {
   const sure = renderUncertaintyLines(r);
   if (sure.length > 0) out.push('', ...sure);
   out.push(...observedLines(r));
+  out.push('', fatigueSentence(f.fatigue));
+  if (r.assetHistory) out.push(...assetHistorySentences(r.assetHistory).map((l) => `  ${l}`));
+  out.push(...FATIGUE_CAUTIONS.map((c) => `  ${c}`));
   out.push('', ...comparisonLines(r, pastYield));
   if (r.warnings.length > 0) {
     out.push('');

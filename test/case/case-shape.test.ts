@@ -14,12 +14,12 @@ const TEMPLATES = new URL('../../templates/', import.meta.url);
 
 /** Snippets that, with the sample cases, reach the keys no sample case has (read even where a snippet is refused). */
 const SNIPPETS = [
-  `case: { id: S-1, title: t, occurred: 2026-01-02, machine: m, site: s, ticket: k, investigator: i, notes: n }
+  `case: { id: S-1, title: t, occurred: 2026-01-02, machine: m, asset: A-1, site: s, ticket: k, investigator: i, notes: n }
 units: metric
 speed: 1000 rpm
 stop: { at: a, duration: 10 ms, torque_capacity: 900 N*m }
 materials:
-  own: { name: x, shear_modulus: 80 GPa, elastic_modulus: 205 GPa, density: 7850 kg/m^3, yield_strength: 500 MPa, tensile_strength: 600 MPa, elongation: 12 %, reduction_of_area: 40 %, fracture_strain: 1.1, strength_basis: minimum, source: cert }
+  own: { name: x, shear_modulus: 80 GPa, elastic_modulus: 205 GPa, density: 7850 kg/m^3, yield_strength: 500 MPa, tensile_strength: 600 MPa, elongation: 12 %, reduction_of_area: 40 %, fracture_strain: 1.1, poisson_ratio: 0.29, cyclic_strength_coefficient: 1258 MPa, cyclic_hardening_exponent: 0.208, fatigue_strength_coefficient: 1227 MPa, fatigue_strength_exponent: -0.095, fatigue_ductility_coefficient: 1.0, fatigue_ductility_exponent: -0.66, strength_basis: minimum, source: cert }
 shaft:
   material: own
   segments:
@@ -72,7 +72,7 @@ function reads(): { file: string; path: Path; read: FieldRead }[] {
   const out: { file: string; path: Path; read: FieldRead }[] = [];
   for (const { name, text } of corpus()) {
     try {
-      parseCase(text, name, (path, read) => out.push({ file: name, path: [...path], read }));
+      parseCase(text, name, undefined, (path, read) => out.push({ file: name, path: [...path], read }));
     } catch {
       // refused cases are read all the same: the readers collect every problem
     }

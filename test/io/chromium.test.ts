@@ -38,6 +38,7 @@ describe.skipIf(missing && !inCI)('report.html in headless Chromium (skipped wit
   let htmlFile: string;
   let figureCount: number;
   let toleranced: string;
+  let logPage: string;
 
   beforeAll(async () => {
     const dir = join(tempFolder(), 'case');
@@ -55,6 +56,12 @@ describe.skipIf(missing && !inCI)('report.html in headless Chromium (skipped wit
     copyFileSync(TOLERANCED_SAMPLE, join(tol, 'case.yaml'));
     expect((await cli(['report', '--samples', '2000', tol])).code).toBe(0);
     toleranced = readFileSync(join(tol, 'reports', 'DEMO-SC-0342-2026-12-01', 'report.html'), 'utf8'); // the temp folder goes after the first test
+    // The incident log of the CV-7 sample series (four invented jams of one head shaft).
+    const plant = tempFolder();
+    for (let i = 1; i <= 4; i++) copyFileSync(new URL(`../../sample-cases/conveyor-cv7-jam-${i}.yaml`, import.meta.url), join(plant, `jam-${i}.yaml`));
+    const logFile = join(plant, 'log.html');
+    expect((await cli(['log', '--html', logFile, plant])).code).toBe(0);
+    logPage = readFileSync(logFile, 'utf8');
     browser = await launchChromium();
   });
 
@@ -119,5 +126,24 @@ describe.skipIf(missing && !inCI)('report.html in headless Chromium (skipped wit
     // Chromium rounds A4 to whole CSS pixels at 96 per inch: 794 × 1123 px = 595.5 × 842.25 pt, written as 595.92 × 842.88.
     expect(a4.toString('latin1')).toMatch(/\/MediaBox \[0 0 59[56]\.\d+ 84[23]\.\d+\]/);
     expect(letter.toString('latin1')).toMatch(/\/MediaBox \[0 0 612 792\]/);
+  });
+
+  it('the incident log page draws its three figures at a size, with an incident marker per jam and the line of 1, and no console error', async () => {
+    const page = await browser.newPage();
+    const errors: string[] = [];
+    page.on('console', (m) => {
+      if (m.type() === 'error') errors.push(m.text());
+    });
+    await page.setContent(logPage, { waitUntil: 'load' });
+    for (const name of ['Incidents over time per asset', 'Cumulative fatigue damage per asset', 'Stress over shear yield per incident']) {
+      const box = await page.locator(`.figure[aria-label="${name}"] svg`).boundingBox();
+      expect(box!.width, name).toBeGreaterThan(300);
+      expect(box!.height, name).toBeGreaterThan(100);
+    }
+    expect(await page.locator('[aria-description="incident"] path, [aria-description="incident"] circle').count()).toBe(4);
+    expect(await page.locator('[aria-description="life limit"]').count()).toBe(1);
+    expect(await page.getByText(/CV-7 head shaft's "coupling keyseat" has used about/).isVisible()).toBe(true);
+    expect(errors).toEqual([]);
+    await page.close();
   });
 });

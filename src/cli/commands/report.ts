@@ -15,6 +15,7 @@ import { reportJson } from '../../report/report-json.ts';
 import { runInfo } from '../../report/run-info.ts';
 import { reportTablesCsv } from '../../report/tables-csv.ts';
 import { findingSentence } from '../../views/finding-words.ts';
+import { withAssetHistory } from '../asset-history.ts';
 import { screenInputs } from '../input-warnings.ts';
 import type { Io } from '../io.ts';
 import { version } from '../version.ts';
@@ -30,17 +31,21 @@ export interface ReportOptions {
   factor?: number;
   /** Plausibility warnings become errors (exit 2), as for `check`. */
   strict?: boolean;
+  /** The site's materials catalogue (else materials.yaml up the tree). */
+  materials?: string;
 }
 
 /** `shaftcase report CASE`: a new dated report folder and its zip beside the case. */
 export async function reportCommand(path: string, opts: ReportOptions, io: Io, now: Date): Promise<void> {
-  const loaded = loadCase(path);
+  const loaded = loadCase(path, { materials: opts.materials });
   const inputWarnings = screenInputs(loaded, opts.strict, io);
   // What is read from disk first, so a missing template or photo is reported before any computing.
   const template = readTemplate(opts.template);
   const photos = readPhotos(loaded.file, loaded.text, loaded.case.observed.photos);
   // Everything the report shows is computed here, once; rendering only reads it.
-  const data = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
+  const computed = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
+  // A case of an asset: its place in the history, from the cases around it.
+  const data = { ...computed, results: withAssetHistory(loaded, computed.results) };
   const { results } = data;
   const run = runInfo(now, version());
   const source = { file: basename(loaded.file), text: loaded.text, sha256: loaded.sha256 };
@@ -70,9 +75,9 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
     }
   }
 
-  const written = await writeReport({ caseFile: loaded.file, caseText: loaded.text, photos, files, caseId: loaded.case.meta.id, date: run.date, ranAt: now });
+  const written = await writeReport({ caseFile: loaded.file, caseText: loaded.text, photos, files, caseId: loaded.case.meta.id, date: run.date, ranAt: now, ...(loaded.site ? { siteCatalogue: loaded.site.text } : {}) });
   const lines = [`Wrote the report ${written.folder}/`, ...files.map((f) => `  ${f.path}`)];
-  lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
+  lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${loaded.site ? 'the materials catalogue, ' : ''}${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
   lines.push(`Open ${written.folder}/report.html`);
   lines.push(`Finding: ${findingSentence(results.finding, results.case.units)}`);
   io.out(lines.join('\n') + '\n');
