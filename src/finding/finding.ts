@@ -19,6 +19,12 @@ import { findingChance, type FindingChance } from './finding-chance.ts';
  */
 export type FindingVerdict = 'elastic' | 'yielded locally' | 'yielded' | 'fracture predicted';
 
+/**
+ * What happens to the shaft, in the plant's words: it may go back after the checks, it is inspected
+ * (crack test at the stress raiser) before anyone decides, or it is replaced.
+ */
+export type FindingAction = 'return to service' | 'inspect before return' | 'replace';
+
 /** The model a finding stands on. The energy method's result past yield is the energy balance. */
 export type FindingBasis = 'energy method' | 'dynamic model';
 
@@ -65,6 +71,8 @@ export interface Finding {
   measured: MeasuredTwistFinding[];
   /** What to do next, one line. */
   disposition: string;
+  /** The disposition in three words: the decision the person who signs makes. */
+  action: FindingAction;
 }
 
 /** Decides the finding from the results. Pure. */
@@ -100,6 +108,7 @@ export function decideFinding(r: Results): Finding {
       speedForMeasured: f.speedForMeasured,
     })),
     disposition: disposition(verdict, brittle),
+    action: actionOf(verdict, brittle),
   };
 }
 
@@ -158,6 +167,13 @@ const DISPOSITION: Record<FindingVerdict, string> = {
   'yielded locally': 'Not returned to service on this calculation alone: inspect the stress raiser named above for cracks (magnetic particle or dye penetrant) before any decision; a repeat of the incident uses up its fatigue life.',
   elastic: 'May go back after inspection: no yield is predicted; inspect keys, hubs, couplings and the shaft\'s runout before return to service.',
 };
+
+/** Replace where the section yielded through or broke (or brittle material passed its strength); inspect where it yielded at a stress raiser only. */
+function actionOf(verdict: FindingVerdict, brittle: boolean): FindingAction {
+  if (verdict === 'elastic') return 'return to service';
+  if (verdict === 'yielded locally' && !brittle) return 'inspect before return';
+  return 'replace';
+}
 
 function disposition(verdict: FindingVerdict, brittle: boolean): string {
   if (brittle && verdict === 'yielded locally') {

@@ -53,7 +53,7 @@ function figure(r: Results, f: TwistFinding, i: number): ReportFigure {
   const [a, b] = f.measurement.between;
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
-    height: 400,
+    height: 300,
     marginLeft: 60,
     marginBottom: 45,
     x: { label: `speed at the stop (${unitLabel('speed', u)})`, domain: [0, curve[curve.length - 1].x] },

@@ -38,7 +38,7 @@ export function stressAlongShaftFigure(r: Results): ReportFigure | undefined {
   const firstYield = yieldPts.reduce((a, b) => (b.x < a.x ? b : a));
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
-    height: 320,
+    height: 270,
     marginLeft: 60,
     marginRight: 20,
     x: { domain: [0, shaftEnd], label: `position from the shaft's start (${unitLabel('length', u)})`, labelAnchor: 'center' },

@@ -38,7 +38,7 @@ export function stressVsSpeedFigure(r: Results): ReportFigure | undefined {
   const yieldShown = yieldSpeed <= SPAN * r.speed;
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
-    height: 320,
+    height: 270,
     marginLeft: 60,
     marginRight: 20,
     x: { domain: [0, xMax], label: `speed at the stop (${unitLabel('speed', u)})`, labelAnchor: 'center' },

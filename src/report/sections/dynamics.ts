@@ -14,6 +14,11 @@ const MAX_EVENTS = 12;
  * show, the located events, and the model's assumptions. Every number comes from `Results`.
  */
 export function renderDynamicsSection(r: Results): string {
+  return `${renderDynamicsBody(r)}\n${renderDynamicsDetails(r)}`;
+}
+
+/** The dynamic model's evidence for the finding: its chain, energy method against it per side, peak torque along the shaft, what slipped. */
+export function renderDynamicsBody(r: Results): string {
   const d = r.dynamic;
   const u = r.case.units;
   const out: string[] = [];
@@ -48,6 +53,13 @@ export function renderDynamicsSection(r: Results): string {
   }
 
   out.push(...protectionLines(r, d));
+  return out.join('\n') + '\n';
+}
+
+/** The dynamic model's full tables: natural frequencies, located events, its assumptions and numerics. */
+export function renderDynamicsDetails(r: Results): string {
+  const d = r.dynamic;
+  const out: string[] = [];
   out.push(...frequencyLines(r, d));
 
   if (d.events.length > 0) {
@@ -133,9 +145,13 @@ function frequencyLines(r: Results, d: DynamicResult): string[] {
   return out;
 }
 
-/** The dynamics section in the report's registry. */
+/**
+ * The dynamic model's details, an appendix where the finding stands on it (its evidence is in the
+ * body, "Results of the governing model"); where the finding stands on the energy method, the whole
+ * dynamic model is the other model, shown in the appendix "the other model, for comparison".
+ */
 export const dynamicsSection: ReportSection = {
   id: 'dynamics',
-  title: 'After the stop: the torsional chain in time',
-  render: ({ results }) => renderDynamicsSection(results),
+  title: 'Appendix: the dynamic model in detail',
+  render: ({ results }) => (results.finding.basis === 'dynamic model' ? renderDynamicsDetails(results) : undefined),
 };

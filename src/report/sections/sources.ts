@@ -5,7 +5,7 @@ import type { ReportSection } from '../report-context.ts';
 /** Where every formula and every material value comes from. */
 export const sourcesSection: ReportSection = {
   id: 'sources',
-  title: 'Sources',
+  title: 'Appendix: materials and sources',
   render({ results: r }) {
     const formulas = FORMULA_SOURCES.map((f) => escapeMarkdown(`${f.what}: ${f.formula}. ${f.source}.`));
     const materials = Object.values(r.case.materials)
