@@ -196,6 +196,9 @@ describe('renderReport', () => {
 
   it('the sources list the formulas past yield, of the fracture, the key, the drive and the Monte Carlo', () => {
     const sources = section(report('sample').md, 'Appendix: materials and sources');
+    // Each source named once, what was entered from memory said once (the library keeps its per-value flags).
+    expect(sources.match(/from memory/gi)).toHaveLength(1);
+    expect(sources).toContain('AISI 1045 steel, cold drawn (aisi-1045-cd): strengths: Shigley 9th ed. Table A-20, estimated ASTM minimum; elastic constants and density: Shigley 9th ed. Table A-5. (†)');
     for (const s of ['Beer & Johnston, Mechanics of Materials, Sec. 3.9–3.11', 'Dieter, Mechanical Metallurgy, 3rd ed., Sec. 8-3', 'ASM Handbook Vol. 11', 'Shigley 9th ed., Sec. 7-7', 'T = P/ω', 'mulberry32', 'Box & Muller', 'Hyndman & Fan']) expect(sources).toContain(s);
   });
 
