@@ -3,6 +3,7 @@ import { basename, dirname, join } from 'node:path';
 import { buildBundle, safeEntryPath, type BundleFile } from '../report/bundle.ts';
 import { nextReportName, REPORTS_FOLDER } from '../report/layout.ts';
 import type { PhotoFile } from './read-photos.ts';
+import { reportBaseName } from './report-name.ts';
 import { systemFault } from './system-fault.ts';
 import { tempNameBeside } from './write-new-file.ts';
 
@@ -18,7 +19,9 @@ export interface WriteReportInput {
   caseText: string;
   photos: readonly PhotoFile[];
   files: readonly ReportFile[];
-  /** The run's local date, `YYYY-MM-DD`: the folder's name. */
+  /** The case's id: the start of the folder's name, made safe for a file name (`fileSafeId`). */
+  caseId: string;
+  /** The run's local date, `YYYY-MM-DD`: the end of the folder's name. */
   date: string;
   /** The run's moment, stamped on every zip entry. */
   ranAt: Date;
@@ -39,7 +42,8 @@ const PENDING_ZIP = '.bundle.zip.pending';
 const STALE_AFTER_MS = 24 * 3600 * 1000;
 
 /**
- * Writes a new report folder `reports/DATE[-N]/` beside the case file, and `reports/DATE[-N].zip`
+ * Writes a new report folder `reports/ID-DATE[-N]/` beside the case file (ID the case's id made
+ * safe for a file name, `reportBaseName`), and `reports/ID-DATE[-N].zip`
  * with the folder, the case file, its photos and MANIFEST.txt. Nothing is ever overwritten or
  * deleted. The folder is written under a hidden temporary name with the finished zip inside it
  * (under a hidden name); the folder is renamed into place (a rename onto a folder that holds
@@ -59,7 +63,8 @@ export async function writeReport(input: WriteReportInput): Promise<WrittenRepor
     throw fault(e, 'the reports folder', reports);
   }
   tidyReports(reports);
-  const temp = tempNameBeside(join(reports, input.date));
+  const base = reportBaseName(input.caseId, input.date);
+  const temp = tempNameBeside(join(reports, base));
   try {
     mkdirSync(temp); // not mkdtemp: that makes the folder private (0700), and it becomes the report
   } catch (e) {
@@ -72,7 +77,7 @@ export async function writeReport(input: WriteReportInput): Promise<WrittenRepor
       writeFileSync(path, f.data);
     }
     for (let attempt = 0; attempt < 100; attempt++) {
-      const name = nextReportName(input.date, new Set(readdirSync(reports)));
+      const name = nextReportName(base, new Set(readdirSync(reports)));
       const folder = join(reports, name);
       const zip = join(reports, `${name}.zip`);
       // The report's own files first: where a user's name collides, the user's file is renamed.

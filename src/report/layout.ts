@@ -14,7 +14,7 @@ export function tableHref(name: string): string {
 }
 
 /**
- * A photo's link from report.md (in `reports/DATE/`) back to the case folder. Each path segment is
+ * A photo's link from report.md (in `reports/ID-DATE/`) back to the case folder. Each path segment is
  * percent-encoded so spaces and brackets cannot end the Markdown link early.
  */
 export function photoHref(path: string): string {
@@ -27,12 +27,12 @@ export function photoHref(path: string): string {
 }
 
 /**
- * The name of a new report: the run's date, or the date with -2, -3 … when a folder or zip of that
- * name is already there. `taken` holds the names present in the reports folder.
+ * The name of a new report: its base (`<case-id>-YYYY-MM-DD`, src/io/report-name.ts), or the base
+ * with -2, -3 … when a folder or zip of that name is already there. `taken` holds the names present in the reports folder.
  */
-export function nextReportName(date: string, taken: ReadonlySet<string>): string {
+export function nextReportName(base: string, taken: ReadonlySet<string>): string {
   for (let n = 1; ; n++) {
-    const name = n === 1 ? date : `${date}-${n}`;
+    const name = n === 1 ? base : `${base}-${n}`;
     if (!taken.has(name) && !taken.has(`${name}.zip`)) return name;
   }
 }

@@ -46,6 +46,8 @@ import { uncertaintySensitivityTable } from './tables/uncertainty-sensitivity-ta
 /** The report's sections, in order. The template places them (`{{sections}}` or `{{section:ID}}`). */
 export const REPORT_SECTIONS: readonly ReportSection[] = [
   summarySection,
+  // The cautions next, where the people who inspect read before they start.
+  cautionsSection,
   incidentSection,
   machineSection,
   resultsSection,
@@ -54,7 +56,6 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   findingsSection,
   howSureSection,
   recommendationsSection,
-  cautionsSection,
   // The appendices: the other model, the full tables, the method, every option, the sources, the inputs.
   comparisonSection,
   dynamicsSection,

@@ -4,12 +4,17 @@ import { stopWaveTorque } from '../physics/stop-wave.ts';
 import { designRun } from './design-run.ts';
 import type { DynamicPiece } from '../results/dynamic-result.ts';
 import type { Results } from '../results/results.ts';
-import { limiterSegment, withLimiter } from './limiter-segment.ts';
+import { limiterPlace, withLimiter } from './limiter-segment.ts';
 
 /** What the dynamic model says a limiter does in a repeat incident of the changed case. */
 export interface DynamicLimiterSlip {
-  /** Index into `shaft.segments` of the segment the limiter was put in. */
+  /** Index into the case's `shaft.segments` of the segment the limiter was put in (cut at its station where the station lies inside it). */
   segment: number;
+  /** The ends of the piece of that segment that holds the limiter in the rerun, m. */
+  from: number;
+  to: number;
+  /** The case already had a limiter on that run, and the option resets it there. */
+  existing: boolean;
   peakTorque: number;
   slipEnergy: number;
   slipAngle: number;
@@ -37,16 +42,17 @@ export interface StopWave {
 const ABOVE_SETTING = 0.1;
 
 /**
- * The limiter put into the case as a slip element (`slip_torque` on the segment that
- * `limiterSegment` picks) and the changed case rerun through the engine; the slip energy and angle
+ * The limiter put into the case as a slip element (`slip_torque` on the piece of shaft beside its
+ * station that `limiterPlace` cuts) and the changed case rerun through the engine; the slip energy and angle
  * are those of that element in `results.dynamic.slips`, the peak torque the dynamic model's largest
  * over the pieces from the limiter's station to the stop. Undefined when no segment can hold it.
  */
 export function dynamicLimiterSlip(c: Case, station: string, side: SideName, setting: number): DynamicLimiterSlip | undefined {
-  const seg = limiterSegment(c, station);
-  if (!seg) return undefined;
-  const rerun = designRun(withLimiter(c, seg.index, setting));
+  const place = limiterPlace(c, station);
+  if (!place) return undefined;
+  const rerun = designRun(withLimiter(place.case, place.segment, setting));
   const d = rerun.dynamic;
+  const seg = place.case.shaft.segments[place.segment];
   const name = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
   const slip = d.slips.find((s) => s.kind === 'torque limiter' && s.element === `the torque limiter in ${name}`);
   if (!slip) return undefined;
@@ -56,7 +62,10 @@ export function dynamicLimiterSlip(c: Case, station: string, side: SideName, set
   const peakTorque = Math.max(0, ...run.map((p) => p.peakTorque));
   const wave = stopWaveAbove(c, run, setting, peakTorque);
   return {
-    segment: seg.index,
+    segment: place.original.index,
+    from: place.start,
+    to: place.end,
+    existing: place.existing,
     peakTorque,
     slipEnergy: slip.energy,
     slipAngle: slip.angle,

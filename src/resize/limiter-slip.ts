@@ -29,6 +29,11 @@ export interface LimiterSlip {
   method: string;
   /** Dynamic model: the segment (index into `shaft.segments`) the limiter was put in. */
   segment?: number;
+  /** Dynamic model: the ends of the piece of that segment that held the limiter, m (the segment cut at the limiter's station). */
+  modelledFrom?: number;
+  modelledTo?: number;
+  /** Dynamic model: the case already had a limiter on the run, and it was reset rather than one added at the station. */
+  modelledInExisting?: boolean;
   /** Dynamic model: the limited side's highest stress / shear yield in the rerun. */
   yieldRatio?: number;
   /** Dynamic model: energy its damping took in the rerun, J. */
@@ -64,15 +69,15 @@ export interface LimiterPlace {
  * A limiter's slip in a repeat incident. Where the case's verdict stands on the dynamic model
  * (a drive, belt, stop ramp, several masses), the limiter is put into the case as a slip element
  * and the changed case rerun (`dynamicLimiterSlip`); where the energy method is exact, or
- * `energyOnly` is asked (the report's sweep), the energy method. When no segment between the
- * limiter's station and the stop can hold a limiter, the energy method is kept and `note` says so.
+ * `energyOnly` is asked (the report's sweep), the energy method. When the shaft beside the
+ * limiter's station cannot hold a limiter (a shear pin is there), the energy method is kept and `note` says so.
  */
 export function limiterSlip(r: Results, place: LimiterPlace, setting: number, energyOnly = false): LimiterSlip {
   const energy = energyLimiterSlip(r, place, setting);
   if (energyOnly || r.verdictBasis !== 'dynamic model') return energy;
   const d = dynamicLimiterSlip(r.case, place.station, place.side, setting);
   if (!d) {
-    return { ...energy, note: `No shaft segment between "${place.station}" and the stop can hold a limiter (each holds a station with parts, the stop or a shear pin), so the slip is the energy method's although the verdict stands on the dynamic model.` };
+    return { ...energy, note: `The shaft beside "${place.station}" toward the stop cannot hold a limiter in the model (a shear pin is there), so the slip is the energy method's although the verdict stands on the dynamic model.` };
   }
   const seg = r.case.shaft.segments[d.segment];
   const unlimited = r.dynamic.sides.find((s) => s.side === place.side)?.dynamicPeakTorque ?? energy.unlimitedTorque;
@@ -85,8 +90,11 @@ export function limiterSlip(r: Results, place: LimiterPlace, setting: number, en
     slipEnergy: d.slipEnergy,
     slipAngle: d.slipAngle,
     slipMethod: 'dynamic model',
-    method: `dynamic model: the limiter put into ${seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`} as a slip element and the changed case rerun in time`,
+    method: `dynamic model: the limiter put into ${seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`} beside "${place.station}" as a slip element and the changed case rerun in time`,
     segment: d.segment,
+    modelledFrom: d.from,
+    modelledTo: d.to,
+    modelledInExisting: d.existing,
     yieldRatio: d.yieldRatio,
     dampingWork: d.dampingWork,
     ...(d.stopWave ? { stopWave: d.stopWave } : {}),

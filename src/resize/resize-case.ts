@@ -14,6 +14,8 @@ import { scaleSide } from './scale-side.ts';
 import { stiffnessChange } from './stiffness-change.ts';
 import { STOCK_SERIES } from './stock-sizes.ts';
 import { torqueLimiter } from './torque-limiter.ts';
+import { withFlags } from './option-flags.ts';
+import { PICK_RULE, recommendOption } from './recommend.ts';
 
 export interface ResizeOptions {
   /** Design factor N on shear yield; default the case's analysis.design_factor. */
@@ -23,7 +25,9 @@ export interface ResizeOptions {
 /**
  * The options for what goes back in, side by side: scale the governing side, resize its critical
  * segment, another material, a torque limiter, the key as a fuse; each checked by rerunning the
- * changed case through the engine against a repeat of the incident, and under the running torque.
+ * changed case through the engine against a repeat of the incident, and under the running torque;
+ * each flagged where it is not advisable (src/resize/option-flags.ts) and one picked by the stated
+ * rule (src/resize/recommend.ts, `PICK_RULE`).
  * Pure: `results` is analyseCase(c).
  */
 export function resizeCase(c: Case, results: Investigation, options: ResizeOptions = {}): ResizeResult {
@@ -42,7 +46,7 @@ export function resizeCase(c: Case, results: Investigation, options: ResizeOptio
   const wheels = ratedSpeedChecks(c);
   const limited = { station: limiter.station, setting: limiter.max, sidePeakTorque: results.sides.find((s) => s.side === limiter.side)!.peakTorque };
 
-  return {
+  const flagged = withFlags({
     results,
     designFactor,
     serviceFactor,
@@ -54,11 +58,12 @@ export function resizeCase(c: Case, results: Investigation, options: ResizeOptio
     limiter: { ...limiter, running: runningCheck(c, running, designFactor) },
     keys: keyFuses(c, results, limited, running),
     ratedSpeed: wheels,
-    guarding: guardingRecommendations(wheels),
+    guarding: guardingRecommendations(c, wheels),
     stockSeries: STOCK_SERIES[c.units].text,
     notes: resizeNotes(results, limiter.slip.slipMethod === 'dynamic model', designFactor, STOCK_SERIES[c.units].text),
     cautions: results.cautions,
-  };
+  });
+  return { ...flagged, recommended: recommendOption(flagged), pickRule: PICK_RULE };
 }
 
 function resizeNotes(results: Results, dynamicSlip: boolean, designFactor: number, stockSeries: string): string[] {
@@ -66,7 +71,7 @@ function resizeNotes(results: Results, dynamicSlip: boolean, designFactor: numbe
     'Every option is checked against a repeat of the recorded incident by rerunning the changed case through the same elastic energy method; its limits (instantaneous stop, several stations on a side) apply to every option.',
     `The design factor N on shear yield is the engineer's choice (default 1.5, set by analysis.design_factor or --factor; here ${designFactor}); confirm it against the site's rules.`,
     `The service factor on the running torque (default 1.5) sets a torque limiter's lowest setting. Typical values come from the coupling or limiter maker's tables, which rate the driven machine's load (uniform, moderate shock, heavy shock) and the driver, from about 1 for uniform loads to 2 or more for heavy shock (from memory, verify against the maker's table).`,
-    `Diameters are rounded up to stock sizes (${stockSeries}). A changed diameter means the bearings, hubs, keyways and fits must be rechecked.`,
+    `Diameters are rounded up to stock sizes (${stockSeries}). The ratios shown for a scaled shaft or a resized segment are taken at the stock sizes, each bore scaled with its stock diameter (the bore ratio kept). A changed diameter means the bearings, hubs, keyways and fits must be rechecked.`,
     'A stiffer shaft passes more torque in an energy-limited stop (T = √(2E/C) and C falls as 1/d⁴, so T grows as d²): keys, hubs and couplings must be rechecked at the new peak torque.',
     results.verdictBasis === 'dynamic model'
       ? `The verdict stands on the dynamic model, so the natural-frequency changes are the ratio of the side's lowest natural frequency in the dynamic models of the option and of the present case${dynamicSlip ? ", and the limiter's slip energy, slip angle and peak torque come from the dynamic model with the limiter put into the case as a slip element (the report's sweep of settings stays the energy method's)" : "; the limiter's slip energy and angle stay the energy method's (see the limiter option for why)"}. Stiffness and peak-torque ratios are the energy method's.`

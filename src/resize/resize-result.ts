@@ -15,6 +15,24 @@ export interface OptionEffects {
   change: StiffnessChange;
 }
 
+/** Plain-word reasons an option is not advisable, each with its numbers; empty where there is none (src/resize/option-flags.ts). */
+export interface Flagged {
+  flags: string[];
+}
+
+/**
+ * An option as the result names it: `present` (the present sizes and material), `scale_side`,
+ * `critical_segment`, `material:<key>` (one of `materials`, by its key) or `limiter`, the names of
+ * the JSON's blocks. A key is never picked (it is no dependable fuse), so it has no id.
+ */
+export type OptionId = 'present' | 'scale_side' | 'critical_segment' | 'limiter' | `material:${string}`;
+
+/** The option the rule picks (src/resize/recommend.ts), with why. */
+export interface Recommended {
+  option: OptionId;
+  reason: string;
+}
+
 /**
  * What could go back in, each option checked against a repeat of the recorded incident by a rerun
  * of the changed case, and in normal running. Every view (table, JSON, report section) reads this.
@@ -28,11 +46,15 @@ export interface ResizeResult {
   maxScale: number;
   /** The present shaft in normal running. */
   present: { running: RunningCheck };
-  scaleSide: ScaleSideOption & OptionEffects;
-  criticalSegment: CriticalSegmentOption & Partial<OptionEffects>;
-  materials: (MaterialOption & OptionEffects)[];
-  limiter: LimiterOption & { running: RunningCheck };
-  keys: KeyFuse[];
+  scaleSide: ScaleSideOption & OptionEffects & Flagged;
+  criticalSegment: CriticalSegmentOption & Partial<OptionEffects> & Flagged;
+  materials: (MaterialOption & OptionEffects & Flagged)[];
+  limiter: LimiterOption & { running: RunningCheck } & Flagged;
+  keys: (KeyFuse & Flagged)[];
+  /** The one option the rule picks; undefined where every option has a flag. */
+  recommended: Recommended | undefined;
+  /** The rule of the pick, in words (`PICK_RULE`). */
+  pickRule: string;
   ratedSpeed: RatedSpeedCheck[];
   guarding: Recommendation[];
   /** The stock-size series used, in words. */

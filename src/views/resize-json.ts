@@ -1,9 +1,9 @@
 import type { KeyFuse, KeyStress } from '../resize/key-fuse.ts';
-import type { ResizeResult } from '../resize/resize-result.ts';
+import type { Flagged, ResizeResult } from '../resize/resize-result.ts';
 import type { RunningCheck } from '../resize/running-check.ts';
 import { sideOf, sideYieldRatio } from '../resize/side-ratio.ts';
 import { resultsToJson } from './results-json.ts';
-import { criticalSegmentSentence, limiterSentences, materialsSentence, scaleSideSentence } from './resize-words.ts';
+import { criticalSegmentSentence, limiterSentences, recommendedChange, materialsSentence, scaleSideSentence } from './resize-words.ts';
 
 /** The `resize --json` object: the `check --json` object with `resize` added. SI, units in key names. */
 export function resizeToJson(z: ResizeResult): Record<string, unknown> {
@@ -20,6 +20,8 @@ export function resizeJson(z: ResizeResult): Record<string, unknown> {
     service_factor: z.serviceFactor,
     max_scale: z.maxScale,
     method: 'elastic energy method; each option rerun through the engine',
+    recommended: z.recommended ? { option: z.recommended.option, reason: z.recommended.reason, change: recommendedChange(z, z.recommended.option) } : null,
+    pick_rule: z.pickRule,
     running: runningJson(z.present.running),
     scale_side: {
       side: s.side,
@@ -35,6 +37,7 @@ export function resizeJson(z: ResizeResult): Record<string, unknown> {
       frequency_ratio: s.change.frequency,
       frequency_method: s.change.frequencyMethod,
       running: runningJson(s.running),
+      flags: s.flags,
       reason: scaleSideSentence(z),
     },
     critical_segment: {
@@ -45,6 +48,7 @@ export function resizeJson(z: ResizeResult): Record<string, unknown> {
       stock_diameter_m: k.stockDiameter ?? null,
       stock_yield_ratio: k.stockRerun ? sideYieldRatio(k.stockRerun, k.side) : null,
       running: k.running ? runningJson(k.running) : null,
+      flags: k.flags,
       reason: criticalSegmentSentence(z),
     },
     materials: z.materials.map((m) => ({
@@ -56,6 +60,7 @@ export function resizeJson(z: ResizeResult): Record<string, unknown> {
       frequency_method: m.change.frequencyMethod,
       strength_basis: m.material.strengthBasis ?? null,
       running: runningJson(m.running),
+      flags: m.flags,
     })),
     materials_summary: materialsSentence(z),
     limiter: {
@@ -72,6 +77,9 @@ export function resizeJson(z: ResizeResult): Record<string, unknown> {
       method: l.slip.method,
       slip_method: l.slip.slipMethod,
       slip_segment: l.slip.segment ?? null,
+      modelled_from_m: l.slip.modelledFrom ?? null,
+      modelled_to_m: l.slip.modelledTo ?? null,
+      flags: l.flags,
       reason: limiterSentences(z).join(' '),
     },
     key: z.keys.length > 0 ? keyJson(z.keys[0]) : null,
@@ -92,7 +100,7 @@ function runningJson(r: RunningCheck): Record<string, unknown> {
   };
 }
 
-function keyJson(k: KeyFuse): Record<string, unknown> {
+function keyJson(k: KeyFuse & Flagged): Record<string, unknown> {
   const stress = (s: KeyStress) => ({ torque_Nm: s.torque, shear_stress_Pa: s.shearStress, bearing_stress_Pa: s.bearingStress, shear_ratio: s.shearRatio, bearing_ratio: s.bearingRatio });
   return {
     station: k.station,
@@ -104,5 +112,6 @@ function keyJson(k: KeyFuse): Record<string, unknown> {
     shaft_yield_torque_Nm: k.shaftYieldTorque,
     at_limiter: k.atLimiter ? stress(k.atLimiter) : null,
     at_running: k.atRunning ? { ...stress(k.atRunning), factor: k.atRunning.factor } : null,
+    flags: k.flags,
   };
 }

@@ -1,4 +1,4 @@
-import type { ResizeResult } from '../resize/resize-result.ts';
+import type { OptionId, ResizeResult } from '../resize/resize-result.ts';
 import { sideOf, sideYieldRatio } from '../resize/side-ratio.ts';
 import type { StiffnessChange } from '../resize/stiffness-change.ts';
 import { show, sig } from './display-units.ts';
@@ -35,14 +35,15 @@ function diameters(ds: readonly number[], u: ResizeResult['results']['case']['un
   return `Ø ${u === 'metric' ? `${shown.map((t) => t.replace(' mm', '')).join(', ')} mm` : shown.join(', ')}`;
 }
 
-/** The options side by side, the present shaft first. Numbers from the ResizeResult only. */
+/** The options side by side, the present shaft first, the pick marked "(recommended)" and a flagged option "(flagged)". Numbers from the ResizeResult only. */
 export function optionRows(z: ResizeResult): OptionRow[] {
+  const mark = (id: OptionId, flags: readonly string[]) => (z.recommended?.option === id ? ' (recommended)' : flags.length > 0 ? ' (flagged)' : '');
   const r = z.results;
   const u = r.case.units;
   const side = r.governing.side.side;
   const rows: OptionRow[] = [];
   rows.push({
-    option: 'Present shaft',
+    option: `Present shaft${z.recommended?.option === 'present' ? ' (recommended)' : ''}`,
     change: 'as it is',
     yieldRatio: sig(r.yieldRatio),
     peakTorque: show(r.governing.side.peakTorque, 'torque', u),
@@ -52,7 +53,7 @@ export function optionRows(z: ResizeResult): OptionRow[] {
 
   const s = z.scaleSide;
   rows.push({
-    option: `Scale side ${s.side} ×${sig(s.s)}`,
+    option: `Scale side ${s.side} ×${sig(s.s)}${mark('scale_side', s.flags)}`,
     change: `${diameters(s.stockDiameters, u)}${s.practical ? '' : ' (not practical)'}`,
     yieldRatio: sig(sideYieldRatio(s.stockRerun, s.side)),
     peakTorque: show(sideOf(s.stockRerun, s.side).peakTorque, 'torque', u),
@@ -65,20 +66,21 @@ export function optionRows(z: ResizeResult): OptionRow[] {
   rows.push(
     k.stockRerun
       ? {
-          option: `Resize ${seg} only`,
+          option: `Resize ${seg} only${mark('critical_segment', k.flags)}`,
           change: `Ø${showDiameter(k.segment.diameter, u)} → ${showDiameter(k.stockDiameter!, u)}`,
           yieldRatio: sig(sideYieldRatio(k.stockRerun, side)),
           peakTorque: show(sideOf(k.stockRerun, side).peakTorque, 'torque', u),
           running: runningWords(k.running!, u),
           ...changeCells(k.change),
         }
-      : { option: `Resize ${seg} only`, change: 'no size works: the others become critical', yieldRatio: '—', peakTorque: '—', running: '—', stiffness: '—' },
+      : { option: `Resize ${seg} only${mark('critical_segment', k.flags)}`, change: 'no size works: the others become critical', yieldRatio: '—', peakTorque: '—', running: '—', stiffness: '—' },
   );
 
-  const m = z.materials.find((x) => x.keepsFactor) ?? z.materials[0];
+  // The material shown: the picked one, else the best that has no flag, else the best that keeps N, else the best.
+  const m = z.materials.find((x) => z.recommended?.option === `material:${x.material.key}`) ?? z.materials.find((x) => x.flags.length === 0) ?? z.materials.find((x) => x.keepsFactor) ?? z.materials[0];
   if (m) {
     rows.push({
-      option: `Material ${m.material.key}`,
+      option: `Material ${m.material.key}${mark(`material:${m.material.key}`, m.flags)}`,
       change: m.keepsFactor ? 'same geometry' : 'same geometry (best; none keeps N)',
       yieldRatio: sig(m.yieldRatio),
       peakTorque: show(sideOf(m.rerun, side).peakTorque, 'torque', u),
@@ -90,7 +92,7 @@ export function optionRows(z: ResizeResult): OptionRow[] {
   const l = z.limiter;
   const window = l.min === undefined ? `set ≤ ${show(l.max, 'torque', u)} (lower end unknown)` : l.windowEmpty ? `NONE: window empty (${show(l.min, 'torque', u)} > ${show(l.max, 'torque', u)})` : `set ${show(l.min, 'torque', u)} to ${show(l.max, 'torque', u)}`;
   rows.push({
-    option: `Torque limiter at "${l.station}"`,
+    option: `Torque limiter at "${l.station}"${mark('limiter', l.flags)}`,
     change: window,
     yieldRatio: sig(l.yieldRatio),
     peakTorque: show(l.slip.peakTorque, 'torque', u),
@@ -100,7 +102,7 @@ export function optionRows(z: ResizeResult): OptionRow[] {
 
   for (const key of z.keys) {
     rows.push({
-      option: `Key as fuse at "${key.station}"`,
+      option: `Key as fuse at "${key.station}" (flagged)`,
       change: key.shearsBeforeShaftYields ? 'shears before the shaft yields' : 'does not shear before the shaft yields',
       yieldRatio: `key: shear ${sig(key.incident.shearRatio)}, bearing ${sig(key.incident.bearingRatio)}`,
       peakTorque: show(key.incident.torque, 'torque', u),

@@ -1,7 +1,7 @@
 import type { ResizeResult } from '../resize/resize-result.ts';
 import { show, sig } from './display-units.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from './resize-rows.ts';
-import { criticalSegmentSentence, factorSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from './resize-words.ts';
+import { criticalSegmentSentence, factorSentence, flaggedOptions, recommendedSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from './resize-words.ts';
 import { findingSentence } from './finding-words.ts';
 import { textTable } from './text-table.ts';
 
@@ -23,6 +23,13 @@ export function renderResize(z: ResizeResult): string {
   out.push('');
   out.push(...textTable([keys.map((k) => ROW_HEADINGS[k]), ...rows.map((row) => keys.map((k) => row[k]))]));
   out.push('Running factor: shear yield over the stress under the running torque, static and with kt. Stiffness and natural frequency: new over present; the frequency is the dynamic model\'s lowest of the side where the verdict stands on it, else the energy method\'s single-mass estimate.');
+  out.push('', recommendedSentence(z));
+  out.push(`  The rule: ${z.pickRule}`);
+  const flagged = flaggedOptions(z);
+  if (flagged.length > 0) {
+    out.push('', 'Flagged: why these options are not advisable');
+    for (const o of flagged) out.push(`  - ${o.name}: ${o.flags.join('; ')}.`);
+  }
 
   const section = (title: string, lines: string[], table: string[] = []) => {
     out.push('', title);

@@ -1,6 +1,6 @@
 import type { Case } from '../case/case.ts';
 import type { KeyFuse } from '../resize/key-fuse.ts';
-import type { ResizeResult } from '../resize/resize-result.ts';
+import type { OptionId, ResizeResult } from '../resize/resize-result.ts';
 import type { Results } from '../results/results.ts';
 import { sideYieldRatio } from '../resize/side-ratio.ts';
 import type { RunningCheck } from '../resize/running-check.ts';
@@ -34,7 +34,7 @@ export function scaleSideSentence(z: ResizeResult): string {
   const u = z.results.case.units;
   const sizes = o.segments.map((g, i) => `${segName(g)} Ø${showDiameter(g.diameter, u)} → ${showDiameter(o.diameters[i], u)} (stock ${showDiameter(o.stockDiameters[i], u)})`).join('; ');
   const head = `Scale side ${o.side}: every segment of the side by s = ${sig(o.presentYieldRatio)} × ${sig(z.designFactor)} = ${sig(o.s, 4)}, bores with them (stress falls as 1/s in the energy method): ${sizes}.${z.results.finding.basis === 'dynamic model' ? ` ${sig(o.presentYieldRatio)} is the energy method's stress / shear yield, the design check's, which leans to the high side here; the finding's model gives ${sig(z.results.finding.yieldRatio)}.` : ''}`;
-  const rerun = `Rerun: side ${o.side}'s stress / shear yield ${sig(sideYieldRatio(o.rerun, o.side), 4)} at the exact sizes, ${sig(sideYieldRatio(o.stockRerun, o.side), 4)} at the stock sizes; peak torque ${show(o.stockRerun.sides.find((s) => s.side === o.side)!.peakTorque, 'torque', u)}.`;
+  const rerun = `Rerun: side ${o.side}'s stress / shear yield ${sig(sideYieldRatio(o.rerun, o.side), 4)} at the exact sizes, ${sig(sideYieldRatio(o.stockRerun, o.side), 4)} at the stock sizes; peak torque ${show(o.stockRerun.sides.find((s) => s.side === o.side)!.peakTorque, 'torque', u)}. The table's ratios for the scaled shaft are taken at the stock sizes, each bore scaled with its stock diameter (the bore ratio kept).`;
   const otherWords = otherSidesWords(z, o.stockRerun, o.side);
   if (!o.needed) return `${head} ${rerun} The present shaft already keeps the factor (s ≤ 1): no larger shaft is needed for a repeat of this incident; do not make it smaller on this basis alone.${otherWords}`;
   const verdict = o.practical
@@ -72,7 +72,7 @@ export function limiterSentences(z: ResizeResult): string[] {
   const o = z.limiter;
   const u = z.results.case.units;
   const w = o.weakest;
-  const out = [`Place: ${o.placement}.`];
+  const out = [`Place: ${o.placement}.`, limiterModelWords(z)];
   const upper = `the shaft's allowable torque ${show(o.max, 'torque', u)} (${describeRunPiece(w, u)} reaches shear yield at ${show(w.yieldTorque, 'torque', u)}, over N = ${sig(o.designFactor)})`;
   if (o.min === undefined) {
     out.push(`Window: up to ${upper}. The lower end is unknown: the case gives no running torque. Add drive: { power: "22 kW" } or drive: { running_torque: "450 N*m" } to the driving station.`);
@@ -129,4 +129,65 @@ function otherSidesWords(z: ResizeResult, rerun: Pick<ResizeResult['results'], '
 
 function describeRunPiece(w: ResizeResult['limiter']['weakest'], u: Case['units']): string {
   return describePiece(w, u) + (w.piece.segment.kt !== 1 ? ` with kt ${w.piece.segment.kt}` : '');
+}
+
+/** An option's name as the options table shows it. */
+export function optionName(z: ResizeResult, id: OptionId): string {
+  if (id === 'present') return 'Present shaft';
+  if (id === 'scale_side') return `Scale side ${z.scaleSide.side} ×${sig(z.scaleSide.s)}`;
+  if (id === 'critical_segment') return `Resize ${segName(z.criticalSegment.segment)} only`;
+  if (id === 'limiter') return `Torque limiter at "${z.limiter.station}"`;
+  return `Material ${id.slice('material:'.length)}`;
+}
+
+/** Every option with its flags, in the table's order, those without a flag left out. */
+export function flaggedOptions(z: ResizeResult): { name: string; flags: string[] }[] {
+  return [
+    { name: optionName(z, 'scale_side'), flags: z.scaleSide.flags },
+    { name: optionName(z, 'critical_segment'), flags: z.criticalSegment.flags },
+    ...z.materials.map((m) => ({ name: `Material ${m.material.key}`, flags: m.flags })),
+    { name: optionName(z, 'limiter'), flags: z.limiter.flags },
+    ...z.keys.map((k) => ({ name: `Key as fuse at "${k.station}"`, flags: k.flags })),
+  ].filter((o) => o.flags.length > 0);
+}
+
+/** The pick with its key figure in the case's units: "Recommended: fit a torque limiter at …". */
+export function recommendedSentence(z: ResizeResult): string {
+  const p = z.recommended;
+  if (!p) return 'Recommended: none of the options alone; each has a flag below. Combine them (for example a stronger shaft and a torque limiter) and check the combination, with the machine builder.';
+  return `Recommended: ${recommendedChange(z, p.option)} Why: ${p.reason}`;
+}
+
+/** What the picked option changes, with its figure. */
+export function recommendedChange(z: ResizeResult, id: OptionId): string {
+  const u = z.results.case.units;
+  if (id === 'present') return 'a replacement like for like (the present sizes and material), if one is needed at all.';
+  if (id === 'scale_side') {
+    const s = z.scaleSide;
+    return `scale side ${s.side} ×${sig(s.s)}, bores with the diameters: ${s.segments.map((g, i) => `${segName(g)} Ø${showDiameter(g.diameter, u)} → ${showDiameter(s.stockDiameters[i], u)}`).join('; ')}.`;
+  }
+  if (id === 'critical_segment') {
+    const k = z.criticalSegment;
+    return `resize ${segName(k.segment)} only, Ø${showDiameter(k.segment.diameter, u)} → ${showDiameter(k.stockDiameter!, u)} (stock size), the rest of the shaft as it is.`;
+  }
+  if (id === 'limiter') {
+    const l = z.limiter;
+    const window = l.min === undefined ? `set at no more than ${show(l.max, 'torque', u)} (the lower end of its window needs the running torque)` : `set within ${show(l.min, 'torque', u)} to ${show(l.max, 'torque', u)}, checked at ${show(l.slip.setting, 'torque', u)}`;
+    return `fit a torque limiter at "${l.station}", ${window}, on a shaft of the present sizes and material.`;
+  }
+  const m = z.materials.find((x) => `material:${x.material.key}` === id)!;
+  return `make the shaft of ${m.material.name} (${m.material.key}) on the present drawing.`;
+}
+
+/** Where the limiter sits in the model: the same place the option names. */
+function limiterModelWords(z: ResizeResult): string {
+  const o = z.limiter;
+  const u = z.results.case.units;
+  const s = o.slip;
+  if (s.slipMethod === 'dynamic model' && s.segment !== undefined && s.modelledFrom !== undefined && s.modelledTo !== undefined) {
+    const seg = z.results.case.shaft.segments[s.segment];
+    if (s.modelledInExisting) return `Modelled as the limiter the case already has, in ${segName(seg)} from ${show(s.modelledFrom, 'length', u)} to ${show(s.modelledTo, 'length', u)}, at the new setting.`;
+    return `Modelled there: as a slip element in ${segName(seg)} from ${show(s.modelledFrom, 'length', u)} to ${show(s.modelledTo, 'length', u)}, right beside "${o.station}" on the stop's side, so the parts at "${o.station}" and beyond drive through it.`;
+  }
+  return `Modelled there: the parts at "${o.station}" and beyond are behind the limiter, and the shaft from "${o.station}" to the stop carries the torque it holds.`;
 }

@@ -16,7 +16,7 @@ describe.skipIf(!existsSync(BIN))('the built CLI', () => {
     const run = spawnSync(process.execPath, [BIN, 'report', file], { encoding: 'utf8', env: { ...process.env, SOURCE_DATE_EPOCH: '1780000000', TZ: 'UTC' } });
     expect(run.stderr).toBe('');
     expect(run.status).toBe(0);
-    expect(readdirSync(join(dirname(file), 'reports')).sort()).toEqual(['2026-05-28', '2026-05-28.zip']);
-    expect(run.stdout).toMatch(/^Open .*reports\/2026-05-28\/report\.html$/m);
+    expect(readdirSync(join(dirname(file), 'reports')).sort()).toEqual(['DEMO-GR-0117-2026-05-28', 'DEMO-GR-0117-2026-05-28.zip']);
+    expect(run.stdout).toMatch(/^Open .*reports\/DEMO-GR-0117-2026-05-28\/report\.html$/m);
   });
 });

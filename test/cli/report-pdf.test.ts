@@ -17,10 +17,10 @@ describe('shaftcase report --pdf', () => {
     const run = await cli(['report', '--pdf', file]);
     expect(run.code).toBe(0);
     expect(printPdf).toHaveBeenLastCalledWith(expect.stringContaining('<!DOCTYPE html>'), 'A4');
-    const folder = join(dirname(file), 'reports', '2026-12-01');
+    const folder = join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01');
     expect(readFileSync(join(folder, 'report.pdf'), 'utf8')).toBe('%PDF-1.4 test');
     const zip = await JSZip.loadAsync(readFileSync(`${folder}.zip`));
-    expect(zip.file('reports/2026-12-01/report.pdf')).not.toBeNull();
+    expect(zip.file('reports/DEMO-GR-0117-2026-12-01/report.pdf')).not.toBeNull();
   });
 
   it('without Chromium, --pdf says so and how to install it, and writes the rest of the report', async () => {
@@ -32,7 +32,7 @@ describe('shaftcase report --pdf', () => {
     expect(run.err).toBe(
       'report.pdf not written: Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian\'s package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM. The rest of the report is written; print report.html from a browser instead.\n',
     );
-    const folder = join(dirname(file), 'reports', '2026-12-01');
+    const folder = join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01');
     expect(existsSync(join(folder, 'report.html'))).toBe(true);
     expect(existsSync(join(folder, 'report.pdf'))).toBe(false);
   });

@@ -17,7 +17,7 @@ const UNCERTAINTY_TABLES = ['uncertainty-inputs.csv', 'uncertainty-percentiles.c
 
 describe('shaftcase report', () => {
   // The granulator's report is made three times, once here for the whole file: today, a later day
-  // (byte-identical apart from the run) and today again (DATE-2); check and resize run once.
+  // (byte-identical apart from the run) and today again (ID-DATE-2); check and resize run once.
   const later = new Date('2026-12-02T17:45:59Z');
   let file = '';
   let run: Awaited<ReturnType<typeof cli>>;
@@ -30,7 +30,7 @@ describe('shaftcase report', () => {
   beforeAll(async () => {
     file = copyToTemp(SAMPLE);
     run = await cli(['report', file], FIXED_NOW);
-    const first = join(dirname(file), 'reports', '2026-12-01', 'report.md');
+    const first = join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01', 'report.md');
     firstBefore = readFileSync(first);
     await cli(['report', file], later);
     again = await cli(['report', file], FIXED_NOW);
@@ -44,7 +44,7 @@ describe('shaftcase report', () => {
   it('report writes the dated folder with every part and prints what it wrote, the file to open and the verdict', () => {
     expect(run.err).toBe('');
     expect(run.code).toBe(0);
-    const folder = join(dirname(file), 'reports', '2026-12-01');
+    const folder = join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01');
     expect(readdirSync(folder).sort()).toEqual(['figures', 'report.html', 'report.md', 'results.json', 'tables']);
     expect(readdirSync(join(folder, 'figures')).sort()).toEqual(FIGURES);
     expect(readdirSync(join(folder, 'tables')).sort()).toEqual(TABLES);
@@ -56,7 +56,7 @@ describe('shaftcase report', () => {
   });
 
   it('results.json holds exactly what check --json prints, plus the inputs, the version, the run time and the case hash', () => {
-    const json = JSON.parse(readFileSync(join(dirname(file), 'reports', '2026-12-01', 'results.json'), 'utf8'));
+    const json = JSON.parse(readFileSync(join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01', 'results.json'), 'utf8'));
     const check = JSON.parse(checkJson.out);
     const { resize, inputs, tool_version, ran_at, case_file, case_sha256, ...rest } = json;
     expect(rest).toEqual(check);
@@ -86,21 +86,21 @@ describe('shaftcase report', () => {
   };
 
   it('the same case and version give byte-identical report.md, figures and CSVs apart from the run date and time: the granulator', () => {
-    sameApartFromRun(join(dirname(file), 'reports', '2026-12-01'), join(dirname(file), 'reports', '2026-12-02'), FIGURES, TABLES);
+    sameApartFromRun(join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01'), join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-02'), FIGURES, TABLES);
   });
 
   it('the same case and version give byte-identical report.md, figures and CSVs apart from the run date and time: the toleranced screw conveyor (seeded Monte Carlo)', async () => {
     const file = copyToTemp(TOLERANCED_SAMPLE);
     await cli(['report', file], FIXED_NOW);
     await cli(['report', file], later);
-    sameApartFromRun(join(dirname(file), 'reports', '2026-12-01'), join(dirname(file), 'reports', '2026-12-02'), UNCERTAINTY_FIGURES, UNCERTAINTY_TABLES);
+    sameApartFromRun(join(dirname(file), 'reports', 'DEMO-SC-0342-2026-12-01'), join(dirname(file), 'reports', 'DEMO-SC-0342-2026-12-02'), UNCERTAINTY_FIGURES, UNCERTAINTY_TABLES);
   });
 
   it('report --samples --seed runs the Monte Carlo as check does: results.json holds check --json with the same seed, and the section and figures are written', async () => {
     const file = copyToTemp(TOLERANCED_SAMPLE);
     const run = await cli(['report', '--samples', '3000', '--seed', '7', file]);
     expect(run.code).toBe(0);
-    const folder = join(dirname(file), 'reports', '2026-12-01');
+    const folder = join(dirname(file), 'reports', 'DEMO-SC-0342-2026-12-01');
     const json = JSON.parse(readFileSync(join(folder, 'results.json'), 'utf8'));
     const check = JSON.parse((await cli(['check', '--json', '--samples', '3000', '--seed', '7', file])).out);
     expect(json.uncertainty).toEqual(check.uncertainty);
@@ -120,7 +120,7 @@ describe('shaftcase report', () => {
   it('report --samples 0 leaves the uncertainty run out, and --factor sets the design factor of what goes back in', async () => {
     const file = copyToTemp(TOLERANCED_SAMPLE);
     expect((await cli(['report', '--samples', '0', '--factor', '2', file])).code).toBe(0);
-    const folder = join(dirname(file), 'reports', '2026-12-01');
+    const folder = join(dirname(file), 'reports', 'DEMO-SC-0342-2026-12-01');
     const json = JSON.parse(readFileSync(join(folder, 'results.json'), 'utf8'));
     expect(json.uncertainty).toBeUndefined();
     expect(json.resize.factor).toBe(2);
@@ -140,13 +140,13 @@ describe('shaftcase report', () => {
     writeFileSync(join(dir, 'case.yaml'), readFileSync(SAMPLE, 'utf8') + '  photos:\n    - { path: photos/key.png, caption: the sheave key }\n');
     writeFileSync(join(dir, 'photos', 'key.png'), TINY_PNG);
     expect((await cli(['report', dir])).code).toBe(0);
-    const zip = await JSZip.loadAsync(readFileSync(join(dir, 'reports', '2026-12-01.zip')));
+    const zip = await JSZip.loadAsync(readFileSync(join(dir, 'reports', 'DEMO-GR-0117-2026-12-01.zip')));
     const lines = (await zip.file('MANIFEST.txt')!.async('string')).trimEnd().split('\n');
     const listed = lines.map((l) => l.slice(66));
     expect(listed.sort()).toEqual(Object.keys(zip.files).filter((n) => n !== 'MANIFEST.txt' && !zip.files[n].dir).sort());
     expect(listed).toContain('case.yaml');
     expect(listed).toContain('photos/key.png');
-    expect(listed).toContain('reports/2026-12-01/report.html');
+    expect(listed).toContain('reports/DEMO-GR-0117-2026-12-01/report.html');
     for (const line of lines) {
       const [hash, path] = [line.slice(0, 64), line.slice(66)];
       expect(createHash('sha256').update(await zip.file(path)!.async('uint8array')).digest('hex'), path).toBe(hash);
@@ -154,10 +154,10 @@ describe('shaftcase report', () => {
     }
   });
 
-  it('a second run the same day makes DATE-2 and leaves the first report as it was', () => {
-    expect(again.out).toContain(join(dirname(file), 'reports', '2026-12-01-2'));
+  it('a second run the same day makes ID-DATE-2 and leaves the first report as it was', () => {
+    expect(again.out).toContain(join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01-2'));
     expect(firstAfter.equals(firstBefore)).toBe(true);
-    expect(readdirSync(join(dirname(file), 'reports')).sort()).toEqual(['2026-12-01', '2026-12-01-2', '2026-12-01-2.zip', '2026-12-01.zip', '2026-12-02', '2026-12-02.zip']);
+    expect(readdirSync(join(dirname(file), 'reports')).sort()).toEqual(['DEMO-GR-0117-2026-12-01', 'DEMO-GR-0117-2026-12-01-2', 'DEMO-GR-0117-2026-12-01-2.zip', 'DEMO-GR-0117-2026-12-01.zip', 'DEMO-GR-0117-2026-12-02', 'DEMO-GR-0117-2026-12-02.zip']);
   });
 
   it('hostile text in the case file stays text in report.html, and its photo is embedded', async () => {
@@ -165,7 +165,9 @@ describe('shaftcase report', () => {
     mkdirSync(join(dirname(file), 'photos'));
     writeFileSync(join(dirname(file), 'photos', 'a b (1).png'), TINY_PNG);
     expect((await cli(['report', file])).code).toBe(0);
-    const html = readFileSync(join(dirname(file), 'reports', '2026-12-01', 'report.html'), 'utf8');
+    // The id <script>alert('id')</script> made safe for a file name: each run of other characters one dash, none at the ends.
+    expect(readdirSync(join(dirname(file), 'reports')).sort()).toEqual(['script-alert-id-script-2026-12-01', 'script-alert-id-script-2026-12-01.zip']);
+    const html = readFileSync(join(dirname(file), 'reports', 'script-alert-id-script-2026-12-01', 'report.html'), 'utf8');
     expect(html).not.toMatch(/<(script|iframe|object|embed)\b/i);
     // The only links are the first page's, to the report's own headings.
     for (const a of html.matchAll(/<a\b[^>]*>/gi)) expect(a[0]).toMatch(/^<a href="#[a-z0-9-]+">$/);
@@ -199,7 +201,7 @@ describe('shaftcase report', () => {
     const template = join(dirname(file), 'site.md');
     writeFileSync(template, '# ACME Works: incident {{case.id}}\n\nDistribution: plant manager, insurer\n\n{{section:summary}}\n\nSigned: ________\n');
     expect((await cli(['report', file, '--template', template])).code).toBe(0);
-    const md = readFileSync(join(dirname(file), 'reports', '2026-12-01', 'report.md'), 'utf8');
+    const md = readFileSync(join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01', 'report.md'), 'utf8');
     expect(md).toMatch(/^# ACME Works: incident DEMO-GR-0117\n\nDistribution: plant manager, insurer\n\n## Incident finding\n/);
     expect(md).toMatch(/Signed: ________\n\n## Cautions\n/);
     expect(md).not.toContain('## The incident');

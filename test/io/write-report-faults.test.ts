@@ -17,7 +17,7 @@ afterEach(() => vi.mocked(writeFileSync).mockRestore?.());
 function input(dir: string, caseName = 'case.yaml'): WriteReportInput {
   const caseFile = join(dir, caseName);
   writeFileSync(caseFile, 'case: {}\n');
-  return { caseFile, caseText: 'case: {}\n', photos: [], files: [{ path: 'report.md', data: '# R\n' }], date: '2026-12-01', ranAt: new Date('2026-12-01T10:20:30Z') };
+  return { caseFile, caseText: 'case: {}\n', photos: [], files: [{ path: 'report.md', data: '# R\n' }], caseId: 'T-1', date: '2026-12-01', ranAt: new Date('2026-12-01T10:20:30Z') };
 }
 
 const enospc = () => Object.assign(new Error('ENOSPC: no space left on device, write'), { code: 'ENOSPC' });
@@ -62,13 +62,13 @@ describe('writeReport under file-system faults', () => {
       throw new Error('killed');
     });
     await expect(writeReport(input(dir))).rejects.toThrow('killed');
-    expect(readdirSync(join(dir, 'reports'))).toEqual(['2026-12-01']);
+    expect(readdirSync(join(dir, 'reports'))).toEqual(['T-1-2026-12-01']);
     const second = await writeReport(input(dir));
-    expect(readdirSync(join(dir, 'reports')).sort()).toEqual(['2026-12-01', '2026-12-01-2', '2026-12-01-2.zip', '2026-12-01.zip']);
-    expect(readdirSync(join(dir, 'reports', '2026-12-01'))).toEqual(['report.md']);
-    const names = Object.keys((await JSZip.loadAsync(readFileSync(join(dir, 'reports', '2026-12-01.zip')))).files);
-    expect(names).toContain('reports/2026-12-01/report.md');
-    expect(second.folder).toMatch(/2026-12-01-2$/);
+    expect(readdirSync(join(dir, 'reports')).sort()).toEqual(['T-1-2026-12-01', 'T-1-2026-12-01-2', 'T-1-2026-12-01-2.zip', 'T-1-2026-12-01.zip']);
+    expect(readdirSync(join(dir, 'reports', 'T-1-2026-12-01'))).toEqual(['report.md']);
+    const names = Object.keys((await JSZip.loadAsync(readFileSync(join(dir, 'reports', 'T-1-2026-12-01.zip')))).files);
+    expect(names).toContain('reports/T-1-2026-12-01/report.md');
+    expect(second.folder).toMatch(/T-1-2026-12-01-2$/);
   });
 
   it('hidden temporary folders of ended runs are removed; a running run\'s and the reports stay', () => {
@@ -92,14 +92,14 @@ describe('writeReport: the zip\'s entry names', () => {
     const dir = tempFolder();
     const { zip } = await writeReport(input(dir, '..\\..\\evil.yaml'));
     const names = Object.keys((await JSZip.loadAsync(readFileSync(zip))).files).sort();
-    expect(names).toEqual(['MANIFEST.txt', 'evil.yaml', 'reports/2026-12-01/report.md']);
+    expect(names).toEqual(['MANIFEST.txt', 'evil.yaml', 'reports/T-1-2026-12-01/report.md']);
   });
 
   it('a case file named MANIFEST.txt (in any case) cannot take the manifest\'s name', async () => {
     const dir = tempFolder();
     const { zip } = await writeReport(input(dir, 'manifest.TXT'));
     const z = await JSZip.loadAsync(readFileSync(zip));
-    expect(Object.keys(z.files).sort()).toEqual(['MANIFEST.txt', 'manifest-2.TXT', 'reports/2026-12-01/report.md']);
+    expect(Object.keys(z.files).sort()).toEqual(['MANIFEST.txt', 'manifest-2.TXT', 'reports/T-1-2026-12-01/report.md']);
     expect(await z.file('manifest-2.TXT')!.async('string')).toBe('case: {}\n');
     expect(await z.file('MANIFEST.txt')!.async('string')).toMatch(/ {2}manifest-2\.TXT\n/);
   });

@@ -10,6 +10,7 @@ import { show, sig } from '../../src/views/display-units.ts';
 import { percent } from '../../src/views/finding-words.ts';
 import { recommendedRemedy } from '../../src/views/remedy-words.ts';
 import { anchorOf } from '../../src/report/anchor.ts';
+import { escapeMarkdown } from '../../src/report/markdown-text.ts';
 import { describePlasticPiece } from '../../src/views/plastic-lines.ts';
 import { defaultTemplate, fixture, RUN } from './report-fixtures.ts';
 
@@ -79,7 +80,16 @@ describe('renderReport', () => {
     expect(box('sample')).toMatch(new RegExp(`${head.source}> \\*\\*Finding: YIELDED THROUGH THE SECTION \\(dynamic model\\): .* capped at .* permanent twist of .*\\*\\* \\(\\[the evidence\\]\\(#results-of-the-governing-model\\)\\)`));
     expect(box('sample')).toMatch(/\*\*Observed, against the model\*\* .*\n\n- Permanent twist drive sheave – rotor: measured 4°, the model gives 8\.9° at the recorded 420 rpm: less than the recorded speed explains; a stop from 296\.1 rpm would leave it\.\n- Fracture: none found; agrees with the model\./);
     expect(box('sample')).toMatch(/\*\*Disposition: REPLACE THE SHAFT\.\*\* Not fit to return/);
-    expect(box('sample')).toMatch(/\*\*Recommended remedy:\*\* .*Key figure: repeat-incident stress \/ shear yield [\d.]+ against the 0\.667 allowed\. Why this one: .*\(\[what goes back in\]\(#recommendations-what-goes-back-in\)\)/);
+    // The remedy is resize's pick (none for the granulator: every option alone has a flag), with its figure where there is one.
+    expect(report('sample').data.resize.recommended).toBeUndefined();
+    expect(box('sample')).toMatch(/\*\*Recommended remedy:\*\* none of the options of resize alone; each has a flag\. .*\(\[what goes back in\]\(#recommendations-what-goes-back-in\)\)/);
+    const picked = CASES.filter((n) => report(n).data.resize.recommended);
+    expect(picked.length).toBeGreaterThan(0);
+    for (const n of picked) {
+      const z = report(n).data.resize;
+      expect(box(n)).toMatch(/\*\*Recommended remedy:\*\* .*Key figure: repeat-incident stress \/ shear yield [\d.]+ against the [\d.]+ allowed\. Why this one: .*\(\[what goes back in\]\(#recommendations-what-goes-back-in\)\)/);
+      expect(box(n)).toContain(escapeMarkdown(z.recommended!.reason.replace(/\.$/, '')));
+    }
     expect(box('sample')).toMatch(/### Inspect at the critical location: "sheave seat", side A .*\n\n- ☐ Crack test of the keyseat under "drive sheave" and the fillets at the ends of "sheave seat" \(kt 2\.2\): magnetic particle/);
     expect(box('sample')).toMatch(/### Before it runs again .*\n\n- ☐ The shaft is replaced/);
     expect(box('edger-arbor-two-sides.yaml')).toMatch(/> \*\*Finding: YIELDED THROUGH THE SECTION \(energy method\): /);

@@ -19,12 +19,16 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
     const z = resizeCase(c, r);
     const s = z.limiter.slip;
     expect(s.slipMethod).toBe('dynamic model');
-    // The sheave seat holds the drive sheave's station inside it, so the limiter goes in the next
-    // piece toward the stop: the bearing journal, segment index 1. Built here by hand, not by the program.
-    expect(s.segment).toBe(1);
-    const changed = { ...c, shaft: { segments: c.shaft.segments.map((g) => (g.index === 1 ? { ...g, slipTorque: z.limiter.max } : g)) } };
+    // The limiter sits at the drive sheave, inside the sheave seat (0 to 120 mm): it is modelled
+    // there, in the sheave seat cut at the station, from 60 mm to 120 mm (not in the bearing journal
+    // beyond). Built here by hand, not by the program.
+    expect(s.segment).toBe(0);
+    expect([s.modelledFrom, s.modelledTo]).toEqual([0.06, 0.12]);
+    const [seat, ...rest] = c.shaft.segments;
+    const segments = [{ ...seat, end: 0.06 }, { ...seat, start: 0.06, slipTorque: z.limiter.max }, ...rest].map((g, index) => ({ ...g, index }));
+    const changed = { ...c, shaft: { segments } };
     const rerun = withFinding(analyseCase(changed));
-    const element = rerun.dynamic.slips.find((x) => x.element === 'the torque limiter in "bearing journal"')!;
+    const element = rerun.dynamic.slips.find((x) => x.element === 'the torque limiter in "sheave seat"')!;
     expect(element.energy).toBeGreaterThan(0);
     expect(s.slipEnergy).toBe(element.energy);
     expect(s.slipAngle).toBe(element.angle);
@@ -72,21 +76,31 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
     expect(limiterSlip(r, { station: 'disc', side: 'A' }, 500).slipEnergy).toBe(d.slipEnergy);
   });
 
-  it('keeps the energy method and says so when no segment between the limiter and the stop can hold it', () => {
-    // One segment holds both the disc (inside it) and the stop (inside it): nowhere to put a limiter.
-    const text = caseText({ rpm: 300, segments: [[600, 40, 0]], stations: [['disc', 100, 1], ['jam', 500, 0]], stop: 'jam' }).replace('stop: { at: jam }', 'stop: { at: jam, duration: 1 ms }');
+  it('keeps the energy method and says so where the shaft beside the limiter holds a shear pin', () => {
+    const text = caseText({ rpm: 300, segments: [[100, 40, 0], [500, 45, 0]], stations: [['disc', 100, 1], ['jam', 600, 0]], stop: 'jam' })
+      .replace('stop: { at: jam }', 'stop: { at: jam, duration: 1 ms }')
+      .replace('diameter: 45 mm }', 'diameter: 45 mm, shear_torque: 2 kN*m }');
     const r = withFinding(analyseCase(parseCase(text)));
     const s = limiterSlip(r, { station: 'disc', side: 'A' }, 500);
     expect(s.slipMethod).toBe('energy method');
-    expect(s.note).toMatch(/No shaft segment between "disc" and the stop can hold a limiter/);
+    expect(s.note).toMatch(/The shaft beside "disc" toward the stop cannot hold a limiter in the model \(a shear pin is there\)/);
+  });
+
+  it('with the station inside a segment and the stop inside the same segment, models the limiter between the two', () => {
+    const text = caseText({ rpm: 300, segments: [[600, 40, 0]], stations: [['disc', 100, 1], ['jam', 500, 0]], stop: 'jam' }).replace('stop: { at: jam }', 'stop: { at: jam, duration: 1 ms }');
+    const r = withFinding(analyseCase(parseCase(text)));
+    const s = limiterSlip(r, { station: 'disc', side: 'A' }, 500);
+    expect(s.slipMethod).toBe('dynamic model');
+    expect([s.modelledFrom, s.modelledTo].map((x) => Math.round(x! * 1000))).toEqual([100, 500]);
   });
 });
 
 describe('the granulator\'s limiter rerun: the peak between the limiter and the stop', () => {
   const c = sample('granulator-tramp-metal.yaml');
   const setting = resizeCase(c, withFinding(analyseCase(c))).limiter.max;
-  // The limiter goes into the bearing journal (segment index 1, see above); the run from there to
-  // the stop is the rest of the bearing journal (Ø65), the shoulder (Ø80) and the rotor body (Ø90).
+  // The limiter goes into the sheave seat beside the drive sheave (60 to 120 mm, see above); the run
+  // from there to the stop is the rest of the sheave seat (Ø55), the bearing journal (Ø65), the
+  // shoulder (Ø80) and the rotor body (Ø90).
   const peakWith = (stop: number, elements?: number) =>
     dynamicLimiterSlip({ ...c, stop: { ...c.stop, duration: stop }, analysis: { ...c.analysis, ...(elements ? { elements } : {}) } }, 'drive sheave', 'A', setting)!;
   const G = c.materials['aisi-1045-cd'].shearModulus!;
@@ -126,12 +140,15 @@ describe('the granulator\'s limiter rerun: the peak between the limiter and the 
     // that decelerates its own inertia at the ramp's ω/t_r, J_run·ω/t_r, at most doubled by the
     // suddenness of the slip's onset (dynamic load factor 2 of a suddenly applied load; Clough &
     // Penzien, Dynamics of Structures, response to a step load; from memory, confident, section to verify). J_run = ρ·J_p·L (shared
-    // REFERENCE 2.4) from the bearing journal's start to the stop, a little more than the model's.
-    const Jrun = rho * (Jp(0.065) * 0.16 + Jp(0.08) * 0.06 + Jp(0.09) * 0.21);
+    // REFERENCE 2.4) from the drive sheave to the stop, a little more than the model's (the slip
+    // element sits in the middle of the sheave seat's piece).
+    const Jrun = rho * (Jp(0.055) * 0.06 + Jp(0.065) * 0.16 + Jp(0.08) * 0.06 + Jp(0.09) * 0.21);
     const d = peakWith(tr);
     expect(d.peakTorque).toBeGreaterThanOrEqual(setting * (1 - 1e-6));
-    // 1 % of the setting for the model's ringing damping and steps.
-    expect(d.peakTorque).toBeLessThan(setting + (2 * Jrun * omega) / tr + 0.01 * setting);
+    // 3 % of the setting for the model's ringing, damping and steps: with the limiter modelled at its
+    // station (the sheave seat) rather than in the bearing journal, the 5 ms ramp peaks some 1 %
+    // of the setting above the other terms, which are an estimate (the factor 2 from memory).
+    expect(d.peakTorque).toBeLessThan(setting + (2 * Jrun * omega) / tr + 0.03 * setting);
     expect(d.stopWave).toBeUndefined();
   });
 });

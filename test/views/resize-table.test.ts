@@ -28,7 +28,13 @@ describe('the terminal output of shaftcase resize', () => {
     expect(out).toMatch(/No size of "sheave seat" .* alone keeps side A within the factor/);
     expect(out).toMatch(/a key is a poor and unpredictable fuse/);
     expect(out).toMatch(/bearings, hubs, keyways and fits must be rechecked/);
-    expect(out).toMatch(/ring-tested/);
+    // The granulator has no wheel: no wheel advice; its jam was a tramp bolt: the tramp-metal advice.
+    expect(out).not.toMatch(/ring-tested/);
+    expect(out).toMatch(/Foreign matter: .* metal detector/);
+    // Its limiter fails its own factor (the instantaneous stop's wave), so no option alone is picked, and the flags say why.
+    expect(out).toMatch(/Recommended: none of the options alone/);
+    expect(out).toMatch(/The rule: The pick is the least change/);
+    expect(out).toMatch(/- Torque limiter at "drive sheave": fails its own design factor: .* 0\.717, above the 0\.667/);
     for (const c of CAUTIONS) expect(out).toContain(c);
   });
 

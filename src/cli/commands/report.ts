@@ -71,7 +71,7 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
     }
   }
 
-  const written = await writeReport({ caseFile: loaded.file, caseText: loaded.text, photos, files, date: run.date, ranAt: now });
+  const written = await writeReport({ caseFile: loaded.file, caseText: loaded.text, photos, files, caseId: loaded.case.meta.id, date: run.date, ranAt: now });
   const lines = [`Wrote the report ${written.folder}/`, ...files.map((f) => `  ${f.path}`)];
   lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
   lines.push(`Open ${written.folder}/report.html`);

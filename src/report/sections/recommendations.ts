@@ -1,8 +1,7 @@
 import type { ResizeResult } from '../../resize/resize-result.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from '../../views/resize-rows.ts';
-import { criticalSegmentSentence, factorSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from '../../views/resize-words.ts';
+import { criticalSegmentSentence, factorSentence, flaggedOptions, recommendedSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from '../../views/resize-words.ts';
 import { findingSentence } from '../../views/finding-words.ts';
-import { recommendedRemedy } from '../../views/remedy-words.ts';
 import { linkTo } from '../anchor.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
@@ -20,16 +19,14 @@ export const recommendationsSection: ReportSection = {
   title: 'Recommendations: what goes back in',
   render({ results, resize }) {
     const e = escapeMarkdown;
-    const remedy = recommendedRemedy(resize);
     const out = [
       e(`Each option is checked against a repeat of the recorded incident by a rerun of the changed case through the elastic energy method, and under the running torque. Present shaft, the finding: ${findingSentence(results.finding, results.case.units)}`),
       e(factorSentence(resize)),
       optionsTable(resize),
       e("Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate."),
-      remedy
-        ? `**Recommended:** ${e(`${capitalise(remedy.action)}: ${remedy.figure}; ${remedy.why}.`)}`
-        : `**Recommended:** ${e('none of the options can be recommended from the numbers alone; the engineer decides with the machine builder.')}`,
-      `${e('Each option in words, with what the options rest on:')} ${linkTo(OPTIONS_TITLE, 'see the appendix')}.`,
+      `**${e(recommendedSentence(resize))}**`,
+      e(`The rule: ${resize.pickRule}`),
+      `${e('Why each flagged option is not advisable, each option in words, and what they rest on:')} ${linkTo(OPTIONS_TITLE, 'see the appendix')}.`,
     ];
     out.push('### Guarding and restart', bulletList(resize.guarding.map((g) => e(`${g.topic}: ${g.text}`))));
     const decision = [
@@ -48,6 +45,8 @@ export const optionsSection: ReportSection = {
   render({ resize }) {
     const e = escapeMarkdown;
     const out: string[] = [];
+    const flagged = flaggedOptions(resize);
+    if (flagged.length > 0) out.push(`### ${e('Flagged: why these options are not advisable')}`, bulletList(flagged.map((o) => e(`${o.name}: ${o.flags.join('; ')}.`))));
     const part = (title: string, lines: readonly string[]) => out.push(`### ${e(title)}`, bulletList(lines.map(e)));
     part('Scale the side', [scaleSideSentence(resize)]);
     part('Resize the critical segment only', [criticalSegmentSentence(resize)]);

@@ -94,8 +94,8 @@ function observedLines(r: Investigation): string[] {
 function remedyParagraph(z: ResizeResult): string {
   const remedy = recommendedRemedy(z);
   const link = linkTo(recommendationsSection.title, 'what goes back in');
-  if (!remedy) return `**Recommended remedy:** ${e('resize finds no option to recommend; the engineer decides with the machine builder')} (${link}).`;
-  return `**Recommended remedy:** ${e(`${remedy.action}.`)} ${e(`Key figure: ${remedy.figure}. Why this one: ${remedy.why}.`)} (${link})`;
+  if (!remedy) return `**Recommended remedy:** ${e('none of the options of resize alone; each has a flag. Combine them (for example a stronger shaft and a torque limiter) and check the combination with the machine builder')} (${link}).`;
+  return `**Recommended remedy:** ${e(`${remedy.action}.`)} ${e(`Key figure: ${remedy.figure}. Why this one: ${remedy.why.replace(/\.$/, '')}.`)} (${link})`;
 }
 
 /** Sign-off lines in plain words, the investigator's name on the first. */

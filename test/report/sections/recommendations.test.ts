@@ -19,15 +19,16 @@ describe('the report section "Recommendations: what goes back in"', () => {
     const rows = md.split('\n').filter((l) => l.startsWith('| '));
     expect(rows).toHaveLength(optionRows(z).length + 2); // headings, rule, one row per option
     expect(md).toMatch(/### Guarding and restart/);
-    expect(md).toMatch(/ring-tested/);
-    expect(md).toMatch(/\*\*Recommended:\*\* /);
+    expect(md).toMatch(/Restart to a written procedure/);
+    expect(md).not.toMatch(/ring-tested/);
+    expect(md).toMatch(/\*\*Recommended: none of the options alone/);
     expect(md).toContain('[see the appendix](#appendix-every-option-for-what-goes-back-in)');
   });
 
   it('the appendix of every option says each in words, and what the options rest on', () => {
     const data = buildReportData(parseCase(granulator));
     const md = optionsSection.render({ ...data, run: RUN, source: { file: 'c.yaml', text: granulator, sha256: '0'.repeat(64) } })!;
-    for (const h of ['### Scale the side', '### Resize the critical segment only', '### Another material', '### Torque limiter or slip coupling', '### The key as fuse at "drive sheave"', '### What the options rest on']) expect(md).toContain(h);
+    for (const h of ['### Flagged: why these options are not advisable', '### Scale the side', '### Resize the critical segment only', '### Another material', '### Torque limiter or slip coupling', '### The key as fuse at "drive sheave"', '### What the options rest on']) expect(md).toContain(h);
   });
 
   it('ends with what the investigator decides, and for a yielded shaft the return-to-service caution', () => {
@@ -38,7 +39,7 @@ describe('the report section "Recommendations: what goes back in"', () => {
   it('renders to HTML with one table of the options', () => {
     const html = new MarkdownIt().render(section(granulator).md);
     expect(html.match(/<table>/g)).toHaveLength(1);
-    expect(html).toMatch(/<td>Torque limiter at &quot;drive sheave&quot;<\/td>/);
+    expect(html).toMatch(/<td>Torque limiter at &quot;drive sheave&quot; \(flagged\)<\/td>/);
   });
 
   it('escapes the case\'s own text: names and labels cannot break the table or add markup', () => {
