@@ -119,7 +119,7 @@ describe('renderReport', () => {
     const { md, results } = report('exhaust-fan-seized-impeller.yaml');
     const findings = section(md, 'Findings');
     expect(md.match(/\n## Findings\n/g)).toHaveLength(1);
-    expect(findings).toMatch(/^\n## Findings\n\n- The finding \(stated in the summary\) stands on the energy method/);
+    expect(findings).toMatch(/^\n## Findings\n\n- The finding \(page 1\) stands on the energy method/);
     expect(findings).not.toMatch(/Verdict|Finding:/);
     for (const h of ['### Past yield', '### Measured permanent twist, read back to the stop', '### Fracture']) expect(findings).toContain(h);
     expect(findings).toContain('like for like (both elastic)');

@@ -34,7 +34,7 @@ export function renderDynamicsBody(r: Results): string {
     const stations = r.sides.find((x) => x.side === s.side)?.stations.map(escapeMarkdown).join(', ') ?? '';
     out.push(`| ${s.side} | ${stations} | ${show(s.energyPeakTorque, 'torque', u)} | ${show(s.dynamicPeakTorque, 'torque', u)} | ${sig(s.energyYieldRatio)} | ${sig(s.dynamicYieldRatio)} |`);
   }
-  out.push('', `The finding (see the summary) stands on the ${r.verdictBasis}. The dynamic model's peak torque in this table is the one carried (capped past yield where a piece yields); its stress / shear yield is that of the same chain kept elastic, like for like with the energy method's.`, '');
+  out.push('', `The finding (page 1) stands on the ${r.verdictBasis}. The dynamic model's peak torque in this table is the one carried (capped past yield where a piece yields); its stress / shear yield is that of the same chain kept elastic, like for like with the energy method's.`, '');
 
   const capped = d.pieces.some((p) => p.elasticPeakTorque > p.peakTorque * (1 + 1e-6));
   out.push('### Peak torque along the shaft, dynamic model', '');

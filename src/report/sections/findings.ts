@@ -41,7 +41,7 @@ function verdicts(r: Investigation): string {
   const u = r.case.units;
   const f = r.finding;
   const items = [
-    `The finding (stated in the summary) stands on the ${f.basis}; past yield on the ${f.pastYieldModel}.`,
+    `The finding (page 1) stands on the ${f.basis}; past yield on the ${f.pastYieldModel}.`,
     ...(f.basis === 'dynamic model'
       ? r.dynamic.sides.map((s) => `Dynamic model, side ${s.side}: peak torque as carried ${show(s.dynamicPeakTorque, 'torque', u)}; elastic peak ${show(elasticDynamicPeak(r.dynamic, s.side), 'torque', u)}, stress / shear yield ${sig(s.dynamicYieldRatio)}.`)
       : []),
