@@ -17,7 +17,7 @@ export { decideFinding, type Finding, type FindingVerdict, type FindingBasis } f
 export { withFinding, type Investigation } from './finding/investigation.ts';
 export type { FindingChance } from './finding/finding-chance.ts';
 export { resizeCase } from './resize/resize-case.ts';
-export type { ResizeResult } from './resize/resize-result.ts';
+export type { OptionId, Recommended, ResizeResult } from './resize/resize-result.ts';
 export { resultsToJson } from './views/results-json.ts';
 export { resizeToJson } from './views/resize-json.ts';
 export { findingToJson } from './views/finding-json.ts';

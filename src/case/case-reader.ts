@@ -1,4 +1,4 @@
-import { isMap, isScalar, isSeq, type Document, type LineCounter, type Node } from 'yaml';
+import { isMap, isScalar, isSeq, type Document, type LineCounter, type Node, type YAMLMap } from 'yaml';
 import { parseQuantity, QuantityError, type Quantity, type Tolerance } from '../units/quantity.ts';
 import { type QuantityKind, KIND_EXAMPLES } from '../units/unit-table.ts';
 import { formatPath, type CaseErrorCode, type CaseProblem, type SourcePosition } from './case-error.ts';
@@ -74,14 +74,14 @@ export class CaseReader {
       this.fail('E_TYPE', path, `should be a mapping of ${keys.slice(0, 4).join(', ')}…, not ${describe(n)}`);
       return false;
     }
-    for (const pair of n.items) {
+    n.items.forEach((pair, i) => {
       const key = isScalar(pair.key) ? String(pair.key.value) : String(pair.key);
-      if (keys.includes(key)) continue;
+      if (keys.includes(key)) return;
       const guess = didYouMean(key, keys);
-      const hint = guess ? `did you mean "${guess}"?` : `known keys here: ${keys.join(', ')}`;
+      const hint = commaInFlow(n, i) ?? (guess ? `did you mean "${guess}"?` : `known keys here: ${keys.join(', ')}`);
       const pos = isScalar(pair.key) && pair.key.range ? this.at(pair.key.range[0]) : this.position(path);
       this.fail('E_UNKNOWN_KEY', [...path, key], `unknown key; ${hint}`, pos);
-    }
+    });
     return true;
   }
 
@@ -241,4 +241,17 @@ function describe(n: Node): string {
   if (isSeq(n)) return 'a list';
   if (isScalar(n)) return `"${String(n.value)}"`;
   return 'this value';
+}
+
+/**
+ * Where an unknown key of a `{ … }` mapping is text with no value after a plain value, the user most
+ * likely wrote a comma inside that value (`method: keyway offset, read with a protractor`): in a
+ * flow mapping the comma ends the value and the rest reads as a key. The hint says to quote it.
+ */
+function commaInFlow(n: YAMLMap, i: number): string | undefined {
+  const pair = n.items[i];
+  const prev = n.items[i - 1];
+  if (!n.flow || i === 0 || pair.value !== null || !isScalar(pair.key) || !prev || !isScalar(prev.key) || !isScalar(prev.value)) return undefined;
+  const whole = `${String(prev.value.value)}, ${String(pair.key.value)}`;
+  return `a comma inside a { … } mapping ends a value, so "${String(pair.key.value)}" reads as a key; if it belongs to ${String(prev.key.value)}, put the whole value in quotes: ${String(prev.key.value)}: "${whole}"`;
 }

@@ -22,6 +22,17 @@ describe('parseCase reports each mistake with file:line:column, the field path a
     expect(msgs).toContainEqual(expect.stringMatching(new RegExp(`^case\\.yaml:${line}:7 shaft\\.segments\\[0\\]\\.diametre: unknown key; did you mean "diameter"\\?`)));
   });
 
+  it('a comma inside a value of a { … } mapping: the rest reads as a key, and the message says to quote the value', () => {
+    const text = `${base.trimEnd()}\nobserved:\n  permanent_twist:\n    - { between: [jam, flywheel], angle: 2 deg, method: keyway offset, read with a protractor }\n`;
+    const msgs = problems(text);
+    expect(msgs).toContainEqual(
+      expect.stringMatching(/observed\.permanent_twist\[0\]\.read with a protractor: unknown key; a comma inside a \{ … \} mapping ends a value, so "read with a protractor" reads as a key; if it belongs to method, put the whole value in quotes: method: "keyway offset, read with a protractor"$/),
+    );
+    // Quoted, it reads.
+    const quoted = text.replace('method: keyway offset, read with a protractor', 'method: "keyway offset, read with a protractor"');
+    expect(parseCase(quoted).observed.permanentTwist[0].method).toBe('keyway offset, read with a protractor');
+  });
+
   it('a missing unit', () => {
     const text = base.replace('diameter: 50 mm', 'diameter: 50');
     const line = lineOf(text, 'diameter: 50');
