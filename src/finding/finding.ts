@@ -6,7 +6,7 @@
  */
 import type { SideName, ShaftPiece } from '../model/shaft-model.ts';
 import { isBrittle } from '../physics/fracture.ts';
-import { firstBrokenPiece, type DynamicPiece } from '../results/dynamic-result.ts';
+import { firstBrokenPiece, pieceTorqueHistory, type DynamicPiece } from '../results/dynamic-result.ts';
 import type { Results } from '../results/results.ts';
 import type { DriveTrainElement } from '../results/drive-train.ts';
 import type { TwistFindingCode } from '../results/twist-findings.ts';
@@ -20,6 +20,12 @@ import { incidentFatigue, type IncidentFatigue } from './incident-fatigue.ts';
  * strain (ductile) or strength (brittle).
  */
 export type FindingVerdict = 'elastic' | 'yielded locally' | 'yielded' | 'fracture predicted';
+
+/**
+ * What happens to the shaft, in the plant's words: it may go back after the checks, it is inspected
+ * (crack test at the stress raiser) before anyone decides, or it is replaced.
+ */
+export type FindingAction = 'return to service' | 'inspect before return' | 'replace';
 
 /** The model a finding stands on. The energy method's result past yield is the energy balance. */
 export type FindingBasis = 'energy method' | 'dynamic model';
@@ -76,6 +82,8 @@ export interface Finding {
   weakest: OrderedElement | undefined;
   /** The incident's fatigue at the governing piece's stress raiser: its cycles and damage. */
   fatigue: IncidentFatigue;
+  /** The disposition in three words: the decision the person who signs makes. */
+  action: FindingAction;
 }
 
 /** A drive-train element with its place in the order of giving way (1: first). */
@@ -119,7 +127,8 @@ export function decideFinding(r: Results): Finding {
     disposition: disposition(verdict, brittle),
     driveTrain,
     weakest: driveTrain[0],
-    fatigue: incidentFatigue(material, g.piece.segment.kt, g.shearStress, g.elasticTorque, r.dynamic.histories),
+    fatigue: incidentFatigue(material, g.piece.segment.kt, g.shearStress, g.elasticTorque, pieceTorqueHistory(r.dynamic, g.piece)?.values),
+    action: actionOf(verdict, brittle),
   };
 }
 
@@ -187,6 +196,13 @@ const DISPOSITION: Record<FindingVerdict, string> = {
   'yielded locally': 'Not returned to service on this calculation alone: inspect the stress raiser named above for cracks (magnetic particle or dye penetrant) before any decision; a repeat of the incident uses up its fatigue life.',
   elastic: 'May go back after inspection: no yield is predicted; inspect keys, hubs, couplings and the shaft\'s runout before return to service.',
 };
+
+/** Replace where the section yielded through or broke (or brittle material passed its strength); inspect where it yielded at a stress raiser only. */
+function actionOf(verdict: FindingVerdict, brittle: boolean): FindingAction {
+  if (verdict === 'elastic') return 'return to service';
+  if (verdict === 'yielded locally' && !brittle) return 'inspect before return';
+  return 'replace';
+}
 
 function disposition(verdict: FindingVerdict, brittle: boolean): string {
   if (brittle && verdict === 'yielded locally') {

@@ -11,7 +11,6 @@ import { notchCycles, type NotchCycle } from '../physics/fatigue/notch-damage.ts
 import { rainflow } from '../physics/fatigue/rainflow.ts';
 import { equivalentNormalStress } from '../physics/fatigue/shear-equivalent.ts';
 import { uniformMaterialLaw, type StrainLifeProperties } from '../physics/fatigue/strain-life-properties.ts';
-import type { DynamicHistories } from '../results/dynamic-histories.ts';
 
 /** Poisson's ratio used to estimate E from G where a material gives no E (steels 0.27–0.30; common practice). */
 const POISSON_ESTIMATE = 0.3;
@@ -38,9 +37,9 @@ export interface IncidentFatigue {
 
 /**
  * The incident's fatigue. `elasticStress` is the finding's kt stress at the governing piece and
- * `elasticPeakTorque` the torque it stands on, `history` the dynamic model's torque histories (its first series is the most loaded piece).
+ * `elasticPeakTorque` the torque it stands on, `history` the dynamic model's torque history of the governing piece (undefined: the jam's cycle alone).
  */
-export function incidentFatigue(material: Material, kt: number, elasticStress: number, elasticPeakTorque: number, history: DynamicHistories | undefined): IncidentFatigue {
+export function incidentFatigue(material: Material, kt: number, elasticStress: number, elasticPeakTorque: number, history: Float64Array | undefined): IncidentFatigue {
   const notes: string[] = [];
   const E = material.elasticModulus ?? (material.shearModulus ?? 0) * 2 * (1 + POISSON_ESTIMATE);
   if (material.elasticModulus === undefined) notes.push(`The material gives no elastic modulus; E = 2G(1 + ν) with ν = ${POISSON_ESTIMATE} stands in.`);
@@ -60,13 +59,13 @@ export function incidentFatigue(material: Material, kt: number, elasticStress: n
   if (isBrittle(material)) notes.push('The material is brittle: the strain–life relation and Neuber\'s rule are for ductile metals, so this life is a rough guess.');
   const nominalShearStress = elasticStress / kt;
   const peakEq = equivalentNormalStress(nominalShearStress);
-  const series = history?.torques[0]?.values;
+  const series = history;
   const ringDown = series !== undefined && series.some((v) => v !== 0) && elasticPeakTorque > 0;
   const nominal = ringDown ? nominalHistory(series, peakEq, elasticPeakTorque) : [0, peakEq, 0];
   const cycles = notchCycles(rainflow(nominal), kt, properties).sort((a, b) => b.nominalRange - a.nominalRange);
   const jamCycle = notchCycles([{ range: peakEq, mean: peakEq / 2, count: 1 }], kt, properties)[0];
   notes.push('Torsion enters the strain–life relation as the von Mises equivalent (√3·τ), Neuber\'s rule on the equivalent stress with the segment\'s kt; mean stress is left out.');
-  if (ringDown) notes.push('The ring-down is the dynamic model\'s torque history of the most loaded piece, in the governing piece\'s nominal stress per torque, its largest sample put at the elastic peak (Neuber\'s rule takes the stress an elastic analysis gives), counted by rainflow (ASTM E1049); the history is kept at a few hundred samples, so small late cycles may be missed. The model holds the stop in both senses, so a rebound that would lift a one-sided jam off is counted in full, and the count ends with the model\'s window: an upper estimate where the ring-down dominates.');
+  if (ringDown) notes.push('The ring-down is the dynamic model\'s torque history of the governing piece, in its nominal stress per torque, its largest sample put at the elastic peak (Neuber\'s rule takes the stress an elastic analysis gives), counted by rainflow (ASTM E1049); the history is kept at a few hundred samples, so small late cycles may be missed. The model holds the stop in both senses, so a rebound that would lift a one-sided jam off is counted in full, and the count ends with the model\'s window: an upper estimate where the ring-down dominates.');
   return { kt, nominalShearStress, propertiesSource, properties, cycles, jamCycle, damage: minerSum(cycles.map((c) => c.damage)), ringDown, notes };
 }
 

@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
 import type { Browser } from 'playwright-core';
+import { PAGE_FOOTER_META } from '../report/page-footer.ts';
 
 /** Where Debian's `chromium` package puts the browser; the first that exists is used. */
 export const CHROMIUM_PATHS = ['/usr/lib/chromium/chromium', '/usr/bin/chromium'];
@@ -50,16 +51,41 @@ export async function launchChromium(): Promise<Browser> {
   return chromium.launch({ executablePath, args: CHROMIUM_ARGS });
 }
 
+/** Page margins of the PDF: room at the foot for the footer (the case id, the date, "page N of M"). */
+const PDF_MARGIN = { top: '14mm', right: '14mm', bottom: '16mm', left: '14mm' };
+
 /**
- * Prints a self-contained HTML page to PDF on `paper`. Uses `browser` when given (the browser test
- * shares its one launch), or starts and closes its own.
+ * The footer every page of the PDF carries: the text the page's footer meta gives (the case id and
+ * the date, from renderHtml's `pageFooter`) on the left, "page N of M" on the right. Chromium fills
+ * the pageNumber and totalPages spans; the text is already escaped in the meta's attribute.
+ */
+export function footerTemplate(html: string): string {
+  const text = new RegExp(`<meta name="${PAGE_FOOTER_META}" content="([^"]*)">`).exec(html)?.[1] ?? '';
+  return (
+    '<div style="font: 8pt system-ui, \'DejaVu Sans\', sans-serif; color: #5b6470; width: 100%; margin: 0 14mm; display: flex; justify-content: space-between;">' +
+    `<span>${text}</span><span>page <span class="pageNumber"></span> of <span class="totalPages"></span></span></div>`
+  );
+}
+
+/**
+ * Prints a self-contained HTML page to PDF on `paper`, every page footed with the case id, the
+ * date and its number. Uses `browser` when given (the browser test shares its one launch), or
+ * starts and closes its own.
  */
 export async function printPdf(html: string, paper: 'A4' | 'Letter', browser?: Browser): Promise<Uint8Array> {
   const own = browser ? undefined : await launchChromium();
   try {
     const page = await (browser ?? own!).newPage();
     await page.setContent(html, { waitUntil: 'load' });
-    const pdf = await page.pdf({ format: paper, printBackground: true, preferCSSPageSize: false });
+    const pdf = await page.pdf({
+      format: paper,
+      printBackground: true,
+      preferCSSPageSize: false,
+      margin: PDF_MARGIN,
+      displayHeaderFooter: true,
+      headerTemplate: '<span></span>',
+      footerTemplate: footerTemplate(html),
+    });
     await page.close();
     return new Uint8Array(pdf);
   } finally {

@@ -8,6 +8,7 @@ export function drawFigures(data: ReportData, registry = REPORT_FIGURES): Placed
   return registry.flatMap(({ section, draw }) => {
     const drawn = draw(data);
     const figures = drawn === undefined ? [] : Array.isArray(drawn) ? drawn : [drawn];
-    return figures.map((figure: ReportFigure) => ({ section, figure }));
+    const placed = typeof section === 'string' ? section : section(data);
+    return figures.map((figure: ReportFigure) => ({ section: placed, figure }));
   });
 }

@@ -1,6 +1,6 @@
 // What the report holds, in order. Adding a section, a figure or a table is one line here (and its
 // own small file): see DEVELOPERS.md, "Adding a report section or figure".
-import type { ReportSection } from './report-context.ts';
+import type { ReportData, ReportSection } from './report-context.ts';
 import type { FigureDrawer } from './figures/report-figure.ts';
 import type { ReportTable } from './tables/report-table.ts';
 import type { Results } from '../results/results.ts';
@@ -8,7 +8,7 @@ import { summarySection } from './sections/summary.ts';
 import { incidentSection } from './sections/incident.ts';
 import { machineSection } from './sections/machine.ts';
 import { methodSection } from './sections/method.ts';
-import { resultsSection } from './sections/results-per-side.ts';
+import { comparisonSection, resultsSection } from './sections/results-per-side.ts';
 import { materialSection } from './sections/material.ts';
 import { observationsSection } from './sections/observations.ts';
 import { findingsSection } from './sections/findings.ts';
@@ -19,7 +19,7 @@ import { driveProtectionSection } from './sections/drive-protection.ts';
 import { couplingsSection } from './sections/couplings.ts';
 import { driveTrainSection } from './sections/drive-train.ts';
 import { backlashSection } from './sections/backlash.ts';
-import { recommendationsSection } from './sections/recommendations.ts';
+import { optionsSection, recommendationsSection } from './sections/recommendations.ts';
 import { fatigueSection } from './sections/fatigue.ts';
 import { cautionsSection } from './sections/cautions.ts';
 import { sourcesSection } from './sections/sources.ts';
@@ -52,42 +52,59 @@ import { uncertaintySensitivityTable } from './tables/uncertainty-sensitivity-ta
 /** The report's sections, in order. The template places them (`{{sections}}` or `{{section:ID}}`). */
 export const REPORT_SECTIONS: readonly ReportSection[] = [
   summarySection,
+  // The cautions next, where the people who inspect read before they start.
+  cautionsSection,
   incidentSection,
   machineSection,
-  methodSection,
   resultsSection,
-  dynamicsSection,
-  keysAndFitsSection,
-  driveProtectionSection,
-  couplingsSection,
-  backlashSection,
-  driveTrainSection,
   materialSection,
   observationsSection,
   findingsSection,
   howSureSection,
-  fatigueSection,
   recommendationsSection,
-  cautionsSection,
+  // The appendices: the other model, the full tables, the method, every option, the sources, the inputs.
+  comparisonSection,
+  dynamicsSection,
+  // What gave way first and the hubs, where the case has keys, fits, couplings, limiters or pins
+  // (the finding names the weakest element on page 1).
+  driveTrainSection,
+  keysAndFitsSection,
+  fatigueSection,
+  driveProtectionSection,
+  couplingsSection,
+  backlashSection,
+  methodSection,
+  optionsSection,
   sourcesSection,
   appendixSection,
 ];
 
-/** The figures, numbered in this order, each shown at the end of the section named beside it. */
-export const REPORT_FIGURES: readonly { section: string; draw: FigureDrawer }[] = [
+/** Where the energy method's figures go: the body where the finding stands on it, else the comparison. */
+const energyMethod = ({ results }: ReportData) => (results.finding.basis === 'energy method' ? 'results' : 'comparison');
+/** Where the dynamic model's time histories go: the body where the finding stands on it, else the comparison. */
+const dynamicModel = ({ results }: ReportData) => (results.finding.basis === 'dynamic model' ? 'results' : 'comparison');
+/** The mode shapes: the dynamic model's details where the finding stands on it, else the comparison. */
+const dynamicDetails = ({ results }: ReportData) => (results.finding.basis === 'dynamic model' ? 'dynamics' : 'comparison');
+
+/**
+ * The figures, each shown at the end of the section named beside it (or chosen for the case: the
+ * finding's model's figures in the body, the other model's in the comparison appendix), numbered
+ * in the order they appear.
+ */
+export const REPORT_FIGURES: readonly { section: string | ((data: ReportData) => string); draw: FigureDrawer }[] = [
   { section: 'machine', draw: ({ results }) => shaftSchematicFigure(results) },
   { section: 'machine', draw: ({ results }) => energyShareFigure(results) },
-  { section: 'results', draw: ({ results }) => stressAlongShaftFigure(results) },
-  { section: 'results', draw: ({ results }) => stressVsSpeedFigure(results) },
-  { section: 'dynamics', draw: ({ results }) => dynamicTorqueFigure(results) },
-  { section: 'dynamics', draw: ({ results }) => dynamicSpeedsFigure(results) },
-  { section: 'dynamics', draw: ({ results }) => dynamicModesFigure(results) },
+  { section: energyMethod, draw: ({ results }) => stressAlongShaftFigure(results) },
+  { section: energyMethod, draw: ({ results }) => stressVsSpeedFigure(results) },
+  { section: dynamicModel, draw: ({ results }) => dynamicTorqueFigure(results) },
+  { section: dynamicModel, draw: ({ results }) => dynamicSpeedsFigure(results) },
+  { section: dynamicDetails, draw: ({ results }) => dynamicModesFigure(results) },
   { section: 'findings', draw: ({ results }) => torqueTwistFigure(results) },
   { section: 'findings', draw: ({ results }) => permanentTwistSpeedFigures(results) },
   { section: 'uncertainty', draw: ({ results }) => yieldRatioHistogramFigure(results) },
   { section: 'uncertainty', draw: ({ results }) => sensitivityFigure(results) },
-  { section: 'recommendations', draw: ({ results, resize }) => yieldRatioAgainstDiameterFigure(results, resize) },
-  { section: 'recommendations', draw: ({ results, resize }) => peakTorqueAgainstLimiterFigure(results, resize) },
+  { section: 'options', draw: ({ results, resize }) => yieldRatioAgainstDiameterFigure(results, resize) },
+  { section: 'options', draw: ({ results, resize }) => peakTorqueAgainstLimiterFigure(results, resize) },
 ];
 
 /**

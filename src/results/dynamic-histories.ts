@@ -10,15 +10,21 @@ export interface Series {
 
 /**
  * The time histories the report plots, kept compact (a few hundred samples): station speeds, and
- * torques in the most loaded piece and in every slip element.
+ * torques in every piece of shaft and in every slip element.
  */
 export interface DynamicHistories {
   /** s from the stop's start. */
   time: Float64Array;
   /** Station speeds at shaft speed, rad/s; a rotor behind a belt too. */
   speeds: Series[];
-  /** Torques, N·m, positive in the sense that resists the stop: the governing piece first, then each slip element. */
+  /** Torques, N·m, positive in the sense that resists the stop, in each slip element. */
   torques: Series[];
+  /**
+   * Torque in each piece of shaft (index as `DynamicResult.pieces`), N·m, in the same sense: its
+   * element of highest peak. The views plot the finding's governing piece from these (one place
+   * decides which piece governs), never a piece picked here.
+   */
+  pieceTorques: Series[];
 }
 
 export function dynamicHistories(chain: Chain, sol: ChainSolution, slips: readonly SlipOutcome[]): DynamicHistories {
@@ -34,14 +40,11 @@ export function dynamicHistories(chain: Chain, sol: ChainSolution, slips: readon
   const sense = (e: number) => (chain.elements[e].side === 'A' ? -1 : 1);
   const elementSeries = (e: number) => h.elementTorque[e].map((t) => sense(e) * t);
   const torques: Series[] = [];
-  const peaks = sol.piecePeak;
-  const top = peaks.reduce((best, p, i) => (p > peaks[best] ? i : best), 0);
-  const gov = sol.pieceElement[top];
-  if (gov >= 0) {
-    const p = chain.pieces[top].piece;
-    const label = p.segment.label ? ` "${p.segment.label}"` : ` segment ${p.segment.index + 1}`;
-    torques.push({ name: `shaft${label} (most loaded)`, values: elementSeries(gov) });
-  }
+  const pieceTorques = chain.pieces.map((c, i) => {
+    const p = c.piece;
+    const e = sol.pieceElement[i];
+    return { name: `shaft ${p.segment.label ? `"${p.segment.label}"` : `segment ${p.segment.index + 1}`}`, values: e >= 0 ? elementSeries(e) : new Float64Array(h.time.length) };
+  });
   for (const s of slips) {
     if (s.kind === 'torque limiter') torques.push({ name: s.element, values: elementSeries(s.elementIndex!) });
     else if (s.kind === 'belt') {
@@ -49,5 +52,5 @@ export function dynamicHistories(chain: Chain, sol: ChainSolution, slips: readon
       torques.push({ name: s.element, values: h.beltTorque[i] });
     } else torques.push({ name: s.element, values: h.jamTorque });
   }
-  return { time: h.time, speeds, torques };
+  return { time: h.time, speeds, torques, pieceTorques };
 }

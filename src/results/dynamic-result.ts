@@ -10,7 +10,7 @@ import { BacklashLaw } from '../physics/backlash-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
 import { modeFrequencies, type ModeFrequency } from './mode-convergence.ts';
-import { dynamicHistories, type DynamicHistories } from './dynamic-histories.ts';
+import { dynamicHistories, type DynamicHistories, type Series } from './dynamic-histories.ts';
 import { yieldPath, type YieldPath } from './yield-path.ts';
 import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
@@ -135,6 +135,16 @@ const MAX_EVENTS_KEPT = 100;
 const QUIET_YIELD_EVENTS = new Set(['turns back', 'rejoins an earlier loading path', 'yields on']);
 
 /** The piece that broke first in the dynamic model, if any. */
+/**
+ * The torque history of the dynamic model's piece that spans `piece` (a piece of the shaft model,
+ * as the finding names it), or undefined where the dynamic model has none: one place for the
+ * torque figure and the fatigue count to find the governing piece's history.
+ */
+export function pieceTorqueHistory(d: Pick<DynamicResult, 'pieces' | 'histories'>, piece: ShaftPiece): Series | undefined {
+  const i = d.pieces.findIndex((p) => p.piece.start <= piece.start + 1e-9 && p.piece.end >= piece.end - 1e-9 && p.piece.segment.index === piece.segment.index);
+  return i >= 0 ? d.histories.pieceTorques[i] : undefined;
+}
+
 export function firstBrokenPiece(d: Pick<DynamicResult, 'pieces'>): DynamicPiece | undefined {
   return d.pieces.filter((p) => p.broken).sort((a, b) => (a.breakTime ?? 0) - (b.breakTime ?? 0))[0];
 }

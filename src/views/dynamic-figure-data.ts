@@ -1,3 +1,5 @@
+import type { Investigation } from '../finding/investigation.ts';
+import { pieceTorqueHistory } from '../results/dynamic-result.ts';
 import type { Results } from '../results/results.ts';
 import { inDisplay, unitLabel } from './display-units.ts';
 
@@ -15,11 +17,16 @@ export interface FigureData {
   yLabel: string;
 }
 
-/** Torque against time in the most loaded piece and in every slip element (ms, torque units). */
-export function torqueHistoryData(r: Results): FigureData {
+/**
+ * Torque against time in the finding's governing piece (the same span in the dynamic model) and in
+ * every slip element (ms, torque units); the piece is named as the finding names it.
+ */
+export function torqueHistoryData(r: Investigation): FigureData {
   const h = r.dynamic.histories;
   const u = r.case.units;
-  const points = h.torques.flatMap((s) => Array.from(s.values, (v, i) => ({ x: h.time[i] * 1000, y: inDisplay(v, 'torque', u), series: s.name }))).filter((p) => Number.isFinite(p.y));
+  const g = pieceTorqueHistory(r.dynamic, r.finding.piece);
+  const governing = g ? [{ ...g, name: `${g.name} (the finding's governing piece)` }] : [];
+  const points = [...governing, ...h.torques].flatMap((s) => Array.from(s.values, (v, i) => ({ x: h.time[i] * 1000, y: inDisplay(v, 'torque', u), series: s.name }))).filter((p) => Number.isFinite(p.y));
   return { points, xLabel: 'time from the stop, ms', yLabel: `torque, ${unitLabel('torque', u)}` };
 }
 

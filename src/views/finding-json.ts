@@ -29,6 +29,7 @@ export function findingToJson(f: Finding, units: Results['case']['units']): Reco
     probability_method: f.chance ? `${f.chance.method}, ${f.chance.runs} runs of the ${f.chance.model}${f.chance.controlSamples ? `, ${f.chance.controlSamples} energy-method samples as the control` : ''}` : null,
     measured_twist: f.measured.map((m) => ({ between: m.between, measured_rad: m.measured, predicted_rad: m.predicted, finding: m.finding, speed_for_measured_rad_s: m.speedForMeasured ?? null })),
     disposition: f.disposition,
+    action: f.action,
     sentence: findingSentence(f, units),
   };
 }

@@ -68,6 +68,7 @@ const FINDING: Json = {
       speed_for_measured_rad_s: orNull(num('The speed that would explain the measurement, rad/s.')),
     })),
     disposition: str('What to do with the shaft.'),
+    action: { type: 'string', enum: ['return to service', 'inspect before return', 'replace'], description: 'The disposition in three words: the decision the person who signs makes.' },
     sentence: str('The finding in words, in the case’s units.'),
   },
   additionalProperties: false,

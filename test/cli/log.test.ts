@@ -122,7 +122,7 @@ describe('shaftcase log', () => {
   it('the report of a case with case.asset has the fatigue section with the asset\'s history, and results.json carries it', () => {
     const folder = join(dir, 'cv7', 'reports', 'DEMO-CV7-02-2026-12-01');
     const md = readFileSync(join(folder, 'report.md'), 'utf8');
-    expect(md).toMatch(/## Fatigue: what this jam used up[\s\S]*### This asset's history\n\nThis is incident 2 of 4 of CV-7 head shaft/);
+    expect(md).toMatch(/## Appendix: fatigue, what this jam used up[\s\S]*### This asset's history\n\nThis is incident 2 of 4 of CV-7 head shaft/);
     const results = JSON.parse(readFileSync(join(folder, 'results.json'), 'utf8'));
     expect(results.asset_history.position).toBe(2);
     expect(results.asset).toBe('CV-7 head shaft');

@@ -168,7 +168,9 @@ describe('shaftcase report', () => {
     // The id <script>alert('id')</script> made safe for a file name: each run of other characters one dash, none at the ends.
     expect(readdirSync(join(dirname(file), 'reports')).sort()).toEqual(['script-alert-id-script-2026-12-01', 'script-alert-id-script-2026-12-01.zip']);
     const html = readFileSync(join(dirname(file), 'reports', 'script-alert-id-script-2026-12-01', 'report.html'), 'utf8');
-    expect(html).not.toMatch(/<(script|iframe|a|object|embed)\b/i);
+    expect(html).not.toMatch(/<(script|iframe|object|embed)\b/i);
+    // The only links are the first page's, to the report's own headings.
+    for (const a of html.matchAll(/<a\b[^>]*>/gi)) expect(a[0]).toMatch(/^<a href="#[a-z0-9-]+">$/);
     // The one image is the photo, with only these attributes (the caption's "onerror=" is inside alt, escaped).
     expect(html.match(/<img\b/g)).toHaveLength(1);
     expect(html).toMatch(/<img class="photo" src="data:image\/png;base64,[A-Za-z0-9+/=]+" alt="Photo 1: &lt;img src=x onerror=alert\(8\)&gt; caption">/);
@@ -200,7 +202,7 @@ describe('shaftcase report', () => {
     writeFileSync(template, '# ACME Works: incident {{case.id}}\n\nDistribution: plant manager, insurer\n\n{{section:summary}}\n\nSigned: ________\n');
     expect((await cli(['report', file, '--template', template])).code).toBe(0);
     const md = readFileSync(join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01', 'report.md'), 'utf8');
-    expect(md).toMatch(/^# ACME Works: incident DEMO-GR-0117\n\nDistribution: plant manager, insurer\n\n## Summary\n/);
+    expect(md).toMatch(/^# ACME Works: incident DEMO-GR-0117\n\nDistribution: plant manager, insurer\n\n## Incident finding\n/);
     expect(md).toMatch(/Signed: ________\n\n## Cautions\n/);
     expect(md).not.toContain('## The incident');
   });

@@ -9,6 +9,12 @@ import { ep5Case } from '../data/ep5-case.ts';
 const sample = (f: string) => analyseCase(parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8')));
 
 describe('decideFinding', () => {
+  it('a shaft that stays elastic may return to service after the checks (EP5 at 100 rpm)', () => {
+    const f = decideFinding(analyseCase(ep5Case({ speed: '100 rpm' })));
+    expect(f.verdict).toBe('elastic');
+    expect(f.action).toBe('return to service');
+  });
+
   it('tells a stress raiser yielding locally from a section yielding through', () => {
     // EP5 (shared REFERENCE.md) at 150 rpm: the net section stays elastic (about 0.81 of yield without kt); kt 1.5 takes the stress past 1.
     const local = decideFinding(analyseCase(ep5Case({ speed: '150 rpm', segments: ['- { length: 500 mm, diameter: 40 mm, kt: 1.5 }'] })));
@@ -16,6 +22,7 @@ describe('decideFinding', () => {
     expect(local.yieldRatio).toBeGreaterThan(1.2);
     expect(local.yieldRatio).toBeLessThan(1.3);
     expect(local.permanentTwist).toBeUndefined();
+    expect(local.action).toBe('inspect before return');
     expect(findingSentence(local, 'metric')).toMatch(/^YIELDED LOCALLY AT A STRESS RAISER \(energy method\): side B, segment 1 .*kt 1\.5.* while the net section stays elastic/);
   });
 
@@ -32,6 +39,7 @@ describe('decideFinding', () => {
     expect(f.yieldRatio).toBe(r.yieldRatio);
     expect(f.breakTime).toBeUndefined();
     expect(f.disposition).toMatch(/^Not fit to return/);
+    expect(f.action).toBe('replace');
   });
 
   it('names the first piece to break for a fracture by the energy balance', () => {
@@ -58,6 +66,7 @@ stations:
 `));
     const f = decideFinding(r);
     expect(f.brittle).toBe(true);
+    expect(f.action).toBe('replace');
     const text = findingSentence(f, 'metric');
     expect(text).not.toMatch(/YIELDED|shear yield/);
     expect(text).toMatch(/shear strength/);

@@ -37,7 +37,7 @@ describe('one finding, the same in every view', () => {
 
     const source = { file: basename(path), text, sha256: '0'.repeat(64) };
     const md = renderReport(data, { run: RUN, source, figures: [], template: defaultTemplate() });
-    const summary = md.slice(md.indexOf('\n## Summary\n'), md.indexOf('\n## ', md.indexOf('\n## Summary\n') + 1));
+    const summary = md.slice(md.indexOf('\n## Incident finding\n'), md.indexOf('\n## ', md.indexOf('\n## Incident finding\n') + 1));
     expect(count(summary, `**Finding: ${sentence}**`)).toBe(1);
     expect(count(md, 'Finding:')).toBe(1);
     expect(md).not.toMatch(/Verdict:/);
@@ -45,7 +45,9 @@ describe('one finding, the same in every view', () => {
     const json = [resultsToJson(r).finding, resizeToJson(data.resize).finding, reportJson(data, RUN, source).finding] as Record<string, unknown>[];
     for (const j of json) expect(j).toEqual(json[0]);
     expect(json[0]).toMatchObject({ verdict: f.verdict, basis: f.basis, side: f.side, yield_ratio: f.yieldRatio, peak_torque_Nm: f.peakTorque, disposition: f.disposition, sentence });
-    for (const key of ['verdict', 'basis', 'basis_reason', 'side', 'segment', 'peak_torque_Nm', 'yield_ratio', 'permanent_twist_rad', 'break_time_s', 'yield_probability', 'yield_probability_interval', 'probability_method', 'disposition']) {
+    expect(json[0]).toMatchObject({ action: f.action });
+    expect(summary).toContain(f.disposition);
+    for (const key of ['verdict', 'basis', 'basis_reason', 'side', 'segment', 'peak_torque_Nm', 'yield_ratio', 'permanent_twist_rad', 'break_time_s', 'yield_probability', 'yield_probability_interval', 'probability_method', 'disposition', 'action']) {
       expect(json[0], key).toHaveProperty(key);
     }
     // The chance shown is the finding's own model's.

@@ -23,7 +23,10 @@ function hostileHtml() {
 describe('renderHtml', () => {
   it('hostile text from the case file yields no script, no event handler, no frame and no javascript: link', () => {
     const { document } = hostileHtml();
-    expect(document.querySelectorAll('script, iframe, object, embed, a, form, base, link, meta[http-equiv=refresh]')).toHaveLength(0);
+    expect(document.querySelectorAll('script, iframe, object, embed, form, base, link, meta[http-equiv=refresh]')).toHaveLength(0);
+    // The only links are the first page's, each to a heading of the report itself.
+    const ids = new Set([...document.querySelectorAll('h2, h3')].map((h) => h.getAttribute('id')));
+    for (const a of document.querySelectorAll('a')) expect(ids).toContain(a.getAttribute('href')!.replace(/^#/, ''));
     for (const el of document.querySelectorAll('*')) {
       for (const attr of el.attributes) {
         expect(attr.name, `${el.tagName} ${attr.name}`).not.toMatch(/^on/i);

@@ -55,6 +55,7 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
   const meta = loaded.case.meta;
   const html = renderHtml(markdown, {
     title: `${meta.id}${meta.title ? ` ${meta.title}` : ''}: investigation report`,
+    pageFooter: `${meta.id} · ${run.date}`,
     figures: Object.fromEntries(figures.map((f) => [figureHref(f.figure.name), f.figure.svg])),
     images: Object.fromEntries(photos.filter((p) => p.mediaType).map((p) => [photoHref(p.photo.path), `data:${p.mediaType};base64,${Buffer.from(p.data).toString('base64')}`])),
   });

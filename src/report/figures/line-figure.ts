@@ -21,7 +21,7 @@ export function lineFigureSvg(data: FigureData, title: string, caption: string, 
   return plotToSvg(
     {
     width: 760,
-    height: 340 + LEGEND_LINE * names.length,
+    height: 260 + LEGEND_LINE * names.length,
     marginTop: 24 + LEGEND_LINE * names.length,
     marginLeft: 64,
     marginRight: 24,

@@ -41,7 +41,7 @@ export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeR
   marks.push(Plot.line(points, { x: 'x', y: 'y', stroke: 'black' }));
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
-    height: 380,
+    height: 300,
     marginLeft: 64,
     marginRight: 24,
     marginBottom: 42,

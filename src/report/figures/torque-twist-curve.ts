@@ -46,7 +46,7 @@ export function torqueTwistFigure(r: Results): ReportFigure | undefined {
   }
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
-    height: 400,
+    height: 300,
     marginLeft: 70,
     marginBottom: 45,
     x: { label: `twist of the piece (${unitLabel('angle', u)})`, domain: [0, xMax] },

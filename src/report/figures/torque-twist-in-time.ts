@@ -35,7 +35,7 @@ export function torqueTwistInTimeFigure(r: Results): ReportFigure | undefined {
   ];
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
-    height: 400,
+    height: 300,
     marginLeft: 70,
     marginBottom: 45,
     x: { label: `twist of the piece (${unitLabel('angle', u)})`, domain: [Math.min(...xs) * 1.05, Math.max(...xs) * 1.08 || 1] },

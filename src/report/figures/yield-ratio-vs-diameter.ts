@@ -42,7 +42,7 @@ export function yieldRatioAgainstDiameterFigure(results: Results, resize: Resize
   }
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
-    height: 380,
+    height: 300,
     marginLeft: 56,
     marginRight: 24,
     marginBottom: 42,

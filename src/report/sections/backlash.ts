@@ -5,7 +5,7 @@ import type { ReportSection } from '../report-context.ts';
 /** Each gap in the drive as the dynamic model followed it; left out where the case has none. */
 export const backlashSection: ReportSection = {
   id: 'backlash',
-  title: 'Backlash',
+  title: 'Appendix: backlash',
   render({ results: r }) {
     const u = r.case.units;
     const gaps = r.dynamic.gaps;

@@ -5,7 +5,7 @@ import type { ReportSection } from '../report-context.ts';
 /** Each coupling against the incident torque; left out where the case has none. */
 export const couplingsSection: ReportSection = {
   id: 'couplings',
-  title: 'Couplings',
+  title: 'Appendix: couplings',
   render({ results: r }) {
     const lines = couplingSentences(r);
     if (lines.length === 0) return undefined;

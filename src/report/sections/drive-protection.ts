@@ -5,7 +5,7 @@ import type { ReportSection } from '../report-context.ts';
 /** The drives' torque limits and trips as the dynamic model followed them; left out where no drive has either. */
 export const driveProtectionSection: ReportSection = {
   id: 'drive-protection',
-  title: "The motor's protection",
+  title: "Appendix: the motor's protection",
   render({ results: r }) {
     const d = r.dynamic;
     const u = r.case.units;

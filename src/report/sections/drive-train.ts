@@ -5,7 +5,7 @@ import type { ReportSection } from '../report-context.ts';
 /** The drive train in the finding's order of giving way; left out where only the shaft is in it. */
 export const driveTrainSection: ReportSection = {
   id: 'drive-train',
-  title: 'What gave way first',
+  title: 'Appendix: what gave way first',
   render({ results: r }) {
     const f = r.finding;
     if (!hasDriveTrain(f)) return undefined;

@@ -14,6 +14,11 @@ const MAX_EVENTS = 12;
  * show, the located events, and the model's assumptions. Every number comes from `Results`.
  */
 export function renderDynamicsSection(r: Results): string {
+  return `${renderDynamicsBody(r)}\n${renderDynamicsDetails(r)}`;
+}
+
+/** The dynamic model's evidence for the finding: its chain, energy method against it per side, peak torque along the shaft, what slipped. */
+export function renderDynamicsBody(r: Results): string {
   const d = r.dynamic;
   const u = r.case.units;
   const out: string[] = [];
@@ -29,7 +34,7 @@ export function renderDynamicsSection(r: Results): string {
     const stations = r.sides.find((x) => x.side === s.side)?.stations.map(escapeMarkdown).join(', ') ?? '';
     out.push(`| ${s.side} | ${stations} | ${show(s.energyPeakTorque, 'torque', u)} | ${show(s.dynamicPeakTorque, 'torque', u)} | ${sig(s.energyYieldRatio)} | ${sig(s.dynamicYieldRatio)} |`);
   }
-  out.push('', `The finding (see the summary) stands on the ${r.verdictBasis}. The dynamic model's peak torque in this table is the one carried (capped past yield where a piece yields); its stress / shear yield is that of the same chain kept elastic, like for like with the energy method's.`, '');
+  out.push('', `The finding (page 1) stands on the ${r.verdictBasis}. The dynamic model's peak torque in this table is the one carried (capped past yield where a piece yields); its stress / shear yield is that of the same chain kept elastic, like for like with the energy method's.`, '');
 
   const capped = d.pieces.some((p) => p.elasticPeakTorque > p.peakTorque * (1 + 1e-6));
   out.push('### Peak torque along the shaft, dynamic model', '');
@@ -48,6 +53,13 @@ export function renderDynamicsSection(r: Results): string {
   }
 
   out.push(...protectionLines(r, d));
+  return out.join('\n') + '\n';
+}
+
+/** The dynamic model's full tables: natural frequencies, located events, its assumptions and numerics. */
+export function renderDynamicsDetails(r: Results): string {
+  const d = r.dynamic;
+  const out: string[] = [];
   out.push(...frequencyLines(r, d));
 
   if (d.events.length > 0) {
@@ -133,9 +145,13 @@ function frequencyLines(r: Results, d: DynamicResult): string[] {
   return out;
 }
 
-/** The dynamics section in the report's registry. */
+/**
+ * The dynamic model's details, an appendix where the finding stands on it (its evidence is in the
+ * body, "Results of the governing model"); where the finding stands on the energy method, the whole
+ * dynamic model is the other model, shown in the appendix "the other model, for comparison".
+ */
 export const dynamicsSection: ReportSection = {
   id: 'dynamics',
-  title: 'After the stop: the torsional chain in time',
-  render: ({ results }) => renderDynamicsSection(results),
+  title: 'Appendix: the dynamic model in detail',
+  render: ({ results }) => (results.finding.basis === 'dynamic model' ? renderDynamicsDetails(results) : undefined),
 };

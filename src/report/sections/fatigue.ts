@@ -9,7 +9,7 @@ import type { ReportSection } from '../report-context.ts';
  */
 export const fatigueSection: ReportSection = {
   id: 'fatigue',
-  title: 'Fatigue: what this jam used up',
+  title: 'Appendix: fatigue, what this jam used up',
   render({ results: r }) {
     const z = r.finding.fatigue;
     const out = [escapeMarkdown(fatigueSentence(z)), ''];

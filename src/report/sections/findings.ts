@@ -13,7 +13,8 @@ import { plasticPiecesTable } from '../tables/plastic-pieces-table.ts';
 import { plasticSidesTable } from '../tables/plastic-sides-table.ts';
 import { markdownTable } from '../tables/report-table.ts';
 
-const FINDING_HEAD: Record<TwistFinding['finding'], string> = {
+/** A measured twist's reading against the recorded speed, as a heading. */
+export const TWIST_HEAD: Record<TwistFinding['finding'], string> = {
   consistent: 'Consistent with the recorded speed',
   more: 'More than the recorded speed explains',
   less: 'Less than the recorded speed explains',
@@ -40,7 +41,7 @@ function verdicts(r: Investigation): string {
   const u = r.case.units;
   const f = r.finding;
   const items = [
-    `The finding (stated in the summary) stands on the ${f.basis}; past yield on the ${f.pastYieldModel}.`,
+    `The finding (page 1) stands on the ${f.basis}; past yield on the ${f.pastYieldModel}.`,
     ...(f.basis === 'dynamic model'
       ? r.dynamic.sides.map((s) => `Dynamic model, side ${s.side}: peak torque as carried ${show(s.dynamicPeakTorque, 'torque', u)}; elastic peak ${show(elasticDynamicPeak(r.dynamic, s.side), 'torque', u)}, stress / shear yield ${sig(s.dynamicYieldRatio)}.`)
       : []),
@@ -103,14 +104,14 @@ function twistReadBack(r: Results): string[] {
     const tol = f.angleTolerance > 0 ? ` ± ${show(f.angleTolerance, 'angle', u)}` : '';
     const speed = f.speedForMeasured === undefined ? '—' : `${f.measurement.angle === 0 ? 'at most ' : ''}${show(f.speedForMeasured, 'speed', u, 4)}`;
     const energy = f.energyForMeasured === undefined || f.measurement.angle === 0 ? '—' : show(f.energyForMeasured, 'energy', u);
-    const cells = [f.measurement.between.join(' – '), `${show(f.measurement.angle, 'angle', u)}${tol}`, show(f.predicted, 'angle', u), speed, energy, FINDING_HEAD[f.finding]];
+    const cells = [f.measurement.between.join(' – '), `${show(f.measurement.angle, 'angle', u)}${tol}`, show(f.predicted, 'angle', u), speed, energy, TWIST_HEAD[f.finding]];
     return `| ${cells.map(escapeMarkdown).join(' | ')} |`;
   });
   const words = twist.map((f) => {
     const [a, b] = f.measurement.between;
     const shielded = f.curve.length > 0 && !Number.isFinite(f.yieldOnsetSpeed) ? ' The shaft between these stations does not yield at any speed: a weaker piece elsewhere in the run yields first and takes the energy.' : '';
     const fracture = f.beyondFracture ? ' At that speed the model predicts fracture: check the measurement and the fracture strain.' : '';
-    const text = `**${escapeMarkdown(`${a} – ${b}: ${FINDING_HEAD[f.finding].toLowerCase()}.`)}** ${escapeMarkdown(`Recorded speed ${bandText(f, u)}.${shielded} ${f.meaning}${fracture}`)}`;
+    const text = `**${escapeMarkdown(`${a} – ${b}: ${TWIST_HEAD[f.finding].toLowerCase()}.`)}** ${escapeMarkdown(`Recorded speed ${bandText(f, u)}.${shielded} ${f.meaning}${fracture}`)}`;
     return f.measurement.method ? `${text}\n\n${escapeMarkdown(`Measured by: ${f.measurement.method}`)}` : text;
   });
   return ['### Measured permanent twist, read back to the stop', `${head}\n${rows.join('\n')}`, ...words];

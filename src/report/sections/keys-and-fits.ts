@@ -5,7 +5,7 @@ import type { ReportSection } from '../report-context.ts';
 /** Each key and shrink or press fit at the incident's torque; left out where the case has neither. */
 export const keysAndFitsSection: ReportSection = {
   id: 'keys-and-fits',
-  title: 'Keys and hub fits',
+  title: 'Appendix: keys and hub fits',
   render({ results: r }) {
     const lines = hubSentences(r);
     if (lines.length === 0) return undefined;

@@ -5,7 +5,7 @@ import type { ReportSection } from '../report-context.ts';
 /** How the numbers were obtained, and every assumption, in words. */
 export const methodSection: ReportSection = {
   id: 'method',
-  title: 'Method and assumptions',
+  title: 'Appendix: method and assumptions',
   render({ results: r }) {
     const c = r.case;
     const u = c.units;

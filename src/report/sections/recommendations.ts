@@ -2,13 +2,17 @@ import type { ResizeResult } from '../../resize/resize-result.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from '../../views/resize-rows.ts';
 import { criticalSegmentSentence, factorSentence, flaggedOptions, recommendedSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from '../../views/resize-words.ts';
 import { findingSentence } from '../../views/finding-words.ts';
+import { linkTo } from '../anchor.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
 
+export const OPTIONS_TITLE = 'Appendix: every option for what goes back in';
+
 /**
  * What goes back in (`shaftcase resize`, computed once before the report is rendered): the options
- * table, each option in words, the guarding and restart recommendations, and what the investigator
- * decides. Every text (the case's names and labels among them) is escaped; the figures follow.
+ * table, the recommended one, the guarding and restart recommendations, and what the investigator
+ * decides. Each option in words, and what they rest on, are in the appendix (`optionsSection`).
+ * Every text (the case's names and labels among them) is escaped.
  */
 export const recommendationsSection: ReportSection = {
   id: 'recommendations',
@@ -22,7 +26,25 @@ export const recommendationsSection: ReportSection = {
       e("Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate."),
       `**${e(recommendedSentence(resize))}**`,
       e(`The rule: ${resize.pickRule}`),
+      `${e('Why each flagged option is not advisable, each option in words, and what they rest on:')} ${linkTo(OPTIONS_TITLE, 'see the appendix')}.`,
     ];
+    out.push('### Guarding and restart', bulletList(resize.guarding.map((g) => e(`${g.topic}: ${g.text}`))));
+    const decision = [
+      'The investigator decides which option goes back in, with the machine builder, and records the return-to-service decision.',
+      ...(results.verdict !== 'elastic' ? ['A shaft that may have yielded is not returned to service on a calculation alone.'] : []),
+    ];
+    out.push(`*${e(decision.join(' '))}*`);
+    return out.join('\n\n');
+  },
+};
+
+/** Every option of `resize` in words, and what they rest on: an appendix to the recommendations. */
+export const optionsSection: ReportSection = {
+  id: 'options',
+  title: OPTIONS_TITLE,
+  render({ resize }) {
+    const e = escapeMarkdown;
+    const out: string[] = [];
     const flagged = flaggedOptions(resize);
     if (flagged.length > 0) out.push(`### ${e('Flagged: why these options are not advisable')}`, bulletList(flagged.map((o) => e(`${o.name}: ${o.flags.join('; ')}.`))));
     const part = (title: string, lines: readonly string[]) => out.push(`### ${e(title)}`, bulletList(lines.map(e)));
@@ -32,13 +54,7 @@ export const recommendationsSection: ReportSection = {
     part('Torque limiter or slip coupling', limiterSentences(resize));
     if (resize.keys.length === 0) part('The key as fuse', ['No key is given in the case.']);
     for (const k of resize.keys) part(`The key as fuse at "${k.station}"`, keySentences(resize, k));
-    part('Guarding and restart', resize.guarding.map((g) => `${g.topic}: ${g.text}`));
     part('What the options rest on', resize.notes);
-    const decision = [
-      'The investigator decides which option goes back in, with the machine builder, and records the return-to-service decision.',
-      ...(results.verdict !== 'elastic' ? ['A shaft that may have yielded is not returned to service on a calculation alone.'] : []),
-    ];
-    out.push(`*${e(decision.join(' '))}*`);
     return out.join('\n\n');
   },
 };

@@ -5,8 +5,9 @@ import { dynamicModesFigure } from '../../../src/report/figures/dynamic-modes.ts
 import { dynamicSpeedsFigure } from '../../../src/report/figures/dynamic-speeds.ts';
 import { dynamicTorqueFigure } from '../../../src/report/figures/dynamic-torque.ts';
 import { analyseCase } from '../../../src/results/analyse-case.ts';
+import { withFinding } from '../../../src/finding/investigation.ts';
 
-const r = analyseCase(parseCase(readFileSync(new URL('../../../sample-cases/roll-line-limiter-two-sides.yaml', import.meta.url), 'utf8')));
+const r = withFinding(analyseCase(parseCase(readFileSync(new URL('../../../sample-cases/roll-line-limiter-two-sides.yaml', import.meta.url), 'utf8'))));
 
 describe('the dynamic model\'s figures', () => {
   it.each([

@@ -12,8 +12,9 @@ describe('stressAlongShaftFigure', () => {
   it('the steps stand in the ratio of the pieces\' stresses (kt applied)', () => {
     const r = fixture('sample').results;
     const f = stressAlongShaftFigure(r)!;
-    // The stress line is the last line mark: its path visits each piece's two ends at that piece's height.
-    const path = [...f.svg.matchAll(/<path d="(M[^"]+)"/g)].map((m) => m[1]).pop()!;
+    // The elastic stress line visits each piece's two ends at that piece's height.
+    const group = f.svg.slice(f.svg.indexOf('aria-description="elastic stress"'));
+    const path = /<path d="(M[^"]+)"/.exec(group)![1];
     const ys = path.split(/[ML]/).filter(Boolean).map((p) => Number(p.split(',')[1]));
     const baseline = Number(/aria-label="rule"><line[^>]*y1="([\d.]+)"/.exec(f.svg)![1]);
     const pieces = [...r.sides[0].pieces].sort((a, b) => a.piece.start - b.piece.start);

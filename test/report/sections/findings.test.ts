@@ -24,7 +24,7 @@ describe('findingsSection', () => {
   ]);
 
   it('findingsSection opens with the finding\'s model, states no verdict of its own, and has its parts as sub-headings, no cautions of its own', () => {
-    expect(text).toMatch(/^- The finding \(stated in the summary\) stands on the energy method; past yield on the energy balance\./);
+    expect(text).toMatch(/^- The finding \(page 1\) stands on the energy method; past yield on the energy balance\./);
     expect(text).not.toMatch(/Verdict|Finding:/);
     for (const h of ['Past yield', 'Measured permanent twist, read back to the stop', 'Fracture']) expect(html).toContain(`<h3>${h}</h3>`);
     expect(html).not.toContain('<h3>Cautions</h3>');

@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../../src/case/parse-case.ts';
 import { buildReportData } from '../../../src/report/build-report-data.ts';
-import { recommendationsSection } from '../../../src/report/sections/recommendations.ts';
+import { optionsSection, recommendationsSection } from '../../../src/report/sections/recommendations.ts';
 import { optionRows } from '../../../src/views/resize-rows.ts';
 import { RUN } from '../report-fixtures.ts';
 
@@ -22,8 +22,13 @@ describe('the report section "Recommendations: what goes back in"', () => {
     expect(md).toMatch(/Restart to a written procedure/);
     expect(md).not.toMatch(/ring-tested/);
     expect(md).toMatch(/\*\*Recommended: none of the options alone/);
-    expect(md).toMatch(/### Flagged: why these options are not advisable/);
-    expect(md).toMatch(/### What the options rest on/);
+    expect(md).toContain('[see the appendix](#appendix-every-option-for-what-goes-back-in)');
+  });
+
+  it('the appendix of every option says each in words, and what the options rest on', () => {
+    const data = buildReportData(parseCase(granulator));
+    const md = optionsSection.render({ ...data, run: RUN, source: { file: 'c.yaml', text: granulator, sha256: '0'.repeat(64) } })!;
+    for (const h of ['### Flagged: why these options are not advisable', '### Scale the side', '### Resize the critical segment only', '### Another material', '### Torque limiter or slip coupling', '### The key as fuse at "drive sheave"', '### What the options rest on']) expect(md).toContain(h);
   });
 
   it('ends with what the investigator decides, and for a yielded shaft the return-to-service caution', () => {
