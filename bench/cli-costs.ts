@@ -49,7 +49,9 @@ export function benchCliCosts(rounds = 3): string[] {
   const help = ratios([{ args: [BIN, '--help'] }]);
   lines.push(`  --help ×${help.ratios[0].toFixed(2)} (bare node ${(help.bare * 1000).toFixed(0)} ms CPU)`);
   lines.push(`  ${'case'.padEnd(36)} ${'check'.padStart(7)} ${'resize'.padStart(7)} ${'report'.padStart(7)}`);
-  for (const f of readdirSync(SAMPLES).filter((x) => x.endsWith('.yaml')).sort()) {
+  for (const f of readdirSync(SAMPLES)
+    .filter((x) => x.endsWith('.yaml'))
+    .sort()) {
     const dir = mkdtempSync(join(tmpdir(), 'shaftcase-bench-'));
     try {
       const file = join(dir, f);

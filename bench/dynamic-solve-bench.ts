@@ -13,7 +13,9 @@ const SAMPLES = fileURLToPath(new URL('../../sample-cases/', import.meta.url));
  */
 export function benchDynamicSolve(): string[] {
   const lines = ['', 'Dynamic solve of each sample case at its refined element count (best of 3):', `  ${'case'.padEnd(36)} elements    steps   time ms   ns per element-step`];
-  for (const f of readdirSync(SAMPLES).filter((x) => x.endsWith('.yaml')).sort()) {
+  for (const f of readdirSync(SAMPLES)
+    .filter((x) => x.endsWith('.yaml'))
+    .sort()) {
     const c = parseCase(readFileSync(SAMPLES + f, 'utf8'), f);
     const model = buildShaftModel(c);
     const target = solveDynamics(c, model).target;

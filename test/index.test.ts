@@ -4,7 +4,21 @@ import * as api from '../src/index.ts';
 
 describe('the library entry point', () => {
   it('gives the case reader, the engine, the finding, the resize, the JSON views and the report writer', () => {
-    for (const name of ['parseCase', 'loadCase', 'analyseCase', 'investigate', 'decideFinding', 'withFinding', 'resizeCase', 'resultsToJson', 'resizeToJson', 'findingToJson', 'findingSentence', 'renderSummary', 'writeCaseReport']) {
+    for (const name of [
+      'parseCase',
+      'loadCase',
+      'analyseCase',
+      'investigate',
+      'decideFinding',
+      'withFinding',
+      'resizeCase',
+      'resultsToJson',
+      'resizeToJson',
+      'findingToJson',
+      'findingSentence',
+      'renderSummary',
+      'writeCaseReport',
+    ]) {
       expect(typeof (api as Record<string, unknown>)[name], name).toBe('function');
     }
     expect(api.SCHEMA_VERSION).toBe(2);

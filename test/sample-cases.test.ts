@@ -19,7 +19,7 @@ describe('the sample cases', () => {
     expect(Number.isFinite(r.yieldRatio)).toBe(true);
   });
 
-  it.each(files)('%s shows the dynamic model beside the energy method, with the reason for the verdict\'s basis', (f) => {
+  it.each(files)("%s shows the dynamic model beside the energy method, with the reason for the verdict's basis", (f) => {
     const r = analyseCase(parseCase(readFileSync(new URL(f, dir), 'utf8'), f));
     expect(r.dynamic.sides.map((s) => s.side)).toEqual(r.sides.map((s) => s.side));
     for (const s of r.dynamic.sides) expect(s.dynamicPeakTorque).toBeGreaterThan(0);
@@ -29,7 +29,7 @@ describe('the sample cases', () => {
     expect(Math.abs(e.final - (e.initial + e.motorWork + e.boundaryWork - e.dampingWork - e.slipWork - e.released)) / e.initial).toBeLessThan(1e-8);
   });
 
-  it('the roll line\'s torque limiter slips and keeps the flywheel side of the shaft below yield', () => {
+  it("the roll line's torque limiter slips and keeps the flywheel side of the shaft below yield", () => {
     const r = analyseCase(parseCase(readFileSync(new URL('roll-line-limiter-two-sides.yaml', dir), 'utf8')));
     const limiter = r.dynamic.slips.find((s) => s.kind === 'torque limiter')!;
     expect(limiter.firstSlip).toBeDefined();
@@ -46,7 +46,7 @@ describe('the sample cases', () => {
     expect(r.dynamic.slips.some((s) => s.kind === 'belt' && s.firstSlip !== undefined)).toBe(true);
   });
 
-  it('the granulator\'s belt slips, which the energy method cannot show', () => {
+  it("the granulator's belt slips, which the energy method cannot show", () => {
     const r = analyseCase(parseCase(readFileSync(new URL('granulator-tramp-metal.yaml', dir), 'utf8')));
     const belt = r.dynamic.slips.find((s) => s.kind === 'belt')!;
     expect(belt.firstSlip).toBeDefined();

@@ -18,7 +18,10 @@ const SCHEMAS = new URL('../schemas/', import.meta.url);
 const SAMPLES = new URL('../sample-cases/', import.meta.url);
 const TEMPLATES = new URL('../templates/', import.meta.url);
 const committed = (name: string) => JSON.parse(readFileSync(new URL(name, SCHEMAS), 'utf8'));
-const yamlFiles = (dir: URL) => readdirSync(dir).filter((f) => f.endsWith('.yaml')).map((f) => ({ name: f, text: readFileSync(new URL(f, dir), 'utf8') }));
+const yamlFiles = (dir: URL) =>
+  readdirSync(dir)
+    .filter((f) => f.endsWith('.yaml'))
+    .map((f) => ({ name: f, text: readFileSync(new URL(f, dir), 'utf8') }));
 
 const ajv = new Ajv2020({ allErrors: true, allowUnionTypes: true, strict: true });
 const validCase = ajv.compile(committed('case.schema.json'));
@@ -47,19 +50,31 @@ describe('JSON Schemas', () => {
     for (const { text, field } of wrongs) {
       expect(text).not.toBe(good);
       expect(validCase(parse(text))).toBe(false);
-      const paths = (validCase.errors ?? []).map((e) => e.instancePath.replace(/\/(\d+)/g, '[$1]').replace(/\//g, '.').replace(/^\./, '') + (e.params && 'additionalProperty' in e.params ? `.${e.params.additionalProperty}` : ''));
+      const paths = (validCase.errors ?? []).map(
+        (e) =>
+          e.instancePath
+            .replace(/\/(\d+)/g, '[$1]')
+            .replace(/\//g, '.')
+            .replace(/^\./, '') + (e.params && 'additionalProperty' in e.params ? `.${e.params.additionalProperty}` : ''),
+      );
       let named: string[] = [];
       try {
         parseCase(text);
       } catch (e) {
         named = (e as CaseError).problems.map((p) => p.path);
       }
-      expect(named.some((p) => field.test(p)), named.join(', ')).toBe(true);
-      expect(paths.some((p) => field.test(p) || named.includes(p)), paths.join(', ')).toBe(true);
+      expect(
+        named.some((p) => field.test(p)),
+        named.join(', '),
+      ).toBe(true);
+      expect(
+        paths.some((p) => field.test(p) || named.includes(p)),
+        paths.join(', '),
+      ).toBe(true);
     }
   });
 
-  it('check --json of every sample case and a report\'s results.json validate against the results schema', () => {
+  it("check --json of every sample case and a report's results.json validate against the results schema", () => {
     for (const { name, text } of yamlFiles(SAMPLES)) {
       const json = resultsToJson(investigate(parseCase(text, name)));
       expect(validResults(JSON.parse(JSON.stringify(json))), `${name}: ${errors(validResults).join('; ')}`).toBe(true);

@@ -20,9 +20,7 @@ function units(kind: QuantityKind): string {
 
 function quantitySchema(kind: QuantityKind, about: string | undefined): Json {
   const text = `${about ?? ''} ${KIND_EXAMPLES[kind].replace(/^./, (c) => c.toUpperCase())}; units: ${units(kind)}; a ± band may follow ("± 2 %").`.trim();
-  return kind === 'fraction'
-    ? { type: ['string', 'number'], pattern: FRACTION_PATTERN, description: text }
-    : { type: 'string', pattern: QUANTITY_PATTERN, description: text };
+  return kind === 'fraction' ? { type: ['string', 'number'], pattern: FRACTION_PATTERN, description: text } : { type: 'string', pattern: QUANTITY_PATTERN, description: text };
 }
 
 function shapeSchema(s: Shape): Json {

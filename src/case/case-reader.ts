@@ -199,11 +199,7 @@ export class CaseReader {
    * src/case/limits.ts), and a ± band must be narrower than the value, so that the quantity it
    * spans stays above zero.
    */
-  quantity(
-    path: Path,
-    kind: QuantityKind,
-    opts: FieldOptions & { positive?: boolean; nonNegative?: boolean; example?: string; limit?: Limit } = {},
-  ): Quantity | undefined {
+  quantity(path: Path, kind: QuantityKind, opts: FieldOptions & { positive?: boolean; nonNegative?: boolean; example?: string; limit?: Limit } = {}): Quantity | undefined {
     this.observe?.(path, { type: 'quantity', kind });
     const n = this.node(path);
     const example = opts.example ?? KIND_EXAMPLES[kind];

@@ -82,7 +82,11 @@ export const SHAFT_SHAPE = mapping(
 const DISC = ['disc'] as const;
 export const PART_SHAPE = mapping(
   {
-    shape: { shape: { type: 'text', allowed: ['disc', 'inertia', 'mass'], about: 'How the part is given: disc (diameter, thickness, material or density), inertia, or mass with a radius of gyration.' }, example: 'disc', required: true },
+    shape: {
+      shape: { type: 'text', allowed: ['disc', 'inertia', 'mass'], about: 'How the part is given: disc (diameter, thickness, material or density), inertia, or mass with a radius of gyration.' },
+      example: 'disc',
+      required: true,
+    },
     name: text('A name for the part.', 'sheave'),
     count: { shape: { type: 'number', integer: true, min: L.count[0], max: L.count[1], about: 'How many such parts the station carries.' }, example: 2 },
     speed_ratio: { shape: { type: 'number', min: L.speedRatio[0], max: L.speedRatio[1], about: "The part's speed over the shaft's (a motor behind a reducer: the reducer's ratio)." }, example: 2.5 },
@@ -130,7 +134,7 @@ export const DRIVE_SHAPE = mapping(
     curve: { shape: { type: 'list', of: CURVE_POINT_SHAPE, min: 2, about: "The motor's speed–torque curve from 0 rpm up to its synchronous speed." } },
     belt: { shape: BELT_SHAPE },
     trip_after: quantity('time', "The time from the stop after which the drive or its overload relay cut the motor (the drive's fault log).", '250 ms'),
-    torque_limit: quantity('torque', "The most torque the drive lets the motor give (its current limit, at the motor shaft).", '300 N*m'),
+    torque_limit: quantity('torque', 'The most torque the drive lets the motor give (its current limit, at the motor shaft).', '300 N*m'),
   },
   'A motor that keeps driving at this station.',
 );
@@ -204,16 +208,30 @@ export const MATERIAL_SHAPE = mapping(
     ...Object.fromEntries(
       (Object.keys(MATERIAL_FIELDS) as MaterialField[]).map((f) => [
         f,
-        f === 'poisson_ratio' ? { shape: { type: 'number', min: 0, max: 0.499, about: "Poisson's ratio (data sheet)." }, example: 0.29 } : quantity(FIELD_KINDS[f], f.replaceAll('_', ' '), FIELD_EXAMPLES[f]),
+        f === 'poisson_ratio'
+          ? { shape: { type: 'number', min: 0, max: 0.499, about: "Poisson's ratio (data sheet)." }, example: 0.29 }
+          : quantity(FIELD_KINDS[f], f.replaceAll('_', ' '), FIELD_EXAMPLES[f]),
       ]),
     ),
     // The cyclic constants (all six or none; read-cyclic-properties.ts): K′ and σ′_f with a unit, the others plain numbers.
     cyclic_strength_coefficient: quantity('stress', 'K′, the cyclic stress–strain curve’s coefficient.', '1344 MPa'),
-    cyclic_hardening_exponent: { shape: { type: 'number', min: CYCLIC_LIMITS.cyclic_hardening_exponent[0], max: CYCLIC_LIMITS.cyclic_hardening_exponent[1], about: 'n′, the cyclic hardening exponent.' }, example: 0.18 },
+    cyclic_hardening_exponent: {
+      shape: { type: 'number', min: CYCLIC_LIMITS.cyclic_hardening_exponent[0], max: CYCLIC_LIMITS.cyclic_hardening_exponent[1], about: 'n′, the cyclic hardening exponent.' },
+      example: 0.18,
+    },
     fatigue_strength_coefficient: quantity('stress', 'σ′_f, the fatigue strength coefficient.', '1227 MPa'),
-    fatigue_strength_exponent: { shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_strength_exponent[0], max: CYCLIC_LIMITS.fatigue_strength_exponent[1], about: 'b, the fatigue strength exponent (negative).' }, example: -0.095 },
-    fatigue_ductility_coefficient: { shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_ductility_coefficient[0], max: CYCLIC_LIMITS.fatigue_ductility_coefficient[1], about: 'ε′_f, the fatigue ductility coefficient.' }, example: 1.0 },
-    fatigue_ductility_exponent: { shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_ductility_exponent[0], max: CYCLIC_LIMITS.fatigue_ductility_exponent[1], about: 'c, the fatigue ductility exponent (negative).' }, example: -0.66 },
+    fatigue_strength_exponent: {
+      shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_strength_exponent[0], max: CYCLIC_LIMITS.fatigue_strength_exponent[1], about: 'b, the fatigue strength exponent (negative).' },
+      example: -0.095,
+    },
+    fatigue_ductility_coefficient: {
+      shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_ductility_coefficient[0], max: CYCLIC_LIMITS.fatigue_ductility_coefficient[1], about: 'ε′_f, the fatigue ductility coefficient.' },
+      example: 1.0,
+    },
+    fatigue_ductility_exponent: {
+      shape: { type: 'number', min: CYCLIC_LIMITS.fatigue_ductility_exponent[0], max: CYCLIC_LIMITS.fatigue_ductility_exponent[1], about: 'c, the fatigue ductility exponent (negative).' },
+      example: -0.66,
+    },
     strength_basis: { shape: { type: 'text', allowed: ['minimum', 'typical'], about: 'Whether the strengths are published minima or typical (mean) values.' }, example: 'minimum' },
     source: text('Where the values come from (a mill certificate, a handbook with its edition).', 'mill certificate 4471-B'),
   },

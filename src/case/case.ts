@@ -173,9 +173,7 @@ export interface Drive {
 }
 
 /** A constant torque, or a speed–torque curve by points (motor speed rad/s, torque N·m), speeds rising from 0. */
-export type MotorTorqueSpec =
-  | { kind: 'constant'; torque: number }
-  | { kind: 'curve'; points: { speed: number; torque: number }[] };
+export type MotorTorqueSpec = { kind: 'constant'; torque: number } | { kind: 'curve'; points: { speed: number; torque: number }[] };
 
 /**
  * A belt drive's slip limit: a stated slip torque at this station's shaft, N·m, or belt data from

@@ -122,7 +122,8 @@ function readMeta(r: CaseReader): CaseMeta {
   if (meta.occurred !== undefined && !isIsoDate(meta.occurred)) {
     r.fail('E_TYPE', ['case', 'occurred'], `"${meta.occurred}" is not an ISO date; give a date such as "2026-03-14" or "2026-03-14T06:40"`);
   }
-  if (meta.asset !== undefined && meta.asset.trim() === '') r.fail('E_MISSING', ['case', 'asset'], 'is empty; give the machine\'s asset tag, the same in every case of that machine, such as "GR-4 rotor shaft"');
+  if (meta.asset !== undefined && meta.asset.trim() === '')
+    r.fail('E_MISSING', ['case', 'asset'], 'is empty; give the machine\'s asset tag, the same in every case of that machine, such as "GR-4 rotor shaft"');
   return meta;
 }
 
@@ -145,7 +146,11 @@ export function isIsoDate(text: string): boolean {
 function sizeProblem(text: string): CaseProblem | undefined {
   const bytes = Buffer.byteLength(text, 'utf8');
   if (bytes > SIZE_LIMITS.fileBytes) {
-    return { code: 'E_RANGE', path: '', message: `the case file is ${(bytes / 1e6).toPrecision(3)} MB, more than the ${SIZE_LIMITS.fileBytes / 1e6} MB a case file may be; a case needs a few kilobytes: leave data tables and logs out of it` };
+    return {
+      code: 'E_RANGE',
+      path: '',
+      message: `the case file is ${(bytes / 1e6).toPrecision(3)} MB, more than the ${SIZE_LIMITS.fileBytes / 1e6} MB a case file may be; a case needs a few kilobytes: leave data tables and logs out of it`,
+    };
   }
   let colons = 0;
   for (let i = text.indexOf(':'); i >= 0; i = text.indexOf(':', i + 1)) colons++;
@@ -165,7 +170,12 @@ function checkKeys(doc: Document, lines: LineCounter): CaseProblem[] {
   visit(doc, {
     Map(_, map) {
       if (map.items.length > SIZE_LIMITS.keysPerMapping) {
-        problems.push({ code: 'E_RANGE', path: '', message: `a mapping with ${map.items.length} keys, more than the ${SIZE_LIMITS.keysPerMapping} one mapping may have`, position: at(map.range?.[0]) });
+        problems.push({
+          code: 'E_RANGE',
+          path: '',
+          message: `a mapping with ${map.items.length} keys, more than the ${SIZE_LIMITS.keysPerMapping} one mapping may have`,
+          position: at(map.range?.[0]),
+        });
         return visit.BREAK;
       }
       const seen = new Set<string>();
@@ -182,4 +192,3 @@ function checkKeys(doc: Document, lines: LineCounter): CaseProblem[] {
   });
   return problems;
 }
-

@@ -33,7 +33,8 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
   const [sMin, sMax] = NUMBER_LIMITS.samples;
   const samples = r.number(['analysis', 'samples'], { example: `a whole number from ${sMin} to ${sMax}, such as 10000`, integer: true, min: sMin, max: sMax }) ?? 10_000;
   const [dMin, dMax] = NUMBER_LIMITS.dynamicSamples;
-  const dynamicSamples = r.number(['analysis', 'dynamic_samples'], { example: `a whole number from ${dMin} to ${dMax}, such as 40, or 0 for none`, integer: true, min: dMin, max: dMax }) ?? DEFAULT_DYNAMIC_SAMPLES;
+  const dynamicSamples =
+    r.number(['analysis', 'dynamic_samples'], { example: `a whole number from ${dMin} to ${dMax}, such as 40, or 0 for none`, integer: true, min: dMin, max: dMax }) ?? DEFAULT_DYNAMIC_SAMPLES;
   const seed = r.number(['analysis', 'seed'], { example: 'a whole number from 0 to 4294967295, such as 42', integer: true, min: NUMBER_LIMITS.seed[0], max: NUMBER_LIMITS.seed[1] }) ?? 1;
   const scatter = r.quantity(['analysis', 'strength_scatter'], 'fraction', { nonNegative: true, limit: SCATTER_LIMIT, example: 'a coefficient of variation such as "7 %"' });
   const wanted = scatter !== undefined || Object.keys(r.tolerances).length > 0;
@@ -80,9 +81,20 @@ export function readAnalysis(r: CaseReader, stations: readonly Station[], stopAt
     if (!names.includes(limiterAt)) {
       r.fail('E_REFERENCE', ['analysis', 'limiter_at'], `no station is named "${limiterAt}"; give the station where a torque limiter would sit, one of ${names.map((n) => `"${n}"`).join(', ')}`);
     } else if (limiterAt === stopAt) {
-      r.fail('E_RANGE', ['analysis', 'limiter_at'], `"${limiterAt}" is the station that stopped; a torque limiter sits between the driving parts and the stop, such as at ${names.filter((n) => n !== stopAt).map((n) => `"${n}"`).join(' or ')}`);
+      r.fail(
+        'E_RANGE',
+        ['analysis', 'limiter_at'],
+        `"${limiterAt}" is the station that stopped; a torque limiter sits between the driving parts and the stop, such as at ${names
+          .filter((n) => n !== stopAt)
+          .map((n) => `"${n}"`)
+          .join(' or ')}`,
+      );
     } else if (!drivesThrough(stations, limiterAt, stopAt)) {
-      r.fail('E_RANGE', ['analysis', 'limiter_at'], `a torque limiter at "${limiterAt}" would carry no torque: no station at or beyond it, on its side of the stop, carries parts; give a station between the driving parts and the stop`);
+      r.fail(
+        'E_RANGE',
+        ['analysis', 'limiter_at'],
+        `a torque limiter at "${limiterAt}" would carry no torque: no station at or beyond it, on its side of the stop, carries parts; give a station between the driving parts and the stop`,
+      );
     } else {
       analysis.limiterAt = limiterAt;
     }

@@ -43,7 +43,11 @@ export function readCyclicProperties(r: CaseReader, path: (string | number)[]): 
   }
   const missing = Object.keys(CYCLIC_FIELDS).filter((f) => !given.includes(f));
   if (missing.length > 0) {
-    r.fail('E_MATERIAL', [...path, given[0]], `gives ${given.length} of the six cyclic constants; give all six (${missing.map((f) => `${f}: ${EXAMPLES[f as keyof typeof CYCLIC_FIELDS].replace(/^.* such as /, '')}`).join(', ')}) or none, and the fatigue estimate uses the uniform material law`);
+    r.fail(
+      'E_MATERIAL',
+      [...path, given[0]],
+      `gives ${given.length} of the six cyclic constants; give all six (${missing.map((f) => `${f}: ${EXAMPLES[f as keyof typeof CYCLIC_FIELDS].replace(/^.* such as /, '')}`).join(', ')}) or none, and the fatigue estimate uses the uniform material law`,
+    );
     return undefined;
   }
   return Object.keys(out).length === 6 ? (out as CyclicProperties) : undefined;

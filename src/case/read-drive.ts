@@ -16,14 +16,24 @@ const ROTOR_NAME = /\b(motor|rotor)\b/i;
  */
 export function readDrive(r: CaseReader, path: Path, parts: Part[]): Drive | undefined {
   if (!r.map(path, DRIVE_KEYS)) return undefined;
-  const givenRatio = r.number([...path, 'speed_ratio'], { example: 'the motor\'s speed over the shaft\'s, from 0.001 to 1000, such as 3.52', min: NUMBER_LIMITS.speedRatio[0], max: NUMBER_LIMITS.speedRatio[1] });
+  const givenRatio = r.number([...path, 'speed_ratio'], {
+    example: "the motor's speed over the shaft's, from 0.001 to 1000, such as 3.52",
+    min: NUMBER_LIMITS.speedRatio[0],
+    max: NUMBER_LIMITS.speedRatio[1],
+  });
   const rotorInertia = r.quantity([...path, 'rotor_inertia'], 'inertia', { positive: true, example: 'the rotor\'s inertia from the motor data sheet, such as "0.42 kg*m^2"' });
   const power = r.quantity([...path, 'power'], 'power', { positive: true });
   const running = r.quantity([...path, 'running_torque'], 'torque', { positive: true, example: 'the motor\'s normal running torque, such as "240 N*m"' });
   const torque = readMotorTorque(r, path);
   const belt = r.has([...path, 'belt']) ? readBelt(r, [...path, 'belt']) : undefined;
-  const tripAfter = r.quantity([...path, 'trip_after'], 'time', { positive: true, example: 'the time from the stop after which the drive or overload relay cut the motor, from the drive\'s fault log, such as "250 ms"' });
-  const torqueLimit = r.quantity([...path, 'torque_limit'], 'torque', { positive: true, example: 'the most torque the drive lets the motor give (its current limit as a torque, at the motor shaft), such as "300 N*m"' });
+  const tripAfter = r.quantity([...path, 'trip_after'], 'time', {
+    positive: true,
+    example: 'the time from the stop after which the drive or overload relay cut the motor, from the drive\'s fault log, such as "250 ms"',
+  });
+  const torqueLimit = r.quantity([...path, 'torque_limit'], 'torque', {
+    positive: true,
+    example: 'the most torque the drive lets the motor give (its current limit as a torque, at the motor shaft), such as "300 N*m"',
+  });
 
   const geared = [...new Set(parts.filter((p) => p.speedRatio !== 1).map((p) => p.speedRatio))];
   let speedRatio = givenRatio ?? 1;
@@ -37,17 +47,25 @@ export function readDrive(r: CaseReader, path: Path, parts: Part[]): Drive | und
   if (rotorInertia) {
     const twice = parts.find((p) => (speedRatio !== 1 ? p.speedRatio === speedRatio : ROTOR_NAME.test(p.name)));
     if (twice) {
-      r.fail('E_RANGE', [...path, 'rotor_inertia'], `the rotor is already listed as the part "${twice.name}" (speed_ratio ${twice.speedRatio}); give its inertia once: drop drive.rotor_inertia or that part`);
+      r.fail(
+        'E_RANGE',
+        [...path, 'rotor_inertia'],
+        `the rotor is already listed as the part "${twice.name}" (speed_ratio ${twice.speedRatio}); give its inertia once: drop drive.rotor_inertia or that part`,
+      );
       return undefined;
     }
     parts.push({ name: 'motor rotor', shape: 'inertia', inertia: rotorInertia.value, count: 1, speedRatio, dimensions: { inertia: rotorInertia.value } });
     rotorParts = [parts.length - 1];
   }
   if (belt && rotorParts.length === 0) {
-    r.fail('E_MISSING', [...path, 'rotor_inertia'], `a belt drive needs the motor's rotor behind the belt: give rotor_inertia (at the motor's speed), or list the rotor as a part with speed_ratio ${speedRatio === 1 ? 'such as 3.5' : speedRatio}`);
+    r.fail(
+      'E_MISSING',
+      [...path, 'rotor_inertia'],
+      `a belt drive needs the motor's rotor behind the belt: give rotor_inertia (at the motor's speed), or list the rotor as a part with speed_ratio ${speedRatio === 1 ? 'such as 3.5' : speedRatio}`,
+    );
   }
   if (belt && parts.length === rotorParts.length) {
-    r.fail('E_MODEL', [...path, 'belt'], 'a belt drive needs the pulley on this shaft: add the pulley (sheave) to this station\'s parts');
+    r.fail('E_MODEL', [...path, 'belt'], "a belt drive needs the pulley on this shaft: add the pulley (sheave) to this station's parts");
   }
   if (parts.length === 0) {
     r.fail('E_MISSING', [...path, 'rotor_inertia'], 'a drive needs the rotor\'s inertia: give rotor_inertia, such as "0.42 kg*m^2", or the rotor as one of the station\'s parts');
@@ -110,7 +128,11 @@ export function checkDriveCurves(r: CaseReader, stations: readonly Station[], sh
     const top = t.points[t.points.length - 1].speed;
     if (top < motorSpeed * (1 - 1e-9)) {
       const rpm = (w: number) => `${Number(((w * 60) / (2 * Math.PI)).toPrecision(4))} rpm`;
-      r.fail('E_RANGE', ['stations', i, 'drive', 'curve'], `ends at ${rpm(top)}, below the motor's speed at the stop (${rpm(motorSpeed)} = shaft speed × speed_ratio ${s.drive.speedRatio}); extend the curve to the synchronous speed`);
+      r.fail(
+        'E_RANGE',
+        ['stations', i, 'drive', 'curve'],
+        `ends at ${rpm(top)}, below the motor's speed at the stop (${rpm(motorSpeed)} = shaft speed × speed_ratio ${s.drive.speedRatio}); extend the curve to the synchronous speed`,
+      );
     }
   });
 }

@@ -21,7 +21,12 @@ export function readFit(r: CaseReader, path: Path, caseMaterials: Record<string,
   });
   const outer = r.quantity([...path, 'hub_outer_diameter'], 'length', { required: true, positive: true, example: 'the hub\'s outer diameter over the seat, such as "110 mm"' });
   const length = r.quantity([...path, 'length'], 'length', { required: true, positive: true, example: 'the length of the fit along the shaft, such as "60 mm"' });
-  const friction = r.number([...path, 'friction'], { required: true, example: 'the coefficient of friction at the seat, such as 0.12 (dry steel on steel, shrink fit) or 0.08 (oiled press fit)', min: NUMBER_LIMITS.friction[0], max: NUMBER_LIMITS.friction[1] });
+  const friction = r.number([...path, 'friction'], {
+    required: true,
+    example: 'the coefficient of friction at the seat, such as 0.12 (dry steel on steel, shrink fit) or 0.08 (oiled press fit)',
+    min: NUMBER_LIMITS.friction[0],
+    max: NUMBER_LIMITS.friction[1],
+  });
   const key = r.string([...path, 'hub_material'], { required: true, example: 'the hub\'s material, such as "aisi-1045-hr"' });
   const hub = key === undefined ? undefined : resolveMaterial(r, [...path, 'hub_material'], key, caseMaterials, ['elastic_modulus', 'poisson_ratio'], used);
   if (!interference || !outer || !length || friction === undefined || !hub) return undefined;
@@ -36,13 +41,25 @@ export function readFit(r: CaseReader, path: Path, caseMaterials: Record<string,
 export function checkFitSeat(r: CaseReader, path: Path, fit: HubFit, seatDiameter: number, shaftMaterial: Material): void {
   const mm = (m: number) => `${Number((m * 1000).toPrecision(3))} mm`;
   if (fit.hubOuterDiameter <= seatDiameter * (1 + 1e-9)) {
-    r.fail('E_RANGE', [...path, 'hub_outer_diameter'], `is not larger than the shaft's diameter at the seat (${mm(seatDiameter)}); give the hub's outside diameter over the seat, such as "${mm(seatDiameter * 2)}"`);
+    r.fail(
+      'E_RANGE',
+      [...path, 'hub_outer_diameter'],
+      `is not larger than the shaft's diameter at the seat (${mm(seatDiameter)}); give the hub's outside diameter over the seat, such as "${mm(seatDiameter * 2)}"`,
+    );
   }
   if (fit.interference > 0.01 * seatDiameter) {
-    r.fail('E_RANGE', [...path, 'interference'], `is more than 1 % of the seat's diameter (${mm(seatDiameter)}); an interference fit is a few parts in ten thousand of it: give the diametral interference, such as "${mm(seatDiameter * 8e-4)}"`);
+    r.fail(
+      'E_RANGE',
+      [...path, 'interference'],
+      `is more than 1 % of the seat's diameter (${mm(seatDiameter)}); an interference fit is a few parts in ten thousand of it: give the diametral interference, such as "${mm(seatDiameter * 8e-4)}"`,
+    );
   }
   const missing = (['elasticModulus', 'poissonRatio'] as const).filter((f) => shaftMaterial[f] === undefined);
   if (missing.length > 0) {
-    r.fail('E_MATERIAL', [...path, 'interference'], `the shaft's material "${shaftMaterial.key}" at this seat has no ${missing.map((f) => (f === 'elasticModulus' ? 'elastic_modulus' : 'poisson_ratio')).join(' or ')}, which a fit needs; add it under materials.${shaftMaterial.key}, e.g. elastic_modulus: "207 GPa", poisson_ratio: 0.29`);
+    r.fail(
+      'E_MATERIAL',
+      [...path, 'interference'],
+      `the shaft's material "${shaftMaterial.key}" at this seat has no ${missing.map((f) => (f === 'elasticModulus' ? 'elastic_modulus' : 'poisson_ratio')).join(' or ')}, which a fit needs; add it under materials.${shaftMaterial.key}, e.g. elastic_modulus: "207 GPa", poisson_ratio: 0.29`,
+    );
   }
 }

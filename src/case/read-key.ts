@@ -16,7 +16,11 @@ export function readKey(r: CaseReader, path: Path, caseMaterials: Record<string,
   const materialKey = r.string([...path, 'material'], { required: true, example: 'the key\'s material, such as "aisi-1045-cd"' });
   const material = materialKey === undefined ? undefined : resolveMaterial(r, [...path, 'material'], materialKey, caseMaterials, ['yield_strength'], used);
   if (height && hubDepth && hubDepth.value >= height.value) {
-    r.fail('E_RANGE', [...path, 'hub_depth'], `the part of the key in the hub must be less than the key's height; give the key's projection above the shaft, such as "${Number(((height.value * 1000) / 2).toPrecision(3))} mm"`);
+    r.fail(
+      'E_RANGE',
+      [...path, 'hub_depth'],
+      `the part of the key in the hub must be less than the key's height; give the key's projection above the shaft, such as "${Number(((height.value * 1000) / 2).toPrecision(3))} mm"`,
+    );
     return undefined;
   }
   if (!width || !height || !length || !material) return undefined;

@@ -6,7 +6,6 @@ import { didYouMean } from './did-you-mean.ts';
 import { readCyclicProperties } from './read-cyclic-properties.ts';
 import { ELONGATION_LIMIT, FRACTURE_STRAIN_LIMIT, MODULUS_LIMIT, REDUCTION_OF_AREA_LIMIT, type Limit } from './limits.ts';
 
-
 /** Fields with limits of their own (the others keep their kind's). */
 const FIELD_LIMITS: Partial<Record<MaterialField, Limit>> = {
   shear_modulus: MODULUS_LIMIT,
@@ -35,10 +34,14 @@ export function readCaseMaterials(r: CaseReader, defaultSource = 'given in the c
       if (q) (m as unknown as Record<string, number>)[prop] = q.value;
     }
     if (m.yieldStrength !== undefined && m.tensileStrength !== undefined && m.tensileStrength < m.yieldStrength) {
-      r.fail('E_MATERIAL', [...path, 'tensile_strength'], `is below the yield strength (${Number((m.yieldStrength / 1e6).toPrecision(4))} MPa); a tensile strength is at least the yield strength, such as "${Number(((m.yieldStrength * 1.2) / 1e6).toPrecision(3))} MPa"`);
+      r.fail(
+        'E_MATERIAL',
+        [...path, 'tensile_strength'],
+        `is below the yield strength (${Number((m.yieldStrength / 1e6).toPrecision(4))} MPa); a tensile strength is at least the yield strength, such as "${Number(((m.yieldStrength * 1.2) / 1e6).toPrecision(3))} MPa"`,
+      );
     }
     // A plain number: every isotropic solid has -1 < ν < 0.5; metals lie near 0.2–0.35.
-    const nu = r.number([...path, 'poisson_ratio'], { example: 'Poisson\'s ratio from the material\'s data sheet, from 0 to 0.5, such as 0.29', min: 0, max: 0.499 });
+    const nu = r.number([...path, 'poisson_ratio'], { example: "Poisson's ratio from the material's data sheet, from 0 to 0.5, such as 0.29", min: 0, max: 0.499 });
     if (nu !== undefined) m.poissonRatio = nu;
     const cyclic = readCyclicProperties(r, path);
     if (cyclic) m.cyclic = cyclic;
@@ -74,11 +77,7 @@ export function resolveMaterial(
   }
   const missing = needs.filter((f) => m[MATERIAL_FIELDS[f]] === undefined);
   if (missing.length > 0) {
-    r.fail(
-      'E_MATERIAL',
-      path,
-      `material "${key}" has no ${missing.join(' or ')}, which this use needs; add it under materials.${key}, e.g. ${missing.map(exampleOf).join(', ')}`,
-    );
+    r.fail('E_MATERIAL', path, `material "${key}" has no ${missing.join(' or ')}, which this use needs; add it under materials.${key}, e.g. ${missing.map(exampleOf).join(', ')}`);
     return undefined;
   }
   used[key] = m;

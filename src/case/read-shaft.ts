@@ -9,11 +9,7 @@ const SEGMENT_KEYS = keysOf(SEGMENT_SHAPE);
 const COUPLING_KEYS = keysOf(shapeAt(['coupling'], SEGMENT_SHAPE)!);
 
 /** The shaft's segments in order from its start, with positions accumulated. */
-export function readShaft(
-  r: CaseReader,
-  caseMaterials: Record<string, Material>,
-  used: Record<string, Material>,
-): { segments: Segment[]; length: number } {
+export function readShaft(r: CaseReader, caseMaterials: Record<string, Material>, used: Record<string, Material>): { segments: Segment[]; length: number } {
   const segments: Segment[] = [];
   if (!r.map(['shaft'], keysOf(SHAFT_SHAPE), { required: true, example: 'a mapping with material and segments' })) return { segments, length: 0 };
   const shaftMaterial = r.string(['shaft', 'material']);
@@ -29,13 +25,20 @@ export function readShaft(
     const label = r.string([...path, 'label']);
     const protection = readProtection(r, path);
     const coupling = readCoupling(r, [...path, 'coupling']);
-    const backlash = r.quantity([...path, 'backlash'], 'angle', { positive: true, example: 'the play at this shaft, measured by rocking it with the other side held (dial gauge on a radius: arc ÷ radius), such as "0.5 deg"' });
+    const backlash = r.quantity([...path, 'backlash'], 'angle', {
+      positive: true,
+      example: 'the play at this shaft, measured by rocking it with the other side held (dial gauge on a radius: arc ÷ radius), such as "0.5 deg"',
+    });
     if (backlash && (protection.slipTorque !== undefined || protection.shearTorque !== undefined)) {
       r.fail('E_MODEL', [...path, 'backlash'], 'a segment with a limiter or shear pin cannot also hold the backlash; split the segment and put the backlash on its own piece');
     }
     const materialKey = r.string([...path, 'material']) ?? shaftMaterial;
     if (diameter && bore && bore.value >= diameter.value) {
-      r.fail('E_RANGE', [...path, 'bore'], `the bore must be smaller than the diameter (${fmtMm(diameter.value)}); give a bore such as "${fmtMm(diameter.value * 0.5)}", or leave it out for a solid segment`);
+      r.fail(
+        'E_RANGE',
+        [...path, 'bore'],
+        `the bore must be smaller than the diameter (${fmtMm(diameter.value)}); give a bore such as "${fmtMm(diameter.value * 0.5)}", or leave it out for a solid segment`,
+      );
     }
     let material: Material | undefined;
     if (materialKey === undefined) {
@@ -83,11 +86,18 @@ function readProtection(r: CaseReader, path: (string | number)[]): Pick<Segment,
  */
 function readCoupling(r: CaseReader, path: (string | number)[]): Segment['coupling'] {
   if (!r.map(path, COUPLING_KEYS, { example: 'a mapping such as { stiffness: 120 kN*m/rad, rated_torque: 4 kN*m, peak_torque: 8 kN*m }' })) return undefined;
-  const stiffness = r.quantity([...path, 'stiffness'], 'stiffness', { positive: true, example: 'the coupling\'s dynamic torsional stiffness from its data sheet, such as "120 kN*m/rad" or "2100 N*m/deg"' });
+  const stiffness = r.quantity([...path, 'stiffness'], 'stiffness', {
+    positive: true,
+    example: 'the coupling\'s dynamic torsional stiffness from its data sheet, such as "120 kN*m/rad" or "2100 N*m/deg"',
+  });
   const rated = r.quantity([...path, 'rated_torque'], 'torque', { required: true, positive: true, example: 'the coupling\'s rated (nominal) torque from its data sheet, such as "4 kN*m"' });
   const peak = r.quantity([...path, 'peak_torque'], 'torque', { positive: true, example: 'the coupling\'s maximum (peak) torque from its data sheet, such as "8 kN*m"' });
   if (rated && peak && peak.value < rated.value) {
-    r.fail('E_RANGE', [...path, 'peak_torque'], `is below the rated torque; a coupling's maximum torque is at least its rated one, often 2 to 3 times it, such as "${Number((rated.value * 2).toPrecision(3))} N*m"`);
+    r.fail(
+      'E_RANGE',
+      [...path, 'peak_torque'],
+      `is below the rated torque; a coupling's maximum torque is at least its rated one, often 2 to 3 times it, such as "${Number((rated.value * 2).toPrecision(3))} N*m"`,
+    );
     return undefined;
   }
   if (!rated) return undefined;
@@ -104,7 +114,11 @@ export function checkProtectedSegments(r: CaseReader, segments: readonly Segment
     const inside = stations.find((s) => s.parts.length > 0 && s.at > seg.start + 1e-9 && s.at < seg.end - 1e-9);
     if (inside) {
       const key = seg.slipTorque !== undefined ? 'slip_torque' : 'shear_torque';
-      r.fail('E_MODEL', ['shaft', 'segments', seg.index, key], `station "${inside.name}" with parts lies inside this segment, so it is unclear which side of the ${key === 'slip_torque' ? 'limiter' : 'shear pin'} its parts are on; split the segment at the station and put ${key} on the piece that holds the device`);
+      r.fail(
+        'E_MODEL',
+        ['shaft', 'segments', seg.index, key],
+        `station "${inside.name}" with parts lies inside this segment, so it is unclear which side of the ${key === 'slip_torque' ? 'limiter' : 'shear pin'} its parts are on; split the segment at the station and put ${key} on the piece that holds the device`,
+      );
     }
   }
 }
@@ -118,7 +132,12 @@ export function checkCouplingSegments(r: CaseReader, segments: readonly Segment[
     for (const key of ['coupling', 'backlash'] as const) {
       if (seg[key] === undefined) continue;
       const inside = stations.find((s) => s.at > seg.start + 1e-9 && s.at < seg.end - 1e-9);
-      if (inside) r.fail('E_MODEL', ['shaft', 'segments', seg.index, key], `station "${inside.name}" lies inside this segment, so it is unclear which side of the ${key === 'coupling' ? 'coupling' : 'gap'} it is on; split the segment at the station and put the ${key} on one of the pieces`);
+      if (inside)
+        r.fail(
+          'E_MODEL',
+          ['shaft', 'segments', seg.index, key],
+          `station "${inside.name}" lies inside this segment, so it is unclear which side of the ${key === 'coupling' ? 'coupling' : 'gap'} it is on; split the segment at the station and put the ${key} on one of the pieces`,
+        );
     }
   }
 }

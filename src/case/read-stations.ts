@@ -13,12 +13,7 @@ const STATION_KEYS = keysOf(STATION_SHAPE);
 const SHAPES: PartShape[] = ['disc', 'inertia', 'mass'];
 
 /** Stations with their parts and drives; each part's inertia worked out from its shape. */
-export function readStations(
-  r: CaseReader,
-  shaftLength: number,
-  caseMaterials: Record<string, Material>,
-  used: Record<string, Material>,
-): Station[] {
+export function readStations(r: CaseReader, shaftLength: number, caseMaterials: Record<string, Material>, used: Record<string, Material>): Station[] {
   const stations: Station[] = [];
   const n = r.list(['stations'], { required: true, example: 'a list of stations, each with name, at and parts', max: SIZE_LIMITS.stations, what: 'stations' });
   const seen = new Map<string, number>();
@@ -62,7 +57,8 @@ function readPart(r: CaseReader, path: (string | number)[], caseMaterials: Recor
   }
   if (!r.map(path, keysOf(PART_SHAPE, shape), { required: true })) return undefined;
   const count = r.number([...path, 'count'], { example: 'a whole number from 1 to 10000, such as 2', integer: true, min: NUMBER_LIMITS.count[0], max: NUMBER_LIMITS.count[1] }) ?? 1;
-  const speedRatio = r.number([...path, 'speed_ratio'], { example: 'the part\'s speed over the shaft\'s, from 0.001 to 1000, such as 2.5', min: NUMBER_LIMITS.speedRatio[0], max: NUMBER_LIMITS.speedRatio[1] }) ?? 1;
+  const speedRatio =
+    r.number([...path, 'speed_ratio'], { example: "the part's speed over the shaft's, from 0.001 to 1000, such as 2.5", min: NUMBER_LIMITS.speedRatio[0], max: NUMBER_LIMITS.speedRatio[1] }) ?? 1;
   const name = r.string([...path, 'name']) ?? `${shape} ${Number(path[3]) + 1}`;
   const ratedSpeed = r.quantity([...path, 'rated_speed'], 'angular_speed', { positive: true, example: 'the highest speed marked on the wheel, such as "3600 rpm"' });
   const base = { name, shape, count, speedRatio, ...(ratedSpeed ? { ratedSpeed: ratedSpeed.value } : {}) };
@@ -79,7 +75,7 @@ function readPart(r: CaseReader, path: (string | number)[], caseMaterials: Recor
   const d = r.quantity([...path, 'diameter'], 'length', { required: true, positive: true });
   const t = r.quantity([...path, 'thickness'], 'length', { required: true, positive: true });
   const bore = r.quantity([...path, 'bore'], 'length', { nonNegative: true });
-  if (d && bore && bore.value >= d.value) r.fail('E_RANGE', [...path, 'bore'], 'the bore must be smaller than the disc\'s diameter; leave it out for a solid disc');
+  if (d && bore && bore.value >= d.value) r.fail('E_RANGE', [...path, 'bore'], "the bore must be smaller than the disc's diameter; leave it out for a solid disc");
   let density = r.quantity([...path, 'density'], 'density', { positive: true })?.value;
   const materialKey = r.string([...path, 'material']);
   if (materialKey !== undefined && r.has([...path, 'density'])) {

@@ -46,7 +46,11 @@ export function collectIncidents(dir: string, known: ReadonlyMap<string, { loade
       rows.push(incidentRow(report.json, meta, { caseFile: resolve(file), report: display(report.folder), source: 'report' }));
       continue;
     }
-    const why = !report ? 'no report yet' : report.json.case_sha256 !== loaded.sha256 ? 'its newest report was made from another version of the case file' : 'its newest report has no fatigue estimate';
+    const why = !report
+      ? 'no report yet'
+      : report.json.case_sha256 !== loaded.sha256
+        ? 'its newest report was made from another version of the case file'
+        : 'its newest report has no fatigue estimate';
     notes.push(`${meta.id} (${shown}): ${why}; the engine ran on the case file.`);
     rows.push(incidentRow(resultsToJson(investigate(loaded.case, { samples: 0 })), meta, { caseFile: resolve(file), report: null, source: 'engine' }));
   }

@@ -58,13 +58,15 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--seed <s>', 'seed of the Monte Carlo (recorded with the results)', wholeNumber)
     .option('--materials <file>', "the site's materials catalogue (default: the nearest materials.yaml in the case's folder or above)")
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
-    .action(async (file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean; materials?: string }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io));
+    .action(
+      async (file: string, opts: { json?: boolean; samples?: number; seed?: number; strict?: boolean; materials?: string }) => await (await import('./commands/check.ts')).checkCommand(file, opts, io),
+    );
 
   program
     .command('resize')
     .description('what goes back in: replacement sizes, another material, a torque limiter, the key as fuse')
     .argument('<case>', 'a case .yaml file or a case folder')
-    .option('--factor <N>', 'design factor on shear yield in a repeat of the incident (default: the case\'s, else 1.5)', designFactor)
+    .option('--factor <N>', "design factor on shear yield in a repeat of the incident (default: the case's, else 1.5)", designFactor)
     .option('--json', 'print the check --json object with resize added, SI units')
     .option('--samples <n>', 'Monte Carlo samples for a case with tolerances (0: none), as for check', sampleCount)
     .option('--seed <s>', 'seed of the Monte Carlo, as for check', wholeNumber)

@@ -162,7 +162,8 @@ interface GoverningPiece {
 
 /** The first piece to break where one breaks, else the piece of the basis model with the highest ratio. */
 function governingPiece(r: Results, broke: DynamicPiece | undefined): GoverningPiece {
-  if (broke) return { side: broke.side, piece: broke.piece, elasticTorque: broke.elasticPeakTorque, shearStress: broke.shearStress, shearYield: broke.shearYield, yieldRatio: broke.yieldRatio, dynamic: broke };
+  if (broke)
+    return { side: broke.side, piece: broke.piece, elasticTorque: broke.elasticPeakTorque, shearStress: broke.shearStress, shearYield: broke.shearYield, yieldRatio: broke.yieldRatio, dynamic: broke };
   if (r.verdict === 'fracture predicted' && r.pastYieldBasis === 'energy balance') {
     const side = r.plastic.sides.find((s) => s.verdict === 'fracture predicted');
     const first = side?.firstToBreak === undefined ? undefined : side.pieces[side.firstToBreak];
@@ -193,8 +194,9 @@ function permanentTwistOf(r: Results, side: SideName): number | undefined {
 const DISPOSITION: Record<FindingVerdict, string> = {
   'fracture predicted': 'Not fit to return: the shaft is broken or cracked through; replace it and find out why nothing gave way first (see what goes back in).',
   yielded: 'Not fit to return: the shaft has taken a permanent twist; replace it (see what goes back in) and inspect every key, hub and coupling between the stop and the loaded parts.',
-  'yielded locally': 'Not returned to service on this calculation alone: inspect the stress raiser named above for cracks (magnetic particle or dye penetrant) before any decision; a repeat of the incident uses up its fatigue life.',
-  elastic: 'May go back after inspection: no yield is predicted; inspect keys, hubs, couplings and the shaft\'s runout before return to service.',
+  'yielded locally':
+    'Not returned to service on this calculation alone: inspect the stress raiser named above for cracks (magnetic particle or dye penetrant) before any decision; a repeat of the incident uses up its fatigue life.',
+  elastic: "May go back after inspection: no yield is predicted; inspect keys, hubs, couplings and the shaft's runout before return to service.",
 };
 
 /** Replace where the section yielded through or broke (or brittle material passed its strength); inspect where it yielded at a stress raiser only. */

@@ -54,9 +54,11 @@ export function incidentFatigue(material: Material, kt: number, elasticStress: n
     if (material.tensileStrength === undefined) notes.push('The material gives no tensile strength; 1.2 × its yield strength stands in for the estimate.');
     properties = uniformMaterialLaw(Su, E, group);
     propertiesSource = 'uniform material law (estimate)';
-    notes.push(`The cyclic and strain–life constants are estimated from the tensile strength by the uniform material law for ${group === 'steel' ? 'unalloyed and low-alloy steels' : 'aluminium and titanium alloys'} (Bäumel and Seeger 1990); measured constants (the material's cyclic_strength_coefficient … fatigue_ductility_exponent) replace the estimate.`);
+    notes.push(
+      `The cyclic and strain–life constants are estimated from the tensile strength by the uniform material law for ${group === 'steel' ? 'unalloyed and low-alloy steels' : 'aluminium and titanium alloys'} (Bäumel and Seeger 1990); measured constants (the material's cyclic_strength_coefficient … fatigue_ductility_exponent) replace the estimate.`,
+    );
   }
-  if (isBrittle(material)) notes.push('The material is brittle: the strain–life relation and Neuber\'s rule are for ductile metals, so this life is a rough guess.');
+  if (isBrittle(material)) notes.push("The material is brittle: the strain–life relation and Neuber's rule are for ductile metals, so this life is a rough guess.");
   const nominalShearStress = elasticStress / kt;
   const peakEq = equivalentNormalStress(nominalShearStress);
   const series = history;
@@ -64,8 +66,11 @@ export function incidentFatigue(material: Material, kt: number, elasticStress: n
   const nominal = ringDown ? nominalHistory(series, peakEq, elasticPeakTorque) : [0, peakEq, 0];
   const cycles = notchCycles(rainflow(nominal), kt, properties).sort((a, b) => b.nominalRange - a.nominalRange);
   const jamCycle = notchCycles([{ range: peakEq, mean: peakEq / 2, count: 1 }], kt, properties)[0];
-  notes.push('Torsion enters the strain–life relation as the von Mises equivalent (√3·τ), Neuber\'s rule on the equivalent stress with the segment\'s kt; mean stress is left out.');
-  if (ringDown) notes.push('The ring-down is the dynamic model\'s torque history of the governing piece, in its nominal stress per torque, its largest sample put at the elastic peak (Neuber\'s rule takes the stress an elastic analysis gives), counted by rainflow (ASTM E1049); the history is kept at a few hundred samples, so small late cycles may be missed. The model holds the stop in both senses, so a rebound that would lift a one-sided jam off is counted in full, and the count ends with the model\'s window: an upper estimate where the ring-down dominates.');
+  notes.push("Torsion enters the strain–life relation as the von Mises equivalent (√3·τ), Neuber's rule on the equivalent stress with the segment's kt; mean stress is left out.");
+  if (ringDown)
+    notes.push(
+      "The ring-down is the dynamic model's torque history of the governing piece, in its nominal stress per torque, its largest sample put at the elastic peak (Neuber's rule takes the stress an elastic analysis gives), counted by rainflow (ASTM E1049); the history is kept at a few hundred samples, so small late cycles may be missed. The model holds the stop in both senses, so a rebound that would lift a one-sided jam off is counted in full, and the count ends with the model's window: an upper estimate where the ring-down dominates.",
+    );
   return { kt, nominalShearStress, propertiesSource, properties, cycles, jamCycle, damage: minerSum(cycles.map((c) => c.damage)), ringDown, notes };
 }
 

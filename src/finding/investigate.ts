@@ -61,7 +61,10 @@ export function investigate(c: Case, opts: InvestigateOptions = {}): Investigati
     // The sampler runs the energy balance; its speeds behind a measured twist are not the dynamic
     // model's read-back, so they are left out rather than shown beside it.
     uncertainty.observed = [];
-    const warnings = [...results.warnings, 'The uncertainty run samples the energy balance, not the dynamic model the twist read-back stands on, so each measured twist is judged against the band on the recorded speed and its own tolerance, not by a Monte Carlo interval.'];
+    const warnings = [
+      ...results.warnings,
+      'The uncertainty run samples the energy balance, not the dynamic model the twist read-back stands on, so each measured twist is judged against the band on the recorded speed and its own tolerance, not by a Monte Carlo interval.',
+    ];
     return withFinding({ ...results, uncertainty, warnings });
   }
   const twist = results.observedFindings.twist.map((f, k) => judgeByInterval(f, uncertainty.observed[k]?.speedInterval ?? null));

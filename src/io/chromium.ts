@@ -6,18 +6,9 @@ import { PAGE_FOOTER_META } from '../report/page-footer.ts';
 export const CHROMIUM_PATHS = ['/usr/lib/chromium/chromium', '/usr/bin/chromium'];
 
 /** Headless, no sandbox (containers run as root), nothing fetched or synced in the background. */
-export const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-];
+export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 
-export const INSTALL_CHROMIUM = 'install Debian\'s package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM';
+export const INSTALL_CHROMIUM = "install Debian's package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM";
 
 /** The environment variable that names the browser for `--pdf`, before the Debian paths are tried. */
 export const CHROMIUM_ENV = 'SHAFTCASE_CHROMIUM';

@@ -44,12 +44,19 @@ export function findSiteCatalogue(caseFile: string): string | undefined {
 export function loadSiteCatalogue(path: string): NonNullable<LoadedCase['site']> {
   let bytes: Buffer;
   try {
-    if (statSync(path).size > SIZE_LIMITS.fileBytes) throw new CaseError(path, [{ code: 'E_FILE', path: '', message: `the materials catalogue is more than ${SIZE_LIMITS.fileBytes / 1e6} MB; a catalogue needs a few kilobytes` }]);
+    if (statSync(path).size > SIZE_LIMITS.fileBytes)
+      throw new CaseError(path, [{ code: 'E_FILE', path: '', message: `the materials catalogue is more than ${SIZE_LIMITS.fileBytes / 1e6} MB; a catalogue needs a few kilobytes` }]);
     bytes = readFileSync(path);
   } catch (e) {
     if (e instanceof CaseError) throw e;
     const code = (e as NodeJS.ErrnoException).code;
-    throw new CaseError(path, [{ code: 'E_FILE', path: '', message: `cannot read the materials catalogue (${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message}); give the path of a materials .yaml file` }]);
+    throw new CaseError(path, [
+      {
+        code: 'E_FILE',
+        path: '',
+        message: `cannot read the materials catalogue (${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message}); give the path of a materials .yaml file`,
+      },
+    ]);
   }
   const text = decodeUtf8(path, bytes);
   try {
@@ -81,7 +88,9 @@ export function loadCase(path: string, opts: { materials?: string } = {}): Loade
   try {
     const size = statSync(file).size;
     if (size > SIZE_LIMITS.fileBytes) {
-      throw new CaseError(file, [{ code: 'E_FILE', path: '', message: `the case file is ${(size / 1e6).toPrecision(3)} MB, more than the ${SIZE_LIMITS.fileBytes / 1e6} MB a case file may be; a case needs a few kilobytes` }]);
+      throw new CaseError(file, [
+        { code: 'E_FILE', path: '', message: `the case file is ${(size / 1e6).toPrecision(3)} MB, more than the ${SIZE_LIMITS.fileBytes / 1e6} MB a case file may be; a case needs a few kilobytes` },
+      ]);
     }
     bytes = readFileSync(file);
   } catch (e) {

@@ -52,7 +52,9 @@ export function readPhotos(caseFile: string, caseText: string, photos: readonly 
     }
     // Sizes are checked before a byte is read: the report carries each photo inside its HTML.
     if (stat.size > SIZE_LIMITS.photoBytes) {
-      fail(`"${photo.path}" is ${mb(stat.size)}, more than the ${mb(SIZE_LIMITS.photoBytes)} one photo may be; save a smaller copy (about 2000 pixels across is plenty for a report) and give its path`);
+      fail(
+        `"${photo.path}" is ${mb(stat.size)}, more than the ${mb(SIZE_LIMITS.photoBytes)} one photo may be; save a smaller copy (about 2000 pixels across is plenty for a report) and give its path`,
+      );
       return;
     }
     total += stat.size;

@@ -27,7 +27,12 @@ export function assetFinding(a: { asset: string; incidents: number; damage: numb
   }
   const jamsLeft = a.worst_damage > 0 ? Math.floor((1 - used) / a.worst_damage) : undefined;
   const rate = jamsLeft === undefined ? 'the jams add no damage the estimate can count' : `at this rate about ${jamsLeft} more jam${jamsLeft === 1 ? '' : 's'} like the worst one`;
-  return { used, jamsLeft, inspect, sentence: `${where} has used about ${percent(used)} of its crack-initiation life in ${jams}; ${rate}${inspect ? '; inspect it for cracks before it goes back in' : ''}.` };
+  return {
+    used,
+    jamsLeft,
+    inspect,
+    sentence: `${where} has used about ${percent(used)} of its crack-initiation life in ${jams}; ${rate}${inspect ? '; inspect it for cracks before it goes back in' : ''}.`,
+  };
 }
 
 /** A share as a whole percentage, or "less than 1 %" below that (never "0 %" for damage done). */

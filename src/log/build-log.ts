@@ -47,7 +47,9 @@ export function buildLog(rows: readonly IncidentRow[]): IncidentLog {
       segments: (d: { segment: string }) => aq.op.array_agg_distinct(d.segment),
     })
     .orderby('asset');
-  const assets = (rolled.objects() as { asset: string; incidents: number; worst_yield_ratio: number; damage: number; worst_damage: number; dated: number; first: number; last: number; segments: string[] }[]).map((a) => {
+  const assets = (
+    rolled.objects() as { asset: string; incidents: number; worst_yield_ratio: number; damage: number; worst_damage: number; dated: number; first: number; last: number; segments: string[] }[]
+  ).map((a) => {
     const rollup = {
       asset: a.asset,
       incidents: a.incidents,

@@ -9,7 +9,7 @@ const LB_PER_IN3 = 0.45359237 / 0.0254 ** 3;
 // Engineering Design, 9th ed. (Budynas & Nisbett, 2011), Table A-5 (from memory, confident).
 // A-5's G is listed, not computed from E and ν; we keep the listed value.
 const CARBON_STEEL = { elasticModulus: 207 * GPa, shearModulus: 79.3 * GPa, poissonRatio: 0.292, density: 0.282 * LB_PER_IN3 };
-const A5 = 'elastic constants (E, G, Poisson\'s ratio) and density: Shigley 9th ed. Table A-5 (from memory, confident)';
+const A5 = "elastic constants (E, G, Poisson's ratio) and density: Shigley 9th ed. Table A-5 (from memory, confident)";
 const A20 = 'strengths: Shigley 9th ed. Table A-20, estimated ASTM minimum (from memory, confident; reduction of area from memory, verify)';
 
 /**
@@ -129,7 +129,8 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     elongation: 0.4,
     reductionOfArea: 0.5,
     strengthBasis: 'minimum',
-    source: 'strengths: ASTM A276 minima (from memory, confident); E, G, Poisson\'s ratio 0.29, density: typical producer data for 304 (from memory, verify; Shigley 9th ed. Table A-5 gives 0.305 for the stainless class)',
+    source:
+      "strengths: ASTM A276 minima (from memory, confident); E, G, Poisson's ratio 0.29, density: typical producer data for 304 (from memory, verify; Shigley 9th ed. Table A-5 gives 0.305 for the stainless class)",
   },
   {
     key: 'ss-316-annealed',
@@ -143,7 +144,8 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     elongation: 0.4,
     reductionOfArea: 0.5,
     strengthBasis: 'minimum',
-    source: 'strengths: ASTM A276 minima (from memory, confident); E, G, Poisson\'s ratio 0.29, density: typical producer data (from memory, verify; Shigley 9th ed. Table A-5 gives 0.305 for the stainless class)',
+    source:
+      "strengths: ASTM A276 minima (from memory, confident); E, G, Poisson's ratio 0.29, density: typical producer data (from memory, verify; Shigley 9th ed. Table A-5 gives 0.305 for the stainless class)",
   },
   {
     key: 'ss-17-4ph-h1150',
@@ -157,7 +159,7 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     elongation: 0.16,
     reductionOfArea: 0.5,
     strengthBasis: 'minimum',
-    source: 'ASTM A564 minima and producer data bulletin, Poisson\'s ratio 0.27 from the same bulletin (from memory, verify)',
+    source: "ASTM A564 minima and producer data bulletin, Poisson's ratio 0.27 from the same bulletin (from memory, verify)",
   },
   {
     key: 'al-6061-t6',
@@ -170,7 +172,7 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     tensileStrength: 310 * MPa,
     elongation: 0.17,
     strengthBasis: 'typical',
-    source: 'Aluminum Association typical values, Poisson\'s ratio 0.33 (from memory, confident)',
+    source: "Aluminum Association typical values, Poisson's ratio 0.33 (from memory, confident)",
   },
   {
     key: 'al-7075-t6',
@@ -183,7 +185,7 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     tensileStrength: 572 * MPa,
     elongation: 0.11,
     strengthBasis: 'typical',
-    source: 'Aluminum Association typical values, Poisson\'s ratio 0.33 (from memory, confident)',
+    source: "Aluminum Association typical values, Poisson's ratio 0.33 (from memory, confident)",
   },
   {
     key: 'gray-iron-30',
@@ -198,7 +200,8 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     tensileStrength: 207 * MPa,
     elongation: 0.005,
     strengthBasis: 'minimum',
-    source: 'tensile strength: ASTM A48 class 30 minimum (from memory, confident); elastic constants and Poisson\'s ratio Shigley 9th ed. Table A-5 (from memory, confident); no yield point, tensile strength used as the limit',
+    source:
+      "tensile strength: ASTM A48 class 30 minimum (from memory, confident); elastic constants and Poisson's ratio Shigley 9th ed. Table A-5 (from memory, confident); no yield point, tensile strength used as the limit",
   },
   {
     key: 'ductile-iron-65-45-12',
@@ -211,7 +214,8 @@ export const MATERIAL_LIBRARY: readonly Material[] = [
     tensileStrength: 448 * MPa,
     elongation: 0.12,
     strengthBasis: 'minimum',
-    source: 'strengths: ASTM A536 (the grade names the minimum tensile, yield and elongation; from memory, confident); E, G, Poisson\'s ratio 0.275, density: typical producer data (from memory, verify)',
+    source:
+      "strengths: ASTM A536 (the grade names the minimum tensile, yield and elongation; from memory, confident); E, G, Poisson's ratio 0.275, density: typical producer data (from memory, verify)",
   },
 ];
 

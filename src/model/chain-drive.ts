@@ -71,7 +71,8 @@ export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainD
   if (d.torqueLimit !== undefined) {
     line = capLine(line, d.torqueLimit);
     assumptions.push(`The drive at "${s.name}" holds the motor's torque to at most ${Number(d.torqueLimit.toPrecision(4))} N·m at the motor shaft (its torque limit).`);
-    if (running > d.torqueLimit * (1 + 1e-9)) warnings.push(`The running torque at "${s.name}" is above the drive's torque limit; the shaft is taken to run at the running torque given, and the limit applies from the stop.`);
+    if (running > d.torqueLimit * (1 + 1e-9))
+      warnings.push(`The running torque at "${s.name}" is above the drive's torque limit; the shaft is taken to run at the running torque given, and the limit applies from the stop.`);
   }
   if (d.tripAfter !== undefined) assumptions.push(`The drive at "${s.name}" trips ${Number((d.tripAfter * 1000).toPrecision(4))} ms after the stop begins; from then on the motor gives no torque.`);
   const rotorInertia = d.rotorParts.reduce((sum, i) => sum + reflectedInertia(s.parts[i].inertia, s.parts[i].speedRatio) * s.parts[i].count, 0);

@@ -32,13 +32,24 @@ export function sideModes(chain: Chain, perSide: number): SideMode[] {
     if (idx.length === 0) return;
     const kd = idx.map((i) => (i > 0 ? k[i - 1] : 0) + (i < N - 1 ? k[i] : 0));
     const ko = idx.slice(0, -1).map((i) => -k[i]);
-    for (const mode of chainModes(kd, ko, idx.map((i) => mass[i]), perSide)) {
+    for (const mode of chainModes(
+      kd,
+      ko,
+      idx.map((i) => mass[i]),
+      perSide,
+    )) {
       const shape = new Float64Array(N);
       idx.forEach((i, j) => (shape[i] = mode.shape[j]));
       out.push({ side, omega: mode.omega, frequency: mode.frequency, shape, participation: mode.participation });
     }
   };
-  solve('A', Array.from({ length: P }, (_, i) => i));
-  solve('B', Array.from({ length: N - P - 1 }, (_, i) => P + 1 + i));
+  solve(
+    'A',
+    Array.from({ length: P }, (_, i) => i),
+  );
+  solve(
+    'B',
+    Array.from({ length: N - P - 1 }, (_, i) => P + 1 + i),
+  );
   return out.sort((a, b) => a.omega - b.omega);
 }

@@ -113,7 +113,13 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
     positions.push(...at);
     for (let k = 0; k + 1 < at.length; k++) {
       const inRun = pieces.flatMap((p, i) => (p.piece.start >= at[k] - EPS && p.piece.end <= at[k + 1] + EPS ? [i] : []));
-      const C = inRun.reduce((s, i) => s + compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore) + (pieces[i].piece.segment.coupling?.stiffness ? 1 / pieces[i].piece.segment.coupling!.stiffness! : 0), 0);
+      const C = inRun.reduce(
+        (s, i) =>
+          s +
+          compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore) +
+          (pieces[i].piece.segment.coupling?.stiffness ? 1 / pieces[i].piece.segment.coupling!.stiffness! : 0),
+        0,
+      );
       const coupled = inRun.map((i) => pieces[i].piece.segment).find((g) => g.coupling?.stiffness);
       elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])), ...(coupled ? { coupling: coupled } : {}) });
     }

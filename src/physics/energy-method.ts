@@ -64,17 +64,10 @@ export function partEnergies(side: Side, speed: number): PartEnergy[] {
  * instantly (Gere & Goodno, Mechanics of Materials 7th ed., Sec. 3.9, Problem 3.9-11; from memory,
  * confident); approximate where several stations on a side carry parts.
  */
-export function energyMethodSide(
-  side: Side,
-  speed: number,
-  materials: Record<string, Material>,
-  criterion: YieldCriterion,
-): SideResult {
+export function energyMethodSide(side: Side, speed: number, materials: Record<string, Material>, criterion: YieldCriterion): SideResult {
   const parts = partEnergies(side, speed);
   const energy = parts.reduce((sum, p) => sum + p.kineticEnergy, 0);
-  const pieceCompliance = side.pieces.map((p) =>
-    compliance(p.end - p.start, materials[p.segment.material].shearModulus!, p.segment.diameter, p.segment.bore),
-  );
+  const pieceCompliance = side.pieces.map((p) => compliance(p.end - p.start, materials[p.segment.material].shearModulus!, p.segment.diameter, p.segment.bore));
   // A coupling is a spring in series with the shaft: its compliance 1/k_c adds to the side's
   // (springs in series, shared reference 1.1.5 and 10.12; from memory, confident). A coupling's
   // segment holds no station, so it is one piece.
@@ -111,4 +104,3 @@ export function energyMethodSide(
     pieces,
   };
 }
-

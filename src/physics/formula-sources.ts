@@ -55,7 +55,8 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
   {
     what: 'Elastic–plastic torsion of a round section past yield (yield and fully plastic torque, torque–twist law, elastic unloading to the permanent twist)',
     formula: 'T_Y = τ_Y·J_p/c, T_P = (2π/3)·τ_Y·(c₂³ − c₁³), T = (4/3)·T_Y·[1 − ¼(φ_Y/φ)³] (solid), φ_p = φ − T/(G·J_p)',
-    source: 'Beer & Johnston, Mechanics of Materials, Sec. 3.9–3.11 (elastoplastic shafts, residual stresses); Hibbeler, Mechanics of Materials, Sec. 5.9–5.10 (from memory, confident); the hollow and hardening forms derived by integrating τ·r over the section',
+    source:
+      'Beer & Johnston, Mechanics of Materials, Sec. 3.9–3.11 (elastoplastic shafts, residual stresses); Hibbeler, Mechanics of Materials, Sec. 5.9–5.10 (from memory, confident); the hollow and hardening forms derived by integrating τ·r over the section',
   },
   {
     what: 'Linear strain-hardening slope in shear from tensile data (where the case asks for hardening)',
@@ -75,7 +76,8 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
   {
     what: 'Reading a fracture surface (transverse flat face: ductile shear overload; 45° helix: brittle; beach marks: fatigue)',
     formula: 'the usual meanings of the surface, not a diagnosis',
-    source: 'ASM Handbook Vol. 11, Failure Analysis and Prevention (ASM International, 2002), "Failures of Shafts"; Beer & Johnston, Mechanics of Materials, Ch. 3, ductile and brittle specimens in torsion (from memory, verify the sections)',
+    source:
+      'ASM Handbook Vol. 11, Failure Analysis and Prevention (ASM International, 2002), "Failures of Shafts"; Beer & Johnston, Mechanics of Materials, Ch. 3, ductile and brittle specimens in torsion (from memory, verify the sections)',
   },
   {
     what: 'Stresses in a parallel key driving a hub (the key as fuse)',
@@ -83,7 +85,7 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     source: 'Shigley 9th ed., Sec. 7-7 (from memory, confident)',
   },
   {
-    what: 'Running torque from the drive\'s power',
+    what: "Running torque from the drive's power",
     formula: 'T = P/ω',
     source: 'Shigley 9th ed., Sec. 3-12, Eqs. 3-40 to 3-44 (equation numbers from memory, verify)',
   },
@@ -95,7 +97,8 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
   {
     what: 'Monte Carlo over the tolerances: seeded uniform generator, normal draws, percentiles',
     formula: 'mulberry32 (32-bit state); Box–Muller z = √(−2 ln u₁)·cos(2π u₂); percentiles by linear interpolation between closest ranks',
-    source: 'mulberry32, T. Ettinger (public domain); Box & Muller, Ann. Math. Statist. 29 (1958) 610–611; Hyndman & Fan, The American Statistician 50 (1996) 361–365, definition 7 (from memory, confident)',
+    source:
+      'mulberry32, T. Ettinger (public domain); Box & Muller, Ann. Math. Statist. 29 (1958) 610–611; Hyndman & Fan, The American Statistician 50 (1996) 361–365, definition 7 (from memory, confident)',
   },
   {
     what: 'Unit conversion factors',
@@ -119,7 +122,8 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
   },
   {
     what: 'Life to crack initiation at a strain amplitude',
-    formula: 'ε_a = (σ′_f/E)(2N)^b + ε′_f(2N)^c; constants where the case gives none by the uniform material law (steel: σ′_f = 1.5 S_u, b = −0.087, ε′_f = 0.59ψ, c = −0.58, K′ = 1.65 S_u, n′ = 0.15)',
+    formula:
+      'ε_a = (σ′_f/E)(2N)^b + ε′_f(2N)^c; constants where the case gives none by the uniform material law (steel: σ′_f = 1.5 S_u, b = −0.087, ε′_f = 0.59ψ, c = −0.58, K′ = 1.65 S_u, n′ = 0.15)',
     source: 'Coffin–Manson–Basquin as in Dowling 4th ed., Ch. 14; Bäumel & Seeger, Materials Data for Cyclic Loading, Suppl. 1, 1990 (from memory)',
   },
   {

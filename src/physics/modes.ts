@@ -46,7 +46,13 @@ export function chainModes(kDiag: ArrayLike<number>, kOff: ArrayLike<number>, ma
   const ys: Float64Array[] = [];
   for (let k = 0; k < Math.min(count, n); k++) {
     const lambda = Math.max(eigenvalue(a, b, k), 0);
-    const y = inverseIteration(a, b, lambda, ys, modes.map((m) => m.omega ** 2));
+    const y = inverseIteration(
+      a,
+      b,
+      lambda,
+      ys,
+      modes.map((m) => m.omega ** 2),
+    );
     ys.push(y);
     const phi = new Float64Array(n);
     let big = 0;

@@ -70,7 +70,11 @@ export function fillTemplate(template: string, file: string, input: TemplateInpu
   return out.replace(/\n{3,}/g, '\n\n').replace(/\s*$/, '\n');
 
   function fill(name: string, index: number): string {
-    if (name === 'sections') return input.sections.filter((s) => !placed.has(s.id)).map((s) => s.markdown).join('\n\n');
+    if (name === 'sections')
+      return input.sections
+        .filter((s) => !placed.has(s.id))
+        .map((s) => s.markdown)
+        .join('\n\n');
     if (name.startsWith('section:')) {
       const id = name.slice('section:'.length).trim();
       const s = input.sections.find((x) => x.id === id);

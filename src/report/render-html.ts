@@ -14,7 +14,6 @@ export interface HtmlAssets {
   pageFooter?: string;
 }
 
-
 /** Text escaped for HTML content and attribute values. */
 export function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);

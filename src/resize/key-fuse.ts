@@ -77,7 +77,8 @@ function keyFuse(c: Case, r: Results, station: string, limiter?: LimiterSetting,
 
   const incidentTorque = torqueThrough(c, r, s.at, stop.at);
   const shearOff = material.tensileStrength !== undefined ? shearUltimate(material.tensileStrength) : tauY;
-  const shearOffBasis = material.tensileStrength !== undefined ? 'taking its ultimate shear strength as 0.67·Sut, Shigley 9th ed. Sec. 6-15' : 'taking its shear yield, as the key material has no tensile strength';
+  const shearOffBasis =
+    material.tensileStrength !== undefined ? 'taking its ultimate shear strength as 0.67·Sut, Shigley 9th ed. Sec. 6-15' : 'taking its shear yield, as the key material has no tensile strength';
   const shearOffTorque = shearOff / keyShearStress(1, d, key.width, key.length);
   const crushTorque = material.yieldStrength! / keyBearingStress(1, d, key.height, key.length, key.hubDepth);
   const run = s.at === stop.at ? loadedRun(c, r) : runToStop(c, station);

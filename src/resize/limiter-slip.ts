@@ -77,7 +77,10 @@ export function limiterSlip(r: Results, place: LimiterPlace, setting: number, en
   if (energyOnly || r.verdictBasis !== 'dynamic model') return energy;
   const d = dynamicLimiterSlip(r.case, place.station, place.side, setting);
   if (!d) {
-    return { ...energy, note: `The shaft beside "${place.station}" toward the stop cannot hold a limiter in the model (a shear pin is there), so the slip is the energy method's although the verdict stands on the dynamic model.` };
+    return {
+      ...energy,
+      note: `The shaft beside "${place.station}" toward the stop cannot hold a limiter in the model (a shear pin is there), so the slip is the energy method's although the verdict stands on the dynamic model.`,
+    };
   }
   const seg = r.case.shaft.segments[d.segment];
   const unlimited = r.dynamic.sides.find((s) => s.side === place.side)?.dynamicPeakTorque ?? energy.unlimitedTorque;
@@ -110,9 +113,7 @@ export function energyLimiterSlip(r: Results, place: LimiterPlace, setting: numb
   const reach = Math.abs(at.at - stop.at) - 1e-9;
   const behind = side.parts.filter((p) => Math.abs(stations.find((s) => s.name === p.station)!.at - stop.at) >= reach);
   const energy = behind.reduce((sum, p) => sum + p.kineticEnergy, 0);
-  const compliance = side.pieces
-    .filter((p) => Math.max(Math.abs(p.piece.start - stop.at), Math.abs(p.piece.end - stop.at)) <= reach + 2e-9)
-    .reduce((sum, p) => sum + p.twist / p.torque, 0);
+  const compliance = side.pieces.filter((p) => Math.max(Math.abs(p.piece.start - stop.at), Math.abs(p.piece.end - stop.at)) <= reach + 2e-9).reduce((sum, p) => sum + p.twist / p.torque, 0);
   const slip = energyMethodSlip(energy, compliance, setting, side.peakTorque);
   return { setting, energy, ...slip, slipMethod: 'energy method', method: 'energy method: elastic twist up to the slip torque, the rest dissipated in slip' };
 }

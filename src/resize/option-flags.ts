@@ -78,7 +78,11 @@ export function withFlags(z: Unflagged): Omit<ResizeResult, 'recommended' | 'pic
       flags: [
         ...factorFlag(m.yieldRatio, N),
         ...runningFlag(m.running, N),
-        ...(otherFamily ? [`another family of material (${family}) than the present shaft (${present}): its stiffness, fits, keyways, fatigue and corrosion behaviour differ, so it is no replacement on the same drawing without the machine builder's or an engineer's word`] : []),
+        ...(otherFamily
+          ? [
+              `another family of material (${family}) than the present shaft (${present}): its stiffness, fits, keyways, fatigue and corrosion behaviour differ, so it is no replacement on the same drawing without the machine builder's or an engineer's word`,
+            ]
+          : []),
       ],
     };
   });
@@ -86,7 +90,9 @@ export function withFlags(z: Unflagged): Omit<ResizeResult, 'recommended' | 'pic
   const l = z.limiter;
   const limiterFlags = [
     ...(l.windowEmpty ? ['its window is empty: the lowest setting that runs the machine is above the highest that protects the shaft'] : []),
-    ...factorFlag(l.yieldRatio, N).map((f) => (l.slip.stopWave ? `${f} (the instantaneous stop's stress wave in ${l.slip.stopWave.piece}, which no limiter cuts; a stop spread over a few milliseconds brings it near the setting)` : f)),
+    ...factorFlag(l.yieldRatio, N).map((f) =>
+      l.slip.stopWave ? `${f} (the instantaneous stop's stress wave in ${l.slip.stopWave.piece}, which no limiter cuts; a stop spread over a few milliseconds brings it near the setting)` : f,
+    ),
     ...runningFlag(l.running, N),
     ...(l.unlimitedStations.length > 0 ? [`the parts at ${l.unlimitedStations.map((n) => `"${n}"`).join(', ')} lie between it and the stop and still drive the shaft unlimited`] : []),
     ...l.otherSides.filter((o) => o.yieldRatio * N > 1 + SLACK).map((o) => `does not protect side ${o.side} of the stop (stress / shear yield ${r3(o.yieldRatio)}): that side needs its own`),
@@ -96,10 +102,9 @@ export function withFlags(z: Unflagged): Omit<ResizeResult, 'recommended' | 'pic
     ...key,
     flags: [
       ...(key.shearsBeforeShaftYields ? [] : [`does not shear before the shaft yields: it shears off at ${r3(key.shearOffTorque / key.shaftYieldTorque)} × the torque at which the shaft yields`]),
-      'a key is no dependable fuse: fit, fretting, wear and the hub\'s grip change the torque it fails at, and a sheared key can wedge and keep driving',
+      "a key is no dependable fuse: fit, fretting, wear and the hub's grip change the torque it fails at, and a sheared key can wedge and keep driving",
     ],
   }));
 
   return { ...z, scaleSide: { ...s, flags: scaleFlags }, criticalSegment: { ...k, flags: criticalFlags }, materials, limiter: { ...l, flags: limiterFlags }, keys };
 }
-

@@ -24,11 +24,7 @@ const BRITTLE_ELONGATION = 0.05;
 export function otherMaterials(c: Case, designFactor: number): MaterialOption[] {
   const present = new Set(c.shaft.segments.map((s) => s.material));
   return MATERIAL_LIBRARY.filter(
-    (m) =>
-      m.shearModulus !== undefined &&
-      m.yieldStrength !== undefined &&
-      (m.elongation === undefined || m.elongation >= BRITTLE_ELONGATION) &&
-      !(present.size === 1 && present.has(m.key)),
+    (m) => m.shearModulus !== undefined && m.yieldStrength !== undefined && (m.elongation === undefined || m.elongation >= BRITTLE_ELONGATION) && !(present.size === 1 && present.has(m.key)),
   )
     .map((material) => {
       const rerun = designCheck(withShaftMaterial(c, material));

@@ -48,7 +48,9 @@ export function recommendOption(z: Omit<ResizeResult, 'recommended' | 'pickRule'
   const critical: Candidate = {
     option: 'critical_segment',
     flags: k.flags,
-    why: k.stockRerun ? `only the critical segment changes, and at its stock size side ${k.side} keeps N = ${r3(N)} (stress / shear yield ${r3(sideYieldRatio(k.stockRerun, k.side))} against ${allowed}); ${running(k.running?.keeps, k.running?.factorWithKt)}` : '',
+    why: k.stockRerun
+      ? `only the critical segment changes, and at its stock size side ${k.side} keeps N = ${r3(N)} (stress / shear yield ${r3(sideYieldRatio(k.stockRerun, k.side))} against ${allowed}); ${running(k.running?.keeps, k.running?.factorWithKt)}`
+      : '',
   };
   const s = z.scaleSide;
   const scale: Candidate = {

@@ -14,13 +14,20 @@ export function sideYieldRatio(r: Pick<Results, 'sides'>, side: SideName): numbe
 
 /** The highest stress / shear yield of one segment's pieces on a side; undefined if it has none there. */
 export function segmentYieldRatio(r: Pick<Results, 'sides'>, side: SideName, segment: number): number | undefined {
-  const ratios = sideOf(r, side).pieces.filter((p) => p.piece.segment.index === segment).map((p) => p.yieldRatio);
+  const ratios = sideOf(r, side)
+    .pieces.filter((p) => p.piece.segment.index === segment)
+    .map((p) => p.yieldRatio);
   return ratios.length > 0 ? Math.max(...ratios) : undefined;
 }
 
 /** The highest stress / shear yield on a side outside one segment (0 when the segment is the whole run). */
 export function othersYieldRatio(r: Pick<Results, 'sides'>, side: SideName, segment: number): number {
-  return Math.max(0, ...sideOf(r, side).pieces.filter((p) => p.piece.segment.index !== segment).map((p) => p.yieldRatio));
+  return Math.max(
+    0,
+    ...sideOf(r, side)
+      .pieces.filter((p) => p.piece.segment.index !== segment)
+      .map((p) => p.yieldRatio),
+  );
 }
 
 /** Indices of the segments a side's run goes through, in order from the stop. */

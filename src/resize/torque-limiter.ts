@@ -62,9 +62,7 @@ export function torqueLimiter(c: Case, r: Results, running: RunningTorque | unde
     const s = c.stations.find((x) => x.name === name)!;
     return Math.abs(s.at - stop.at) < Math.abs(at.at - stop.at) - 1e-9;
   });
-  const otherSides = r.sides
-    .filter((s) => s.side !== side)
-    .map((s) => ({ side: s.side, yieldRatio: Math.max(...s.pieces.map((p) => p.yieldRatio)) }));
+  const otherSides = r.sides.filter((s) => s.side !== side).map((s) => ({ side: s.side, yieldRatio: Math.max(...s.pieces.map((p) => p.yieldRatio)) }));
 
   const slip = limiterSlip(r, place, max);
   // Pieces between the limiter and the stop carry the held torque; any others keep the incident's.

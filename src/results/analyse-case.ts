@@ -70,7 +70,8 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     );
   }
   for (const s of dynamic.slips) {
-    if (s.slippingAtEnd) warnings.push(`${capitalise(s.element)} was still slipping when the simulated window ended (${(dynamic.duration * 1000).toPrecision(3)} ms); its slip energy and angle are to that moment.`);
+    if (s.slippingAtEnd)
+      warnings.push(`${capitalise(s.element)} was still slipping when the simulated window ended (${(dynamic.duration * 1000).toPrecision(3)} ms); its slip energy and angle are to that moment.`);
   }
   warnings.push(...dynamic.notes);
 
@@ -96,25 +97,30 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     if (basisVerdict === 'yielded' && !dynamic.yielded && !dynamic.fractured) warnings.push(LOCAL_YIELD);
     const netSection = dynamic.fractured ? 'fracture predicted' : dynamic.yielded ? 'yielded' : 'elastic';
     if (plastic.verdict !== netSection) {
-      warnings.push(`The energy balance past yield, which puts all of each side's energy into its shaft with nothing else acting, gives "${plastic.verdict}"; the verdict follows the dynamic model, which follows the slip, the drive and the stop in time with the same elastic–plastic law, and the balance's figures are shown for comparison only.`);
+      warnings.push(
+        `The energy balance past yield, which puts all of each side's energy into its shaft with nothing else acting, gives "${plastic.verdict}"; the verdict follows the dynamic model, which follows the slip, the drive and the stop in time with the same elastic–plastic law, and the balance's figures are shown for comparison only.`,
+      );
     }
   } else if (basis.basis === 'dynamic model' && basisVerdict === 'elastic') {
     // The dynamic model (slip, drive, ramp, several masses) keeps every segment below yield; the
     // energy balance past yield puts all the energy into the shaft and does not apply.
     verdict = 'elastic';
     if (plastic.verdict !== 'elastic') {
-      warnings.push('The energy balance past yield (all the energy into the shaft) predicts yield, but the dynamic model, which follows the slip, the drive and the stop in time, keeps every segment elastic; the verdict follows the dynamic model, and the past-yield figures are an upper bound.');
+      warnings.push(
+        'The energy balance past yield (all the energy into the shaft) predicts yield, but the dynamic model, which follows the slip, the drive and the stop in time, keeps every segment elastic; the verdict follows the dynamic model, and the past-yield figures are an upper bound.',
+      );
     }
   } else {
     if (basisVerdict === 'yielded' && plastic.verdict === 'elastic') warnings.push(LOCAL_YIELD);
     verdict = plastic.verdict === 'elastic' ? basisVerdict : plastic.verdict;
     if (basis.basis === 'dynamic model' && plastic.verdict !== 'elastic') {
-      warnings.push('Past yield, the permanent twist and fracture come from the energy balance (all of a side\'s energy into its shaft); the dynamic model is elastic here (analysis.dynamic_plasticity: false), so where slip or the drive matter these figures are approximate.');
+      warnings.push(
+        "Past yield, the permanent twist and fracture come from the energy balance (all of a side's energy into its shaft); the dynamic model is elastic here (analysis.dynamic_plasticity: false), so where slip or the drive matter these figures are approximate.",
+      );
     }
   }
   const inertias = balances.map((b) => b.inertia);
-  const relation = (x1: number, x2: number) =>
-    pastYieldInTime ? dynamicTwistRelation(c, model, inertias, dynamic.elementTarget, x1, x2) : balanceTwistRelation(model.sides, balances, x1, x2);
+  const relation = (x1: number, x2: number) => (pastYieldInTime ? dynamicTwistRelation(c, model, inertias, dynamic.elementTarget, x1, x2) : balanceTwistRelation(model.sides, balances, x1, x2));
   const observedFindings = {
     twist: opts.readBack === false ? [] : readTwistBack(c, relation),
     fracture: readFracture(c, pastYieldInTime ? dynamicFracturePrediction(dynamic, plastic, verdict) : balanceFracturePrediction(plastic)),
@@ -124,11 +130,16 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
   const keys = keyChecks(c, basis.basis, sides, dynamic);
   const couplings = couplingChecks(c, basis.basis, sides, dynamic);
   for (const f of fits) {
-    if (!f.inDynamicModel) warnings.push(`The shrink fit at "${f.station}" sits between other loaded stations, so the dynamic model holds it rigid; it is checked afterwards against the peak torque of the shaft next to it${f.upperBound ? ', an upper bound of what its hub carried' : ''}.`);
+    if (!f.inDynamicModel)
+      warnings.push(
+        `The shrink fit at "${f.station}" sits between other loaded stations, so the dynamic model holds it rigid; it is checked afterwards against the peak torque of the shaft next to it${f.upperBound ? ', an upper bound of what its hub carried' : ''}.`,
+      );
   }
 
   if (c.shaft.segments.some((s) => s.coupling?.stiffness) && plastic.verdict !== 'elastic') {
-    warnings.push('The energy balance past yield puts all of a side\'s energy into its shaft and leaves the coupling\'s compliance out, so with a flexible coupling its figures are an upper bound; the element that holds the coupling stays elastic in the dynamic model.');
+    warnings.push(
+      "The energy balance past yield puts all of a side's energy into its shaft and leaves the coupling's compliance out, so with a flexible coupling its figures are an upper bound; the element that holds the coupling stays elastic in the dynamic model.",
+    );
   }
 
   // How the other model compares is the views' comparison (like for like), not part of the reason.

@@ -31,7 +31,7 @@ export function analysePlastic(c: Case, model: { sides: Side[] }, elastic: reado
       ? 'Past yield the shear stress rises linearly with strain from Sy to Sut over the elongation at break (an assumption: it carries on past that strain, overstating the torque at large twist).'
       : 'Past yield the material is elastic–perfectly plastic: the shear stress stays at shear yield (no strain hardening), so the torque is capped at the fully plastic torque and the twist is on the high side.',
     'Stress-concentration factors (kt) are not applied to the net-section plastic behaviour of ductile material: local yielding relieves them under a single overload. They matter for fatigue and for brittle material, where they are applied.',
-    'The torque–twist law is quasi-static (no strain-rate effect); the shaft unloads elastically to its permanent twist; the shaft\'s own inertia is left out, as in the elastic energy method.',
+    "The torque–twist law is quasi-static (no strain-rate effect); the shaft unloads elastically to its permanent twist; the shaft's own inertia is left out, as in the elastic energy method.",
   ];
   const brittleNotes: string[] = [];
   for (const s of sides) {

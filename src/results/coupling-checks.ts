@@ -27,22 +27,24 @@ export interface CouplingCheck {
  * grid broken); the rated torque is for continuous duty, with the maker's service factors.
  */
 export function couplingChecks(c: Case, basis: VerdictBasis, sides: readonly SideResult[], dynamic: DynamicResult): CouplingCheck[] {
-  return c.shaft.segments.filter((s) => s.coupling).map((seg) => {
-    const cp = seg.coupling!;
-    const torque =
-      basis === 'energy method'
-        ? Math.max(0, ...sides.filter((s) => s.pieces.some((p) => p.piece.segment.index === seg.index)).map((s) => s.peakTorque))
-        : Math.max(0, ...dynamic.pieces.filter((p) => p.piece.segment.index === seg.index).map((p) => p.peakTorque));
-    const capacity = cp.peakTorque ?? cp.ratedTorque;
-    return {
-      segment: seg,
-      ...(cp.stiffness !== undefined ? { stiffness: cp.stiffness } : {}),
-      ratedTorque: cp.ratedTorque,
-      ...(cp.peakTorque !== undefined ? { peakRating: cp.peakTorque } : {}),
-      torque,
-      ratedRatio: torque / cp.ratedTorque,
-      capacityRatio: torque / capacity,
-      capacity,
-    };
-  });
+  return c.shaft.segments
+    .filter((s) => s.coupling)
+    .map((seg) => {
+      const cp = seg.coupling!;
+      const torque =
+        basis === 'energy method'
+          ? Math.max(0, ...sides.filter((s) => s.pieces.some((p) => p.piece.segment.index === seg.index)).map((s) => s.peakTorque))
+          : Math.max(0, ...dynamic.pieces.filter((p) => p.piece.segment.index === seg.index).map((p) => p.peakTorque));
+      const capacity = cp.peakTorque ?? cp.ratedTorque;
+      return {
+        segment: seg,
+        ...(cp.stiffness !== undefined ? { stiffness: cp.stiffness } : {}),
+        ratedTorque: cp.ratedTorque,
+        ...(cp.peakTorque !== undefined ? { peakRating: cp.peakTorque } : {}),
+        torque,
+        ratedRatio: torque / cp.ratedTorque,
+        capacityRatio: torque / capacity,
+        capacity,
+      };
+    });
 }

@@ -36,7 +36,14 @@ const segmentName = (s: Segment) => (s.label ? `"${s.label}"` : `segment ${s.ind
  * (its slip torque), each coupling (its maximum torque, else its rated one), each torque limiter
  * (its setting) and shear pin (its parting torque).
  */
-export function driveTrainElements(basis: VerdictBasis, sides: readonly SideResult[], dynamic: DynamicResult, keys: readonly KeyCheck[], fits: readonly FitCheck[], couplings: readonly CouplingCheck[]): DriveTrainElement[] {
+export function driveTrainElements(
+  basis: VerdictBasis,
+  sides: readonly SideResult[],
+  dynamic: DynamicResult,
+  keys: readonly KeyCheck[],
+  fits: readonly FitCheck[],
+  couplings: readonly CouplingCheck[],
+): DriveTrainElement[] {
   const out: DriveTrainElement[] = [];
   const shaftPieces =
     basis === 'energy method'
@@ -44,31 +51,79 @@ export function driveTrainElements(basis: VerdictBasis, sides: readonly SideResu
       : dynamic.pieces.map((p) => ({ piece: p.piece, torque: p.elasticPeakTorque, ratio: p.yieldRatio, side: p.side }));
   for (const p of shaftPieces) {
     const where = segmentName(p.piece.segment);
-    out.push({ kind: 'shaft', element: `the shaft in ${where} (side ${p.side}, ${Number((p.piece.start * 1000).toPrecision(4))} to ${Number((p.piece.end * 1000).toPrecision(4))} mm)`, where, capacity: p.ratio > 0 ? p.torque / p.ratio : Infinity, givesWayBy: 'yields (kt stress at shear yield)', torque: p.torque, ratio: p.ratio });
+    out.push({
+      kind: 'shaft',
+      element: `the shaft in ${where} (side ${p.side}, ${Number((p.piece.start * 1000).toPrecision(4))} to ${Number((p.piece.end * 1000).toPrecision(4))} mm)`,
+      where,
+      capacity: p.ratio > 0 ? p.torque / p.ratio : Infinity,
+      givesWayBy: 'yields (kt stress at shear yield)',
+      torque: p.torque,
+      ratio: p.ratio,
+    });
   }
   for (const k of keys) {
     const crush = k.crushTorque < k.shearOffTorque;
     const capacity = Math.min(k.crushTorque, k.shearOffTorque);
-    out.push({ kind: 'key', element: `the key at "${k.station}"`, where: k.station, capacity, givesWayBy: crush ? 'crushes (bearing at yield)' : 'shears off', torque: k.torque, ratio: k.torque / capacity });
+    out.push({
+      kind: 'key',
+      element: `the key at "${k.station}"`,
+      where: k.station,
+      capacity,
+      givesWayBy: crush ? 'crushes (bearing at yield)' : 'shears off',
+      torque: k.torque,
+      ratio: k.torque / capacity,
+    });
   }
   for (const f of fits) {
-    out.push({ kind: 'fit', element: `the shrink fit at "${f.station}"`, where: f.station, capacity: f.slipTorque, givesWayBy: 'slips', torque: f.torque, ratio: f.slipped ? Math.max(1, f.torque / f.slipTorque) : f.torque / f.slipTorque });
+    out.push({
+      kind: 'fit',
+      element: `the shrink fit at "${f.station}"`,
+      where: f.station,
+      capacity: f.slipTorque,
+      givesWayBy: 'slips',
+      torque: f.torque,
+      ratio: f.slipped ? Math.max(1, f.torque / f.slipTorque) : f.torque / f.slipTorque,
+    });
   }
   for (const c of couplings) {
     const where = segmentName(c.segment);
-    out.push({ kind: 'coupling', element: `the coupling in ${where}`, where, capacity: c.capacity, givesWayBy: c.peakRating === undefined ? 'passes its rated torque' : 'passes its maximum torque', torque: c.torque, ratio: c.capacityRatio });
+    out.push({
+      kind: 'coupling',
+      element: `the coupling in ${where}`,
+      where,
+      capacity: c.capacity,
+      givesWayBy: c.peakRating === undefined ? 'passes its rated torque' : 'passes its maximum torque',
+      torque: c.torque,
+      ratio: c.capacityRatio,
+    });
   }
   const segmentPeak = (seg: Segment) => Math.max(0, ...dynamic.pieces.filter((p) => p.piece.segment.index === seg.index).map((p) => p.peakTorque));
   for (const s of dynamic.slips) {
     if (s.kind !== 'torque limiter' || s.elementIndex === undefined) continue;
     const seg = dynamic.pieces.find((p) => s.element.endsWith(segmentName(p.piece.segment)))?.piece.segment;
     const torque = seg ? segmentPeak(seg) : s.slipTorque;
-    out.push({ kind: 'torque limiter', element: s.element, where: seg ? segmentName(seg) : s.element, capacity: s.slipTorque, givesWayBy: 'slips (as set)', torque, ratio: s.firstSlip !== undefined ? Math.max(1, torque / s.slipTorque) : torque / s.slipTorque });
+    out.push({
+      kind: 'torque limiter',
+      element: s.element,
+      where: seg ? segmentName(seg) : s.element,
+      capacity: s.slipTorque,
+      givesWayBy: 'slips (as set)',
+      torque,
+      ratio: s.firstSlip !== undefined ? Math.max(1, torque / s.slipTorque) : torque / s.slipTorque,
+    });
   }
   for (const p of dynamic.pins) {
     const seg = dynamic.pieces.find((x) => p.element.endsWith(segmentName(x.piece.segment)))?.piece.segment;
     const torque = p.partedAt !== undefined ? p.shearTorque : seg ? segmentPeak(seg) : 0;
-    out.push({ kind: 'shear pin', element: p.element, where: seg ? segmentName(seg) : p.element, capacity: p.shearTorque, givesWayBy: 'parts', torque, ratio: p.partedAt !== undefined ? Math.max(1, torque / p.shearTorque) : torque / p.shearTorque });
+    out.push({
+      kind: 'shear pin',
+      element: p.element,
+      where: seg ? segmentName(seg) : p.element,
+      capacity: p.shearTorque,
+      givesWayBy: 'parts',
+      torque,
+      ratio: p.partedAt !== undefined ? Math.max(1, torque / p.shearTorque) : torque / p.shearTorque,
+    });
   }
   return out;
 }

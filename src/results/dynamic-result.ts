@@ -153,7 +153,12 @@ export function firstBrokenPiece(d: Pick<DynamicResult, 'pieces'>): DynamicPiece
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
   const solve = solveDynamics(c, model);
   const { chain, modes, run, piecePeak, pieceTime } = solve.final;
-  const damage = dynamicPieceDamage(chain, run.laws, piecePeak, chain.pieces.map((p) => c.materials[p.piece.segment.material].shearModulus!));
+  const damage = dynamicPieceDamage(
+    chain,
+    run.laws,
+    piecePeak,
+    chain.pieces.map((p) => c.materials[p.piece.segment.material].shearModulus!),
+  );
   const breakTime = (i: number) => run.events.find((e) => e.what === 'breaks' && e.source.kind === 'element' && chain.elements[e.source.index].pieces.includes(i))?.time;
   const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
   const pastYield = plasticLaws.some((l) => l.yielded) || damage.some((d) => d.broken);
@@ -164,7 +169,18 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     const tau = seg.kt * shearStress(elasticPeak[i], seg.diameter, seg.bore);
     const d = damage[i];
     const broke = d.broken ? { breakTime: breakTime(i) } : {};
-    return { piece: p.piece, side: p.side, peakTorque: piecePeak[i], peakTime: pieceTime[i], elasticPeakTorque: elasticPeak[i], shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY, ...d, ...broke };
+    return {
+      piece: p.piece,
+      side: p.side,
+      peakTorque: piecePeak[i],
+      peakTime: pieceTime[i],
+      elasticPeakTorque: elasticPeak[i],
+      shearStress: tau,
+      shearYield: tauY,
+      yieldRatio: tau / tauY,
+      ...d,
+      ...broke,
+    };
   });
   const governing = pieces.reduce((best, p, i) => (p.yieldRatio > pieces[best].yieldRatio ? i : best), 0);
   const sides = energy.map((s): SideComparison => {
@@ -223,7 +239,14 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     protection: chain.drives.flatMap((d, i) =>
       d.drive.tripAfter === undefined && d.drive.torqueLimit === undefined
         ? []
-        : [{ station: d.station, ...optional('torqueLimit', d.drive.torqueLimit), ...optional('tripAfter', d.drive.tripAfter), ...optional('trippedAt', run.events.find((e) => e.source.kind === 'motor' && e.source.index === i && e.what.startsWith('trips'))?.time) }],
+        : [
+            {
+              station: d.station,
+              ...optional('torqueLimit', d.drive.torqueLimit),
+              ...optional('tripAfter', d.drive.tripAfter),
+              ...optional('trippedAt', run.events.find((e) => e.source.kind === 'motor' && e.source.index === i && e.what.startsWith('trips'))?.time),
+            },
+          ],
     ),
     plasticity: plasticLaws.length > 0 || run.laws.some((l) => l instanceof ShearPinLaw && l.kind === 'shaft'),
     yielded: plasticLaws.some((l) => l.yielded),
@@ -231,8 +254,19 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     plasticWork: plasticLaws.reduce((w, l) => w + l.dissipated - l.released, 0),
     energy: run.energy,
     histories: dynamicHistories(chain, solve.final, slips),
-    ...optional('yieldPath', yieldPath(chain, solve.final, pieces.map((p) => p.permanentTwist))),
-    assumptions: assumptionsOf(c, chain.shaftInertia, chain.drives.flatMap((d) => d.assumptions)),
+    ...optional(
+      'yieldPath',
+      yieldPath(
+        chain,
+        solve.final,
+        pieces.map((p) => p.permanentTwist),
+      ),
+    ),
+    assumptions: assumptionsOf(
+      c,
+      chain.shaftInertia,
+      chain.drives.flatMap((d) => d.assumptions),
+    ),
     notes: [...runningChecks(chain, c.speed), ...solve.notes, ...chain.drives.flatMap((d) => d.warnings)],
   };
 }
@@ -261,15 +295,19 @@ function capitalise(s: string): string {
 function assumptionsOf(c: Case, shaftInertia: boolean, drives: string[]): string[] {
   return [
     (c.analysis.dynamicPlasticity ?? DEFAULT_DYNAMIC_PLASTICITY)
-      ? 'The shaft is a chain of lumped inertias joined by torsional springs (k = G·J_p/L per element) that yield as the net section does, elastic–plastic at the shear yield of the criterion, with Masing\'s rule on reversals (analysis.dynamic_plasticity: true); parts count at their station as J·ratio², and gears and couplings are rigid.'
+      ? "The shaft is a chain of lumped inertias joined by torsional springs (k = G·J_p/L per element) that yield as the net section does, elastic–plastic at the shear yield of the criterion, with Masing's rule on reversals (analysis.dynamic_plasticity: true); parts count at their station as J·ratio², and gears and couplings are rigid."
       : 'The shaft is a chain of lumped inertias joined by elastic torsional springs (k = G·J_p/L per element); parts count at their station as J·ratio², and gears and couplings are rigid.',
-    shaftInertia ? 'The shaft\'s own inertia is lumped half onto each end of every element.' : 'The shaft\'s own inertia is left out (analysis.shaft_inertia: false).',
+    shaftInertia ? "The shaft's own inertia is lumped half onto each end of every element." : "The shaft's own inertia is left out (analysis.shaft_inertia: false).",
     `Damping is stiffness-proportional, ${(100 * c.analysis.dampingRatio).toPrecision(2)} % of critical in each side's lowest mode${c.analysis.dampingRatio === DEFAULT_DAMPING_RATIO ? ' (the default, a small value typical of steel shafting: material damping of steel is a fraction of a percent, and it is taken low so that the peak and the ringing are not understated)' : ''}; the dashpots take energy but the torques reported are the elastic ones. Each dashpot follows its element's tangent stiffness, so a section that flows plastically is damped as little as it is stiff.`,
-    c.stop.duration > 0 ? `The stop station's speed falls linearly to zero over ${(c.stop.duration * 1000).toPrecision(3)} ms, then stays at zero.` : 'The stop station\'s speed drops to zero at once and stays there.',
+    c.stop.duration > 0
+      ? `The stop station's speed falls linearly to zero over ${(c.stop.duration * 1000).toPrecision(3)} ms, then stays at zero.`
+      : "The stop station's speed drops to zero at once and stays there.",
     ...(c.stop.torqueCapacity !== undefined ? [`The jam holds up to ${c.stop.torqueCapacity.toPrecision(4)} N·m and slips with that torque above it (Coulomb).`] : []),
     'Belts, torque limiters and a soft jam stick rigidly until their slip torque is reached, then slip with that torque (Coulomb friction, no difference between static and sliding friction).',
     ...(c.stations.some((s) => s.drive)
-      ? ['A drive\'s motor gives the torque of its speed–torque curve (or its constant torque) at its momentary speed, held at the curve\'s end values beyond it; the motor\'s electrical transients and its protection trip are not modelled.']
+      ? [
+          "A drive's motor gives the torque of its speed–torque curve (or its constant torque) at its momentary speed, held at the curve's end values beyond it; the motor's electrical transients and its protection trip are not modelled.",
+        ]
       : []),
     ...drives,
   ];

@@ -58,7 +58,13 @@ export function slipOutcomes(asGiven: Case, chain: Chain, run: IntegrationResult
         slippingAtEnd: law.slipping,
       });
     } else if (law instanceof ShearPinLaw) {
-      pins.push({ element: `the shear pin in ${where}`, elementIndex: e, shearTorque: law.shearTorque, partedAt: first((x) => x.source.kind === 'element' && x.source.index === e), released: law.dissipated });
+      pins.push({
+        element: `the shear pin in ${where}`,
+        elementIndex: e,
+        shearTorque: law.shearTorque,
+        partedAt: first((x) => x.source.kind === 'element' && x.source.index === e),
+        released: law.dissipated,
+      });
     }
   });
   chain.drives.forEach((d, i) => {

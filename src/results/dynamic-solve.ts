@@ -58,7 +58,7 @@ export function solveDynamics(asGiven: Case, model: ShaftModel): DynamicSolve {
   let shaftInertiaOn = c.analysis.shaftInertia;
   if (shaftInertiaOn && c.shaft.segments.some((s) => c.materials[s.material].density === undefined)) {
     shaftInertiaOn = false;
-    notes.push('The shaft\'s own inertia is left out of the dynamic model because a shaft material has no density.');
+    notes.push("The shaft's own inertia is left out of the dynamic model because a shaft material has no density.");
   }
   const pieceCount = buildChain(c, model, { elements: 1, shaftInertia: false }).pieces.length;
   const fixed = !shaftInertiaOn ? pieceCount : c.analysis.elements;
@@ -84,7 +84,9 @@ export function solveDynamics(asGiven: Case, model: ShaftModel): DynamicSolve {
   }
   const converged = fixed !== undefined || lastChange < REFINE_TOLERANCE;
   if (!converged) {
-    notes.push(`The peak torques were still changing by ${(100 * lastChange).toFixed(1)} % at ${prev!.chain.elements.length} shaft elements when refinement stopped; set analysis.elements higher for a closer result.`);
+    notes.push(
+      `The peak torques were still changing by ${(100 * lastChange).toFixed(1)} % at ${prev!.chain.elements.length} shaft elements when refinement stopped; set analysis.elements higher for a closer result.`,
+    );
   }
   return { final: prev!, target: prevTarget, refinement, converged, lastChange: Number.isFinite(lastChange) ? lastChange : 0, notes: [...new Set(notes)] };
 }
@@ -95,7 +97,7 @@ function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boo
   if (c.stop.torqueCapacity !== undefined && !(chain.nodes[P].inertia > 0)) {
     const floor = 1e-3 * Math.min(...chain.nodes.filter((n) => n.inertia > 0).map((n) => n.inertia));
     chain.nodes[P].inertia = floor;
-    notes.push('The stop station carries no inertia, so the soft jam\'s slipping point is given a token one (a thousandth of the lightest node\'s).');
+    notes.push("The stop station carries no inertia, so the soft jam's slipping point is given a token one (a thousandth of the lightest node's).");
   }
   const modes = sideModes(chain, 12);
   const lowest: Partial<Record<SideName, number>> = {};
@@ -108,7 +110,9 @@ function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boo
   let h = steps.regular;
   if (duration / h > MAX_STEPS) {
     h = duration / MAX_STEPS;
-    notes.push(`The window of ${duration.toPrecision(3)} s is long for the lowest mode, so the time step was widened to ${(h * 1e6).toPrecision(3)} µs (${((2 * Math.PI) / omega1 / h).toFixed(0)} steps per lowest period).`);
+    notes.push(
+      `The window of ${duration.toPrecision(3)} s is long for the lowest mode, so the time step was widened to ${(h * 1e6).toPrecision(3)} µs (${((2 * Math.PI) / omega1 / h).toFixed(0)} steps per lowest period).`,
+    );
   }
   const fineSpan = Math.min(duration, c.stop.duration + steps.settle);
   if (fineSpan / steps.fine > MAX_STEPS) {

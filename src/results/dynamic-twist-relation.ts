@@ -63,7 +63,10 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
       w *= 1.5;
     }
     const known = [...runs.entries()].sort((a, b) => a[0] - b[0]);
-    const lo = known.filter(([, r]) => r.twist <= t).map(([x]) => x).filter((x) => x < w);
+    const lo = known
+      .filter(([, r]) => r.twist <= t)
+      .map(([x]) => x)
+      .filter((x) => x < w);
     const hi = known.filter(([x, r]) => r.twist > t && x > Math.max(0, ...lo)).map(([x]) => x);
     return [Math.max(0, ...lo), Math.min(w, ...hi)];
   };
@@ -80,7 +83,12 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
    * takes energy: steps of 10 % from there, a few each way; undefined when that does not bracket it.
    */
   const onsetBracket = (): [number, number] | undefined => {
-    const guess = balanceTwistRelation(model.sides, model.sides.map((side, i) => sideBalance(side, c, sideInertia[i])), x1, x2)?.onset();
+    const guess = balanceTwistRelation(
+      model.sides,
+      model.sides.map((side, i) => sideBalance(side, c, sideInertia[i])),
+      x1,
+      x2,
+    )?.onset();
     if (guess === undefined || !Number.isFinite(guess) || !(guess > 0)) return undefined;
     const yields = permanentAt(guess) > NONE;
     let w = guess;

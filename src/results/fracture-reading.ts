@@ -76,9 +76,10 @@ export function readFracture(c: Case, prediction: FracturePrediction): FractureF
       break;
     case 'helical':
       agreement = predicted && brittleBreak ? 'agrees' : 'disagrees';
-      comparison = predicted && brittleBreak
-        ? 'Fracture is predicted in brittle material, which agrees with a 45° helical surface.'
-        : `A ductile shaft in torsional overload usually breaks flat across${predicted ? '' : ', and no fracture is predicted'}; a helix points to embrittlement, a hardened case or core, low temperature, or bending or tension with the torque. Have the material checked.`;
+      comparison =
+        predicted && brittleBreak
+          ? 'Fracture is predicted in brittle material, which agrees with a 45° helical surface.'
+          : `A ductile shaft in torsional overload usually breaks flat across${predicted ? '' : ', and no fracture is predicted'}; a helix points to embrittlement, a hardened case or core, low temperature, or bending or tension with the torque. Have the material checked.`;
       break;
     case 'fatigue':
       agreement = 'not_comparable';

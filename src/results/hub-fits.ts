@@ -31,24 +31,26 @@ export interface FitCheck {
 
 /** Every fit in the case, at the incident's torque by the verdict's model. */
 export function hubFits(c: Case, basis: VerdictBasis, sides: readonly SideResult[], dynamic: DynamicResult): FitCheck[] {
-  return c.stations.filter((s) => s.fit).map((s) => {
-    const cap = fitCapacity(c, s);
-    const through = hubTorque(c, s, basis, sides, dynamic);
-    const slip = dynamic.slips.find((x) => (x.kind === 'hub fit' && x.element === `the shrink fit at "${s.name}"`) || (x.kind === 'jam' && s.name === c.stop.at));
-    const slipped = slip ? slip.firstSlip !== undefined : through.torque >= cap.slipTorque;
-    const shaftYieldTorque = shaftYieldTorqueToStop(c, s);
-    return {
-      station: s.name,
-      contactPressure: cap.contactPressure,
-      slipTorque: cap.slipTorque,
-      hubHoopStress: cap.hubHoopStress,
-      hubYieldStrength: c.materials[s.fit!.hubMaterial].yieldStrength,
-      torque: through.torque,
-      upperBound: through.upperBound,
-      slipped,
-      inDynamicModel: slip !== undefined,
-      shaftYieldTorque,
-      slipsBeforeShaftYields: cap.slipTorque < shaftYieldTorque,
-    };
-  });
+  return c.stations
+    .filter((s) => s.fit)
+    .map((s) => {
+      const cap = fitCapacity(c, s);
+      const through = hubTorque(c, s, basis, sides, dynamic);
+      const slip = dynamic.slips.find((x) => (x.kind === 'hub fit' && x.element === `the shrink fit at "${s.name}"`) || (x.kind === 'jam' && s.name === c.stop.at));
+      const slipped = slip ? slip.firstSlip !== undefined : through.torque >= cap.slipTorque;
+      const shaftYieldTorque = shaftYieldTorqueToStop(c, s);
+      return {
+        station: s.name,
+        contactPressure: cap.contactPressure,
+        slipTorque: cap.slipTorque,
+        hubHoopStress: cap.hubHoopStress,
+        hubYieldStrength: c.materials[s.fit!.hubMaterial].yieldStrength,
+        torque: through.torque,
+        upperBound: through.upperBound,
+        slipped,
+        inDynamicModel: slip !== undefined,
+        shaftYieldTorque,
+        slipsBeforeShaftYields: cap.slipTorque < shaftYieldTorque,
+      };
+    });
 }

@@ -30,7 +30,11 @@ export function hubTorque(c: Case, s: Station, basis: VerdictBasis, sides: reado
     const torque =
       basis === 'energy method'
         ? sides.reduce((sum, x) => sum + x.peakTorque, 0)
-        : ['A', 'B'].reduce((sum, side) => sum + Math.max(0, ...dynamic.pieces.filter((p) => p.side === side && (Math.abs(p.piece.start - stopAt) <= EPS || Math.abs(p.piece.end - stopAt) <= EPS)).map((p) => p.peakTorque)), 0);
+        : ['A', 'B'].reduce(
+            (sum, side) =>
+              sum + Math.max(0, ...dynamic.pieces.filter((p) => p.side === side && (Math.abs(p.piece.start - stopAt) <= EPS || Math.abs(p.piece.end - stopAt) <= EPS)).map((p) => p.peakTorque)),
+            0,
+          );
     return { torque, upperBound: sides.length > 1 };
   }
   const side = sideOf(s.at);

@@ -41,30 +41,32 @@ export interface KeyCheck {
  */
 export function keyChecks(c: Case, basis: VerdictBasis, sides: readonly SideResult[], dynamic: DynamicResult): KeyCheck[] {
   const stopAt = c.stations.find((x) => x.name === c.stop.at)!.at;
-  return c.stations.filter((s) => s.key).map((s) => {
-    const key = s.key!;
-    const m = c.materials[key.material];
-    const d = seatSegment(c.shaft.segments, s.at, stopAt).diameter;
-    const through = hubTorque(c, s, basis, sides, dynamic);
-    const tauY = shearYield(m.yieldStrength!, c.analysis.criterion);
-    const shear = keyShearStress(through.torque, d, key.width, key.length);
-    const bearing = keyBearingStress(through.torque, d, key.height, key.length, key.hubDepth);
-    const ultimate = m.tensileStrength !== undefined;
-    return {
-      station: s.name,
-      shaftDiameter: d,
-      torque: through.torque,
-      upperBound: through.upperBound,
-      shearStress: shear,
-      bearingStress: bearing,
-      shearYield: tauY,
-      shearYieldBasis: c.analysis.criterion === 'max-shear' ? 'shear yield 0.5·Sy (maximum shear)' : 'shear yield Sy/√3 (distortion energy)',
-      shearRatio: shear / tauY,
-      bearingRatio: bearing / m.yieldStrength!,
-      shearOffTorque: (ultimate ? shearUltimate(m.tensileStrength!) : tauY) / keyShearStress(1, d, key.width, key.length),
-      shearOffBasis: ultimate ? 'ultimate shear strength 0.67·Sut (Shigley 9th ed. Sec. 6-15)' : 'shear yield (the key material has no tensile strength)',
-      crushTorque: m.yieldStrength! / keyBearingStress(1, d, key.height, key.length, key.hubDepth),
-      shaftYieldTorque: shaftYieldTorqueToStop(c, s),
-    };
-  });
+  return c.stations
+    .filter((s) => s.key)
+    .map((s) => {
+      const key = s.key!;
+      const m = c.materials[key.material];
+      const d = seatSegment(c.shaft.segments, s.at, stopAt).diameter;
+      const through = hubTorque(c, s, basis, sides, dynamic);
+      const tauY = shearYield(m.yieldStrength!, c.analysis.criterion);
+      const shear = keyShearStress(through.torque, d, key.width, key.length);
+      const bearing = keyBearingStress(through.torque, d, key.height, key.length, key.hubDepth);
+      const ultimate = m.tensileStrength !== undefined;
+      return {
+        station: s.name,
+        shaftDiameter: d,
+        torque: through.torque,
+        upperBound: through.upperBound,
+        shearStress: shear,
+        bearingStress: bearing,
+        shearYield: tauY,
+        shearYieldBasis: c.analysis.criterion === 'max-shear' ? 'shear yield 0.5·Sy (maximum shear)' : 'shear yield Sy/√3 (distortion energy)',
+        shearRatio: shear / tauY,
+        bearingRatio: bearing / m.yieldStrength!,
+        shearOffTorque: (ultimate ? shearUltimate(m.tensileStrength!) : tauY) / keyShearStress(1, d, key.width, key.length),
+        shearOffBasis: ultimate ? 'ultimate shear strength 0.67·Sut (Shigley 9th ed. Sec. 6-15)' : 'shear yield (the key material has no tensile strength)',
+        crushTorque: m.yieldStrength! / keyBearingStress(1, d, key.height, key.length, key.hubDepth),
+        shaftYieldTorque: shaftYieldTorqueToStop(c, s),
+      };
+    });
 }

@@ -20,7 +20,9 @@ export function runningChecks(chain: Chain, shaftSpeed: number): string[] {
       }
     }
     if (d.belt && d.runningTorque > d.belt.slipTorque) {
-      out.push(`The belt at "${d.station}" can carry ${fmt(d.belt.slipTorque)} N·m at the shaft, less than the running torque there (${fmt(d.runningTorque)} N·m): it would have slipped in normal running; check the belt data.`);
+      out.push(
+        `The belt at "${d.station}" can carry ${fmt(d.belt.slipTorque)} N·m at the shaft, less than the running torque there (${fmt(d.runningTorque)} N·m): it would have slipped in normal running; check the belt data.`,
+      );
     }
   }
   chain.elements.forEach((el, e) => {
@@ -28,7 +30,9 @@ export function runningChecks(chain: Chain, shaftSpeed: number): string[] {
     const through = chain.drives.reduce((s, d) => s + ((d.node < P && e >= d.node && e < P) || (d.node > P && e >= P && e < d.node) ? d.runningTorque : 0), 0);
     if (through > el.device.torque) {
       const seg = el.device.segment;
-      out.push(`The torque limiter in ${seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`} is set at ${fmt(el.device.torque)} N·m, below the running torque through it (${fmt(through)} N·m): it would have slipped in normal running; check its setting.`);
+      out.push(
+        `The torque limiter in ${seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`} is set at ${fmt(el.device.torque)} N·m, below the running torque through it (${fmt(through)} N·m): it would have slipped in normal running; check its setting.`,
+      );
     }
   });
   return out;

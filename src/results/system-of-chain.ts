@@ -63,6 +63,12 @@ export function systemOf(
     initialTwist,
     speed,
     stop: { node: P, duration: stop.duration, ...(stop.torqueCapacity !== undefined ? { torqueCapacity: stop.torqueCapacity } : {}) },
-    drives: chain.drives.map((d) => ({ node: d.node, line: d.line, rotorInertia: d.rotorInertia, ...(d.belt ? { beltSlipTorque: d.belt.slipTorque } : {}), ...(d.drive.tripAfter !== undefined ? { tripAfter: d.drive.tripAfter } : {}) })),
+    drives: chain.drives.map((d) => ({
+      node: d.node,
+      line: d.line,
+      rotorInertia: d.rotorInertia,
+      ...(d.belt ? { beltSlipTorque: d.belt.slipTorque } : {}),
+      ...(d.drive.tripAfter !== undefined ? { tripAfter: d.drive.tripAfter } : {}),
+    })),
   };
 }

@@ -67,8 +67,10 @@ const MEANINGS: Record<TwistFindingCode, string> = {
   consistent: 'The measured twist agrees with the recorded speed within the stated band.',
   more: 'The shaft took more energy than the recorded speed gives: the speed may have been higher than recorded, the drive may have kept pushing through the jam (its torque is not in the energy balance), the shaft may already have been twisted in an earlier event, or the material is weaker than the value used.',
   less: 'The shaft took less energy than the recorded speed gives: energy was taken elsewhere (belt slip, a torque limiter or shear pin, a hub or key slipping, the jam giving way), or the bar is stronger than {strength}.',
-  no_loaded_shaft: 'No shaft between these stations carries torque in the model (it lies outside every loaded run), so no permanent twist is predicted there; a measured offset points to slip at a fit, a load path the case does not describe, or an earlier event.',
-  unexplained: 'No speed leaves this much twist between these stations: a weaker piece elsewhere yields first and shields them (or they never yield). Check the measurement, the stations, and for slip at a fit.',
+  no_loaded_shaft:
+    'No shaft between these stations carries torque in the model (it lies outside every loaded run), so no permanent twist is predicted there; a measured offset points to slip at a fit, a load path the case does not describe, or an earlier event.',
+  unexplained:
+    'No speed leaves this much twist between these stations: a weaker piece elsewhere yields first and shields them (or they never yield). Check the measurement, the stations, and for slip at a fit.',
 };
 
 /** Where the dynamic model, which follows the drive, the slip and the breaks in time, says otherwise. */
@@ -148,7 +150,19 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
     const base = { measurement: m, angleTolerance: tol, recordedSpeed: c.speed, band, strengthBasis };
     if (!rel) {
       const finding: TwistFindingCode = m.angle - tol <= 0 ? 'consistent' : 'no_loaded_shaft';
-      return { ...base, model: 'energy balance' as const, predicted: 0, yieldOnsetSpeed: Infinity, speedForMeasured: undefined, speedRange: [undefined, undefined] as [undefined, undefined], energyForMeasured: undefined, beyondFracture: false, finding, meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft, curve: [] };
+      return {
+        ...base,
+        model: 'energy balance' as const,
+        predicted: 0,
+        yieldOnsetSpeed: Infinity,
+        speedForMeasured: undefined,
+        speedRange: [undefined, undefined] as [undefined, undefined],
+        energyForMeasured: undefined,
+        beyondFracture: false,
+        finding,
+        meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft,
+        curve: [],
+      };
     }
     const speed = rel.speedFor(m.angle);
     const low = m.angle - tol <= 0 ? 0 : rel.speedFor(m.angle - tol);
@@ -161,7 +175,9 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
     else finding = 'consistent';
     const top = 1.3 * Math.max(c.speed, band.high, Number.isFinite(onset) ? onset : 0, speed ?? 0);
     const n = rel.curvePoints;
-    const speeds = [...Array.from({ length: n + 1 }, (_, i) => (top * i) / n), c.speed, ...(speed === undefined ? [] : [speed]), ...(Number.isFinite(onset) && onset < top ? [onset] : [])].sort((a, b) => a - b);
+    const speeds = [...Array.from({ length: n + 1 }, (_, i) => (top * i) / n), c.speed, ...(speed === undefined ? [] : [speed]), ...(Number.isFinite(onset) && onset < top ? [onset] : [])].sort(
+      (a, b) => a - b,
+    );
     let curve: TwistFinding['curve'] | undefined;
     return {
       ...base,

@@ -31,7 +31,8 @@ export function verdictBasis(c: Case, sides: readonly SideResult[]): { basis: Ve
   if (why.length === 0) {
     return {
       basis: 'energy method',
-      reason: 'The verdict uses the energy method: each side has one loaded station, the stop is instantaneous and no drive or slip element acts, which is the case the energy method is exact for; the dynamic model is shown beside it as a check.',
+      reason:
+        'The verdict uses the energy method: each side has one loaded station, the stop is instantaneous and no drive or slip element acts, which is the case the energy method is exact for; the dynamic model is shown beside it as a check.',
     };
   }
   return {

@@ -36,14 +36,7 @@ const MAX_REDRAWS = 1000;
  * for at most about 2 % of draws, and does not pile samples up at the floor). A nominal of zero (a
  * measured twist of "0 deg ± 0.5 deg") is held at zero or more: a reading cannot be negative.
  */
-export function monteCarlo(
-  c: Case,
-  inputs: readonly UncertainInput[],
-  engine: Engine,
-  samples: number,
-  seed: number,
-  onProgress?: (done: number, total: number) => void,
-): Samples {
+export function monteCarlo(c: Case, inputs: readonly UncertainInput[], engine: Engine, samples: number, seed: number, onProgress?: (done: number, total: number) => void): Samples {
   const z = normalSource(seededRandom(seed));
   const out: Samples = {
     yieldRatio: new Float64Array(samples),

@@ -69,13 +69,7 @@ export interface DynamicUncertainty {
  * draws each sample's inputs in turn from one seeded stream); its chance then helps the dynamic
  * model's. Without it, the chance is the plain share.
  */
-export function runDynamicUncertainty(
-  c: Case,
-  engine: Engine,
-  opts: UncertaintyOptions,
-  control?: Float64Array,
-  onProgress?: (done: number, total: number) => void,
-): DynamicUncertainty {
+export function runDynamicUncertainty(c: Case, engine: Engine, opts: UncertaintyOptions, control?: Float64Array, onProgress?: (done: number, total: number) => void): DynamicUncertainty {
   const { inputs } = uncertainInputs(c, opts.strengthScatter);
   const s = monteCarlo(c, inputs, engine, opts.samples, opts.seed, onProgress);
   const yieldChance = control ? controlVariateChance(s.yieldRatio, control) : monteCarloChance(s.yieldRatio);

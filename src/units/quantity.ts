@@ -39,7 +39,10 @@ function factorOrThrow(unit: string, kind: QuantityKind, whole: string): number 
   }
   const near = nearestUnits(unit, kind);
   const caseOnly = near.length > 0 && near[0].toLowerCase() === normaliseUnit(unit).toLowerCase();
-  const hint = near.length === 0 ? '' : `; the nearest accepted ${near.length === 1 ? 'is' : 'are'} ${near.map((n) => `"${n}"`).join(', ')}${caseOnly ? ' (unit symbols are case-sensitive: M is mega, m milli, P peta, p pico)' : ''}`;
+  const hint =
+    near.length === 0
+      ? ''
+      : `; the nearest accepted ${near.length === 1 ? 'is' : 'are'} ${near.map((n) => `"${n}"`).join(', ')}${caseOnly ? ' (unit symbols are case-sensitive: M is mega, m milli, P peta, p pico)' : ''}`;
   throw new QuantityError(`"${whole}": unknown unit "${unit}"${hint}; give ${KIND_EXAMPLES[kind]}`);
 }
 

@@ -8,21 +8,7 @@
  * of the trade (rpm, r/min, ksi, lb*ft^2) are all here, and `check` pays no import cost for it.
  */
 
-export type QuantityKind =
-  | 'length'
-  | 'angular_speed'
-  | 'stress'
-  | 'density'
-  | 'inertia'
-  | 'angle'
-  | 'time'
-  | 'mass'
-  | 'torque'
-  | 'power'
-  | 'energy'
-  | 'force'
-  | 'stiffness'
-  | 'fraction';
+export type QuantityKind = 'length' | 'angular_speed' | 'stress' | 'density' | 'inertia' | 'angle' | 'time' | 'mass' | 'torque' | 'power' | 'energy' | 'force' | 'stiffness' | 'fraction';
 
 const INCH = 0.0254;
 const FOOT = 0.3048;
@@ -143,7 +129,10 @@ const CASE_BLIND_WORDS = new Set(['rpm', 'r', 'rev', 'min', 'in', 'inch', 'ft', 
 
 /** Whether `spelling` (a table key) is made of trade words only, so its case does not matter. */
 export function isCaseBlind(spelling: string): boolean {
-  return spelling.split(/[*/^]|\d+/).filter((w) => w !== '').every((w) => CASE_BLIND_WORDS.has(w));
+  return spelling
+    .split(/[*/^]|\d+/)
+    .filter((w) => w !== '')
+    .every((w) => CASE_BLIND_WORDS.has(w));
 }
 
 /**
@@ -157,9 +146,7 @@ export function unitFactor(unit: string, kind: QuantityKind): number | undefined
   if (Object.hasOwn(table, u)) return table[u];
   const swapped = u.includes('*') ? u.split('*').reverse().join('*') : u;
   if (Object.hasOwn(table, swapped)) return table[swapped];
-  const blind = Object.keys(table).filter(
-    (k) => isCaseBlind(k) && (k.toLowerCase() === u.toLowerCase() || k.toLowerCase() === swapped.toLowerCase()),
-  );
+  const blind = Object.keys(table).filter((k) => isCaseBlind(k) && (k.toLowerCase() === u.toLowerCase() || k.toLowerCase() === swapped.toLowerCase()));
   return blind.length === 1 ? table[blind[0]] : undefined;
 }
 

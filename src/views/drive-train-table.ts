@@ -23,7 +23,14 @@ export function hasDriveTrain(f: Finding): boolean {
 
 /** The table's rows as text cells: order, element, capacity, torque, ratio, how it gives way. */
 export function driveTrainRows(f: Finding, u: Results['case']['units']): string[][] {
-  return f.driveTrain.map((e: OrderedElement) => [String(e.order), e.element, Number.isFinite(e.capacity) ? show(e.capacity, 'torque', u) : '—', show(e.torque, 'torque', u), sig(e.ratio), e.givesWayBy]);
+  return f.driveTrain.map((e: OrderedElement) => [
+    String(e.order),
+    e.element,
+    Number.isFinite(e.capacity) ? show(e.capacity, 'torque', u) : '—',
+    show(e.torque, 'torque', u),
+    sig(e.ratio),
+    e.givesWayBy,
+  ]);
 }
 
 /** One sentence naming the weakest element, for the finding's lines; undefined where only the shaft is in the train. */

@@ -26,7 +26,9 @@ export function torqueHistoryData(r: Investigation): FigureData {
   const u = r.case.units;
   const g = pieceTorqueHistory(r.dynamic, r.finding.piece);
   const governing = g ? [{ ...g, name: `${g.name} (the finding's governing piece)` }] : [];
-  const points = [...governing, ...h.torques].flatMap((s) => Array.from(s.values, (v, i) => ({ x: h.time[i] * 1000, y: inDisplay(v, 'torque', u), series: s.name }))).filter((p) => Number.isFinite(p.y));
+  const points = [...governing, ...h.torques]
+    .flatMap((s) => Array.from(s.values, (v, i) => ({ x: h.time[i] * 1000, y: inDisplay(v, 'torque', u), series: s.name })))
+    .filter((p) => Number.isFinite(p.y));
   return { points, xLabel: 'time from the stop, ms', yLabel: `torque, ${unitLabel('torque', u)}` };
 }
 

@@ -26,7 +26,9 @@ export function findingToJson(f: Finding, units: Results['case']['units']): Reco
     break_time_s: f.breakTime ?? null,
     yield_probability: f.chance?.probability ?? null,
     yield_probability_interval: f.chance?.interval ?? null,
-    probability_method: f.chance ? `${f.chance.method}, ${f.chance.runs} runs of the ${f.chance.model}${f.chance.controlSamples ? `, ${f.chance.controlSamples} energy-method samples as the control` : ''}` : null,
+    probability_method: f.chance
+      ? `${f.chance.method}, ${f.chance.runs} runs of the ${f.chance.model}${f.chance.controlSamples ? `, ${f.chance.controlSamples} energy-method samples as the control` : ''}`
+      : null,
     measured_twist: f.measured.map((m) => ({ between: m.between, measured_rad: m.measured, predicted_rad: m.predicted, finding: m.finding, speed_for_measured_rad_s: m.speedForMeasured ?? null })),
     disposition: f.disposition,
     action: f.action,

@@ -13,8 +13,11 @@ export function hubSentences(r: Results): string[] {
   }
   for (const f of r.fits) {
     const at = `${show(f.torque, 'torque', u)}${f.upperBound ? ' (an upper bound)' : ''}`;
-    const fuse = f.slipsBeforeShaftYields ? `below the ${show(f.shaftYieldTorque, 'torque', u)} at which the shaft to the stop yields: the fit is the fuse` : `above the ${show(f.shaftYieldTorque, 'torque', u)} at which the shaft to the stop yields: the shaft yields first`;
-    const hoop = f.hubYieldStrength === undefined ? '' : ` Hoop stress at the hub's bore ${show(f.hubHoopStress, 'stress', u)}, ${sig(f.hubHoopStress / f.hubYieldStrength)} × the hub's yield strength.`;
+    const fuse = f.slipsBeforeShaftYields
+      ? `below the ${show(f.shaftYieldTorque, 'torque', u)} at which the shaft to the stop yields: the fit is the fuse`
+      : `above the ${show(f.shaftYieldTorque, 'torque', u)} at which the shaft to the stop yields: the shaft yields first`;
+    const hoop =
+      f.hubYieldStrength === undefined ? '' : ` Hoop stress at the hub's bore ${show(f.hubHoopStress, 'stress', u)}, ${sig(f.hubHoopStress / f.hubYieldStrength)} × the hub's yield strength.`;
     out.push(
       `Shrink fit at "${f.station}": contact pressure ${show(f.contactPressure, 'stress', u)} (thick-cylinder relations), slip torque ${show(f.slipTorque, 'torque', u)}, ${fuse}. Torque through the hub ${at}: it ${f.slipped ? 'slipped' : 'held'}${f.inDynamicModel ? ' (the dynamic model let it slip as a slip element)' : ''}.${hoop}`,
     );
@@ -28,9 +31,12 @@ export function couplingSentences(r: Results): string[] {
   return r.couplings.map((k) => {
     const seg = k.segment.label ? `"${k.segment.label}"` : `segment ${k.segment.index + 1}`;
     const kind = k.stiffness === undefined ? 'rigid coupling' : `coupling of ${show(k.stiffness, 'stiffness', u)}`;
-    const rating = k.peakRating === undefined ? `its rated torque ${show(k.ratedTorque, 'torque', u)} (no maximum torque given)` : `its maximum torque ${show(k.peakRating, 'torque', u)} (rated ${show(k.ratedTorque, 'torque', u)})`;
+    const rating =
+      k.peakRating === undefined
+        ? `its rated torque ${show(k.ratedTorque, 'torque', u)} (no maximum torque given)`
+        : `its maximum torque ${show(k.peakRating, 'torque', u)} (rated ${show(k.ratedTorque, 'torque', u)})`;
     const verdict = k.capacityRatio > 1 ? 'past what the maker allows: inspect or replace it' : 'within what the maker allows';
-    const soft = k.stiffness === undefined ? '' : ' An elastomeric coupling\'s stiffness rises with load and falls with temperature; the data-sheet figure is a mean.';
+    const soft = k.stiffness === undefined ? '' : " An elastomeric coupling's stiffness rises with load and falls with temperature; the data-sheet figure is a mean.";
     return `The ${kind} in ${seg} carried ${show(k.torque, 'torque', u)}, ${sig(k.capacityRatio)} × ${rating}: ${verdict}.${soft}`;
   });
 }

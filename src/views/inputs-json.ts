@@ -49,9 +49,7 @@ export function inputsToJson(c: Case): Record<string, unknown> {
       notes: c.observed.notes ?? null,
       photos: c.observed.photos.map((p) => ({ path: p.path, caption: p.caption ?? null })),
     },
-    tolerances: Object.fromEntries(
-      Object.entries(c.tolerances).map(([path, t]) => [path, t.kind === 'relative' ? { relative: t.fraction } : { absolute_SI: t.value }]),
-    ),
+    tolerances: Object.fromEntries(Object.entries(c.tolerances).map(([path, t]) => [path, t.kind === 'relative' ? { relative: t.fraction } : { absolute_SI: t.value }])),
   };
 }
 

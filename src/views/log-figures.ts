@@ -49,7 +49,9 @@ export function logFigures(log: IncidentLog): LogFigure[] {
       return dated.filter((r) => r.asset === asset).map((r) => ({ asset, date: r.date, damage: (sum += r.damage) }));
     });
     const t2 = 'Cumulative fatigue damage per asset';
-    const legend = assets.map((name, i) => Plot.text([name], { frameAnchor: 'top-left', dx: 8, dy: -LINE * (assets.length - i) - 8, text: (d: string) => `— ${d}`, fill: (d: string) => d, textAnchor: 'start', fontSize: 11 }));
+    const legend = assets.map((name, i) =>
+      Plot.text([name], { frameAnchor: 'top-left', dx: 8, dy: -LINE * (assets.length - i) - 8, text: (d: string) => `— ${d}`, fill: (d: string) => d, textAnchor: 'start', fontSize: 11 }),
+    );
     figures.push({
       name: 'cumulative-damage',
       title: t2,
@@ -70,7 +72,7 @@ export function logFigures(log: IncidentLog): LogFigure[] {
           ],
         },
         t2,
-        'The Palmgren–Miner sum of each asset\'s incidents, in the order they occurred, against 1 (dashed), where a crack is expected. Fatigue estimates scatter by a factor of several in life.',
+        "The Palmgren–Miner sum of each asset's incidents, in the order they occurred, against 1 (dashed), where a crack is expected. Fatigue estimates scatter by a factor of several in life.",
       ),
     });
   }
@@ -94,7 +96,7 @@ export function logFigures(log: IncidentLog): LogFigure[] {
           ],
         },
         t3,
-        'The finding\'s stress at the governing piece (kt applied) over shear yield, per incident; 1 (dashed) is yield at the stress raiser.',
+        "The finding's stress at the governing piece (kt applied) over shear yield, per incident; 1 (dashed) is yield at the stress raiser.",
       ),
     });
   }

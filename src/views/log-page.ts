@@ -24,10 +24,13 @@ export function renderLogPage(log: IncidentLog, ranAt: string, notes: readonly s
   md.push('## Figures', '');
   for (const f of figures) md.push(`![${f.title}](figures/${f.name}.svg)`, '');
   md.push('## Assets', '', '| asset | incidents | worst stress / shear yield | mean interval, days | life used (Miner sum) |', '|---|---|---|---|---|');
-  for (const a of log.assets) md.push(`| ${cell(a.asset)} | ${a.incidents} | ${sig(a.worst_yield_ratio)} | ${a.mean_interval_days === null ? '—' : sig(a.mean_interval_days)} | ${damagePercent(a.damage)} (${sig(a.damage)}) |`);
+  for (const a of log.assets)
+    md.push(`| ${cell(a.asset)} | ${a.incidents} | ${sig(a.worst_yield_ratio)} | ${a.mean_interval_days === null ? '—' : sig(a.mean_interval_days)} | ${damagePercent(a.damage)} (${sig(a.damage)}) |`);
   md.push('', '## Incidents', '', '| asset | id | occurred | verdict | basis | segment | stress / shear yield | peak torque, N·m | damage | from |', '|---|---|---|---|---|---|---|---|---|---|');
   for (const r of log.incidents) {
-    md.push(`| ${cell(r.asset ?? '—')} | ${cell(r.id)} | ${cell(r.occurred ?? '—')} | ${r.verdict} | ${r.basis} | ${cell(r.segment)} | ${sig(r.yield_ratio)} | ${sig(r.peak_torque_Nm)} | ${sig(r.damage)} | ${r.report ? cell(r.report) : 'engine'} |`);
+    md.push(
+      `| ${cell(r.asset ?? '—')} | ${cell(r.id)} | ${cell(r.occurred ?? '—')} | ${r.verdict} | ${r.basis} | ${cell(r.segment)} | ${sig(r.yield_ratio)} | ${sig(r.peak_torque_Nm)} | ${sig(r.damage)} | ${r.report ? cell(r.report) : 'engine'} |`,
+    );
   }
   if (notes.length > 0) md.push('', '## Notes', '', ...notes.map((n) => `- ${escapeMarkdown(n)}`));
   return renderHtml(md.join('\n') + '\n', { title: 'Incident log', figures: Object.fromEntries(figures.map((f) => [`figures/${f.name}.svg`, f.svg])), images: {} });

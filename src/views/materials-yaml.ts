@@ -34,5 +34,8 @@ export function materialsToYaml(list: readonly Material[]): string {
     e.source = m.source;
     out[m.key] = e;
   }
-  return '# The built-in materials of shaftcase in the case file\'s form. Copy the ones you use under a\n# case\'s materials: and change the values to your mill certificates.\n' + stringify({ materials: out }, { lineWidth: 0 });
+  return (
+    "# The built-in materials of shaftcase in the case file's form. Copy the ones you use under a\n# case's materials: and change the values to your mill certificates.\n" +
+    stringify({ materials: out }, { lineWidth: 0 })
+  );
 }

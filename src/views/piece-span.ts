@@ -10,4 +10,3 @@ export function describePlasticPiece(p: Pick<PlasticPieceResult, 'piece'>, u: Un
   const name = seg.label ? `"${text(seg.label)}"` : `segment ${seg.index + 1}`;
   return `${name} ${show(p.piece.start, 'length', u)} to ${show(p.piece.end, 'length', u)}, Ø${show(seg.diameter, 'length', u)}${seg.bore > 0 ? ` bore ${show(seg.bore, 'length', u)}` : ''}`;
 }
-

@@ -77,7 +77,8 @@ export function optionRows(z: ResizeResult): OptionRow[] {
   );
 
   // The material shown: the picked one, else the best that has no flag, else the best that keeps N, else the best.
-  const m = z.materials.find((x) => z.recommended?.option === `material:${x.material.key}`) ?? z.materials.find((x) => x.flags.length === 0) ?? z.materials.find((x) => x.keepsFactor) ?? z.materials[0];
+  const m =
+    z.materials.find((x) => z.recommended?.option === `material:${x.material.key}`) ?? z.materials.find((x) => x.flags.length === 0) ?? z.materials.find((x) => x.keepsFactor) ?? z.materials[0];
   if (m) {
     rows.push({
       option: `Material ${m.material.key}${mark(`material:${m.material.key}`, m.flags)}`,
@@ -90,7 +91,12 @@ export function optionRows(z: ResizeResult): OptionRow[] {
   }
 
   const l = z.limiter;
-  const window = l.min === undefined ? `set ≤ ${show(l.max, 'torque', u)} (lower end unknown)` : l.windowEmpty ? `NONE: window empty (${show(l.min, 'torque', u)} > ${show(l.max, 'torque', u)})` : `set ${show(l.min, 'torque', u)} to ${show(l.max, 'torque', u)}`;
+  const window =
+    l.min === undefined
+      ? `set ≤ ${show(l.max, 'torque', u)} (lower end unknown)`
+      : l.windowEmpty
+        ? `NONE: window empty (${show(l.min, 'torque', u)} > ${show(l.max, 'torque', u)})`
+        : `set ${show(l.min, 'torque', u)} to ${show(l.max, 'torque', u)}`;
   rows.push({
     option: `Torque limiter at "${l.station}"${mark('limiter', l.flags)}`,
     change: window,

@@ -16,13 +16,17 @@ export function renderResize(z: ResizeResult): string {
   out.push(`${m.id}${m.title ? `  ${m.title}` : ''}`);
   out.push(`Present shaft, the finding: ${findingSentence(r.finding, u)}`);
   out.push(`  What to do: ${r.finding.disposition}`);
-  out.push('What goes back in: each option against a repeat of the recorded incident, checked by a rerun of the changed case through the elastic energy method (the design check; it leans to the high side where the finding stands on the dynamic model).');
+  out.push(
+    'What goes back in: each option against a repeat of the recorded incident, checked by a rerun of the changed case through the elastic energy method (the design check; it leans to the high side where the finding stands on the dynamic model).',
+  );
   out.push(factorSentence(z));
   const running = z.present.running.running;
   out.push(running ? `Running torque ${show(running.torque, 'torque', u)}: ${running.source}.` : 'Running torque: unknown; the case gives no drive power or running torque.');
   out.push('');
   out.push(...textTable([keys.map((k) => ROW_HEADINGS[k]), ...rows.map((row) => keys.map((k) => row[k]))]));
-  out.push('Running factor: shear yield over the stress under the running torque, static and with kt. Stiffness and natural frequency: new over present; the frequency is the dynamic model\'s lowest of the side where the verdict stands on it, else the energy method\'s single-mass estimate.');
+  out.push(
+    "Running factor: shear yield over the stress under the running torque, static and with kt. Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate.",
+  );
   out.push('', recommendedSentence(z));
   out.push(`  The rule: ${z.pickRule}`);
   const flagged = flaggedOptions(z);
@@ -49,7 +53,10 @@ export function renderResize(z: ResizeResult): string {
   section('Torque limiter or slip coupling', limiterSentences(z));
   if (z.keys.length === 0) section('The key as fuse', ['No key is given: add key: { width, height, length, material } to the station whose hub is keyed to check it.']);
   for (const k of z.keys) section('The key as fuse', keySentences(z, k));
-  section('Guarding and restart', z.guarding.map((g) => `${g.topic}: ${g.text}`));
+  section(
+    'Guarding and restart',
+    z.guarding.map((g) => `${g.topic}: ${g.text}`),
+  );
   section('Notes', z.notes);
   if (r.warnings.length > 0) section('Warnings', r.warnings);
   section('Cautions', [...z.cautions]);

@@ -39,7 +39,8 @@ export function scaleSideSentence(z: ResizeResult): string {
   const head = `Scale side ${o.side}: every segment of the side by ${how}: ${sizes}.${z.results.finding.basis === 'dynamic model' ? ` ${sig(o.presentYieldRatio)} is the energy method's stress / shear yield, the design check's, which leans to the high side here; the finding's model gives ${sig(z.results.finding.yieldRatio)}.` : ''}`;
   const rerun = `Rerun: side ${o.side}'s stress / shear yield ${sig(sideYieldRatio(o.rerun, o.side), 4)} at the exact sizes, ${sig(sideYieldRatio(o.stockRerun, o.side), 4)} at the stock sizes; peak torque ${show(o.stockRerun.sides.find((s) => s.side === o.side)!.peakTorque, 'torque', u)}. The table's ratios for the scaled shaft are taken at the stock sizes, each bore scaled with its stock diameter (the bore ratio kept).`;
   const otherWords = otherSidesWords(z, o.stockRerun, o.side);
-  if (!o.needed) return `${head} ${rerun} The present shaft already keeps the factor (s ≤ 1): no larger shaft is needed for a repeat of this incident; do not make it smaller on this basis alone.${otherWords}`;
+  if (!o.needed)
+    return `${head} ${rerun} The present shaft already keeps the factor (s ≤ 1): no larger shaft is needed for a repeat of this incident; do not make it smaller on this basis alone.${otherWords}`;
   const verdict = o.practical
     ? `s is within ${sig(o.maxScale)} (analysis.max_scale), so the new diameters may still fit; check them against the bearings and hubs.`
     : `s is above ${sig(o.maxScale)} (analysis.max_scale): no practical shaft survives a repeat of this incident elastically. The remedy is to limit the torque (see the torque limiter).`;
@@ -57,7 +58,10 @@ export function criticalSegmentSentence(z: ResizeResult): string {
   if (o.verdict === 'present-keeps') {
     return `${name} already keeps the factor (stress / shear yield ${sig(o.presentYieldRatio)}); the smallest diameter that would is Ø${showDiameter(o.diameter!, u)}. ${stock} Do not make it smaller on this basis alone.`;
   }
-  const warn = sideYieldRatio(o.stockRerun!, o.side) * z.designFactor > 1 + 1e-9 ? ' At the stock size the stiffer segment pushes the side just past the factor: take the next size down and check, or accept the small excess knowingly.' : '';
+  const warn =
+    sideYieldRatio(o.stockRerun!, o.side) * z.designFactor > 1 + 1e-9
+      ? ' At the stock size the stiffer segment pushes the side just past the factor: take the next size down and check, or accept the small excess knowingly.'
+      : '';
   return `Resize ${name} only: the smallest diameter that keeps every segment of side ${o.side} within the factor is Ø${showDiameter(o.diameter!, u)}. ${stock}${warn}${otherSidesWords(z, o.stockRerun!, o.side)}`;
 }
 
@@ -80,9 +84,13 @@ export function limiterSentences(z: ResizeResult): string[] {
   if (o.min === undefined) {
     out.push(`Window: up to ${upper}. The lower end is unknown: the case gives no running torque. Add drive: { power: "22 kW" } or drive: { running_torque: "450 N*m" } to the driving station.`);
   } else if (o.windowEmpty) {
-    out.push(`THE WINDOW IS EMPTY: the running torque ${show(o.runningTorque!.torque, 'torque', u)} × service factor ${sig(o.serviceFactor)} = ${show(o.min, 'torque', u)} exceeds ${upper}. No limiter setting both runs the machine and protects this shaft at this factor: the shaft's weakest section must be made stronger first.`);
+    out.push(
+      `THE WINDOW IS EMPTY: the running torque ${show(o.runningTorque!.torque, 'torque', u)} × service factor ${sig(o.serviceFactor)} = ${show(o.min, 'torque', u)} exceeds ${upper}. No limiter setting both runs the machine and protects this shaft at this factor: the shaft's weakest section must be made stronger first.`,
+    );
   } else {
-    out.push(`Window: from the running torque ${show(o.runningTorque!.torque, 'torque', u)} (${o.runningTorque!.source}) × service factor ${sig(o.serviceFactor)} = ${show(o.min, 'torque', u)} up to ${upper}.`);
+    out.push(
+      `Window: from the running torque ${show(o.runningTorque!.torque, 'torque', u)} (${o.runningTorque!.source}) × service factor ${sig(o.serviceFactor)} = ${show(o.min, 'torque', u)} up to ${upper}.`,
+    );
   }
   const s = o.slip;
   out.push(
@@ -106,7 +114,9 @@ export function limiterSentences(z: ResizeResult): string[] {
 export function keySentences(z: ResizeResult, k: KeyFuse): string[] {
   const u = z.results.case.units;
   const dims = `${showDiameter(k.key.width, u)} × ${showDiameter(k.key.height, u)} × ${showDiameter(k.key.length, u)}`.replace(/ (mm|in) ×/g, ' ×');
-  const out = [`Key at "${k.station}": ${dims}, ${k.material.key}, in ${segName(k.segment)} Ø${showDiameter(k.segment.diameter, u)}; bearing ${k.key.hubDepth === undefined ? 'on half its height (h/2)' : `on ${showDiameter(k.key.hubDepth, u)} in the hub`}.`];
+  const out = [
+    `Key at "${k.station}": ${dims}, ${k.material.key}, in ${segName(k.segment)} Ø${showDiameter(k.segment.diameter, u)}; bearing ${k.key.hubDepth === undefined ? 'on half its height (h/2)' : `on ${showDiameter(k.key.hubDepth, u)} in the hub`}.`,
+  ];
   const at = (label: string, s: KeyFuse['incident']) =>
     `${label} ${show(s.torque, 'torque', u)}: shear ${show(s.shearStress, 'stress', u)} (${sig(s.shearRatio)} × its shear yield), bearing ${show(s.bearingStress, 'stress', u)} (${sig(s.bearingRatio)} × its yield).`;
   out.push(at('Under the incident torque', k.incident));
@@ -118,7 +128,9 @@ export function keySentences(z: ResizeResult, k: KeyFuse): string[] {
       : `It shears off only at about ${show(k.shearOffTorque, 'torque', u)} (${k.shearOffBasis}); the shaft yields first, at ${show(k.shaftYieldTorque, 'torque', u)}.`,
   );
   out.push(...k.notes);
-  out.push('Caution: a key is a poor and unpredictable fuse. Fit, fretting, wear and the hub\'s grip change the torque it fails at, a sheared key can wedge and keep driving, and the keyway is damaged either way; use a torque limiter to protect the shaft.');
+  out.push(
+    "Caution: a key is a poor and unpredictable fuse. Fit, fretting, wear and the hub's grip change the torque it fails at, a sheared key can wedge and keep driving, and the keyway is damaged either way; use a torque limiter to protect the shaft.",
+  );
   return out;
 }
 
@@ -175,7 +187,10 @@ export function recommendedChange(z: ResizeResult, id: OptionId): string {
   }
   if (id === 'limiter') {
     const l = z.limiter;
-    const window = l.min === undefined ? `set at no more than ${show(l.max, 'torque', u)} (the lower end of its window needs the running torque)` : `set within ${show(l.min, 'torque', u)} to ${show(l.max, 'torque', u)}, checked at ${show(l.slip.setting, 'torque', u)}`;
+    const window =
+      l.min === undefined
+        ? `set at no more than ${show(l.max, 'torque', u)} (the lower end of its window needs the running torque)`
+        : `set within ${show(l.min, 'torque', u)} to ${show(l.max, 'torque', u)}, checked at ${show(l.slip.setting, 'torque', u)}`;
     return `fit a torque limiter at "${l.station}", ${window}, on a shaft of the present sizes and material.`;
   }
   const m = z.materials.find((x) => `material:${x.material.key}` === id)!;
@@ -189,7 +204,8 @@ function limiterModelWords(z: ResizeResult): string {
   const s = o.slip;
   if (s.slipMethod === 'dynamic model' && s.segment !== undefined && s.modelledFrom !== undefined && s.modelledTo !== undefined) {
     const seg = z.results.case.shaft.segments[s.segment];
-    if (s.modelledInExisting) return `Modelled as the limiter the case already has, in ${segName(seg)} from ${show(s.modelledFrom, 'length', u)} to ${show(s.modelledTo, 'length', u)}, at the new setting.`;
+    if (s.modelledInExisting)
+      return `Modelled as the limiter the case already has, in ${segName(seg)} from ${show(s.modelledFrom, 'length', u)} to ${show(s.modelledTo, 'length', u)}, at the new setting.`;
     return `Modelled there: as a slip element in ${segName(seg)} from ${show(s.modelledFrom, 'length', u)} to ${show(s.modelledTo, 'length', u)}, right beside "${o.station}" on the stop's side, so the parts at "${o.station}" and beyond drive through it.`;
   }
   return `Modelled there: the parts at "${o.station}" and beyond are behind the limiter, and the shaft from "${o.station}" to the stop carries the torque it holds.`;

@@ -19,7 +19,10 @@ const list = (description: string, items: Json = {}): Json => ({ type: 'array', 
 const pair = (description: string, first: string, second: string, item: Json = { type: 'number' }): Json => ({
   type: 'array',
   description,
-  prefixItems: [{ ...item, description: first }, { ...item, description: second }],
+  prefixItems: [
+    { ...item, description: first },
+    { ...item, description: second },
+  ],
   minItems: 2,
   maxItems: 2,
 });
@@ -33,7 +36,11 @@ const percentiles = (description: string): Json => ({
 const swingEnd = (description: string): Json => ({
   type: 'object',
   description,
-  properties: { value: num("The input's value at this end, SI (the unit of the input's kind)."), yield_ratio: num('Stress / shear yield with the input there.'), permanent_twist_rad: num('Permanent twist with the input there.') },
+  properties: {
+    value: num("The input's value at this end, SI (the unit of the input's kind)."),
+    yield_ratio: num('Stress / shear yield with the input there.'),
+    permanent_twist_rad: num('Permanent twist with the input there.'),
+  },
   required: ['value', 'yield_ratio'],
   additionalProperties: false,
 });
@@ -48,7 +55,15 @@ const FINDING: Json = {
     basis_reason: str('Why that model.'),
     past_yield_model: str('The model that follows the shaft past yield.'),
     side: str('The side of the stop the governing piece is on.'),
-    segment: open('The governing piece: segment index, label, position, diameter, bore, kt.', { index: { type: 'integer' }, label: orNull(str('The segment’s label.')), from_m: num('Start, m.'), to_m: num('End, m.'), diameter_m: num('Diameter, m.'), bore_m: num('Bore, m.'), kt: num('Stress-concentration factor.') }),
+    segment: open('The governing piece: segment index, label, position, diameter, bore, kt.', {
+      index: { type: 'integer' },
+      label: orNull(str('The segment’s label.')),
+      from_m: num('Start, m.'),
+      to_m: num('End, m.'),
+      diameter_m: num('Diameter, m.'),
+      bore_m: num('Bore, m.'),
+      kt: num('Stress-concentration factor.'),
+    }),
     peak_torque_Nm: num('The peak torque it carried (capped past yield), N·m.'),
     elastic_peak_torque_Nm: num('The peak torque an elastic shaft would carry, N·m.'),
     elastic_shear_stress_Pa: num('The elastic shear stress with kt applied, Pa.'),
@@ -60,13 +75,16 @@ const FINDING: Json = {
     yield_probability: orNull(num('The chance of yield under the case’s tolerances, 0 to 1.')),
     yield_probability_interval: orNull(pair('The 95 % interval of the chance.', 'low end', 'high end')),
     probability_method: orNull(str('How the chance was obtained.')),
-    measured_twist: list('Each measured permanent twist against the model.', open('One measurement.', {
-      between: pair('The two stations.', 'first station', 'second station', { type: 'string' }),
-      measured_rad: num('Measured, rad.'),
-      predicted_rad: orNull(num('Predicted, rad.')),
-      finding: str('How they compare.'),
-      speed_for_measured_rad_s: orNull(num('The speed that would explain the measurement, rad/s.')),
-    })),
+    measured_twist: list(
+      'Each measured permanent twist against the model.',
+      open('One measurement.', {
+        between: pair('The two stations.', 'first station', 'second station', { type: 'string' }),
+        measured_rad: num('Measured, rad.'),
+        predicted_rad: orNull(num('Predicted, rad.')),
+        finding: str('How they compare.'),
+        speed_for_measured_rad_s: orNull(num('The speed that would explain the measurement, rad/s.')),
+      }),
+    ),
     disposition: str('What to do with the shaft.'),
     action: { type: 'string', enum: ['return to service', 'inspect before return', 'replace'], description: 'The disposition in three words: the decision the person who signs makes.' },
     sentence: str('The finding in words, in the case’s units.'),
@@ -100,7 +118,11 @@ const UNCERTAINTY: Json = open('The uncertainty run (where the case states toler
   dynamic: open('The runs through the dynamic model, where the finding stands on it.', {
     samples: { type: 'integer' },
     yield_probability: num('The dynamic model’s chance of yield.'),
-    percentiles: open('Percentiles over the dynamic runs.', { yield_ratio: percentiles('Stress / shear yield.'), peak_torque_Nm: percentiles('Peak torque, N·m.'), max_shear_stress_Pa: percentiles('Peak shear stress, Pa.') }),
+    percentiles: open('Percentiles over the dynamic runs.', {
+      yield_ratio: percentiles('Stress / shear yield.'),
+      peak_torque_Nm: percentiles('Peak torque, N·m.'),
+      max_shear_stress_Pa: percentiles('Peak shear stress, Pa.'),
+    }),
   }),
 });
 
@@ -120,7 +142,17 @@ const CHECK: Record<string, Json> = {
   past_yield_basis: str('The model past yield.'),
   governing: { ...piece, description: 'The energy method’s governing piece.', properties: { side: str('Its side.'), from_m: num('Start, m.'), to_m: num('End, m.') } },
   warnings: list('Warnings about the model.', { type: 'string' }),
-  input_warnings: list('Inputs that look implausible, with their position in the case file.', open('One warning.', { code: str('Its code.'), path: str('The field path.'), line: { type: ['integer', 'null'] }, column: { type: ['integer', 'null'] }, message: str('What looks wrong.'), fix: str('What it may have been meant as.') })),
+  input_warnings: list(
+    'Inputs that look implausible, with their position in the case file.',
+    open('One warning.', {
+      code: str('Its code.'),
+      path: str('The field path.'),
+      line: { type: ['integer', 'null'] },
+      column: { type: ['integer', 'null'] },
+      message: str('What looks wrong.'),
+      fix: str('What it may have been meant as.'),
+    }),
+  ),
   cautions: list('The cautions that go with every verdict.', { type: 'string' }),
   sides: list('The energy method, side by side of the stop.', open('One side.')),
   elastic_verdict: str('The elastic energy method’s verdict, for comparison.'),
@@ -134,9 +166,23 @@ const CHECK: Record<string, Json> = {
     duration_s: num('The simulated window, s.'),
     elements: { type: 'integer', description: 'Shaft elements.' },
   }),
-  keys: list("Each station's key at the torque it carried: shear and bearing against its strengths, the torque that shears it.", open('One key.', { station: str('Its station.'), torque_Nm: num('The torque through it, N·m.'), shear_ratio: num('Shear stress over the shear strength it is judged by.'), shear_off_torque_Nm: num('The torque that shears it off, N·m.') })),
-  fits: list('Each shrink or press fit: contact pressure (Lamé), the torque that slips it, whether it slipped.', open('One fit.', { station: str('Its station.'), contact_pressure_Pa: num('Contact pressure, Pa.'), slip_torque_Nm: num('The torque that slips it, N·m.'), slipped: { type: 'boolean' } })),
-  couplings: list('Each coupling against its rating.', open('One coupling.', { segment: { type: 'integer' }, rated_torque_Nm: num('Rated torque, N·m.'), torque_Nm: num('The torque it carried, N·m.') })),
+  keys: list(
+    "Each station's key at the torque it carried: shear and bearing against its strengths, the torque that shears it.",
+    open('One key.', {
+      station: str('Its station.'),
+      torque_Nm: num('The torque through it, N·m.'),
+      shear_ratio: num('Shear stress over the shear strength it is judged by.'),
+      shear_off_torque_Nm: num('The torque that shears it off, N·m.'),
+    }),
+  ),
+  fits: list(
+    'Each shrink or press fit: contact pressure (Lamé), the torque that slips it, whether it slipped.',
+    open('One fit.', { station: str('Its station.'), contact_pressure_Pa: num('Contact pressure, Pa.'), slip_torque_Nm: num('The torque that slips it, N·m.'), slipped: { type: 'boolean' } }),
+  ),
+  couplings: list(
+    'Each coupling against its rating.',
+    open('One coupling.', { segment: { type: 'integer' }, rated_torque_Nm: num('Rated torque, N·m.'), torque_Nm: num('The torque it carried, N·m.') }),
+  ),
   drive_train: list('Every element of the drive train in the order it would give way (the finding orders them).', {
     type: 'object',
     properties: {

@@ -39,7 +39,9 @@ export function dynamicLines(r: Results, role: string): string[] {
     out.push(`  ${s.element} (slip torque ${show(s.slipTorque, 'torque', u)}) ${what}`);
   }
   for (const g of d.gaps) {
-    out.push(`  backlash of ${show(g.gap, 'angle', u)} in ${g.segment.label ? `"${g.segment.label}"` : `segment ${g.segment.index + 1}`}: closed ${g.contacts} time${g.contacts === 1 ? '' : 's'} (taken fully open at the stop where no running torque held it closed)`);
+    out.push(
+      `  backlash of ${show(g.gap, 'angle', u)} in ${g.segment.label ? `"${g.segment.label}"` : `segment ${g.segment.index + 1}`}: closed ${g.contacts} time${g.contacts === 1 ? '' : 's'} (taken fully open at the stop where no running torque held it closed)`,
+    );
   }
   for (const p of d.protection) {
     const limit = p.torqueLimit === undefined ? '' : `held to ${show(p.torqueLimit, 'torque', u)} at the motor`;
@@ -90,13 +92,13 @@ export function renderSummary(r: Investigation): string {
   const pastYield = r.verdictYieldRatio >= 1 || r.yieldRatio >= 1 || r.verdict !== 'elastic';
   out.push('');
   if (f.basis === 'dynamic model') {
-    out.push(...dynamicLines(r, 'the finding\'s model'));
+    out.push(...dynamicLines(r, "the finding's model"));
     if (pastYield && f.pastYieldModel === 'dynamic model') out.push(...dynamicPastYieldLines(r));
-    if (pastYield && f.pastYieldModel === 'energy balance') out.push(...plasticLines(r, 'the finding\'s model past yield'));
+    if (pastYield && f.pastYieldModel === 'energy balance') out.push(...plasticLines(r, "the finding's model past yield"));
   } else {
-    out.push('Energy method (the finding\'s model: all of a side\'s kinetic energy into its shaft at once):');
+    out.push("Energy method (the finding's model: all of a side's kinetic energy into its shaft at once):");
     out.push(...energyMethodLines(r));
-    if (pastYield) out.push(...plasticLines(r, 'the finding\'s model past yield'));
+    if (pastYield) out.push(...plasticLines(r, "the finding's model past yield"));
   }
   const hubs = hubSentences(r);
   if (hubs.length > 0) out.push('', 'Keys and hub fits at the incident torque:', ...hubs.map((h) => `  - ${h}`));

@@ -18,8 +18,16 @@ export function inputName(path: string): string {
 }
 
 const QUANTITY: Record<string, DisplayKind> = {
-  speed: 'speed', diameter: 'length', bore: 'length', thickness: 'length', radius_of_gyration: 'length',
-  inertia: 'inertia', angle: 'angle', shear_modulus: 'stress', yield_strength: 'stress', tensile_strength: 'stress',
+  speed: 'speed',
+  diameter: 'length',
+  bore: 'length',
+  thickness: 'length',
+  radius_of_gyration: 'length',
+  inertia: 'inertia',
+  angle: 'angle',
+  shear_modulus: 'stress',
+  yield_strength: 'stress',
+  tensile_strength: 'stress',
 };
 
 /** The kind of quantity an input's field path holds, for showing it in the case's units; undefined for one shown in SI (density, mass). */

@@ -61,8 +61,12 @@ stations:
 
 function corpus(): { name: string; text: string }[] {
   const files = [
-    ...readdirSync(SAMPLES).filter((f) => f.endsWith('.yaml')).map((f) => ({ name: f, text: readFileSync(new URL(f, SAMPLES), 'utf8') })),
-    ...readdirSync(TEMPLATES).filter((f) => f.endsWith('.yaml')).map((f) => ({ name: f, text: readFileSync(new URL(f, TEMPLATES), 'utf8') })),
+    ...readdirSync(SAMPLES)
+      .filter((f) => f.endsWith('.yaml'))
+      .map((f) => ({ name: f, text: readFileSync(new URL(f, SAMPLES), 'utf8') })),
+    ...readdirSync(TEMPLATES)
+      .filter((f) => f.endsWith('.yaml'))
+      .map((f) => ({ name: f, text: readFileSync(new URL(f, TEMPLATES), 'utf8') })),
   ];
   return [...files, ...SNIPPETS.map((text, i) => ({ name: `snippet ${i + 1}`, text }))];
 }
@@ -92,11 +96,12 @@ function schematic(path: Path): string {
 }
 
 function allKeys(s: Shape, prefix: string, out: string[]): string[] {
-  if (s.type === 'mapping') for (const [k, f] of Object.entries(s.keys)) {
-    const p = prefix ? `${prefix}.${k}` : k;
-    out.push(p);
-    allKeys(f.shape, p, out);
-  }
+  if (s.type === 'mapping')
+    for (const [k, f] of Object.entries(s.keys)) {
+      const p = prefix ? `${prefix}.${k}` : k;
+      out.push(p);
+      allKeys(f.shape, p, out);
+    }
   if (s.type === 'named') allKeys(s.of, `${prefix}.*`, out);
   if (s.type === 'list') allKeys(s.of, `${prefix}[]`, out);
   return out;
@@ -105,7 +110,7 @@ function allKeys(s: Shape, prefix: string, out: string[]): string[] {
 describe('the case description and the readers', () => {
   const all = reads();
 
-  it('every field read has the description\'s type and unit kind, and every mapping is read with its keys', () => {
+  it("every field read has the description's type and unit kind, and every mapping is read with its keys", () => {
     const wrong: string[] = [];
     for (const { file, path, read } of all) {
       const shape = shapeAt(path);
@@ -137,7 +142,7 @@ describe('the case description and the readers', () => {
     expect(allKeys(CASE_SHAPE, '', []).filter((k) => !read.has(k))).toEqual([]);
   });
 
-  it('keysOf gives a part\'s keys by its shape, and shapeAt walks lists and named mappings', () => {
+  it("keysOf gives a part's keys by its shape, and shapeAt walks lists and named mappings", () => {
     expect(keysOf(shapeAt(['stations', 0, 'parts', 0])!, 'mass')).toEqual(['shape', 'name', 'count', 'speed_ratio', 'rated_speed', 'mass', 'radius_of_gyration']);
     expect(shapeAt(['materials', 'my-steel', 'yield_strength'])).toMatchObject({ type: 'quantity', kind: 'stress' });
     expect(shapeAt(['stations', 'x'])).toBeUndefined();

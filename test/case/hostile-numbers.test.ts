@@ -23,7 +23,27 @@ const FIELDS: [string, (x: string) => string][] = [
   ['dynamic_samples: 2', (x) => `dynamic_samples: 2\n  damping_ratio: ${x}`],
 ];
 
-const extremes = fc.constantFrom('1e308', '1e-308', '1e300', '1e-300', '5e-324', '1e400', '-1e400', '0', '-0', '-1', '1e200', '1e-200', '0.000001', '1e15', '9007199254740993', 'NaN', 'Infinity', '.5', '1e+2');
+const extremes = fc.constantFrom(
+  '1e308',
+  '1e-308',
+  '1e300',
+  '1e-300',
+  '5e-324',
+  '1e400',
+  '-1e400',
+  '0',
+  '-0',
+  '-1',
+  '1e200',
+  '1e-200',
+  '0.000001',
+  '1e15',
+  '9007199254740993',
+  'NaN',
+  'Infinity',
+  '.5',
+  '1e+2',
+);
 const doubles = fc.double({ noNaN: false }).map((d) => String(d));
 // Values anywhere from 1e-7 to 1e7, so that many runs pass the limits and reach the engine near its edges.
 const logUniform = fc.double({ min: -7, max: 7, noNaN: true }).map((e) => (10 ** e).toPrecision(3));
@@ -39,7 +59,7 @@ describe('hostile numbers in a case file', () => {
         completed += out.refused ? 0 : 1;
         if (out.refused) {
           for (const line of out.message.split('\n')) expect(line).toMatch(PROBLEM_LINE);
-          expect(out.message.replace(/"[^"]*"/g, "")).not.toMatch(/NaN|Infinity/); // the value as written may say NaN; nothing else
+          expect(out.message.replace(/"[^"]*"/g, '')).not.toMatch(/NaN|Infinity/); // the value as written may say NaN; nothing else
         } else {
           expect(nonFinite(out.json)).toEqual([]);
           expect(out.summary).not.toMatch(/NaN|Infinity/);

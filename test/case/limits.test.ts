@@ -26,7 +26,12 @@ describe('parseCase refuses numbers at the edges, each with its line, field and 
     ['speed: 150 rpm', 'speed: 150 rpm ± 300 rpm', 'speed', /the ± band is not narrower than the value/],
     ['diameter: 50 mm', 'diameter: 50 mm\n      kt: 1e200', 'shaft.segments[0].kt', /1e\+200 is out of range; give a factor from 1 to 10/],
     ['radius_of_gyration: 180 mm', 'radius_of_gyration: 180 mm\n        count: 1e300', 'stations[1].parts[0].count', /is out of range; give a whole number from 1 to 10000/],
-    ['radius_of_gyration: 180 mm', 'radius_of_gyration: 180 mm\n        speed_ratio: 1e200', 'stations[1].parts[0].speed_ratio', /is out of range; give the part's speed over the shaft's, from 0\.001 to 1000/],
+    [
+      'radius_of_gyration: 180 mm',
+      'radius_of_gyration: 180 mm\n        speed_ratio: 1e200',
+      'stations[1].parts[0].speed_ratio',
+      /is out of range; give the part's speed over the shaft's, from 0\.001 to 1000/,
+    ],
   ])('%s → %s', (from, to, path, message) => {
     const text = edit(from, to);
     const needle = to.split('\n').pop()!.trim();
@@ -80,12 +85,9 @@ describe('parseCase refuses dates that do not exist and an empty id', () => {
 });
 
 describe('parseCase refuses a motor curve with negative torque or no points', () => {
-  const drive = (curve: string) =>
-    base.replace('        radius_of_gyration: 180 mm', `        radius_of_gyration: 180 mm\n    drive:\n      curve: ${curve}`);
+  const drive = (curve: string) => base.replace('        radius_of_gyration: 180 mm', `        radius_of_gyration: 180 mm\n    drive:\n      curve: ${curve}`);
   it('a negative torque', () => {
-    expect(problems(drive('[{ speed: 0 rpm, torque: -5 N*m }, { speed: 200 rpm, torque: 10 N*m }]'))).toMatch(
-      /stations\[1\]\.drive\.curve\[0\]\.torque: "-5 N\*m" must be zero or more/,
-    );
+    expect(problems(drive('[{ speed: 0 rpm, torque: -5 N*m }, { speed: 200 rpm, torque: 10 N*m }]'))).toMatch(/stations\[1\]\.drive\.curve\[0\]\.torque: "-5 N\*m" must be zero or more/);
   });
   it('no points', () => {
     expect(problems(drive('[]'))).toMatch(/stations\[1\]\.drive\.curve: give at least two points/);

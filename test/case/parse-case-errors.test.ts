@@ -26,7 +26,9 @@ describe('parseCase reports each mistake with file:line:column, the field path a
     const text = `${base.trimEnd()}\nobserved:\n  permanent_twist:\n    - { between: [jam, flywheel], angle: 2 deg, method: keyway offset, read with a protractor }\n`;
     const msgs = problems(text);
     expect(msgs).toContainEqual(
-      expect.stringMatching(/observed\.permanent_twist\[0\]\.read with a protractor: unknown key; a comma inside a \{ … \} mapping ends a value, so "read with a protractor" reads as a key; if it belongs to method, put the whole value in quotes: method: "keyway offset, read with a protractor"$/),
+      expect.stringMatching(
+        /observed\.permanent_twist\[0\]\.read with a protractor: unknown key; a comma inside a \{ … \} mapping ends a value, so "read with a protractor" reads as a key; if it belongs to method, put the whole value in quotes: method: "keyway offset, read with a protractor"$/,
+      ),
     );
     // Quoted, it reads.
     const quoted = text.replace('method: keyway offset, read with a protractor', 'method: "keyway offset, read with a protractor"');
@@ -36,9 +38,7 @@ describe('parseCase reports each mistake with file:line:column, the field path a
   it('a missing unit', () => {
     const text = base.replace('diameter: 50 mm', 'diameter: 50');
     const line = lineOf(text, 'diameter: 50');
-    expect(problems(text)).toContainEqual(
-      `case.yaml:${line}:17 shaft.segments[0].diameter: "50" has no unit; give a length such as "40 mm" or "1.5 in"`,
-    );
+    expect(problems(text)).toContainEqual(`case.yaml:${line}:17 shaft.segments[0].diameter: "50" has no unit; give a length such as "40 mm" or "1.5 in"`);
   });
 
   it('a unit of the wrong kind', () => {
@@ -74,9 +74,7 @@ describe('parseCase reports each mistake with file:line:column, the field path a
   });
 
   it('a case material without the property its use needs', () => {
-    const text = base
-      .replace('material: aisi-1045-cd', 'material: mystery')
-      .replace('units: metric', 'units: metric\nmaterials:\n  mystery:\n    shear_modulus: 80 GPa');
+    const text = base.replace('material: aisi-1045-cd', 'material: mystery').replace('units: metric', 'units: metric\nmaterials:\n  mystery:\n    shear_modulus: 80 GPa');
     expect(problems(text).join('\n')).toMatch(/shaft\.material: material "mystery" has no yield_strength, which this use needs; add it under materials\.mystery, e\.g\. yield_strength: "530 MPa"/);
   });
 
@@ -100,7 +98,7 @@ describe('parseCase reports each mistake with file:line:column, the field path a
     expect(problems(text).join('\n')).toMatch(/stations: no station away from the one that stopped carries parts/);
   });
 
-  it('parts only at the stop\'s own position are a modelling error too, not a crash', () => {
+  it("parts only at the stop's own position are a modelling error too, not a crash", () => {
     const text = base.replace('    at: 800 mm', '    at: 0 mm');
     expect(problems(text).join('\n')).toMatch(/stations: no station away from the one that stopped carries parts/);
   });

@@ -91,7 +91,7 @@ describe('checkPlausibility(case, text)', () => {
     expect(found[0].message).toBe(`"1 11/16 mm" is below 0.118 in (3 mm), thinner than any shaft that carries a machine's parts, and the case is in US units; did you mean "1 11/16 in"?`);
   });
 
-  it('a diameter above 2 m is refused as a shaft, whatever the shaft\'s length', () => {
+  it("a diameter above 2 m is refused as a shaft, whatever the shaft's length", () => {
     const long = METRIC.replace('length: 1800 mm', 'length: 4800 mm').replace('at: 2000 mm', 'at: 5000 mm');
     const { found } = warnings(long, 11, 'diameter: 60 mm', 'diameter: 2.5 m');
     expect(found[0]).toMatchObject({ code: 'W_DIAMETER', path: 'shaft.segments[1].diameter', line: 11, value: '2.5 m' });
@@ -125,7 +125,9 @@ describe('checkPlausibility(case, text)', () => {
     const { found } = warnings(text, 19, 'mass: 40000 kg', 'mass: 40000 kg');
     expect(found).toEqual([expect.objectContaining({ code: 'W_PART_MASS', path: 'stations[1].parts[0].mass', line: 19, value: '40000 kg' })]);
     // M = W·L/4 = 40 000·9.80665·2/4 N·m on the thickest segment, 60 mm: σ = 32·M/(π·0.06³) ≈ 9.25 GPa.
-    expect(found[0].message).toMatch(/^"40000 kg" makes the part weigh 40000 kg, whose weight alone at mid-span of the whole shaft \(2 m\) would bend its strongest segment in bending \(60 mm\) to 9250 MPa, past its yield strength of 530 MPa; check the value and its unit$/);
+    expect(found[0].message).toMatch(
+      /^"40000 kg" makes the part weigh 40000 kg, whose weight alone at mid-span of the whole shaft \(2 m\) would bend its strongest segment in bending \(60 mm\) to 9250 MPa, past its yield strength of 530 MPa; check the value and its unit$/,
+    );
     expect(found[0].fix).toBeUndefined();
   });
 
@@ -139,10 +141,12 @@ describe('checkPlausibility(case, text)', () => {
     const { found } = warnings(METRIC, 4, '420 rpm', '4200 rad/s');
     expect(found).toEqual([expect.objectContaining({ code: 'W_SPEED', path: 'speed', line: 4, column: 8, value: '4200 rad/s', fix: '4200 rpm' })]);
     // 4200 rad/s at the 300 mm rim radius: 1260 m/s.
-    expect(found[0].message).toBe(`"4200 rad/s" gives the rim of "flywheel" at "flywheel" a speed of 1260 m/s, beyond the 500 m/s at which even a thin ring of the strongest steel bursts; did you mean "4200 rpm"?`);
+    expect(found[0].message).toBe(
+      `"4200 rad/s" gives the rim of "flywheel" at "flywheel" a speed of 1260 m/s, beyond the 500 m/s at which even a thin ring of the strongest steel bursts; did you mean "4200 rpm"?`,
+    );
   });
 
-  it('a shaft whose own kinetic energy is many times its parts\' is W_SHAFT_ENERGY at the segment holding most of it', () => {
+  it("a shaft whose own kinetic energy is many times its parts' is W_SHAFT_ENERGY at the segment holding most of it", () => {
     const text = METRIC.replace(
       '{ shape: disc, name: flywheel, diameter: 600 mm, thickness: 80 mm, bore: 50 mm, material: gray-iron-30 }',
       '{ shape: mass, name: hub, mass: 0.5 kg, radius_of_gyration: 20 mm }',
@@ -151,13 +155,23 @@ describe('checkPlausibility(case, text)', () => {
     expect(found).toEqual([expect.objectContaining({ code: 'W_SHAFT_ENERGY', path: 'shaft.segments[1].diameter', line: 11, value: '60 mm' })]);
     // ρ·π/32·Σ D⁴·L = 7806·π/32·(2·0.05⁴·0.1 + 0.06⁴·1.8) = 0.01884 kg·m² against 0.5·0.02² = 2e-4 kg·m²: 94 times;
     // the middle segment's 0.06⁴·1.8 is 95 % of the sum.
-    expect(found[0].message).toMatch(/^"60 mm" makes the shaft's own kinetic energy 94 times its parts' \(this segment holds 95 % of it\), yet the parts are what drive a shaft into a stop; check the shaft's diameters/);
+    expect(found[0].message).toMatch(
+      /^"60 mm" makes the shaft's own kinetic energy 94 times its parts' \(this segment holds 95 % of it\), yet the parts are what drive a shaft into a stop; check the shaft's diameters/,
+    );
   });
 
-  it('an inch fraction with a metric unit is W_UNITS in any length field, here a station\'s position', () => {
+  it("an inch fraction with a metric unit is W_UNITS in any length field, here a station's position", () => {
     const { found, column } = warnings(US, 15, 'at: 2 in', 'at: 2 1/2 mm');
     expect(found).toEqual([
-      { code: 'W_UNITS', path: 'stations[0].at', line: 15, column: column + 4, value: '2 1/2 mm', message: '"2 1/2 mm" is an inch fraction with a metric unit; did you mean "2 1/2 in"?', fix: '2 1/2 in' },
+      {
+        code: 'W_UNITS',
+        path: 'stations[0].at',
+        line: 15,
+        column: column + 4,
+        value: '2 1/2 mm',
+        message: '"2 1/2 mm" is an inch fraction with a metric unit; did you mean "2 1/2 in"?',
+        fix: '2 1/2 in',
+      },
     ]);
   });
 
@@ -178,7 +192,7 @@ describe('the bundled cases give no plausibility warning', () => {
     expect(checkPlausibility(parseCase(text, f), text)).toEqual([]);
   });
 
-  it('the README\'s annotated case-file example', () => {
+  it("the README's annotated case-file example", () => {
     const readme = readFileSync(fileURLToPath(new URL('../../README.md', import.meta.url)), 'utf8');
     const example = /## The case file[\s\S]*?```yaml\n([\s\S]*?)```/.exec(readme)![1];
     expect(checkPlausibility(parseCase(example, 'README example'), example)).toEqual([]);

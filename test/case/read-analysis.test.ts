@@ -5,13 +5,22 @@ import { caseText, type Layout } from '../helpers/layout.ts';
 
 const layout = (analysis?: string): Layout => ({
   rpm: 300,
-  segments: [[300, 50, 0], [300, 50, 0]],
-  stations: [['pulley', 0, 1], ['spacer', 150, 0], ['jam', 300, 0], ['flywheel', 600, 2], ['outboard', 600, 0]],
+  segments: [
+    [300, 50, 0],
+    [300, 50, 0],
+  ],
+  stations: [
+    ['pulley', 0, 1],
+    ['spacer', 150, 0],
+    ['jam', 300, 0],
+    ['flywheel', 600, 2],
+    ['outboard', 600, 0],
+  ],
   stop: 'jam',
   analysis,
 });
 
-describe('analysis: the factors and the limiter\'s place', () => {
+describe("analysis: the factors and the limiter's place", () => {
   it('defaults to N = 1.5, a service factor of 1.5 and a largest scale of 1.3', () => {
     const a = parseCase(caseText(layout())).analysis;
     expect(a).toMatchObject({ criterion: 'distortion-energy', designFactor: 1.5, serviceFactor: 1.5, maxScale: 1.3 });
@@ -38,7 +47,14 @@ describe('analysis: the factors and the limiter\'s place', () => {
   });
 
   it('limiter_at must have driving parts at or beyond it', () => {
-    const text = caseText({ ...layout('  limiter_at: outboard'), stations: [['pulley', 0, 1], ['jam', 300, 0], ['outboard', 600, 0]] });
+    const text = caseText({
+      ...layout('  limiter_at: outboard'),
+      stations: [
+        ['pulley', 0, 1],
+        ['jam', 300, 0],
+        ['outboard', 600, 0],
+      ],
+    });
     expect(problems(text)).toMatch(/analysis\.limiter_at: a torque limiter at "outboard" would carry no torque/);
   });
 });

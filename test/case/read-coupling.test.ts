@@ -32,7 +32,7 @@ describe("a segment's coupling: stiffness, rated_torque, peak_torque", () => {
     expect(problems(text('{ rated_torque: 4 kN*m, peak_torque: 2 kN*m }'))).toMatch(/coupling\.peak_torque: is below the rated torque/);
   });
 
-  it('a station inside the coupling\'s segment is refused: split the segment', () => {
+  it("a station inside the coupling's segment is refused: split the segment", () => {
     const t = text('{ rated_torque: 4 kN*m }', '  - { name: jam, at: 0 mm }\n  - { name: mid, at: 250 mm }\n  - { name: disc, at: 500 mm, parts: [{ shape: inertia, inertia: 2 kg*m^2 }] }');
     expect(problems(t)).toMatch(/shaft\.segments\[0\]\.coupling: station "mid" lies inside this segment/);
   });

@@ -12,9 +12,12 @@ const SIX = `    cyclic_strength_coefficient: 1344 MPa
     fatigue_ductility_exponent: -0.66
 `;
 const withMaterial = (extra: string) =>
-  base.replace('shaft:\n', `materials:\n  mill-1045:\n    shear_modulus: 79.3 GPa\n    elastic_modulus: 202 GPa\n    density: 7850 kg/m^3\n    yield_strength: 530 MPa\n    tensile_strength: 630 MPa\n${extra}shaft:\n`);
+  base.replace(
+    'shaft:\n',
+    `materials:\n  mill-1045:\n    shear_modulus: 79.3 GPa\n    elastic_modulus: 202 GPa\n    density: 7850 kg/m^3\n    yield_strength: 530 MPa\n    tensile_strength: 630 MPa\n${extra}shaft:\n`,
+  );
 
-describe('a case material\'s cyclic constants', () => {
+describe("a case material's cyclic constants", () => {
   it('all six are read, SI, and the fatigue of the jam uses them', () => {
     const c = parseCase(withMaterial(SIX), 'case.yaml');
     expect(c.materials['mill-1045'].cyclic).toEqual({
@@ -33,12 +36,20 @@ describe('a case material\'s cyclic constants', () => {
 
   it('some but not all is refused at the first one given, naming the missing ones', () => {
     const text = withMaterial(SIX.split('\n').slice(0, 2).join('\n') + '\n');
-    expect(problems(text)).toMatch(new RegExp(`case.yaml:${lineOf(text, 'cyclic_strength_coefficient')}:\\d+ materials\\.mill-1045\\.cyclic_strength_coefficient: gives 2 of the six cyclic constants; give all six \\(fatigue_strength_coefficient: "1227 MPa"`));
+    expect(problems(text)).toMatch(
+      new RegExp(
+        `case.yaml:${lineOf(text, 'cyclic_strength_coefficient')}:\\d+ materials\\.mill-1045\\.cyclic_strength_coefficient: gives 2 of the six cyclic constants; give all six \\(fatigue_strength_coefficient: "1227 MPa"`,
+      ),
+    );
   });
 
   it('an exponent of the wrong sign is refused with its line and a right value', () => {
     const text = withMaterial(SIX.replace('-0.095', '0.095'));
-    expect(problems(text)).toMatch(new RegExp(`case.yaml:${lineOf(text, 'fatigue_strength_exponent')}:\\d+ materials\\.mill-1045\\.fatigue_strength_exponent: 0\\.095 is out of range; give a negative plain number such as -0\\.095 \\(-0\\.3 to -0\\.01\\)`));
+    expect(problems(text)).toMatch(
+      new RegExp(
+        `case.yaml:${lineOf(text, 'fatigue_strength_exponent')}:\\d+ materials\\.mill-1045\\.fatigue_strength_exponent: 0\\.095 is out of range; give a negative plain number such as -0\\.095 \\(-0\\.3 to -0\\.01\\)`,
+      ),
+    );
   });
 
   it('a coefficient without its unit is refused as a stress', () => {

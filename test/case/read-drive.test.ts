@@ -8,17 +8,23 @@ const base = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 'ut
 const withDrive = (drive: string, extraPart = '') =>
   base.replace('        radius_of_gyration: 180 mm\n', `        radius_of_gyration: 180 mm\n${extraPart}    drive:\n${drive.replace(/^/gm, '      ')}\n`);
 
-describe('a station\'s drive', () => {
-  it('reads the rotor\'s inertia, ratio, power, running torque and a curve, all in SI at the motor', () => {
+describe("a station's drive", () => {
+  it("reads the rotor's inertia, ratio, power, running torque and a curve, all in SI at the motor", () => {
     const c = parseCase(
-      withDrive('rotor_inertia: 0.3 kg*m^2\nspeed_ratio: 10\npower: 15 kW\nrunning_torque: 90 N*m\ncurve:\n  - { speed: 0 rpm, torque: 200 N*m }\n  - { speed: 1500 rpm, torque: 100 N*m }\n  - { speed: 1520 rpm, torque: 0 N*m }'),
+      withDrive(
+        'rotor_inertia: 0.3 kg*m^2\nspeed_ratio: 10\npower: 15 kW\nrunning_torque: 90 N*m\ncurve:\n  - { speed: 0 rpm, torque: 200 N*m }\n  - { speed: 1500 rpm, torque: 100 N*m }\n  - { speed: 1520 rpm, torque: 0 N*m }',
+      ),
     );
     const s = c.stations[1];
     expect(s.drive).toMatchObject({ speedRatio: 10, power: 15000, runningTorque: 90, rotorParts: [1] });
     const t = s.drive!.torque!;
     expect(t.kind).toBe('curve');
     const pts = t.kind === 'curve' ? t.points : [];
-    [[0, 200], [(1500 * 2 * Math.PI) / 60, 100], [(1520 * 2 * Math.PI) / 60, 0]].forEach(([w, T], i) => {
+    [
+      [0, 200],
+      [(1500 * 2 * Math.PI) / 60, 100],
+      [(1520 * 2 * Math.PI) / 60, 0],
+    ].forEach(([w, T], i) => {
       expect(pts[i].speed).toBeCloseTo(w, 10);
       expect(pts[i].torque).toBe(T);
     });
@@ -26,7 +32,7 @@ describe('a station\'s drive', () => {
     expect(s.parts[1]).toMatchObject({ name: 'motor rotor', inertia: 0.3, speedRatio: 10 });
   });
 
-  it('takes the rotor from the parts at the drive\'s ratio when rotor_inertia is not given', () => {
+  it("takes the rotor from the parts at the drive's ratio when rotor_inertia is not given", () => {
     const c = parseCase(withDrive('torque: 50 N*m', '      - { shape: inertia, name: rotor, inertia: 0.1 kg*m^2, speed_ratio: 4 }\n'));
     expect(c.stations[1].drive).toMatchObject({ speedRatio: 4, rotorParts: [1], torque: { kind: 'constant', torque: 50 } });
   });
@@ -34,7 +40,9 @@ describe('a station\'s drive', () => {
   it('refuses a rotor given twice, as a part and as rotor_inertia', () => {
     const text = withDrive('rotor_inertia: 0.1 kg*m^2', '      - { shape: inertia, name: rotor, inertia: 0.1 kg*m^2, speed_ratio: 4 }\n');
     expect(problems(text).join('\n')).toMatch(
-      new RegExp(`case\\.yaml:${lineOf(text, 'rotor_inertia')}:\\d+ stations\\[1\\]\\.drive\\.rotor_inertia: the rotor is already listed as the part "rotor" \\(speed_ratio 4\\); give its inertia once`),
+      new RegExp(
+        `case\\.yaml:${lineOf(text, 'rotor_inertia')}:\\d+ stations\\[1\\]\\.drive\\.rotor_inertia: the rotor is already listed as the part "rotor" \\(speed_ratio 4\\); give its inertia once`,
+      ),
     );
     const direct = withDrive('rotor_inertia: 0.1 kg*m^2', '      - { shape: inertia, name: motor rotor, inertia: 0.1 kg*m^2 }\n');
     expect(problems(direct).join('\n')).toMatch(/drive\.rotor_inertia: the rotor is already listed as the part "motor rotor"/);
@@ -44,12 +52,14 @@ describe('a station\'s drive', () => {
     const both = withDrive('torque: 50 N*m\ncurve: [{ speed: 0 rpm, torque: 1 N*m }, { speed: 1600 rpm, torque: 0 N*m }]');
     expect(problems(both).join('\n')).toMatch(new RegExp(`:${lineOf(both, 'curve:')}:\\d+ stations\\[1\\]\\.drive\\.curve: give either torque \\(constant\\) or curve`));
     const late = withDrive('curve:\n  - { speed: 100 rpm, torque: 10 N*m }\n  - { speed: 1600 rpm, torque: 0 N*m }');
-    expect(problems(late).join('\n')).toMatch(new RegExp(`:${lineOf(late, 'speed: 100 rpm')}:\\d+ stations\\[1\\]\\.drive\\.curve\\[0\\]\\.speed: the curve starts at standstill; give the locked-rotor point first`));
+    expect(problems(late).join('\n')).toMatch(
+      new RegExp(`:${lineOf(late, 'speed: 100 rpm')}:\\d+ stations\\[1\\]\\.drive\\.curve\\[0\\]\\.speed: the curve starts at standstill; give the locked-rotor point first`),
+    );
     const back = withDrive('curve:\n  - { speed: 0 rpm, torque: 10 N*m }\n  - { speed: 0 rpm, torque: 0 N*m }');
     expect(problems(back).join('\n')).toMatch(/drive\.curve\[1\]\.speed: speeds must rise from one point to the next/);
   });
 
-  it('refuses a curve that ends below the motor\'s speed at the stop', () => {
+  it("refuses a curve that ends below the motor's speed at the stop", () => {
     const text = withDrive('speed_ratio: 10\nrotor_inertia: 0.1 kg*m^2\ncurve:\n  - { speed: 0 rpm, torque: 10 N*m }\n  - { speed: 1000 rpm, torque: 0 N*m }');
     expect(problems(text).join('\n')).toMatch(
       new RegExp(`:${lineOf(text, '- { speed: 0 rpm')}:\\d+ stations\\[1\\]\\.drive\\.curve: ends at 1000 rpm, below the motor's speed at the stop \\(1500 rpm = shaft speed × speed_ratio 10\\)`),
@@ -62,7 +72,7 @@ describe('a station\'s drive', () => {
   });
 });
 
-describe('a drive\'s belt', () => {
+describe("a drive's belt", () => {
   const belt = (b: string) => withDrive(`rotor_inertia: 0.05 kg*m^2\nspeed_ratio: 3\nbelt:\n${b.replace(/^/gm, '  ')}`);
 
   it('reads a stated slip torque, or the capstan data in SI', () => {

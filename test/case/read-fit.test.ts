@@ -4,10 +4,19 @@ import { lineOf, problems } from '../helpers/case-problems.ts';
 import { caseText } from '../helpers/layout.ts';
 
 const withFit = (fit: string, materials?: string) =>
-  caseText({ rpm: 300, segments: [[500, 50, 0]], stations: [['jam', 0, 0], ['hub', 500, 1, `    fit: ${fit}`]], stop: 'jam', materials });
+  caseText({
+    rpm: 300,
+    segments: [[500, 50, 0]],
+    stations: [
+      ['jam', 0, 0],
+      ['hub', 500, 1, `    fit: ${fit}`],
+    ],
+    stop: 'jam',
+    materials,
+  });
 
 describe("a station's fit: interference, hub_outer_diameter, length, friction, hub_material", () => {
-  it('reads the fit in SI, with the hub material\'s E and Poisson\'s ratio from the library', () => {
+  it("reads the fit in SI, with the hub material's E and Poisson's ratio from the library", () => {
     const c = parseCase(withFit('{ interference: 0.05 mm, hub_outer_diameter: 100 mm, length: 60 mm, friction: 0.12, hub_material: aisi-1045-hr }'));
     expect(c.stations[1].fit).toEqual({ interference: 0.05e-3, hubOuterDiameter: 0.1, length: 0.06, friction: 0.12, hubMaterial: 'aisi-1045-hr' });
     expect(c.materials['aisi-1045-hr'].poissonRatio).toBe(0.292);
@@ -19,15 +28,21 @@ describe("a station's fit: interference, hub_outer_diameter, length, friction, h
     expect(c.materials['hub-iron'].poissonRatio).toBe(0.26);
   });
 
-  it('a hub material without Poisson\'s ratio is refused with its path and what to add', () => {
+  it("a hub material without Poisson's ratio is refused with its path and what to add", () => {
     const mat = 'materials:\n  hub-iron: { name: hub iron, elastic_modulus: 110 GPa }';
     const text = withFit('{ interference: 0.05 mm, hub_outer_diameter: 100 mm, length: 60 mm, friction: 0.12, hub_material: hub-iron }', mat);
-    expect(problems(text)).toMatch(new RegExp(`case\\.yaml:${lineOf(text, 'fit:')}:\\d+ stations\\[1\\]\\.fit\\.hub_material: material "hub-iron" has no poisson_ratio, which this use needs; add it under materials\\.hub-iron, e\\.g\\. poisson_ratio: 0\\.29`));
+    expect(problems(text)).toMatch(
+      new RegExp(
+        `case\\.yaml:${lineOf(text, 'fit:')}:\\d+ stations\\[1\\]\\.fit\\.hub_material: material "hub-iron" has no poisson_ratio, which this use needs; add it under materials\\.hub-iron, e\\.g\\. poisson_ratio: 0\\.29`,
+      ),
+    );
   });
 
-  it('a Poisson\'s ratio of 0.5 or more is refused', () => {
+  it("a Poisson's ratio of 0.5 or more is refused", () => {
     const mat = 'materials:\n  hub-iron: { name: hub iron, elastic_modulus: 110 GPa, poisson_ratio: 0.6 }';
-    expect(problems(withFit('{ interference: 0.05 mm, hub_outer_diameter: 100 mm, length: 60 mm, friction: 0.12, hub_material: hub-iron }', mat))).toMatch(/materials\.hub-iron\.poisson_ratio: 0\.6 is out of range; give Poisson's ratio/);
+    expect(problems(withFit('{ interference: 0.05 mm, hub_outer_diameter: 100 mm, length: 60 mm, friction: 0.12, hub_material: hub-iron }', mat))).toMatch(
+      /materials\.hub-iron\.poisson_ratio: 0\.6 is out of range; give Poisson's ratio/,
+    );
   });
 
   it('a missing friction and an interference without a unit are each reported with an example', () => {
@@ -45,6 +60,8 @@ describe("a station's fit: interference, hub_outer_diameter, length, friction, h
   });
 
   it('an unknown key in the fit gets a did-you-mean', () => {
-    expect(problems(withFit('{ interferance: 0.05 mm, hub_outer_diameter: 100 mm, length: 60 mm, friction: 0.12, hub_material: aisi-1045-hr }'))).toMatch(/stations\[1\]\.fit\.interferance: unknown key; did you mean "interference"\?/);
+    expect(problems(withFit('{ interferance: 0.05 mm, hub_outer_diameter: 100 mm, length: 60 mm, friction: 0.12, hub_material: aisi-1045-hr }'))).toMatch(
+      /stations\[1\]\.fit\.interferance: unknown key; did you mean "interference"\?/,
+    );
   });
 });

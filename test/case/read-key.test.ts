@@ -3,9 +3,18 @@ import { parseCase } from '../../src/case/parse-case.ts';
 import { lineOf, problems } from '../helpers/case-problems.ts';
 import { caseText } from '../helpers/layout.ts';
 
-const withKey = (key: string) => caseText({ rpm: 300, segments: [[500, 40, 0]], stations: [['hub', 0, 1, `    key: ${key}`], ['jam', 500, 0]], stop: 'jam' });
+const withKey = (key: string) =>
+  caseText({
+    rpm: 300,
+    segments: [[500, 40, 0]],
+    stations: [
+      ['hub', 0, 1, `    key: ${key}`],
+      ['jam', 500, 0],
+    ],
+    stop: 'jam',
+  });
 
-describe('a station\'s key: width, height, length, material, hub_depth', () => {
+describe("a station's key: width, height, length, material, hub_depth", () => {
   it('reads the key in SI and takes its material into the case', () => {
     const c = parseCase(withKey('{ width: 12 mm, height: 8 mm, length: 50 mm, material: aisi-1045-cd, hub_depth: 3 mm }'));
     expect(c.stations[0].key).toEqual({ width: 0.012, height: 0.008, length: 0.05, material: 'aisi-1045-cd', hubDepth: 0.003 });
@@ -22,7 +31,7 @@ describe('a station\'s key: width, height, length, material, hub_depth', () => {
     expect(problems(text)).toMatch(new RegExp(`case\\.yaml:${lineOf(text, 'key:')}:\\d+ stations\\[0\\]\\.key\\.width: is required; give the key's width such as "16 mm"`));
   });
 
-  it('a hub depth not smaller than the key\'s height is refused', () => {
+  it("a hub depth not smaller than the key's height is refused", () => {
     const text = withKey('{ width: 12 mm, height: 8 mm, length: 50 mm, material: aisi-1045-cd, hub_depth: 8 mm }');
     expect(problems(text)).toMatch(new RegExp(`:${lineOf(text, 'hub_depth')}:\\d+ stations\\[0\\]\\.key\\.hub_depth: the part of the key in the hub must be less than the key's height`));
   });

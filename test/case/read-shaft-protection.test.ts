@@ -5,7 +5,7 @@ import { lineOf, problems } from './problems.ts';
 
 const base = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 'utf8');
 
-describe('a segment\'s torque limiter or shear pin', () => {
+describe("a segment's torque limiter or shear pin", () => {
   it('reads slip_torque and shear_torque in SI', () => {
     expect(parseCase(base.replace('      diameter: 50 mm', '      diameter: 50 mm\n      slip_torque: 1.5 kN*m')).shaft.segments[0].slipTorque).toBe(1500);
     expect(parseCase(base.replace('      diameter: 50 mm', '      diameter: 50 mm\n      shear_torque: 900 N*m')).shaft.segments[0].shearTorque).toBe(900);

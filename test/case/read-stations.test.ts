@@ -18,8 +18,8 @@ stations:
       - { shape: inertia, name: cut-off wheel, inertia: 0.05 kg*m^2, rated_speed: ${rated} }
 `;
 
-describe('a part\'s rated_speed', () => {
-  it('is read as the part\'s marked speed in rad/s', () => {
+describe("a part's rated_speed", () => {
+  it("is read as the part's marked speed in rad/s", () => {
     const part = parseCase(text('4400 rpm')).stations[1].parts[0];
     expect(part.ratedSpeed).toBeCloseTo((4400 * 2 * Math.PI) / 60, 9);
   });

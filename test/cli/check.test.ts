@@ -74,7 +74,7 @@ describe('shaftcase check', () => {
     expect(p.stderr).not.toMatch(/\n\s+at /);
   });
 
-  it('under --json a bad case file prints one JSON object on stderr with each mistake\'s code, place and field, and exits 2', () => {
+  it("under --json a bad case file prints one JSON object on stderr with each mistake's code, place and field, and exits 2", () => {
     const p = spawnSync(process.execPath, [bin, 'check', '--json', fileURLToPath(new URL('../data/bad-units.yaml', import.meta.url))], { encoding: 'utf8' });
     expect(p.status).toBe(2);
     expect(p.stdout).toBe('');
@@ -146,4 +146,3 @@ describe('shaftcase check', () => {
     });
   });
 });
-

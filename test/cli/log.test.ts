@@ -33,7 +33,7 @@ describe('shaftcase log', () => {
   });
   afterAll(() => removeTempFolders());
 
-  it('prints one row per incident, the asset\'s rollup and its finding, and says where the engine ran', () => {
+  it("prints one row per incident, the asset's rollup and its finding, and says where the engine ran", () => {
     expect(table.code, table.err).toBe(0);
     expect(table.out).toMatch(/Incidents \(5\)/);
     expect(table.out).toMatch(/CV-7 head shaft\s+4\s+2\.01\s+110 days/);
@@ -43,10 +43,24 @@ describe('shaftcase log', () => {
     expect(table.out).toMatch(/Caution: fatigue estimates scatter by a factor of several/);
   });
 
-  it('--json has the issue\'s shape; incidents of an asset are in the order they occurred; the Miner sum is the sum of the incidents\' damages', () => {
+  it("--json has the issue's shape; incidents of an asset are in the order they occurred; the Miner sum is the sum of the incidents' damages", () => {
     const j = JSON.parse(json.out);
     expect(j.schema_version).toBe(2);
-    expect(Object.keys(j.incidents[0])).toEqual(['id', 'asset', 'occurred', 'verdict', 'basis', 'side', 'segment', 'yield_ratio', 'peak_torque_Nm', 'permanent_twist_rad', 'measured_twist_rad', 'damage', 'report']);
+    expect(Object.keys(j.incidents[0])).toEqual([
+      'id',
+      'asset',
+      'occurred',
+      'verdict',
+      'basis',
+      'side',
+      'segment',
+      'yield_ratio',
+      'peak_torque_Nm',
+      'permanent_twist_rad',
+      'measured_twist_rad',
+      'damage',
+      'report',
+    ]);
     expect(Object.keys(j.assets[0])).toEqual(['asset', 'incidents', 'worst_yield_ratio', 'mean_interval_days', 'damage']);
     const cv7 = j.incidents.filter((r: { asset: string }) => r.asset === 'CV-7 head shaft');
     expect(cv7.map((r: { id: string }) => r.id)).toEqual(['DEMO-CV7-01', 'DEMO-CV7-02', 'DEMO-CV7-03', 'DEMO-CV7-04']);
@@ -92,14 +106,14 @@ describe('shaftcase log', () => {
     expect(readFileSync(page, 'utf8')).toBe(html);
   });
 
-  it('a path that is not a folder is the user\'s mistake: exit 2, one line', async () => {
+  it("a path that is not a folder is the user's mistake: exit 2, one line", async () => {
     const r = await cli(['log', join(dir, 'nothing-here')]);
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/is not a folder; give the folder that holds the case files/);
     expect(existsSync(join(dir, 'nothing-here'))).toBe(false);
   });
 
-  it('check of a case with case.asset shows its place in the history the log finds; its damage and the asset\'s sum are the log\'s', async () => {
+  it("check of a case with case.asset shows its place in the history the log finds; its damage and the asset's sum are the log's", async () => {
     const file = join(dir, 'cv7', 'jam-d.yaml'); // DEMO-CV7-03
     const text = await cli(['check', file]);
     expect(text.out).toMatch(/This is incident 3 of 4 of CV-7 head shaft found under .*cv7; it added [\d.]+ %, and the asset's Miner sum is \d+ %\./);
@@ -119,7 +133,7 @@ describe('shaftcase log', () => {
     expect(j.fatigue.damage).toBeGreaterThanOrEqual(0);
   });
 
-  it('the report of a case with case.asset has the fatigue section with the asset\'s history, and results.json carries it', () => {
+  it("the report of a case with case.asset has the fatigue section with the asset's history, and results.json carries it", () => {
     const folder = join(dir, 'cv7', 'reports', 'DEMO-CV7-02-2026-12-01');
     const md = readFileSync(join(folder, 'report.md'), 'utf8');
     expect(md).toMatch(/## Appendix: fatigue, what this jam used up[\s\S]*### This asset's history\n\nThis is incident 2 of 4 of CV-7 head shaft/);

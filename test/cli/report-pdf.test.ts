@@ -11,7 +11,7 @@ const printPdf = vi.hoisted(() => vi.fn());
 vi.mock('../../src/io/chromium.ts', async (importActual) => ({ ...(await importActual<object>()), printPdf }));
 
 describe('shaftcase report --pdf', () => {
-  it('--pdf adds report.pdf to the folder and the zip, on the paper of the case\'s units', async () => {
+  it("--pdf adds report.pdf to the folder and the zip, on the paper of the case's units", async () => {
     printPdf.mockResolvedValueOnce(new TextEncoder().encode('%PDF-1.4 test'));
     const file = copyToTemp(SAMPLE);
     const run = await cli(['report', '--pdf', file]);
@@ -30,7 +30,7 @@ describe('shaftcase report --pdf', () => {
     const run = await cli(['report', '--pdf', file]);
     expect(run.code).toBe(0);
     expect(run.err).toBe(
-      'report.pdf not written: Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian\'s package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM. The rest of the report is written; print report.html from a browser instead.\n',
+      "report.pdf not written: Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian's package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM. The rest of the report is written; print report.html from a browser instead.\n",
     );
     const folder = join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01');
     expect(existsSync(join(folder, 'report.html'))).toBe(true);

@@ -10,7 +10,19 @@ import { DATA, FIXED_NOW, SAMPLE, TINY_PNG, TOLERANCED_SAMPLE } from '../report/
 import { cli } from './run-cli.ts';
 
 // The granulator yields and has a measured twist; it states no tolerances.
-const FIGURES = ['dynamic-modes.svg', 'dynamic-speeds.svg', 'dynamic-torque.svg', 'energy-share.svg', 'permanent-twist-speed-1.svg', 'resize-peak-torque-vs-limiter.svg', 'resize-yield-ratio-vs-diameter.svg', 'shaft-schematic.svg', 'stress-along-shaft.svg', 'stress-vs-speed.svg', 'torque-twist.svg'];
+const FIGURES = [
+  'dynamic-modes.svg',
+  'dynamic-speeds.svg',
+  'dynamic-torque.svg',
+  'energy-share.svg',
+  'permanent-twist-speed-1.svg',
+  'resize-peak-torque-vs-limiter.svg',
+  'resize-yield-ratio-vs-diameter.svg',
+  'shaft-schematic.svg',
+  'stress-along-shaft.svg',
+  'stress-vs-speed.svg',
+  'torque-twist.svg',
+];
 const TABLES = ['material.csv', 'parts.csv', 'past-yield-in-time.csv', 'past-yield-pieces.csv', 'past-yield-sides.csv', 'pieces.csv', 'segments.csv', 'sides.csv'];
 const UNCERTAINTY_FIGURES = ['uncertainty-sensitivity.svg', 'uncertainty-yield-ratio.svg'];
 const UNCERTAINTY_TABLES = ['uncertainty-inputs.csv', 'uncertainty-percentiles.csv', 'uncertainty-sensitivity.csv'];
@@ -134,7 +146,7 @@ describe('shaftcase report', () => {
     expect(run.err).toMatch(/"many" is not a whole number/);
   });
 
-  it('the zip\'s manifest lists the real SHA-256 of every file in it, and they match the files on disk', async () => {
+  it("the zip's manifest lists the real SHA-256 of every file in it, and they match the files on disk", async () => {
     const dir = join(tempFolder(), 'case');
     mkdirSync(join(dir, 'photos'), { recursive: true });
     writeFileSync(join(dir, 'case.yaml'), readFileSync(SAMPLE, 'utf8') + '  photos:\n    - { path: photos/key.png, caption: the sheave key }\n');
@@ -143,21 +155,42 @@ describe('shaftcase report', () => {
     const zip = await JSZip.loadAsync(readFileSync(join(dir, 'reports', 'DEMO-GR-0117-2026-12-01.zip')));
     const lines = (await zip.file('MANIFEST.txt')!.async('string')).trimEnd().split('\n');
     const listed = lines.map((l) => l.slice(66));
-    expect(listed.sort()).toEqual(Object.keys(zip.files).filter((n) => n !== 'MANIFEST.txt' && !zip.files[n].dir).sort());
+    expect(listed.sort()).toEqual(
+      Object.keys(zip.files)
+        .filter((n) => n !== 'MANIFEST.txt' && !zip.files[n].dir)
+        .sort(),
+    );
     expect(listed).toContain('case.yaml');
     expect(listed).toContain('photos/key.png');
     expect(listed).toContain('reports/DEMO-GR-0117-2026-12-01/report.html');
     for (const line of lines) {
       const [hash, path] = [line.slice(0, 64), line.slice(66)];
-      expect(createHash('sha256').update(await zip.file(path)!.async('uint8array')).digest('hex'), path).toBe(hash);
-      expect(createHash('sha256').update(readFileSync(join(dir, path))).digest('hex'), path).toBe(hash);
+      expect(
+        createHash('sha256')
+          .update(await zip.file(path)!.async('uint8array'))
+          .digest('hex'),
+        path,
+      ).toBe(hash);
+      expect(
+        createHash('sha256')
+          .update(readFileSync(join(dir, path)))
+          .digest('hex'),
+        path,
+      ).toBe(hash);
     }
   });
 
   it('a second run the same day makes ID-DATE-2 and leaves the first report as it was', () => {
     expect(again.out).toContain(join(dirname(file), 'reports', 'DEMO-GR-0117-2026-12-01-2'));
     expect(firstAfter.equals(firstBefore)).toBe(true);
-    expect(readdirSync(join(dirname(file), 'reports')).sort()).toEqual(['DEMO-GR-0117-2026-12-01', 'DEMO-GR-0117-2026-12-01-2', 'DEMO-GR-0117-2026-12-01-2.zip', 'DEMO-GR-0117-2026-12-01.zip', 'DEMO-GR-0117-2026-12-02', 'DEMO-GR-0117-2026-12-02.zip']);
+    expect(readdirSync(join(dirname(file), 'reports')).sort()).toEqual([
+      'DEMO-GR-0117-2026-12-01',
+      'DEMO-GR-0117-2026-12-01-2',
+      'DEMO-GR-0117-2026-12-01-2.zip',
+      'DEMO-GR-0117-2026-12-01.zip',
+      'DEMO-GR-0117-2026-12-02',
+      'DEMO-GR-0117-2026-12-02.zip',
+    ]);
   });
 
   it('hostile text in the case file stays text in report.html, and its photo is embedded', async () => {
@@ -179,7 +212,7 @@ describe('shaftcase report', () => {
     expect(html).toContain(`src="data:image/png;base64,${TINY_PNG.toString('base64')}"`);
   });
 
-  it('a photo missing on disk stops the report with the photo\'s line and exit status 2, writing nothing', async () => {
+  it("a photo missing on disk stops the report with the photo's line and exit status 2, writing nothing", async () => {
     const file = copyToTemp(join(DATA, 'hostile.yaml'));
     const run = await cli(['report', file]);
     expect(run.code).toBe(2);

@@ -51,7 +51,7 @@ describe('shaftcase resize', () => {
     for (const key of ['case_id', 'yield_ratio', 'verdict', 'sides', 'cautions']) expect(j).toHaveProperty(key);
   });
 
-  it('a design factor below 1 is the user\'s mistake: exit 2 with a plain message', async () => {
+  it("a design factor below 1 is the user's mistake: exit 2 with a plain message", async () => {
     const r = await cli('resize', sample('screw-conveyor-jam-us.yaml'), '--factor', '0.8');
     expect(r.status).toBe(2);
     expect(r.err).toMatch(/give a design factor of 1 or more, such as 1\.5 \(not "0\.8"\)/);

@@ -40,7 +40,7 @@ describe('the site materials catalogue', () => {
     expect(j.warnings).toContain('The site catalogue\'s material "aisi-1045-cd" (materials.yaml) overrides the built-in material of that name.');
   });
 
-  it('the case\'s own materials take precedence over the site\'s, with a warning', async () => {
+  it("the case's own materials take precedence over the site's, with a warning", async () => {
     const own = CASE.replace('shaft:\n', 'materials:\n  aisi-1045-cd:\n    shear_modulus: 79.3 GPa\n    yield_strength: 500 MPa\n    tensile_strength: 650 MPa\n    density: 7850 kg/m^3\nshaft:\n');
     const { caseDir } = plant(SITE, own);
     const j = JSON.parse((await cli(['check', '--json', caseDir])).out);
@@ -66,7 +66,7 @@ describe('the site materials catalogue', () => {
     expect(j.shear_yield_Pa).toBeCloseTo(640e6 / Math.sqrt(3), -3);
   });
 
-  it('a mistake in the catalogue is refused with the catalogue\'s name, line and field, exit 2', async () => {
+  it("a mistake in the catalogue is refused with the catalogue's name, line and field, exit 2", async () => {
     const { caseDir } = plant(SITE.replace('600 MPa', '600'));
     const r = await cli(['check', caseDir]);
     expect(r.code).toBe(2);

@@ -26,7 +26,7 @@ function staticGraph(entry: string): { files: Set<string>; packages: Set<string>
 }
 
 describe('start-up of the CLI', () => {
-  it('the CLI entry reaches none of the report\'s packages through static imports', () => {
+  it("the CLI entry reaches none of the report's packages through static imports", () => {
     const { files, packages } = staticGraph(join(SRC, 'cli', 'bin.ts'));
     // The walk does follow the project's imports: a command reaches the engine.
     expect(staticGraph(join(SRC, 'cli', 'commands', 'check.ts')).files.size).toBeGreaterThan(10);
@@ -42,13 +42,13 @@ describe('start-up of the CLI', () => {
     expect([...packages].sort()).toEqual(['commander', 'node:fs']);
   });
 
-  it.each(['check', 'resize', 'materials', 'new'])('the %s command reaches none of the report\'s packages or modules', (command) => {
+  it.each(['check', 'resize', 'materials', 'new'])("the %s command reaches none of the report's packages or modules", (command) => {
     const { files, packages } = staticGraph(join(SRC, 'cli', 'commands', `${command}.ts`));
     for (const p of REPORT_ONLY) expect([...packages], p).not.toContain(p);
     expect([...files].some((f) => f.includes('/src/report/'))).toBe(false);
   });
 
-  it('check --json does not load the terminal summary\'s views', () => {
+  it("check --json does not load the terminal summary's views", () => {
     const { files } = staticGraph(join(SRC, 'cli', 'commands', 'check.ts'));
     expect([...files].some((f) => f.endsWith('/views/summary.ts'))).toBe(false);
   });

@@ -13,7 +13,9 @@ export function ep5CaseText(o: { speed?: string; material?: string[]; segments?:
     'stop: { at: seized bearing }',
     'materials:',
     '  ep5-steel:',
-    ...(o.material ?? ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa', 'tensile_strength: 630 MPa', 'elongation: 12 %', 'reduction_of_area: 35 %', 'density: 7850 kg/m^3']).map((l) => `    ${l}`),
+    ...(o.material ?? ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa', 'tensile_strength: 630 MPa', 'elongation: 12 %', 'reduction_of_area: 35 %', 'density: 7850 kg/m^3']).map(
+      (l) => `    ${l}`,
+    ),
     'shaft:',
     '  material: ep5-steel',
     '  segments:',

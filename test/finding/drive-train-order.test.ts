@@ -10,13 +10,21 @@ import { caseText } from '../helpers/layout.ts';
 // 0.006 × 0.02 / 4 = 795 N·m and shears off at 0.67·S_ut·d·w·l/2 = 1266 N·m (Shigley 9th ed. Sec.
 // 7-7 and 6-15, from memory, confident; arithmetic by hand), far below the shaft's yield torque.
 const KEY = '    key: { width: 6 mm, height: 6 mm, length: 20 mm, material: aisi-1045-cd }';
-const text = caseText({ rpm: 150, segments: [[500, 50, 0]], stations: [['jam', 0, 0], ['disc', 500, 1, KEY]], stop: 'jam' });
+const text = caseText({
+  rpm: 150,
+  segments: [[500, 50, 0]],
+  stations: [
+    ['jam', 0, 0],
+    ['disc', 500, 1, KEY],
+  ],
+  stop: 'jam',
+});
 
 describe('the finding names the weakest element of the drive train, shaft or not', () => {
   const r = investigate(parseCase(text), { samples: 0 });
   const f = r.finding;
 
-  it('orders the drive train by torque over capacity and puts the key first, with its capacity from Shigley\'s key relations', () => {
+  it("orders the drive train by torque over capacity and puts the key first, with its capacity from Shigley's key relations", () => {
     expect(f.weakest!.kind).toBe('key');
     expect(f.weakest!.order).toBe(1);
     expect(Math.abs(f.weakest!.capacity / 795 - 1)).toBeLessThan(1e-9);
@@ -38,7 +46,20 @@ describe('the finding names the weakest element of the drive train, shaft or not
 
   it('a shrink fit that slips stands first, ahead of a shaft that held', () => {
     const fit = '    fit: { interference: 0.05 mm, hub_outer_diameter: 100 mm, length: 60 mm, friction: 0.12, hub_material: aisi-1045-cd }';
-    const g = investigate(parseCase(caseText({ rpm: 300, segments: [[500, 50, 0]], stations: [['jam', 0, 0], ['disc', 500, 1, fit]], stop: 'jam' })), { samples: 0 }).finding;
+    const g = investigate(
+      parseCase(
+        caseText({
+          rpm: 300,
+          segments: [[500, 50, 0]],
+          stations: [
+            ['jam', 0, 0],
+            ['disc', 500, 1, fit],
+          ],
+          stop: 'jam',
+        }),
+      ),
+      { samples: 0 },
+    ).finding;
     expect(g.weakest!.kind).toBe('fit');
     expect(g.weakest!.ratio).toBeGreaterThanOrEqual(1);
   });

@@ -26,7 +26,7 @@ describe('decideFinding', () => {
     expect(findingSentence(local, 'metric')).toMatch(/^YIELDED LOCALLY AT A STRESS RAISER \(energy method\): side B, segment 1 .*kt 1\.5.* while the net section stays elastic/);
   });
 
-  it('gives the energy balance\'s permanent twist and capped torque for a section that yields through (EP5 at 300 rpm)', () => {
+  it("gives the energy balance's permanent twist and capped torque for a section that yields through (EP5 at 300 rpm)", () => {
     const r = analyseCase(ep5Case());
     const f = decideFinding(r);
     expect(f.verdict).toBe('yielded');
@@ -53,7 +53,8 @@ describe('decideFinding', () => {
   });
 
   it('says a gray-iron shaft over its strength breaks rather than yields, by its shear strength', () => {
-    const r = analyseCase(parseCase(`case: { id: B }
+    const r = analyseCase(
+      parseCase(`case: { id: B }
 speed: 600 rpm
 stop: { at: jam }
 shaft:
@@ -63,7 +64,8 @@ shaft:
 stations:
   - { name: disc, at: 0 mm, parts: [{ shape: inertia, inertia: 1 kg*m^2 }] }
   - { name: jam, at: 500 mm }
-`));
+`),
+    );
     const f = decideFinding(r);
     expect(f.brittle).toBe(true);
     expect(f.action).toBe('replace');
@@ -72,7 +74,7 @@ stations:
     expect(text).toMatch(/shear strength/);
   });
 
-  it('stands on the dynamic model\'s numbers where the verdict does: its elastic ratio, its capped torque, its permanent twist', () => {
+  it("stands on the dynamic model's numbers where the verdict does: its elastic ratio, its capped torque, its permanent twist", () => {
     const r = sample('granulator-tramp-metal.yaml');
     const f = decideFinding(r);
     expect(f.basis).toBe('dynamic model');
@@ -81,12 +83,15 @@ stations:
     const piece = r.dynamic.pieces[r.dynamic.governing];
     expect(f.peakTorque).toBe(piece.peakTorque);
     expect(f.elasticPeakTorque).toBe(piece.elasticPeakTorque);
-    expect(f.permanentTwist).toBeCloseTo(r.dynamic.pieces.reduce((s, p) => s + p.permanentTwist, 0), 12);
+    expect(f.permanentTwist).toBeCloseTo(
+      r.dynamic.pieces.reduce((s, p) => s + p.permanentTwist, 0),
+      12,
+    );
     // The energy method's 16-odd times yield is the comparison, not the finding.
     expect(f.yieldRatio).toBeLessThan(r.yieldRatio);
   });
 
-  it('gives the break time of the dynamic model\'s fracture and no permanent twist for a side that broke', () => {
+  it("gives the break time of the dynamic model's fracture and no permanent twist for a side that broke", () => {
     const r = sample('mixer-motor-drove-through.yaml');
     const f = decideFinding(r);
     expect(f.verdict).toBe('fracture predicted');

@@ -11,7 +11,14 @@ const MILL: Material = {
   elasticModulus: 202e9,
   yieldStrength: 530e6,
   tensileStrength: 725e6,
-  cyclic: { cyclicStrengthCoefficient: 1344e6, cyclicHardeningExponent: 0.18, fatigueStrengthCoefficient: 1227e6, fatigueStrengthExponent: -0.095, fatigueDuctilityCoefficient: 1.0, fatigueDuctilityExponent: -0.66 },
+  cyclic: {
+    cyclicStrengthCoefficient: 1344e6,
+    cyclicHardeningExponent: 0.18,
+    fatigueStrengthCoefficient: 1227e6,
+    fatigueStrengthExponent: -0.095,
+    fatigueDuctilityCoefficient: 1.0,
+    fatigueDuctilityExponent: -0.66,
+  },
   source: 'test',
 };
 
@@ -45,12 +52,15 @@ describe('incidentFatigue', () => {
     expect(Math.abs(z.damage * N - 1)).toBeLessThan(0.01);
   });
 
-  it('the ring-down adds its counted cycles: the damage is the sum of theirs and at least the jam\'s own', () => {
+  it("the ring-down adds its counted cycles: the damage is the sum of theirs and at least the jam's own", () => {
     const torque = new Float64Array([100, 1000, -400, 600, -200, 300, 150]);
     const z = incidentFatigue(MILL, 2, 2 * 300e6, 1000, torque);
     expect(z.ringDown).toBe(true);
     expect(z.cycles.length).toBeGreaterThan(2);
-    expect(z.damage).toBeCloseTo(z.cycles.reduce((s, c) => s + c.damage, 0), 15);
+    expect(z.damage).toBeCloseTo(
+      z.cycles.reduce((s, c) => s + c.damage, 0),
+      15,
+    );
     expect(z.damage).toBeGreaterThan(z.jamCycle.damage);
   });
 

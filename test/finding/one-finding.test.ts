@@ -14,7 +14,12 @@ import { resultsToJson } from '../../src/views/results-json.ts';
 import { renderSummary } from '../../src/views/summary.ts';
 import { DATA, defaultTemplate, RUN, SAMPLE_CASES } from '../report/report-fixtures.ts';
 
-const cases = [...readdirSync(SAMPLE_CASES).filter((f) => f.endsWith('.yaml')).map((f) => join(SAMPLE_CASES, f)), join(DATA, 'two-sided-pump.yaml')];
+const cases = [
+  ...readdirSync(SAMPLE_CASES)
+    .filter((f) => f.endsWith('.yaml'))
+    .map((f) => join(SAMPLE_CASES, f)),
+  join(DATA, 'two-sided-pump.yaml'),
+];
 const count = (text: string, part: string) => text.split(part).length - 1;
 
 describe('one finding, the same in every view', () => {
@@ -47,7 +52,22 @@ describe('one finding, the same in every view', () => {
     expect(json[0]).toMatchObject({ verdict: f.verdict, basis: f.basis, side: f.side, yield_ratio: f.yieldRatio, peak_torque_Nm: f.peakTorque, disposition: f.disposition, sentence });
     expect(json[0]).toMatchObject({ action: f.action });
     expect(summary).toContain(f.disposition);
-    for (const key of ['verdict', 'basis', 'basis_reason', 'side', 'segment', 'peak_torque_Nm', 'yield_ratio', 'permanent_twist_rad', 'break_time_s', 'yield_probability', 'yield_probability_interval', 'probability_method', 'disposition', 'action']) {
+    for (const key of [
+      'verdict',
+      'basis',
+      'basis_reason',
+      'side',
+      'segment',
+      'peak_torque_Nm',
+      'yield_ratio',
+      'permanent_twist_rad',
+      'break_time_s',
+      'yield_probability',
+      'yield_probability_interval',
+      'probability_method',
+      'disposition',
+      'action',
+    ]) {
       expect(json[0], key).toHaveProperty(key);
     }
     // The chance shown is the finding's own model's.

@@ -19,9 +19,7 @@ export interface Layout {
 }
 
 export function caseText(l: Layout): string {
-  const seg = l.segments
-    .map(([len, d, b, kt]) => `    - { length: ${len} mm, diameter: ${d} mm${b > 0 ? `, bore: ${b} mm` : ''}${kt !== undefined ? `, kt: ${kt}` : ''} }`)
-    .join('\n');
+  const seg = l.segments.map(([len, d, b, kt]) => `    - { length: ${len} mm, diameter: ${d} mm${b > 0 ? `, bore: ${b} mm` : ''}${kt !== undefined ? `, kt: ${kt}` : ''} }`).join('\n');
   const st = l.stations
     .map(([n, at, j, extra]) => `  - name: ${n}\n    at: ${at} mm\n${extra ? `${extra}\n` : ''}${j > 0 ? `    parts:\n      - { shape: inertia, inertia: ${j} kg*m^2 }\n` : ''}`)
     .join('');

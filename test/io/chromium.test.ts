@@ -27,7 +27,9 @@ describe('finding Chromium', () => {
   });
 
   it('a missing Chromium is explained with where it was looked for and how to install or name one', () => {
-    expect(new ChromiumMissing(undefined).message).toBe("Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian's package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM");
+    expect(new ChromiumMissing(undefined).message).toBe(
+      "Chromium was not found at /usr/lib/chromium/chromium or /usr/bin/chromium; install Debian's package (sudo apt-get install chromium), or name a Chromium or Chrome executable in SHAFTCASE_CHROMIUM",
+    );
     expect(new ChromiumMissing('/opt/x/chrome').message).toMatch(/^Chromium was not found at \/opt\/x\/chrome \(named by SHAFTCASE_CHROMIUM\)/);
   });
 });
@@ -91,13 +93,18 @@ describe.skipIf(missing && !inCI)('report.html in headless Chromium (skipped wit
     const verdict = page.locator('blockquote').first();
     expect(await verdict.isVisible()).toBe(true);
     expect(await verdict.innerText()).toMatch(/^Finding: YIELDED THROUGH THE SECTION \(dynamic model\): side A, "sheave seat" .* past yield the torque there is capped at /);
-    for (const heading of ['Appendix: method and assumptions', 'Findings', 'Past yield', 'Recommendations: what goes back in', 'Appendix: materials and sources', 'Cautions']) expect(await page.getByRole('heading', { name: heading, exact: true }).isVisible()).toBe(true);
+    for (const heading of ['Appendix: method and assumptions', 'Findings', 'Past yield', 'Recommendations: what goes back in', 'Appendix: materials and sources', 'Cautions'])
+      expect(await page.getByRole('heading', { name: heading, exact: true }).isVisible()).toBe(true);
     // A link on the first page lands on its section.
     await page.getByRole('link', { name: 'the evidence' }).click();
     expect(await page.evaluate(() => location.hash)).toBe('#results-of-the-governing-model');
 
     await page.emulateMedia({ media: 'print' });
-    const style = (sel: string) => page.locator(sel).first().evaluate((el) => ({ inside: getComputedStyle(el).breakInside, before: getComputedStyle(el).breakBefore, after: getComputedStyle(el).breakAfter }));
+    const style = (sel: string) =>
+      page
+        .locator(sel)
+        .first()
+        .evaluate((el) => ({ inside: getComputedStyle(el).breakInside, before: getComputedStyle(el).breakBefore, after: getComputedStyle(el).breakAfter }));
     expect((await style('.figure')).inside).toBe('avoid');
     expect((await style('.first-page')).after).toBe('page');
     expect((await style('.first-appendix')).before).toBe('page');

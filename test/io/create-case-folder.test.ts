@@ -5,7 +5,7 @@ import { createCaseFolder } from '../../src/io/create-case-folder.ts';
 import { tempFolder } from './io-fixtures.ts';
 
 describe('createCaseFolder', () => {
-  it('createCaseFolder makes case.yaml from the units\' template, photos/ and README.md', () => {
+  it("createCaseFolder makes case.yaml from the units' template, photos/ and README.md", () => {
     const dir = join(tempFolder(), 'INC-1');
     const made = createCaseFolder(dir, 'us');
     expect(made.created).toEqual([dir, join(dir, 'photos'), join(dir, 'case.yaml'), join(dir, 'README.md')]);
@@ -14,7 +14,7 @@ describe('createCaseFolder', () => {
     expect(readFileSync(join(dir, 'README.md'), 'utf8')).toMatch(/^# Case folder/);
   });
 
-  it('a new case file opens with the editor\'s schema comment: a relative path to the installed case schema', () => {
+  it("a new case file opens with the editor's schema comment: a relative path to the installed case schema", () => {
     const dir = join(tempFolder(), 'INC-S');
     createCaseFolder(dir, 'metric');
     const first = readFileSync(join(dir, 'case.yaml'), 'utf8').split('\n')[0];

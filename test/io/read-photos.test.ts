@@ -48,7 +48,7 @@ describe('readPhotos', () => {
     ]);
   });
 
-  it('a missing photo is a case error naming the photo\'s line in the case file', () => {
+  it("a missing photo is a case error naming the photo's line in the case file", () => {
     const dir = caseFolder();
     writeFileSync(join(dir, 'photos', 'key.png'), TINY_PNG);
     const run = () => readPhotos(join(dir, 'case.yaml'), TEXT, [{ path: 'photos/key.png' }, { path: 'photos/missing.jpg' }]);

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fileSafeId, MAX_ID_IN_NAME, reportBaseName } from '../../src/io/report-name.ts';
 
-describe('a report\'s file name from the case id', () => {
+describe("a report's file name from the case id", () => {
   it('reportBaseName is the id made safe, a dash, and the date', () => {
     expect(reportBaseName('DEMO-GR-0117', '2026-12-02')).toBe('DEMO-GR-0117-2026-12-02');
   });

@@ -71,7 +71,7 @@ describe('writeReport under file-system faults', () => {
     expect(second.folder).toMatch(/T-1-2026-12-01-2$/);
   });
 
-  it('hidden temporary folders of ended runs are removed; a running run\'s and the reports stay', () => {
+  it("hidden temporary folders of ended runs are removed; a running run's and the reports stay", () => {
     const dir = tempFolder();
     const reports = join(dir, 'reports');
     mkdirSync(join(reports, '.2026-11-30.tmp-999999999-abc123'), { recursive: true });
@@ -87,7 +87,7 @@ describe('writeReport under file-system faults', () => {
   });
 });
 
-describe('writeReport: the zip\'s entry names', () => {
+describe("writeReport: the zip's entry names", () => {
   it('a case file named with backslashes and ".." becomes a plain entry inside the zip', async () => {
     const dir = tempFolder();
     const { zip } = await writeReport(input(dir, '..\\..\\evil.yaml'));
@@ -95,7 +95,7 @@ describe('writeReport: the zip\'s entry names', () => {
     expect(names).toEqual(['MANIFEST.txt', 'evil.yaml', 'reports/T-1-2026-12-01/report.md']);
   });
 
-  it('a case file named MANIFEST.txt (in any case) cannot take the manifest\'s name', async () => {
+  it("a case file named MANIFEST.txt (in any case) cannot take the manifest's name", async () => {
     const dir = tempFolder();
     const { zip } = await writeReport(input(dir, 'manifest.TXT'));
     const z = await JSZip.loadAsync(readFileSync(zip));

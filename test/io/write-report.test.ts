@@ -20,7 +20,14 @@ function hashes(dir: string): Record<string, string> {
   return out;
 }
 
-function input(dir: string, files = [{ path: 'report.md', data: '# R\n' }, { path: 'figures/a.svg', data: '<svg/>' }], caseId = 'GR-17'): WriteReportInput {
+function input(
+  dir: string,
+  files = [
+    { path: 'report.md', data: '# R\n' },
+    { path: 'figures/a.svg', data: '<svg/>' },
+  ],
+  caseId = 'GR-17',
+): WriteReportInput {
   const caseFile = join(dir, 'case.yaml');
   writeFileSync(caseFile, 'case: {}\n');
   return { caseFile, caseText: 'case: {}\n', photos: [], files, caseId, date: '2026-12-01', ranAt: new Date('2026-12-01T10:20:30Z') };
@@ -69,7 +76,14 @@ describe('writeReport', () => {
   it('a write that fails half-way leaves no report folder, no zip and no temporary file', async () => {
     const dir = tempFolder();
     // "a" is written as a file, so "a/b" cannot be: the write fails after its first file.
-    await expect(writeReport(input(dir, [{ path: 'a', data: 'x' }, { path: 'a/b', data: 'y' }]))).rejects.toThrow(/ENOTDIR|EEXIST/);
+    await expect(
+      writeReport(
+        input(dir, [
+          { path: 'a', data: 'x' },
+          { path: 'a/b', data: 'y' },
+        ]),
+      ),
+    ).rejects.toThrow(/ENOTDIR|EEXIST/);
     expect(readdirSync(join(dir, 'reports'))).toEqual([]);
   });
 

@@ -26,13 +26,24 @@ const row = (id: string, asset: string | null, occurred: string | null, damage: 
 });
 
 describe('buildLog', () => {
-  it('orders an asset\'s incidents by case.occurred, untagged and undated last', () => {
-    const log = buildLog([row('C', 'P-1', '2026-05-01', 0.1), row('X', null, '2026-01-01', 0.1), row('A', 'P-1', '2026-01-10', 0.1), row('N', 'P-1', null, 0.1), row('B', 'P-1', '2026-03-01T10:00', 0.1)]);
+  it("orders an asset's incidents by case.occurred, untagged and undated last", () => {
+    const log = buildLog([
+      row('C', 'P-1', '2026-05-01', 0.1),
+      row('X', null, '2026-01-01', 0.1),
+      row('A', 'P-1', '2026-01-10', 0.1),
+      row('N', 'P-1', null, 0.1),
+      row('B', 'P-1', '2026-03-01T10:00', 0.1),
+    ]);
     expect(log.incidents.map((r) => r.id)).toEqual(['A', 'B', 'C', 'N', 'X']);
   });
 
   it('rolls up per asset: count, worst ratio, mean interval in days, the Miner sum', () => {
-    const log = buildLog([row('A', 'P-1', '2026-01-01', 0.1, { yield_ratio: 0.9 }), row('B', 'P-1', '2026-01-11', 0.25, { yield_ratio: 1.7 }), row('C', 'P-1', '2026-01-31', 0.05), row('D', 'Q-2', '2026-02-01', 0.5)]);
+    const log = buildLog([
+      row('A', 'P-1', '2026-01-01', 0.1, { yield_ratio: 0.9 }),
+      row('B', 'P-1', '2026-01-11', 0.25, { yield_ratio: 1.7 }),
+      row('C', 'P-1', '2026-01-31', 0.05),
+      row('D', 'Q-2', '2026-02-01', 0.5),
+    ]);
     const p = log.assets.find((a) => a.asset === 'P-1')!;
     expect(p.incidents).toBe(3);
     expect(p.worst_yield_ratio).toBe(1.7);
@@ -41,7 +52,7 @@ describe('buildLog', () => {
     expect(log.assets.find((a) => a.asset === 'Q-2')!.mean_interval_days).toBeNull();
   });
 
-  it('the Miner sum of each asset equals the sum of its incidents\' damages (a law)', () => {
+  it("the Miner sum of each asset equals the sum of its incidents' damages (a law)", () => {
     const asset = fc.constantFrom('P-1', 'Q-2', 'R-3');
     fc.assert(
       fc.property(fc.array(fc.tuple(asset, fc.double({ min: 0, max: 0.5, noNaN: true })), { minLength: 1, maxLength: 20 }), (items) => {

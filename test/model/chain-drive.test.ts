@@ -15,8 +15,22 @@ const station = (drive: Station['drive']): Station => ({
 const w = 30; // shaft speed, rad/s; motor at 120 rad/s
 
 describe('chainDrive: a drive as the chain sees it', () => {
-  it('reflects the motor through its ratio and takes the running torque from the curve at the motor\'s speed', () => {
-    const d = chainDrive(station({ speedRatio: 4, rotorParts: [1], torque: { kind: 'curve', points: [{ speed: 0, torque: 100 }, { speed: 150, torque: 0 }] } }), 0, w);
+  it("reflects the motor through its ratio and takes the running torque from the curve at the motor's speed", () => {
+    const d = chainDrive(
+      station({
+        speedRatio: 4,
+        rotorParts: [1],
+        torque: {
+          kind: 'curve',
+          points: [
+            { speed: 0, torque: 100 },
+            { speed: 150, torque: 0 },
+          ],
+        },
+      }),
+      0,
+      w,
+    );
     expect(d.rotorInertia).toBeCloseTo(0.2 * 16, 12);
     expect(d.runningTorque).toBeCloseTo(4 * (100 * (1 - 120 / 150)), 12);
     expect(torqueAt(d.line, 10)).toBeCloseTo(4 * (100 * (1 - 40 / 150)), 12);

@@ -48,7 +48,7 @@ describe('buildChain: the lumped torsional chain of a case', () => {
     expect(ch.nodes[1].inertia).toBeCloseTo(0.7, 12);
   });
 
-  it('with shaft inertia: the whole shaft\'s ρ·J_p·L is on the nodes, and the parts besides', () => {
+  it("with shaft inertia: the whole shaft's ρ·J_p·L is on the nodes, and the parts besides", () => {
     const ch = buildChain(c, model, { elements: 24, shaftInertia: true });
     const shaft = c.shaft.segments.reduce((s, seg) => s + rho * polarMoment(seg.diameter) * (seg.end - seg.start), 0);
     const total = ch.nodes.reduce((s, n) => s + n.inertia, 0);
@@ -63,7 +63,7 @@ describe('buildChain: the lumped torsional chain of a case', () => {
     }
   });
 
-  it('puts a segment\'s torque limiter on one element inside that segment', () => {
+  it("puts a segment's torque limiter on one element inside that segment", () => {
     const ch = buildChain(c, model, { elements: 24, shaftInertia: true });
     const devices = ch.elements.filter((e) => e.device);
     expect(devices.map((e) => e.side)).toEqual(['A']);

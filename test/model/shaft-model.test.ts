@@ -44,7 +44,7 @@ stations:
     ]);
   });
 
-  it('a stop at a shaft end leaves one side, and the stopped station\'s parts release nothing', () => {
+  it("a stop at a shaft end leaves one side, and the stopped station's parts release nothing", () => {
     const m = buildShaftModel(parseCase(text('left')));
     expect(m.sides.map((s) => s.side)).toEqual(['B']);
     expect(m.sides[0].stations.map((s) => s.name)).toEqual(['right']);

@@ -6,7 +6,7 @@ describe('inertia of parts', () => {
   it('discInertia of a solid disc equals ½·m·r² (Beer & Johnston, Vector Mechanics: Dynamics, table of mass moments; from memory, confident)', () => {
     fc.assert(
       fc.property(fc.double({ min: 0.01, max: 3, noNaN: true }), fc.double({ min: 0.001, max: 1, noNaN: true }), fc.double({ min: 1000, max: 9000, noNaN: true }), (D, t, rho) => {
-        const m = rho * t * (Math.PI * D ** 2) / 4;
+        const m = (rho * t * (Math.PI * D ** 2)) / 4;
         return Math.abs(discInertia(rho, t, D) / (0.5 * m * (D / 2) ** 2) - 1) < 1e-12;
       }),
     );

@@ -21,14 +21,20 @@ describe('shrink and press fits (Shigley 9th ed. Sec. 3-16 and 7-8)', () => {
   it('the general equation (3-56) reduces to the one-material form (3-57) with a bored shaft, for any geometry', () => {
     // Shigley Eq. 3-57: p = (E·δ/(2R³))·(r_o² − R²)(R² − r_i²)/(r_o² − r_i²), δ radial (from memory, verify).
     fc.assert(
-      fc.property(fc.double({ min: 0.02, max: 0.2, noNaN: true }), fc.double({ min: 1.2, max: 4, noNaN: true }), fc.double({ min: 0, max: 0.8, noNaN: true }), fc.double({ min: 1e-4, max: 1e-3, noNaN: true }), (d, outer, bore, strain) => {
-        const g = { seatDiameter: d, hubOuterDiameter: outer * d, shaftBore: bore * d, interference: strain * d };
-        const R = d / 2;
-        const ro = g.hubOuterDiameter / 2;
-        const ri = g.shaftBore / 2;
-        const closed = ((steel.elasticModulus * (g.interference / 2)) / (2 * R ** 3)) * (((ro ** 2 - R ** 2) * (R ** 2 - ri ** 2)) / (ro ** 2 - ri ** 2));
-        return rel(contactPressure(g, steel, steel), closed) < 1e-9;
-      }),
+      fc.property(
+        fc.double({ min: 0.02, max: 0.2, noNaN: true }),
+        fc.double({ min: 1.2, max: 4, noNaN: true }),
+        fc.double({ min: 0, max: 0.8, noNaN: true }),
+        fc.double({ min: 1e-4, max: 1e-3, noNaN: true }),
+        (d, outer, bore, strain) => {
+          const g = { seatDiameter: d, hubOuterDiameter: outer * d, shaftBore: bore * d, interference: strain * d };
+          const R = d / 2;
+          const ro = g.hubOuterDiameter / 2;
+          const ri = g.shaftBore / 2;
+          const closed = ((steel.elasticModulus * (g.interference / 2)) / (2 * R ** 3)) * (((ro ** 2 - R ** 2) * (R ** 2 - ri ** 2)) / (ro ** 2 - ri ** 2));
+          return rel(contactPressure(g, steel, steel), closed) < 1e-9;
+        },
+      ),
       { numRuns: 200 },
     );
   });

@@ -42,7 +42,9 @@ describe('key stresses (Shigley 9th ed. Sec. 7-7)', () => {
     fc.assert(
       fc.property(fc.double({ min: 1, max: 1e5, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }), (T, k) => {
         const a = keyShearStress(T, 0.05, 0.014, 0.06);
-        return Math.abs(keyShearStress(k * T, 0.05, 0.014, 0.06) / a / k - 1) < 1e-12 && Math.abs(keyBearingStress(T, 0.05, 0.009, k * 0.06) * k / keyBearingStress(T, 0.05, 0.009, 0.06) - 1) < 1e-12;
+        return (
+          Math.abs(keyShearStress(k * T, 0.05, 0.014, 0.06) / a / k - 1) < 1e-12 && Math.abs((keyBearingStress(T, 0.05, 0.009, k * 0.06) * k) / keyBearingStress(T, 0.05, 0.009, 0.06) - 1) < 1e-12
+        );
       }),
     );
   });

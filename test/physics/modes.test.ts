@@ -94,12 +94,15 @@ describe('chainModes: natural frequencies of a tridiagonal chain', () => {
         const x = 0.5 * (ref[0] + (ref[1] ?? 2 * ref[0]));
         if (countBelow(A, B, x) !== ref.filter((l) => l < x).length) return false;
         const base = chainModes(kd, ko, m, c.length);
-        const scaled = chainModes(kd.map((v) => v * a), ko.map((v) => v * a), m.map((v) => v * b), c.length);
+        const scaled = chainModes(
+          kd.map((v) => v * a),
+          ko.map((v) => v * a),
+          m.map((v) => v * b),
+          c.length,
+        );
         // Both solvers are accurate to rounding of the largest eigenvalue, so compare on that scale.
         const top = ref[ref.length - 1];
-        return base.every(
-          (mode, i) => Math.abs(scaled[i].omega ** 2 / (a / b) - mode.omega ** 2) < 1e-10 * top && Math.abs(mode.omega ** 2 - ref[i]) < 1e-10 * top,
-        );
+        return base.every((mode, i) => Math.abs(scaled[i].omega ** 2 / (a / b) - mode.omega ** 2) < 1e-10 * top && Math.abs(mode.omega ** 2 - ref[i]) < 1e-10 * top);
       }),
       { numRuns: 60 },
     );

@@ -2,7 +2,15 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { motorLine, outsidePiece, pieceOf, reflectLine, torqueAt } from '../../src/physics/motor-torque.ts';
 
-const curve = motorLine({ kind: 'curve', points: [{ speed: 0, torque: 580 }, { speed: 100, torque: 520 }, { speed: 150, torque: 290 }, { speed: 157, torque: 0 }] });
+const curve = motorLine({
+  kind: 'curve',
+  points: [
+    { speed: 0, torque: 580 },
+    { speed: 100, torque: 520 },
+    { speed: 150, torque: 290 },
+    { speed: 157, torque: 0 },
+  ],
+});
 
 describe('motor torque against speed', () => {
   it('is linear between the points and held beyond the ends', () => {
@@ -14,7 +22,13 @@ describe('motor torque against speed', () => {
   });
 
   it('passes through every point of the curve', () => {
-    for (const [w, t] of [[0, 580], [100, 520], [150, 290], [157, 0]]) expect(torqueAt(curve, w)).toBeCloseTo(t, 12);
+    for (const [w, t] of [
+      [0, 580],
+      [100, 520],
+      [150, 290],
+      [157, 0],
+    ])
+      expect(torqueAt(curve, w)).toBeCloseTo(t, 12);
   });
 
   it('reflected through a speed ratio, it delivers the same power at the shaft', () => {

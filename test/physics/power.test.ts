@@ -16,7 +16,12 @@ describe('torqueFromPower: T = P/ω (Shigley 9th ed. Sec. 3-12, H = Tω)', () =>
   });
 
   it('matches T[N·m] = 9549.3·P[kW]/n[rpm] for any power and speed (REFERENCE 1.1.9, 60 000/2π)', () => {
-    for (const [kw, n] of [[0.37, 2850], [22, 1475], [250, 990], [3, 40]]) {
+    for (const [kw, n] of [
+      [0.37, 2850],
+      [22, 1475],
+      [250, 990],
+      [3, 40],
+    ]) {
       expect(torqueFromPower(kw * 1e3, rpm(n)) / ((9549.2966 * kw) / n)).toBeCloseTo(1, 7);
     }
   });

@@ -12,7 +12,7 @@ const rpm = (n: number) => (n * 2 * Math.PI) / 60;
 const ep5: ReadBackSide = { balance: new PlasticBalance([piece(0.5, law(0.02, 0, 0.577 * 530e6))]), inertia: 0.98646, between: [0] };
 
 describe('reading a permanent twist back to the speed at the stop', () => {
-  it('permanentTwistAtSpeed gives EP5\'s 0.041193 rad at 300 rpm and nothing at 150 rpm', () => {
+  it("permanentTwistAtSpeed gives EP5's 0.041193 rad at 300 rpm and nothing at 150 rpm", () => {
     expect(Math.abs(permanentTwistAtSpeed([ep5], rpm(300)) / 0.041193 - 1)).toBeLessThan(0.005);
     expect(permanentTwistAtSpeed([ep5], rpm(150))).toBe(0);
   });

@@ -24,7 +24,7 @@ describe('belt slip by the capstan relation', () => {
     expect(tensionRatio(0.5123, Math.PI)).toBeCloseTo(5.0, 2);
   });
 
-  it('the slip torque of the reference\'s pulley example, from the tight side and from the installed tension', () => {
+  it("the slip torque of the reference's pulley example, from the tight side and from the installed tension", () => {
     // Shared REFERENCE.md 8 slip example (derived): D 400, d 100, C 800 mm → φ_d = 2.76436 rad;
     // μ 0.3, F1 = 2000 N → ratio 2.2917, F2 = 872.70 N, T = 56.37 N·m at the small pulley and
     // 225.46 N·m at the large; F_i = 1000 N → F1 = 1392.42, F2 = 607.58 N, T = 39.24 N·m.

@@ -12,7 +12,7 @@ const files = [
 const DATE = new Date('2026-12-01T10:20:30Z');
 
 describe('buildBundle', () => {
-  it('the zip holds every file and a MANIFEST.txt whose hashes are the files\' real SHA-256', async () => {
+  it("the zip holds every file and a MANIFEST.txt whose hashes are the files' real SHA-256", async () => {
     const zip = await JSZip.loadAsync(await buildBundle(files, DATE));
     const names = Object.keys(zip.files).sort();
     expect(names).toEqual(['MANIFEST.txt', 'case.yaml', 'photos/a b.png', 'reports/2026-12-01/report.md']);
@@ -33,9 +33,12 @@ describe('buildBundle', () => {
 
   it('manifest lists files sorted by path in the format sha256sum -c reads', () => {
     // SHA-256 of the empty string (FIPS 180-4 test vectors; from memory, confident).
-    expect(manifest([{ path: 'b', data: enc('') }, { path: 'a', data: enc('') }])).toBe(
-      'e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855  a\ne3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855  b\n',
-    );
+    expect(
+      manifest([
+        { path: 'b', data: enc('') },
+        { path: 'a', data: enc('') },
+      ]),
+    ).toBe('e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855  a\ne3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855  b\n');
   });
 
   it('buildBundle refuses a path that would leave the bundle', async () => {
@@ -56,15 +59,17 @@ describe('safeEntryPath(path) and distinctEntries(files)', () => {
     expect(safeEntryPath('..')).toBe('_');
   });
 
-  it('no file takes MANIFEST.txt\'s name or another\'s, compared without case', async () => {
+  it("no file takes MANIFEST.txt's name or another's, compared without case", async () => {
     const { distinctEntries } = await import('../../src/report/bundle.ts');
     const d = new Uint8Array();
-    expect(distinctEntries([{ path: 'a.jpg', data: d }, { path: 'A.JPG', data: d }, { path: 'MANIFEST.txt', data: d }, { path: 'README', data: d }, { path: 'readme', data: d }]).map((f) => f.path)).toEqual([
-      'a.jpg',
-      'A-2.JPG',
-      'MANIFEST-2.txt',
-      'README',
-      'readme-2',
-    ]);
+    expect(
+      distinctEntries([
+        { path: 'a.jpg', data: d },
+        { path: 'A.JPG', data: d },
+        { path: 'MANIFEST.txt', data: d },
+        { path: 'README', data: d },
+        { path: 'readme', data: d },
+      ]).map((f) => f.path),
+    ).toEqual(['a.jpg', 'A-2.JPG', 'MANIFEST-2.txt', 'README', 'readme-2']);
   });
 });

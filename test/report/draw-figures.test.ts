@@ -15,7 +15,7 @@ describe('drawFigures', () => {
     expect(new Set(names).size).toBe(names.length);
   });
 
-  it('drawFigures places each of a drawer\'s figures in its section and leaves out a drawer with nothing to show', () => {
+  it("drawFigures places each of a drawer's figures in its section and leaves out a drawer with nothing to show", () => {
     const one = { name: 'a', title: 'A', caption: 'a', svg: '<svg/>' };
     const registry: { section: string; draw: FigureDrawer }[] = [
       { section: 's1', draw: () => one },

@@ -13,9 +13,7 @@ const input: TemplateInput = {
 
 describe('fillTemplate', () => {
   it('fillTemplate puts fields and every section for {{sections}}, in order', () => {
-    expect(fillTemplate('# Report {{case.id}} of {{ run.date }}\n\n{{sections}}\n', 't.md', input)).toBe(
-      '# Report INC-1 of 2026-12-01\n\n## Summary\n\nS.\n\n## Method\n\nM.\n\n## Cautions\n\nC.\n',
-    );
+    expect(fillTemplate('# Report {{case.id}} of {{ run.date }}\n\n{{sections}}\n', 't.md', input)).toBe('# Report INC-1 of 2026-12-01\n\n## Summary\n\nS.\n\n## Method\n\nM.\n\n## Cautions\n\nC.\n');
   });
 
   it('{{section:ID}} places one section, and {{sections}} then holds only the others', () => {
@@ -23,9 +21,7 @@ describe('fillTemplate', () => {
   });
 
   it('a line holding only a comment is dropped whole, and an inline comment leaves its line', () => {
-    expect(fillTemplate('{{! a comment\n  over two lines }}\n# A {{! inline }}B\n  {{! indented }}  \nC {{section:summary}}', 't.md', input)).toBe(
-      '# A B\nC ## Summary\n\nS.\n\n## Cautions\n\nC.\n',
-    );
+    expect(fillTemplate('{{! a comment\n  over two lines }}\n# A {{! inline }}B\n  {{! indented }}  \nC {{section:summary}}', 't.md', input)).toBe('# A B\nC ## Summary\n\nS.\n\n## Cautions\n\nC.\n');
   });
 
   it('the cautions are appended when a template places neither them nor {{sections}}', () => {
@@ -36,7 +32,9 @@ describe('fillTemplate', () => {
   it('an unknown placeholder is refused with its line and column and the names that exist', () => {
     const run = () => fillTemplate('# Title\n\nBy {{case.author}} and {{section:nope}}\n', 'site.md', input);
     expect(run).toThrow(CaseError);
-    expect(run).toThrow(/^site\.md:3:4: unknown placeholder \{\{case\.author\}\}; give \{\{sections\}\}, \{\{section:ID\}\} or a field: case\.id, run\.date\nsite\.md:3:24: unknown section "nope"; give one of summary, method, cautions$/);
+    expect(run).toThrow(
+      /^site\.md:3:4: unknown placeholder \{\{case\.author\}\}; give \{\{sections\}\}, \{\{section:ID\}\} or a field: case\.id, run\.date\nsite\.md:3:24: unknown section "nope"; give one of summary, method, cautions$/,
+    );
   });
 
   it('an opening {{ without its closing }} is refused with its line', () => {
@@ -50,7 +48,13 @@ describe('fillTemplate', () => {
 });
 
 describe('fillTemplate: malformed templates and prototype names', () => {
-  const input: TemplateInput = { fields: { 'case.id': 'T-1' }, sections: [{ id: 'summary', markdown: '## Summary\n\nS.' }, { id: 'cautions', markdown: '## Cautions\n\nC.' }] };
+  const input: TemplateInput = {
+    fields: { 'case.id': 'T-1' },
+    sections: [
+      { id: 'summary', markdown: '## Summary\n\nS.' },
+      { id: 'cautions', markdown: '## Cautions\n\nC.' },
+    ],
+  };
 
   it('an unclosed comment is an error at its position, not a swallowed report', () => {
     expect(() => fillTemplate('# Title\n\n  {{! draft note\n{{sections}}\n', 'site.md', input)).toThrow(/^site\.md:3:3: a comment "\{\{!" without its closing "\}\}"/);

@@ -38,10 +38,10 @@ describe('renderHtml', () => {
   it('hostile text from the case file shows as the same text on the page', () => {
     const { document } = hostileHtml();
     const text = document.querySelector('main')!.textContent!;
-    expect(text).toContain("Hostile <script>alert(1)</script> title [click](javascript:alert(1)) **bold**");
+    expect(text).toContain('Hostile <script>alert(1)</script> title [click](javascript:alert(1)) **bold**');
     expect(text).toContain('<img src=x onerror=alert(1)>');
     expect(text).toContain('| pipe | table |');
-    expect(text).toContain('<script>document.title=\'pwned\'</script>');
+    expect(text).toContain("<script>document.title='pwned'</script>");
     expect(text).toContain('# not a heading - not a list 1. not a list');
     expect(text).toContain('<a href="javascript:alert(2)" onclick="alert(3)">x</a> &lt;b&gt; &amp; `code` _under_ ~~strike~~');
     expect(document.querySelector('title')!.textContent).toBe("<script>alert('id')</script> Hostile <script>alert(1)</script> title [click](javascript:alert(1)) **bold**");

@@ -49,36 +49,60 @@ describe('renderReport', () => {
     expect(titles.slice(first).every((t) => t.startsWith('Appendix'))).toBe(true);
   });
 
-  it('every number in the incident finding is the finding\'s, the results object\'s or the resize result\'s, shown in the case\'s units', () => {
+  it("every number in the incident finding is the finding's, the results object's or the resize result's, shown in the case's units", () => {
     for (const name of CASES) {
       const { results: r, md } = report(name);
       const u = r.case.units;
       const f = r.finding;
-      const expected = [
-        show(r.speed, 'speed', u, 4),
-        ...r.sides.map((s) => show(s.kineticEnergy, 'energy', u)),
-        sig(f.yieldRatio),
-        describePlasticPiece(f, u),
-      ];
+      const expected = [show(r.speed, 'speed', u, 4), ...r.sides.map((s) => show(s.kineticEnergy, 'energy', u)), sig(f.yieldRatio), describePlasticPiece(f, u)];
       const summary = section(md, FIRST);
       for (const e of expected) expect(summary, `${name}: ${e}`).toContain(e);
       // Conversely, every number in the summary comes from the finding, the energy method's side
       // figures (as a comparison), the incident's date, the machine's or the material's name.
-      const finding = [show(f.peakTorque, 'torque', u), show(f.elasticPeakTorque, 'torque', u), f.permanentTwist === undefined ? '' : show(f.permanentTwist, 'angle', u), sig((f.breakTime ?? 0) * 1000), `kt ${sig(f.piece.segment.kt)}`, ...f.measured.flatMap((m) => [show(m.measured, 'angle', u), show(m.predicted, 'angle', u), m.speedForMeasured === undefined ? '' : show(m.speedForMeasured, 'speed', u, 4)])];
+      const finding = [
+        show(f.peakTorque, 'torque', u),
+        show(f.elasticPeakTorque, 'torque', u),
+        f.permanentTwist === undefined ? '' : show(f.permanentTwist, 'angle', u),
+        sig((f.breakTime ?? 0) * 1000),
+        `kt ${sig(f.piece.segment.kt)}`,
+        ...f.measured.flatMap((m) => [show(m.measured, 'angle', u), show(m.predicted, 'angle', u), m.speedForMeasured === undefined ? '' : show(m.speedForMeasured, 'speed', u, 4)]),
+      ];
       const remedy = recommendedRemedy(report(name).data.resize);
       const comparison = [remedy?.action ?? '', remedy?.figure ?? '', remedy?.why ?? ''];
       const chance = f.chance ? [percent(f.chance.probability), String(f.chance.runs), String(f.chance.controlSamples ?? ''), ...f.chance.interval.map(percent)] : [];
-      const context = [f.basisReason, f.disposition, r.case.meta.occurred ?? '', r.case.meta.machine ?? '', r.case.meta.investigator ?? '', r.case.meta.title ?? '', r.case.observed.key ?? '', r.case.observed.hub ?? '', ...r.case.stations.map((s) => s.name), ...r.case.shaft.segments.map((s) => s.label ?? String(s.index + 1)), r.case.materials[f.piece.segment.material].name];
+      const context = [
+        f.basisReason,
+        f.disposition,
+        r.case.meta.occurred ?? '',
+        r.case.meta.machine ?? '',
+        r.case.meta.investigator ?? '',
+        r.case.meta.title ?? '',
+        r.case.observed.key ?? '',
+        r.case.observed.hub ?? '',
+        ...r.case.stations.map((s) => s.name),
+        ...r.case.shaft.segments.map((s) => s.label ?? String(s.index + 1)),
+        r.case.materials[f.piece.segment.material].name,
+      ];
       const allowed = new Set([...expected, ...finding, ...comparison, ...chance, ...context].flatMap((t) => t.match(/\d+(\.\d+)?/g) ?? []));
-      for (const n of summary.replace(/side [AB]/g, '').replace(/95 % interval/g, '').match(/\d+(\.\d+)?/g) ?? []) expect(allowed, `${name}: ${n} in the incident finding`).toContain(n);
+      for (const n of summary
+        .replace(/side [AB]/g, '')
+        .replace(/95 % interval/g, '')
+        .match(/\d+(\.\d+)?/g) ?? [])
+        expect(allowed, `${name}: ${n} in the incident finding`).toContain(n);
     }
   });
 
   it('the incident finding says what happened, then the one finding line, what was observed, the disposition and the remedy, each linked to its evidence', () => {
     const box = (name: string) => section(report(name).md, FIRST);
     const head = /^\n## Incident finding\n\n\*\*What happened\.\*\* .* stopped suddenly at .* while the shaft turned at .*\n\n/;
-    expect(box('sample')).toMatch(new RegExp(`${head.source}> \\*\\*Finding: YIELDED THROUGH THE SECTION \\(dynamic model\\): .* capped at .* permanent twist of .*\\*\\* \\(\\[the evidence\\]\\(#results-of-the-governing-model\\)\\)`));
-    expect(box('sample')).toMatch(/\*\*Observed, against the model\*\* .*\n\n- Permanent twist drive sheave – rotor: measured 4°, the model gives 8\.9° at the recorded 420 rpm: less than the recorded speed explains; a stop from 296\.1 rpm would leave it\.\n- Fracture: none found; agrees with the model\./);
+    expect(box('sample')).toMatch(
+      new RegExp(
+        `${head.source}> \\*\\*Finding: YIELDED THROUGH THE SECTION \\(dynamic model\\): .* capped at .* permanent twist of .*\\*\\* \\(\\[the evidence\\]\\(#results-of-the-governing-model\\)\\)`,
+      ),
+    );
+    expect(box('sample')).toMatch(
+      /\*\*Observed, against the model\*\* .*\n\n- Permanent twist drive sheave – rotor: measured 4°, the model gives 8\.9° at the recorded 420 rpm: less than the recorded speed explains; a stop from 296\.1 rpm would leave it\.\n- Fracture: none found; agrees with the model\./,
+    );
     expect(box('sample')).toMatch(/\*\*Disposition: REPLACE THE SHAFT\.\*\* Not fit to return/);
     // The remedy is resize's pick (none for the granulator: every option alone has a flag), with its figure where there is one.
     expect(report('sample').data.resize.recommended).toBeUndefined();
@@ -87,10 +111,14 @@ describe('renderReport', () => {
     expect(picked.length).toBeGreaterThan(0);
     for (const n of picked) {
       const z = report(n).data.resize;
-      expect(box(n)).toMatch(/\*\*Recommended remedy:\*\* .*Key figure: repeat-incident stress \/ shear yield [\d.]+ against the [\d.]+ allowed\. Why this one: .*\(\[what goes back in\]\(#recommendations-what-goes-back-in\)\)/);
+      expect(box(n)).toMatch(
+        /\*\*Recommended remedy:\*\* .*Key figure: repeat-incident stress \/ shear yield [\d.]+ against the [\d.]+ allowed\. Why this one: .*\(\[what goes back in\]\(#recommendations-what-goes-back-in\)\)/,
+      );
       expect(box(n)).toContain(escapeMarkdown(z.recommended!.reason.replace(/\.$/, '')));
     }
-    expect(box('sample')).toMatch(/### Inspect at the critical location: "sheave seat", side A .*\n\n- ☐ Crack test of the keyseat under "drive sheave" and the fillets at the ends of "sheave seat" \(kt 2\.2\): magnetic particle/);
+    expect(box('sample')).toMatch(
+      /### Inspect at the critical location: "sheave seat", side A .*\n\n- ☐ Crack test of the keyseat under "drive sheave" and the fillets at the ends of "sheave seat" \(kt 2\.2\): magnetic particle/,
+    );
     expect(box('sample')).toMatch(/### Before it runs again .*\n\n- ☐ The shaft is replaced/);
     expect(box('edger-arbor-two-sides.yaml')).toMatch(/> \*\*Finding: YIELDED THROUGH THE SECTION \(energy method\): /);
     expect(box('elastic-fan.yaml')).toMatch(/> \*\*Finding: ELASTIC \(energy method\): .* no yield is predicted\.\*\*/);
@@ -107,7 +135,7 @@ describe('renderReport', () => {
     }
   });
 
-  it('with tolerances the summary gives the chance of yield from the finding\'s own model', () => {
+  it("with tolerances the summary gives the chance of yield from the finding's own model", () => {
     const { md, results } = report('screw-conveyor-jam-us.yaml');
     expect(results.finding.basis).toBe('dynamic model');
     expect(results.finding.chance!.model).toBe('dynamic model');
@@ -115,7 +143,7 @@ describe('renderReport', () => {
     expect(section(md, FIRST)).toContain(`runs of the dynamic model`);
   });
 
-  it('the findings are one section: the models\' numbers, past yield, the measured twist read back and the fracture reading; no verdict of its own', () => {
+  it("the findings are one section: the models' numbers, past yield, the measured twist read back and the fracture reading; no verdict of its own", () => {
     const { md, results } = report('exhaust-fan-seized-impeller.yaml');
     const findings = section(md, 'Findings');
     expect(md.match(/\n## Findings\n/g)).toHaveLength(1);
@@ -149,7 +177,9 @@ describe('renderReport', () => {
     const { md, results } = report('exhaust-fan-seized-impeller.yaml');
     expect(results.uncertainty!.observed).toHaveLength(1);
     // The twist measured between the bearings is zero and that shaft never yields: it cannot bound the speed.
-    expect(section(md, HOW_SURE)).toContain('Twist between "drive-end bearing" and "non-drive bearing": none was measured, and the shaft between these stations does not yield at any speed, so the measurement does not bound the speed.');
+    expect(section(md, HOW_SURE)).toContain(
+      'Twist between "drive-end bearing" and "non-drive bearing": none was measured, and the shaft between these stations does not yield at any speed, so the measurement does not bound the speed.',
+    );
   });
 
   it('the recommendations carry what goes back in from the resize result given, computing nothing again', () => {
@@ -166,7 +196,18 @@ describe('renderReport', () => {
 
   it('each figure is linked once, in the section the registry names, numbered in the order they appear', () => {
     const { md, figures } = report('two-sided-pump.yaml');
-    expect(figures.map((f) => f.figure.name)).toEqual(['shaft-schematic', 'energy-share', 'stress-along-shaft', 'stress-vs-speed', 'dynamic-torque', 'dynamic-speeds', 'dynamic-modes', 'torque-twist', 'resize-yield-ratio-vs-diameter', 'resize-peak-torque-vs-limiter']);
+    expect(figures.map((f) => f.figure.name)).toEqual([
+      'shaft-schematic',
+      'energy-share',
+      'stress-along-shaft',
+      'stress-vs-speed',
+      'dynamic-torque',
+      'dynamic-speeds',
+      'dynamic-modes',
+      'torque-twist',
+      'resize-yield-ratio-vs-diameter',
+      'resize-peak-torque-vs-limiter',
+    ]);
     for (const f of figures) {
       const title = REPORT_SECTIONS.find((s) => s.id === f.section)!.title;
       expect(section(md, title)).toMatch(new RegExp(`!\\[Figure \\d+: ${f.figure.title.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}\\.`));
@@ -208,11 +249,23 @@ describe('renderReport', () => {
     const sources = section(report('sample').md, 'Appendix: materials and sources');
     // Each source named once, what was entered from memory said once (the library keeps its per-value flags).
     expect(sources.match(/from memory/gi)).toHaveLength(1);
-    expect(sources).toContain('AISI 1045 steel, cold drawn (aisi-1045-cd): strengths: Shigley 9th ed. Table A-20, estimated ASTM minimum; elastic constants (E, G, Poisson\'s ratio) and density: Shigley 9th ed. Table A-5. (†)');
-    for (const s of ['Beer & Johnston, Mechanics of Materials, Sec. 3.9–3.11', 'Dieter, Mechanical Metallurgy, 3rd ed., Sec. 8-3', 'ASM Handbook Vol. 11', 'Shigley 9th ed., Sec. 7-7', 'T = P/ω', 'mulberry32', 'Box & Muller', 'Hyndman & Fan']) expect(sources).toContain(s);
+    expect(sources).toContain(
+      "AISI 1045 steel, cold drawn (aisi-1045-cd): strengths: Shigley 9th ed. Table A-20, estimated ASTM minimum; elastic constants (E, G, Poisson's ratio) and density: Shigley 9th ed. Table A-5. (†)",
+    );
+    for (const s of [
+      'Beer & Johnston, Mechanics of Materials, Sec. 3.9–3.11',
+      'Dieter, Mechanical Metallurgy, 3rd ed., Sec. 8-3',
+      'ASM Handbook Vol. 11',
+      'Shigley 9th ed., Sec. 7-7',
+      'T = P/ω',
+      'mulberry32',
+      'Box & Muller',
+      'Hyndman & Fan',
+    ])
+      expect(sources).toContain(s);
   });
 
-  it('the method lists the engine\'s warnings and the assumptions past yield', () => {
+  it("the method lists the engine's warnings and the assumptions past yield", () => {
     const { md, results } = report('two-sided-pump.yaml');
     expect(results.warnings.length).toBeGreaterThan(0);
     const method = section(md, 'Appendix: method and assumptions');

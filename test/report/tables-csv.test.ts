@@ -16,19 +16,19 @@ function readCsv(file: string): string[][] {
   for (let i = 0; i < csv.length; i++) {
     const c = csv[i];
     if (quoted) {
-      if (c === '"' && csv[i + 1] === '"') (field += '"'), i++;
+      if (c === '"' && csv[i + 1] === '"') ((field += '"'), i++);
       else if (c === '"') quoted = false;
       else field += c;
     } else if (c === '"') quoted = true;
-    else if (c === ',') row.push(field), (field = '');
-    else if (c === '\n') row.push(field), rows.push(row), (row = []), (field = '');
+    else if (c === ',') (row.push(field), (field = ''));
+    else if (c === '\n') (row.push(field), rows.push(row), (row = []), (field = ''));
     else field += c;
   }
   return rows.filter((r) => r.length > 1 || r[0] !== '');
 }
 
 describe('report tables as CSV', () => {
-  it('the pieces CSV holds every piece\'s stress at full precision, in the case\'s units', () => {
+  it("the pieces CSV holds every piece's stress at full precision, in the case's units", () => {
     const r = fixture('two-sided-pump.yaml').results;
     const csv = reportTablesCsv(r).find((t) => t.name === 'pieces')!.csv;
     const [header, ...rows] = readCsv(csv);
@@ -67,13 +67,29 @@ describe('report tables as CSV', () => {
     expect(guardCell('@SUM')).toBe("'@SUM");
     expect(guardCell('plain - text')).toBe('plain - text');
     expect(guardCell(-2.5)).toBe(-2.5);
-    const t: ReportTable = { name: 't', title: 'T', columns: [{ label: 'who' }, { label: 'n', unit: 'mm' }], rows: [['=cmd|x', -1.25], ['a, "b"\nc', null]] };
-    expect(readCsv(tableToCsv(t))).toEqual([['who', 'n (mm)'], ["'=cmd|x", '-1.25'], ['a, "b"\nc', '']]);
+    const t: ReportTable = {
+      name: 't',
+      title: 'T',
+      columns: [{ label: 'who' }, { label: 'n', unit: 'mm' }],
+      rows: [
+        ['=cmd|x', -1.25],
+        ['a, "b"\nc', null],
+      ],
+    };
+    expect(readCsv(tableToCsv(t))).toEqual([
+      ['who', 'n (mm)'],
+      ["'=cmd|x", '-1.25'],
+      ['a, "b"\nc', ''],
+    ]);
   });
 
   it('numbers are written at 15 significant digits, without the noise of binary arithmetic, in every table', () => {
     const t: ReportTable = { name: 't', title: 'T', columns: [{ label: 'x' }], rows: [[0.1 + 0.2], [2.9999999999999996], [1e-20 / 3], [-123456789.123456789]] };
-    expect(readCsv(tableToCsv(t)).slice(1).map((r) => r[0])).toEqual(['0.3', '3', '3.33333333333333e-21', '-123456789.123457']);
+    expect(
+      readCsv(tableToCsv(t))
+        .slice(1)
+        .map((r) => r[0]),
+    ).toEqual(['0.3', '3', '3.33333333333333e-21', '-123456789.123457']);
     for (const name of ['sample', 'screw-conveyor-jam-us.yaml', 'two-sided-pump.yaml']) {
       for (const table of reportTablesCsv(fixture(name).results)) {
         for (const cell of readCsv(table.csv).slice(1).flat()) {
@@ -83,8 +99,16 @@ describe('report tables as CSV', () => {
     }
   });
 
-  it('markdownTable rounds numbers to the column\'s significant figures and escapes text', () => {
-    const t: ReportTable = { name: 't', title: 'T', columns: [{ label: 'a|b' }, { label: 'x', unit: 'mm', digits: 4 }, { label: 'y' }], rows: [['<b>|</b>', 1234.56, 0.0123456], [null, 2, 3]] };
+  it("markdownTable rounds numbers to the column's significant figures and escapes text", () => {
+    const t: ReportTable = {
+      name: 't',
+      title: 'T',
+      columns: [{ label: 'a|b' }, { label: 'x', unit: 'mm', digits: 4 }, { label: 'y' }],
+      rows: [
+        ['<b>|</b>', 1234.56, 0.0123456],
+        [null, 2, 3],
+      ],
+    };
     expect(markdownTable(t)).toBe('| a\\|b | x (mm) | y |\n| :--- | ---: | ---: |\n| \\<b>\\|\\</b> | 1235 | 0.0123 |\n| — | 2 | 3 |');
   });
 });

@@ -3,7 +3,18 @@ import { findMaterial } from '../../src/materials/library.ts';
 import { withDiameters, withShaftMaterial } from '../../src/resize/change-case.ts';
 import { caseOf } from '../helpers/layout.ts';
 
-const c = caseOf({ rpm: 300, segments: [[200, 60, 30], [300, 50, 0]], stations: [['jam', 0, 0], ['disc', 500, 2]], stop: 'jam' });
+const c = caseOf({
+  rpm: 300,
+  segments: [
+    [200, 60, 30],
+    [300, 50, 0],
+  ],
+  stations: [
+    ['jam', 0, 0],
+    ['disc', 500, 2],
+  ],
+  stop: 'jam',
+});
 
 describe('changed copies of a case', () => {
   it('withDiameters keeps each bore ratio and leaves the other segments and the input alone', () => {
@@ -15,7 +26,7 @@ describe('changed copies of a case', () => {
     expect(JSON.stringify(c)).toBe(before);
   });
 
-  it('withShaftMaterial puts the material in every segment and in the case\'s materials', () => {
+  it("withShaftMaterial puts the material in every segment and in the case's materials", () => {
     const m = findMaterial('al-7075-t6')!;
     const d = withShaftMaterial(c, m);
     expect(d.shaft.segments.every((s) => s.material === 'al-7075-t6')).toBe(true);

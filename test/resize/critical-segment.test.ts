@@ -6,7 +6,18 @@ import { othersYieldRatio, segmentYieldRatio } from '../../src/resize/side-ratio
 import { rel, run, type Layout } from '../helpers/layout.ts';
 
 // A short notched coupling end on a long plain shaft: resizing the notched piece alone can work.
-const fits: Layout = { rpm: 40, segments: [[100, 60, 0, 1.6], [700, 60, 0]], stations: [['drive', 0, 30], ['jam', 800, 0]], stop: 'jam' };
+const fits: Layout = {
+  rpm: 40,
+  segments: [
+    [100, 60, 0, 1.6],
+    [700, 60, 0],
+  ],
+  stations: [
+    ['drive', 0, 30],
+    ['jam', 800, 0],
+  ],
+  stop: 'jam',
+};
 
 describe('resize the critical segment only', () => {
   it('finds the smallest diameter at which the segment reaches 1/N with the others still within it', () => {
@@ -25,7 +36,18 @@ describe('resize the critical segment only', () => {
   });
 
   it('says no size works when the rest of the side is then past the factor', () => {
-    const { c, r } = run({ rpm: 420, segments: [[120, 55, 0, 2.2], [640, 65, 0]], stations: [['sheave', 60, 8], ['rotor', 760, 0]], stop: 'rotor' });
+    const { c, r } = run({
+      rpm: 420,
+      segments: [
+        [120, 55, 0, 2.2],
+        [640, 65, 0],
+      ],
+      stations: [
+        ['sheave', 60, 8],
+        ['rotor', 760, 0],
+      ],
+      stop: 'rotor',
+    });
     const o = criticalSegment(c, r, 1.5);
     expect(o.verdict).toBe('others-critical');
     expect(o.diameter).toBeUndefined();
@@ -39,7 +61,7 @@ describe('resize the critical segment only', () => {
     expect(o.diameter!).toBeLessThan(0.06);
   });
 
-  it('the sweep for the figure: the segment\'s own yield ratio falls as it grows, the side\'s never falls below the others\'', () => {
+  it("the sweep for the figure: the segment's own yield ratio falls as it grows, the side's never falls below the others'", () => {
     const { c, r } = run(fits);
     const o = criticalSegment(c, r, 1.5);
     for (let i = 1; i < o.sweep.length; i++) {

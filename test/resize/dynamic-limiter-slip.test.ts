@@ -11,8 +11,8 @@ import { withFinding } from '../../src/finding/investigation.ts';
 
 const sample = (f: string) => parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8'));
 
-describe('a torque limiter\'s slip through the dynamic model, where the verdict stands on it', () => {
-  it('the granulator\'s limiter slip energy and angle are those of a slip element in an independent rerun of the changed case', () => {
+describe("a torque limiter's slip through the dynamic model, where the verdict stands on it", () => {
+  it("the granulator's limiter slip energy and angle are those of a slip element in an independent rerun of the changed case", () => {
     const c = sample('granulator-tramp-metal.yaml');
     const r = withFinding(analyseCase(c));
     expect(r.verdictBasis).toBe('dynamic model');
@@ -43,7 +43,7 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
     expect(JSON.stringify(z.limiter.slip.method)).toMatch(/dynamic model/);
   });
 
-  it('the roll line\'s existing limiter is taken as the limiter\'s place and set to the option\'s setting', () => {
+  it("the roll line's existing limiter is taken as the limiter's place and set to the option's setting", () => {
     const c = sample('roll-line-limiter-two-sides.yaml');
     const r = withFinding(analyseCase(c));
     const z = resizeCase(c, r);
@@ -54,9 +54,20 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
     expect(element.slipTorque).toBe(z.limiter.max);
   });
 
-  it('with one mass and a short stop ramp, the slip energy and the energy left account for the side\'s energy within the damping losses', () => {
+  it("with one mass and a short stop ramp, the slip energy and the energy left account for the side's energy within the damping losses", () => {
     // One disc (J = 1 kg·m², 50 rad/s, 1250 J) on a 40 mm shaft; a 0.1 ms stop ramp puts the verdict on the dynamic model.
-    const text = caseText({ rpm: 1, segments: [[100, 40, 0], [400, 40, 0]], stations: [['disc', 0, 1], ['jam', 500, 0]], stop: 'jam' })
+    const text = caseText({
+      rpm: 1,
+      segments: [
+        [100, 40, 0],
+        [400, 40, 0],
+      ],
+      stations: [
+        ['disc', 0, 1],
+        ['jam', 500, 0],
+      ],
+      stop: 'jam',
+    })
       .replace('speed: 1 rpm', 'speed: 50 rad/s')
       .replace('stop: { at: jam }', 'stop: { at: jam, duration: 0.1 ms }');
     const r = withFinding(analyseCase(parseCase(text)));
@@ -77,7 +88,18 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
   });
 
   it('keeps the energy method and says so where the shaft beside the limiter holds a shear pin', () => {
-    const text = caseText({ rpm: 300, segments: [[100, 40, 0], [500, 45, 0]], stations: [['disc', 100, 1], ['jam', 600, 0]], stop: 'jam' })
+    const text = caseText({
+      rpm: 300,
+      segments: [
+        [100, 40, 0],
+        [500, 45, 0],
+      ],
+      stations: [
+        ['disc', 100, 1],
+        ['jam', 600, 0],
+      ],
+      stop: 'jam',
+    })
       .replace('stop: { at: jam }', 'stop: { at: jam, duration: 1 ms }')
       .replace('diameter: 45 mm }', 'diameter: 45 mm, shear_torque: 2 kN*m }');
     const r = withFinding(analyseCase(parseCase(text)));
@@ -87,7 +109,15 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
   });
 
   it('with the station inside a segment and the stop inside the same segment, models the limiter between the two', () => {
-    const text = caseText({ rpm: 300, segments: [[600, 40, 0]], stations: [['disc', 100, 1], ['jam', 500, 0]], stop: 'jam' }).replace('stop: { at: jam }', 'stop: { at: jam, duration: 1 ms }');
+    const text = caseText({
+      rpm: 300,
+      segments: [[600, 40, 0]],
+      stations: [
+        ['disc', 100, 1],
+        ['jam', 500, 0],
+      ],
+      stop: 'jam',
+    }).replace('stop: { at: jam }', 'stop: { at: jam, duration: 1 ms }');
     const r = withFinding(analyseCase(parseCase(text)));
     const s = limiterSlip(r, { station: 'disc', side: 'A' }, 500);
     expect(s.slipMethod).toBe('dynamic model');
@@ -95,7 +125,7 @@ describe('a torque limiter\'s slip through the dynamic model, where the verdict 
   });
 });
 
-describe('the granulator\'s limiter rerun: the peak between the limiter and the stop', () => {
+describe("the granulator's limiter rerun: the peak between the limiter and the stop", () => {
   const c = sample('granulator-tramp-metal.yaml');
   const setting = resizeCase(c, withFinding(analyseCase(c))).limiter.max;
   // The limiter goes into the sheave seat beside the drive sheave (60 to 120 mm, see above); the run
@@ -120,7 +150,7 @@ describe('the granulator\'s limiter rerun: the peak between the limiter and the 
     expect(Math.abs(d - b)).toBeLessThanOrEqual(Math.abs(b - a));
   });
 
-  it('with the stop instantaneous it is the stop\'s stress wave on top of the running torque, not the limiter\'s setting, and the option says so', () => {
+  it("with the stop instantaneous it is the stop's stress wave on top of the running torque, not the limiter's setting, and the option says so", () => {
     const z = resizeCase(c, withFinding(analyseCase(c)));
     const s = z.limiter.slip;
     // Bounds (derived here): the wave itself, T_run + ω·J_p·√(Gρ), with a fifth off for the model's

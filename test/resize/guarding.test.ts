@@ -6,10 +6,13 @@ const rpm = (n: number) => (n * 2 * Math.PI) / 60;
 type Machine = Pick<Case, 'meta' | 'stations'>;
 const part = (name: string, ratedSpeed?: number) => ({ name, ratedSpeed }) as Case['stations'][number]['parts'][number];
 const machine = (notes: string, parts: ReturnType<typeof part>[] = []): Machine => ({ meta: { id: 'X', notes }, stations: [{ name: 'arbor', at: 0, parts }] });
-const text = (m: Machine, wheels: Parameters<typeof guardingRecommendations>[1] = []) => guardingRecommendations(m, wheels).map((g) => `${g.topic}: ${g.text}`).join('\n');
+const text = (m: Machine, wheels: Parameters<typeof guardingRecommendations>[1] = []) =>
+  guardingRecommendations(m, wheels)
+    .map((g) => `${g.topic}: ${g.text}`)
+    .join('\n');
 
 describe('the guarding recommendations', () => {
-  it('always cover guards, the jam\'s cause under lockout, the restart and the codes, in the trade\'s words', () => {
+  it("always cover guards, the jam's cause under lockout, the restart and the codes, in the trade's words", () => {
     const t = text(machine('A lump of set cement wedged the flight.'));
     expect(t).toMatch(/guard over exposed rotating parts .* before the machine is restarted/);
     expect(t).toMatch(/Find and deal with what jammed the machine .* locked out and tagged out/);
@@ -35,7 +38,7 @@ describe('the guarding recommendations', () => {
     expect(text(machine('jam', [part('saw blade')]))).toMatch(/stopped violently is taken off and inspected .* ring-tested where that is the practice .* never run above the speed marked on it/);
   });
 
-  it('checks each marked wheel\'s incident speed against its marking', () => {
+  it("checks each marked wheel's incident speed against its marking", () => {
     const m = machine('jam', [part('saw', rpm(4400))]);
     const [over] = guardingRecommendations(m, [{ station: 'arbor', part: 'saw', speed: rpm(4800), ratedSpeed: rpm(4400), over: true }]).filter((g) => g.topic.startsWith('Marked speed'));
     expect(over.text).toMatch(/ran at 4800 rpm at the incident, above the 4400 rpm marked on it\. Scrap it/);

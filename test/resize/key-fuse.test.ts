@@ -6,8 +6,14 @@ import { rel, run, type Layout } from '../helpers/layout.ts';
 const key = (k: string, drive = '{ running_torque: 500 N*m }') => `    drive: ${drive}\n    key: ${k}`;
 const layout = (k: string): Layout => ({
   rpm: 200,
-  segments: [[100, 40, 0], [400, 50, 0]],
-  stations: [['pulley', 50, 3, key(k)], ['jam', 500, 0]],
+  segments: [
+    [100, 40, 0],
+    [400, 50, 0],
+  ],
+  stations: [
+    ['pulley', 50, 3, key(k)],
+    ['jam', 500, 0],
+  ],
   stop: 'jam',
 });
 const fusesOf = (l: Layout, limiter?: { station: string; setting: number }) => {
@@ -29,7 +35,7 @@ describe('the key as a fuse', () => {
     expect(k.atRunning!.factor).toBeCloseTo(Math.min(530e6 / Math.sqrt(3) / 41.667e6, 530e6 / 125e6), 3);
   });
 
-  it('under the incident torque the key carries its side\'s peak torque: τ = 2T/(d·w·l) (Shigley 9th ed. Sec. 7-7)', () => {
+  it("under the incident torque the key carries its side's peak torque: τ = 2T/(d·w·l) (Shigley 9th ed. Sec. 7-7)", () => {
     const { r, fuses } = fusesOf(layout('{ width: 12 mm, height: 8 mm, length: 50 mm, material: aisi-1045-cd }'));
     const T = r.sides[0].peakTorque;
     expect(fuses[0].incident.torque).toBe(T);
@@ -48,16 +54,23 @@ describe('the key as a fuse', () => {
     expect(full.shearsBeforeShaftYields).toBe(false);
   });
 
-  it('under the limiter\'s setting the key sees the setting, when it is below the incident torque', () => {
+  it("under the limiter's setting the key sees the setting, when it is below the incident torque", () => {
     const { fuses } = fusesOf(layout('{ width: 12 mm, height: 8 mm, length: 50 mm, material: aisi-1045-cd }'), { station: 'pulley', setting: 400 });
     expect(fuses[0].atLimiter!.torque).toBe(400);
   });
 
-  it('a key at the stop takes both sides\' peak torques together', () => {
+  it("a key at the stop takes both sides' peak torques together", () => {
     const l: Layout = {
       rpm: 200,
-      segments: [[300, 50, 0], [300, 50, 0]],
-      stations: [['a', 0, 2], ['jam', 300, 0, '    key: { width: 14 mm, height: 9 mm, length: 60 mm, material: aisi-1045-cd }'], ['b', 600, 1]],
+      segments: [
+        [300, 50, 0],
+        [300, 50, 0],
+      ],
+      stations: [
+        ['a', 0, 2],
+        ['jam', 300, 0, '    key: { width: 14 mm, height: 9 mm, length: 60 mm, material: aisi-1045-cd }'],
+        ['b', 600, 1],
+      ],
       stop: 'jam',
     };
     const { r, fuses } = fusesOf(l);

@@ -6,7 +6,18 @@ import { withShaftMaterial } from '../../src/resize/change-case.ts';
 import { otherMaterials } from '../../src/resize/other-materials.ts';
 import { caseOf, rel } from '../helpers/layout.ts';
 
-const c = caseOf({ rpm: 40, segments: [[100, 62, 0, 1.4], [660, 62, 0]], stations: [['drive', 0, 30], ['jam', 760, 0]], stop: 'jam' });
+const c = caseOf({
+  rpm: 40,
+  segments: [
+    [100, 62, 0, 1.4],
+    [660, 62, 0],
+  ],
+  stations: [
+    ['drive', 0, 30],
+    ['jam', 760, 0],
+  ],
+  stop: 'jam',
+});
 
 describe('another material for the same geometry', () => {
   it('offers every library shaft material but the present one and the brittle ones, best first', () => {
@@ -19,7 +30,7 @@ describe('another material for the same geometry', () => {
     for (const m of list) expect(m.keepsFactor).toBe(m.yieldRatio <= 1 / 1.5);
   });
 
-  it('each yield ratio is the rerun\'s, and the peak torque scales as √G (T = √(2E/C), C ∝ 1/G)', () => {
+  it("each yield ratio is the rerun's, and the peak torque scales as √G (T = √(2E/C), C ∝ 1/G)", () => {
     const present = analyseCase(c);
     for (const m of otherMaterials(c, 1.5)) {
       expect(m.yieldRatio).toBe(m.rerun.yieldRatio);

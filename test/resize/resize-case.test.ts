@@ -28,7 +28,7 @@ const resized = (f: string) => {
 };
 
 describe('resizeCase on every sample case', () => {
-  it.each(samples)('%s: every option is there, and the scaled side\'s rerun confirms 1/N', (f) => {
+  it.each(samples)("%s: every option is there, and the scaled side's rerun confirms 1/N", (f) => {
     const { r, z } = resized(f);
     expect(z.designFactor).toBe(1.5);
     // The law s = yield_ratio·N holds for shaft alone; a flexible coupling's s comes by bisection.
@@ -52,7 +52,7 @@ describe('resizeCase on every sample case', () => {
     expect(edger.limiter.min).toBeUndefined();
   });
 
-  it('--factor overrides the case\'s design factor; a factor below 1 is a bug to call with', () => {
+  it("--factor overrides the case's design factor; a factor below 1 is a bug to call with", () => {
     const { c, r } = resized('screw-conveyor-jam-us.yaml');
     const z = resizeCase(c, r, { factor: 2 });
     expect(z.designFactor).toBe(2);

@@ -5,7 +5,18 @@ import { caseOf, rel } from '../helpers/layout.ts';
 
 const tauY = 530e6 / Math.sqrt(3); // 1045 CD (Shigley 9th ed. Table A-20), distortion energy (Sec. 5-5)
 const c = (drive?: string) =>
-  caseOf({ rpm: 100, segments: [[100, 40, 0, 2], [400, 50, 0]], stations: [['drive', 0, 2, drive && `    drive: ${drive}`], ['jam', 500, 0]], stop: 'jam' });
+  caseOf({
+    rpm: 100,
+    segments: [
+      [100, 40, 0, 2],
+      [400, 50, 0],
+    ],
+    stations: [
+      ['drive', 0, 2, drive && `    drive: ${drive}`],
+      ['jam', 500, 0],
+    ],
+    stop: 'jam',
+  });
 
 describe('the normal running check', () => {
   it('static: shear yield over the nominal stress 16T/(πd³) at the smallest section; with kt: divided by kt', () => {

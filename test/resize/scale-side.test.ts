@@ -8,13 +8,21 @@ import { rel, run, type Layout } from '../helpers/layout.ts';
 
 const stepped: Layout = {
   rpm: 420,
-  segments: [[120, 55, 0, 2.2], [160, 65, 0], [60, 80, 30, 1.4], [420, 90, 0]],
-  stations: [['sheave', 60, 8], ['rotor', 760, 0]],
+  segments: [
+    [120, 55, 0, 2.2],
+    [160, 65, 0],
+    [60, 80, 30, 1.4],
+    [420, 90, 0],
+  ],
+  stations: [
+    ['sheave', 60, 8],
+    ['rotor', 760, 0],
+  ],
   stop: 'rotor',
 };
 
 describe('scale the side: every segment of the governing side by s = yield_ratio·N', () => {
-  it('s equals yield_ratio·N exactly, and the rescaled case\'s check gives the side a yield ratio of exactly 1/N', () => {
+  it("s equals yield_ratio·N exactly, and the rescaled case's check gives the side a yield ratio of exactly 1/N", () => {
     const { c, r } = run(stepped);
     const o = scaleSide(c, r, 1.5, 1.3);
     expect(o.s).toBe(r.yieldRatio * 1.5);
@@ -58,7 +66,18 @@ describe('scale the side: every segment of the governing side by s = yield_ratio
         fc.double({ min: 1, max: 3, noNaN: true }),
         fc.double({ min: 10, max: 3000, noNaN: true }),
         (d1, d2, N, rpm) => {
-          const { c, r } = run({ rpm, segments: [[300, d1, 0, 1.5], [400, d2, 0]], stations: [['jam', 0, 0], ['m', 700, 3]], stop: 'jam' });
+          const { c, r } = run({
+            rpm,
+            segments: [
+              [300, d1, 0, 1.5],
+              [400, d2, 0],
+            ],
+            stations: [
+              ['jam', 0, 0],
+              ['m', 700, 3],
+            ],
+            stop: 'jam',
+          });
           const o = scaleSide(c, r, N, 1.3);
           return rel(sideYieldRatio(o.rerun, o.side), 1 / N) < 1e-10;
         },
@@ -69,6 +88,9 @@ describe('scale the side: every segment of the governing side by s = yield_ratio
 
   it('a larger design factor asks for a larger scale (monotonic)', () => {
     const { c, r } = run(stepped);
-    fc.assert(fc.property(fc.double({ min: 1, max: 3, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }), (N, dN) => scaleSide(c, r, N + dN, 1.3).s > scaleSide(c, r, N, 1.3).s), { numRuns: 20 });
+    fc.assert(
+      fc.property(fc.double({ min: 1, max: 3, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }), (N, dN) => scaleSide(c, r, N + dN, 1.3).s > scaleSide(c, r, N, 1.3).s),
+      { numRuns: 20 },
+    );
   });
 });

@@ -2,17 +2,32 @@ import { describe, expect, it } from 'vitest';
 import { runToStop, shaftRun, weakestPiece } from '../../src/resize/shaft-run.ts';
 import { rel, run } from '../helpers/layout.ts';
 
-const layout = { rpm: 300, segments: [[200, 40, 0, 1.8], [300, 50, 20]] as [number, number, number, number?][], stations: [['jam', 0, 0], ['mid', 200, 0], ['disc', 500, 2]] as [string, number, number][], stop: 'jam' };
+const layout = {
+  rpm: 300,
+  segments: [
+    [200, 40, 0, 1.8],
+    [300, 50, 20],
+  ] as [number, number, number, number?][],
+  stations: [
+    ['jam', 0, 0],
+    ['mid', 200, 0],
+    ['disc', 500, 2],
+  ] as [string, number, number][],
+  stop: 'jam',
+};
 
 describe('the run of shaft between a station and the stop', () => {
   it('holds the pieces between the two positions, cut at the stations', () => {
     const { c } = run(layout);
-    expect(runToStop(c, 'disc').map((p) => [p.piece.start, p.piece.end])).toEqual([[0, 0.2], [0.2, 0.5]]);
+    expect(runToStop(c, 'disc').map((p) => [p.piece.start, p.piece.end])).toEqual([
+      [0, 0.2],
+      [0.2, 0.5],
+    ]);
     expect(runToStop(c, 'mid')).toHaveLength(1);
     expect(shaftRun(c, 0.5, 0.5)).toHaveLength(0);
   });
 
-  it('a piece\'s yield torque is where the engine\'s stress with kt reaches shear yield', () => {
+  it("a piece's yield torque is where the engine's stress with kt reaches shear yield", () => {
     const { c, r } = run(layout);
     for (const p of runToStop(c, 'disc')) {
       const engine = r.sides[0].pieces.find((q) => q.piece.start === p.piece.start)!;

@@ -5,7 +5,7 @@ import { stockSizesBetween, stockSizeUp } from '../../src/resize/stock-sizes.ts'
 const mm = (x: number) => x / 1000;
 const inch = (x: number) => x * 0.0254;
 
-describe('stock sizes: the project\'s series (metric: whole mm to 50 mm, then 5 mm; inch: 1/16 in to 2 in, then 1/8 in)', () => {
+describe("stock sizes: the project's series (metric: whole mm to 50 mm, then 5 mm; inch: 1/16 in to 2 in, then 1/8 in)", () => {
   it('rounds metric diameters up to the next whole millimetre up to 50 mm, then to the next 5 mm', () => {
     expect(stockSizeUp(mm(41.2), 'metric')).toBeCloseTo(mm(42), 12);
     expect(stockSizeUp(mm(50), 'metric')).toBeCloseTo(mm(50), 12);

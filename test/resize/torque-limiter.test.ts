@@ -6,8 +6,16 @@ import { rel, run, type Layout } from '../helpers/layout.ts';
 const tauY = 530e6 / Math.sqrt(3); // 1045 CD: Sy = 530 MPa (Shigley 9th ed. Table A-20, from memory, confident); distortion energy
 const layout = (drive?: string, analysis?: string): Layout => ({
   rpm: 300,
-  segments: [[200, 40, 0, 1.5], [300, 50, 0], [300, 45, 0]],
-  stations: [['pulley', 0, 2, drive ? `    drive: ${drive}` : undefined], ['jam', 500, 0], ['far', 800, 1]],
+  segments: [
+    [200, 40, 0, 1.5],
+    [300, 50, 0],
+    [300, 45, 0],
+  ],
+  stations: [
+    ['pulley', 0, 2, drive ? `    drive: ${drive}` : undefined],
+    ['jam', 500, 0],
+    ['far', 800, 1],
+  ],
   stop: 'jam',
   analysis,
 });
@@ -17,8 +25,8 @@ const limiterOf = (l: Layout) => {
   return torqueLimiter(c, r, runningTorque(c), c.analysis.designFactor, c.analysis.serviceFactor);
 };
 
-describe('the torque limiter\'s window of settings', () => {
-  it('runs from the running torque × service factor to the weakest piece\'s yield torque (with kt) over N', () => {
+describe("the torque limiter's window of settings", () => {
+  it("runs from the running torque × service factor to the weakest piece's yield torque (with kt) over N", () => {
     const l = limiterOf(layout('{ running_torque: 300 N*m }', '  limiter_at: pulley'));
     expect(l.min).toBeCloseTo(450, 12);
     // Independent: the 40 mm piece with kt 1.5 yields at τy·πd³/(16·kt) (REFERENCE 3.1.1).
@@ -47,7 +55,7 @@ describe('the torque limiter\'s window of settings', () => {
     expect(l.otherSides.map((s) => s.side)).toEqual(r.sides.filter((s) => s.side !== l.side).map((s) => s.side));
   });
 
-  it('at its highest setting the protected side\'s yield ratio in a repeat incident is 1/N, where the energy method is exact', () => {
+  it("at its highest setting the protected side's yield ratio in a repeat incident is 1/N, where the energy method is exact", () => {
     const l = limiterOf(layout(undefined, '  limiter_at: pulley'));
     expect(l.slip.slipMethod).toBe('energy method');
     expect(l.slip.peakTorque).toBe(l.max);

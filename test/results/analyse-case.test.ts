@@ -20,9 +20,7 @@ interface Layout {
 /** A case file's text for a layout, so the laws are tested through the whole engine. */
 function caseText(l: Layout): string {
   const seg = l.segments.map(([len, d, b]) => `    - { length: ${len} mm, diameter: ${d} mm${b > 0 ? `, bore: ${b} mm` : ''} }`).join('\n');
-  const st = l.stations
-    .map(([n, at, j]) => `  - name: ${n}\n    at: ${at} mm\n${j > 0 ? `    parts:\n      - { shape: inertia, inertia: ${j} kg*m^2 }\n` : ''}`)
-    .join('');
+  const st = l.stations.map(([n, at, j]) => `  - name: ${n}\n    at: ${at} mm\n${j > 0 ? `    parts:\n      - { shape: inertia, inertia: ${j} kg*m^2 }\n` : ''}`).join('');
   return `case: { id: P }\nspeed: ${l.rpm} rpm\nstop: { at: ${l.stop} }\nshaft:\n  material: aisi-1045-cd\n  segments:\n${seg}\nstations:\n${st}`;
 }
 
@@ -76,11 +74,30 @@ describe('analyseCase: the energy method on one mass and a plain shaft', () => {
   });
 
   it('kt multiplies the nominal stress of its segment only', () => {
-    const plain = run({ rpm: 300, segments: [[200, 40, 0], [300, 50, 0]], stations: [['jam', 0, 0], ['disc', 500, 2]], stop: 'jam' });
-    const text = caseText({ rpm: 300, segments: [[200, 40, 0], [300, 50, 0]], stations: [['jam', 0, 0], ['disc', 500, 2]], stop: 'jam' }).replace(
-      '{ length: 200 mm, diameter: 40 mm }',
-      '{ length: 200 mm, diameter: 40 mm, kt: 1.5 }',
-    );
+    const plain = run({
+      rpm: 300,
+      segments: [
+        [200, 40, 0],
+        [300, 50, 0],
+      ],
+      stations: [
+        ['jam', 0, 0],
+        ['disc', 500, 2],
+      ],
+      stop: 'jam',
+    });
+    const text = caseText({
+      rpm: 300,
+      segments: [
+        [200, 40, 0],
+        [300, 50, 0],
+      ],
+      stations: [
+        ['jam', 0, 0],
+        ['disc', 500, 2],
+      ],
+      stop: 'jam',
+    }).replace('{ length: 200 mm, diameter: 40 mm }', '{ length: 200 mm, diameter: 40 mm, kt: 1.5 }');
     const notched = analyseCase(parseCase(text));
     // Pieces run from the stop outward: [0] is the 40 mm segment next to the jam.
     expect(notched.sides[0].pieces[0].shearStress / plain.sides[0].pieces[0].shearStress).toBeCloseTo(1.5, 12);
@@ -96,14 +113,33 @@ describe('analyseCase: the energy method on one mass and a plain shaft', () => {
     expect(analyseCase(parseCase(atStop)).kineticEnergy).toBe(analyseCase(parseCase(fixture)).kineticEnergy);
   });
 
-  it('warns when the shaft\'s own energy passes 5 % of the side\'s', () => {
-    const light = run({ rpm: 300, segments: [[2000, 80, 0]], stations: [['jam', 0, 0], ['hub', 2000, 0.05]], stop: 'jam' });
+  it("warns when the shaft's own energy passes 5 % of the side's", () => {
+    const light = run({
+      rpm: 300,
+      segments: [[2000, 80, 0]],
+      stations: [
+        ['jam', 0, 0],
+        ['hub', 2000, 0.05],
+      ],
+      stop: 'jam',
+    });
     expect(light.warnings.join(' ')).toMatch(/shaft's own kinetic energy is \d+ % of the parts' energy/);
   });
 
   it('warns that the energy method is approximate with several loaded stations on a side, and points to the dynamic model', () => {
-    const r = run({ rpm: 300, segments: [[1000, 50, 0]], stations: [['jam', 0, 0], ['a', 500, 1], ['b', 1000, 1]], stop: 'jam' });
-    expect(r.warnings.join(' ')).toMatch(/Side B has 2 stations with parts \(a, b\); the energy method .* approximate here; the dynamic model resolves them \(peak torque \d+ N·m against \d+ N·m\) and the verdict uses it/);
+    const r = run({
+      rpm: 300,
+      segments: [[1000, 50, 0]],
+      stations: [
+        ['jam', 0, 0],
+        ['a', 500, 1],
+        ['b', 1000, 1],
+      ],
+      stop: 'jam',
+    });
+    expect(r.warnings.join(' ')).toMatch(
+      /Side B has 2 stations with parts \(a, b\); the energy method .* approximate here; the dynamic model resolves them \(peak torque \d+ N·m against \d+ N·m\) and the verdict uses it/,
+    );
     expect(r.verdictBasis).toBe('dynamic model');
     expect(r.verdictYieldRatio).toBe(r.dynamic.yieldRatio);
   });
@@ -122,8 +158,24 @@ describe('the laws of the energy method', () => {
   it('peak stress is proportional to the speed at the stop', () => {
     fc.assert(
       fc.property(arb, fc.double({ min: 0.1, max: 10, noNaN: true }), ({ rpm, len, d, j }, k) => {
-        const a = energyRun({ rpm, segments: [[len, d, 0]], stations: [['jam', 0, 0], ['m', len, j]], stop: 'jam' });
-        const b = energyRun({ rpm: rpm * k, segments: [[len, d, 0]], stations: [['jam', 0, 0], ['m', len, j]], stop: 'jam' });
+        const a = energyRun({
+          rpm,
+          segments: [[len, d, 0]],
+          stations: [
+            ['jam', 0, 0],
+            ['m', len, j],
+          ],
+          stop: 'jam',
+        });
+        const b = energyRun({
+          rpm: rpm * k,
+          segments: [[len, d, 0]],
+          stations: [
+            ['jam', 0, 0],
+            ['m', len, j],
+          ],
+          stop: 'jam',
+        });
         return Math.abs(b.maxShearStress / a.maxShearStress / k - 1) < 1e-9;
       }),
       RUNS,
@@ -133,8 +185,24 @@ describe('the laws of the energy method', () => {
   it('a uniform shaft twice as long gives the stress divided by √2', () => {
     fc.assert(
       fc.property(arb, ({ rpm, len, d, j }) => {
-        const a = energyRun({ rpm, segments: [[len, d, 0]], stations: [['jam', 0, 0], ['m', len, j]], stop: 'jam' });
-        const b = energyRun({ rpm, segments: [[2 * len, d, 0]], stations: [['jam', 0, 0], ['m', 2 * len, j]], stop: 'jam' });
+        const a = energyRun({
+          rpm,
+          segments: [[len, d, 0]],
+          stations: [
+            ['jam', 0, 0],
+            ['m', len, j],
+          ],
+          stop: 'jam',
+        });
+        const b = energyRun({
+          rpm,
+          segments: [[2 * len, d, 0]],
+          stations: [
+            ['jam', 0, 0],
+            ['m', 2 * len, j],
+          ],
+          stop: 'jam',
+        });
         return Math.abs((b.maxShearStress * Math.SQRT2) / a.maxShearStress - 1) < 1e-9;
       }),
       RUNS,
@@ -144,7 +212,19 @@ describe('the laws of the energy method', () => {
   it('two identical sides give equal results', () => {
     fc.assert(
       fc.property(arb, ({ rpm, len, d, j }) => {
-        const r = energyRun({ rpm, segments: [[len, d, 0], [len, d, 0]], stations: [['a', 0, j], ['jam', len, 0], ['b', 2 * len, j]], stop: 'jam' });
+        const r = energyRun({
+          rpm,
+          segments: [
+            [len, d, 0],
+            [len, d, 0],
+          ],
+          stations: [
+            ['a', 0, j],
+            ['jam', len, 0],
+            ['b', 2 * len, j],
+          ],
+          stop: 'jam',
+        });
         const [A, B] = r.sides;
         return r.sides.length === 2 && Math.abs(A.peakTorque / B.peakTorque - 1) < 1e-12 && Math.abs(A.twist / B.twist - 1) < 1e-12;
       }),
@@ -155,8 +235,32 @@ describe('the laws of the energy method', () => {
   it('a mirrored shaft gives mirrored sides', () => {
     fc.assert(
       fc.property(arb, fc.integer({ min: 10, max: 200 }), fc.double({ min: 0.01, max: 100, noNaN: true }), ({ rpm, len, d, j }, d2, j2) => {
-        const fwd = energyRun({ rpm, segments: [[len, d, 0], [len, d2, 0]], stations: [['a', 0, j], ['jam', len, 0], ['b', 2 * len, j2]], stop: 'jam' });
-        const rev = energyRun({ rpm, segments: [[len, d2, 0], [len, d, 0]], stations: [['b', 0, j2], ['jam', len, 0], ['a', 2 * len, j]], stop: 'jam' });
+        const fwd = energyRun({
+          rpm,
+          segments: [
+            [len, d, 0],
+            [len, d2, 0],
+          ],
+          stations: [
+            ['a', 0, j],
+            ['jam', len, 0],
+            ['b', 2 * len, j2],
+          ],
+          stop: 'jam',
+        });
+        const rev = energyRun({
+          rpm,
+          segments: [
+            [len, d2, 0],
+            [len, d, 0],
+          ],
+          stations: [
+            ['b', 0, j2],
+            ['jam', len, 0],
+            ['a', 2 * len, j],
+          ],
+          stop: 'jam',
+        });
         return (
           Math.abs(fwd.sides[0].peakTorque / rev.sides[1].peakTorque - 1) < 1e-12 &&
           Math.abs(fwd.sides[1].peakTorque / rev.sides[0].peakTorque - 1) < 1e-12 &&
@@ -170,8 +274,24 @@ describe('the laws of the energy method', () => {
   it('a hollow shaft of the same outer diameter is more compliant', () => {
     fc.assert(
       fc.property(arb, fc.double({ min: 0.05, max: 0.95, noNaN: true }), ({ rpm, len, d, j }, ratio) => {
-        const solid = energyRun({ rpm, segments: [[len, d, 0]], stations: [['jam', 0, 0], ['m', len, j]], stop: 'jam' });
-        const hollow = energyRun({ rpm, segments: [[len, d, Math.min(d - 1, Math.max(1, Math.round(d * ratio)))]], stations: [['jam', 0, 0], ['m', len, j]], stop: 'jam' });
+        const solid = energyRun({
+          rpm,
+          segments: [[len, d, 0]],
+          stations: [
+            ['jam', 0, 0],
+            ['m', len, j],
+          ],
+          stop: 'jam',
+        });
+        const hollow = energyRun({
+          rpm,
+          segments: [[len, d, Math.min(d - 1, Math.max(1, Math.round(d * ratio)))]],
+          stations: [
+            ['jam', 0, 0],
+            ['m', len, j],
+          ],
+          stop: 'jam',
+        });
         return hollow.sides[0].compliance > solid.sides[0].compliance && hollow.sides[0].peakTorque < solid.sides[0].peakTorque;
       }),
       RUNS,

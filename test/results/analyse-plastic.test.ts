@@ -8,7 +8,7 @@ describe('analyseCase past yield (Results.plastic)', () => {
   // EP5 of shared REFERENCE.md (derived from Beer & Johnston Sec. 3.9–3.11 and the energy balance
   // 3.1.9): at 300 rpm T = 4859.34 N·m, θ_max = 0.163102 rad, residual twist 0.041193 rad. EP5 takes
   // τ_Y = 0.577·S_y; the case's distortion-energy criterion uses S_y/√3, 0.06 % higher, well inside 0.5 %.
-  it('gives EP5\'s peak torque, twist and permanent twist at 300 rpm within 0.5 %', () => {
+  it("gives EP5's peak torque, twist and permanent twist at 300 rpm within 0.5 %", () => {
     const r = analyseCase(ep5Case());
     const side = r.plastic.sides[0];
     expect(rel(side.peakTorque, 4859.34)).toBeLessThan(0.005);
@@ -20,7 +20,7 @@ describe('analyseCase past yield (Results.plastic)', () => {
     expect(r.elasticVerdict).toBe('yielded');
   });
 
-  it('caps the peak torque well below the elastic method\'s (EP5: τ would be 495.7 MPa elastic)', () => {
+  it("caps the peak torque well below the elastic method's (EP5: τ would be 495.7 MPa elastic)", () => {
     const r = analyseCase(ep5Case());
     expect(r.maxShearStress / 1e6).toBeCloseTo(495.7, 0);
     expect(r.plastic.peakTorque).toBeLessThan(r.sides[0].peakTorque);
@@ -113,7 +113,7 @@ describe('analyseCase past yield (Results.plastic)', () => {
 describe('how the permanent twist shows on the surface', () => {
   // Shared REFERENCE.md 13.7 (derived): EP5 at 300 rpm, θ_p = 0.041193 rad, c = 20 mm, L = 500 mm:
   // γ_p = 0.001648 (helix ψ = 0.094°) and an end offset of 0.82 mm.
-  it('gives EP5\'s 0.82 mm surface offset and 0.094° helix angle', () => {
+  it("gives EP5's 0.82 mm surface offset and 0.094° helix angle", () => {
     const piece = analyseCase(ep5Case()).plastic.sides[0].pieces[0];
     expect(piece.surfaceOffset * 1000).toBeCloseTo(0.82, 2);
     expect((piece.helixAngle * 180) / Math.PI).toBeCloseTo(0.094, 3);

@@ -35,7 +35,7 @@ describe("the drive's protection: trip_after and torque_limit", () => {
     expect(c.stations[0].drive).toMatchObject({ tripAfter: 0.25, torqueLimit: 700 });
   });
 
-  it('a trip cuts the motor at its time, and the limiter\'s slip energy no longer grows with the window: doubling it moves the energy by less than 0.5 %', () => {
+  it("a trip cuts the motor at its time, and the limiter's slip energy no longer grows with the window: doubling it moves the energy by less than 0.5 %", () => {
     const r = analyseCase(parseCase(tripCase('      trip_after: 250 ms') + 'analysis: { duration: 600 ms }'));
     const trip = r.dynamic.events.find((e) => /trips/.test(e.text))!;
     expect(trip.time).toBeCloseTo(0.25, 9);

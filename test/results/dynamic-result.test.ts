@@ -37,14 +37,14 @@ describe('dynamicResult through analyseCase', () => {
     expect(r.dynamic.naturalFrequencies[0]).toBeCloseTo(Math.sqrt(k / (40 * 0.18 ** 2)) / (2 * Math.PI), 6);
   });
 
-  it('with the shaft\'s own inertia and default damping it stays within a few percent of the energy method', () => {
+  it("with the shaft's own inertia and default damping it stays within a few percent of the energy method", () => {
     const r = analyseCase(parseCase(fixture));
     expect(r.dynamic.shaftInertia).toBe(true);
     expect(r.dynamic.converged).toBe(true);
     expect(Math.abs(r.dynamic.peakTorque / r.sides[0].peakTorque - 1)).toBeLessThan(0.02);
   });
 
-  it('a torque limiter set below the shaft\'s yield torque keeps every segment below it, and its slip energy accounts for the rest', () => {
+  it("a torque limiter set below the shaft's yield torque keeps every segment below it, and its slip energy accounts for the rest", () => {
     const c = parseCase(limiterCase('3 kN*m'));
     const r = analyseCase(c);
     // Yield torque of the thinnest segment: τ_y·J_p/c (shared REFERENCE.md 3.1.1), τ_y = 0.577·Sy.
@@ -65,7 +65,7 @@ describe('dynamicResult through analyseCase', () => {
     expect(slip.slippingAtEnd).toBe(false);
   });
 
-  it('with the shaft\'s own inertia and damping, the limiter still keeps the shaft below yield', () => {
+  it("with the shaft's own inertia and damping, the limiter still keeps the shaft below yield", () => {
     const r = analyseCase(parseCase(limiterCase('3 kN*m', '')));
     expect(r.dynamic.yieldRatio).toBeLessThan(1);
     expect(r.dynamic.slips[0].energy).toBeGreaterThan(0);
@@ -99,7 +99,11 @@ describe('dynamicResult through analyseCase', () => {
 describe('the laws of the dynamic model', () => {
   /** A drive, a limiter and a flywheel on one side of the stop; `mirror` puts them on the other. */
   const layout = (mirror: boolean, rpm: number, slip: number, ramp: number) => {
-    const segs = ['{ length: 300 mm, diameter: 45 mm, label: drive end }', `{ length: 200 mm, diameter: 50 mm, slip_torque: ${slip} N*m, label: limiter }`, '{ length: 400 mm, diameter: 55 mm, label: to the jam }'];
+    const segs = [
+      '{ length: 300 mm, diameter: 45 mm, label: drive end }',
+      `{ length: 200 mm, diameter: 50 mm, slip_torque: ${slip} N*m, label: limiter }`,
+      '{ length: 400 mm, diameter: 55 mm, label: to the jam }',
+    ];
     const at = (x: number) => (mirror ? 900 - x : x);
     return `case: { id: M }
 speed: ${rpm} rpm
@@ -140,7 +144,8 @@ stations:
   });
 
   it('a slower stop never raises the peak torque of a single mass (the velocity-ramp factor falls with τ)', () => {
-    const peak = (ramp: number) => analyseCase(parseCase(fixture.replace('  at: jam', `  at: jam\n  duration: ${ramp} ms`) + 'analysis: { shaft_inertia: false, damping_ratio: 0 }\n')).dynamic.peakTorque;
+    const peak = (ramp: number) =>
+      analyseCase(parseCase(fixture.replace('  at: jam', `  at: jam\n  duration: ${ramp} ms`) + 'analysis: { shaft_inertia: false, damping_ratio: 0 }\n')).dynamic.peakTorque;
     const values = [0, 2, 5, 10, 20, 40].map(peak);
     for (let i = 1; i < values.length; i++) expect(values[i]).toBeLessThan(values[i - 1] * (1 + 1e-6));
   });
@@ -153,7 +158,7 @@ describe('dynamicResult: a torque limiter in a massless shaft, damped', () => {
   const w0 = (400 * 2 * Math.PI) / 60;
   const run = (zeta: number) => analyseCase(parseCase(limiterCase('3 kN*m', `analysis: { shaft_inertia: false, damping_ratio: ${zeta} }`)));
 
-  it('slips later, and more, the less it is damped; at ζ = 0, 0.5 %, 5 %, 20 % its slip energy and start are odex\'s within 0.1 %', () => {
+  it("slips later, and more, the less it is damped; at ζ = 0, 0.5 %, 5 %, 20 % its slip energy and start are odex's within 0.1 %", () => {
     const runs = [0, 0.005, 0.05, 0.2].map((z) => ({ z, r: run(z) }));
     for (const { z, r } of runs) {
       const k = 1 / r.sides[0].compliance;
@@ -169,7 +174,7 @@ describe('dynamicResult: a torque limiter in a massless shaft, damped', () => {
     }
   });
 
-  it('reports each segment\'s largest shear strain, the elastic one of the slip torque: T·c/(G·J_p) (Shigley 9th ed. Sec. 3-12)', () => {
+  it("reports each segment's largest shear strain, the elastic one of the slip torque: T·c/(G·J_p) (Shigley 9th ed. Sec. 3-12)", () => {
     const c = parseCase(limiterCase('3 kN*m'));
     const r = analyseCase(c);
     const G = c.materials['aisi-4140-qt540'].shearModulus!;

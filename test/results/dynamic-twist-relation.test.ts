@@ -37,7 +37,14 @@ function relations(text: string) {
   const { balances } = analysePlastic(c, model, r.sides);
   return {
     c,
-    dynamic: dynamicTwistRelation(c, model, balances.map((b) => b.inertia), r.dynamic.elementTarget, 0, 0.5)!,
+    dynamic: dynamicTwistRelation(
+      c,
+      model,
+      balances.map((b) => b.inertia),
+      r.dynamic.elementTarget,
+      0,
+      0.5,
+    )!,
     balance: balanceTwistRelation(model.sides, balances, 0, 0.5)!,
   };
 }
@@ -74,7 +81,7 @@ describe('dynamicTwistRelation: the speed → permanent twist relation through t
 });
 
 describe('the read-back through analyseCase', () => {
-  it('stands on the dynamic model where the verdict does, and its prediction is the dynamic model\'s permanent twist between the stations', () => {
+  it("stands on the dynamic model where the verdict does, and its prediction is the dynamic model's permanent twist between the stations", () => {
     const r = analyseCase(parseCase(ep5('300 rpm', 'duration')));
     expect(r.verdictBasis).toBe('dynamic model');
     expect(r.pastYieldBasis).toBe('dynamic model');
@@ -146,7 +153,7 @@ analysis: { shaft_inertia: false, damping_ratio: 0 }
     expect(f.meaning).not.toMatch(/weaker piece elsewhere yields first/);
   });
 
-  it('the finding read through the dynamic model does not say the drive\'s torque is left out of it', () => {
+  it("the finding read through the dynamic model does not say the drive's torque is left out of it", () => {
     const r = analyseCase(parseCase(ep5('300 rpm', 'duration').replace('angle: 2 deg', 'angle: 60 deg')));
     const f = r.observedFindings.twist[0];
     expect(f.finding).toBe('more');

@@ -8,7 +8,16 @@ import { caseText, run } from '../helpers/layout.ts';
 // so p = 77.625 MPa and T_slip = 2194.79 N·m (test/physics/interference-fit.test.ts; Shigley 9th
 // ed. Eq. 3-57 and Sec. 7-8, from memory). The elastic peak would be ω0·√(J·k) ≈ 9.8 kN·m, so the fit slips.
 const FIT = '    fit: { interference: 0.05 mm, hub_outer_diameter: 100 mm, length: 60 mm, friction: FRICTION, hub_material: aisi-1045-cd }';
-const layout = (friction: number, extra = {}) => ({ rpm: 300, segments: [[500, 50, 0]] as [number, number, number][], stations: [['jam', 0, 0], ['disc', 500, 1, FIT.replace('FRICTION', String(friction))]] as [string, number, number, string?][], stop: 'jam', ...extra });
+const layout = (friction: number, extra = {}) => ({
+  rpm: 300,
+  segments: [[500, 50, 0]] as [number, number, number][],
+  stations: [
+    ['jam', 0, 0],
+    ['disc', 500, 1, FIT.replace('FRICTION', String(friction))],
+  ] as [string, number, number, string?][],
+  stop: 'jam',
+  ...extra,
+});
 const SLIP = 2194.79;
 
 describe('hubFits: a shrink fit at the incident torque', () => {
@@ -24,7 +33,13 @@ describe('hubFits: a shrink fit at the incident torque', () => {
   });
 
   it('limits the torque like a slip element: the same peak torque and slip energy, within 0.5 %, as a limiter of that setting in the segment', () => {
-    const text = caseText({ ...layout(0.12), stations: [['jam', 0, 0], ['disc', 500, 1]] }).replace('diameter: 50 mm }', `diameter: 50 mm, slip_torque: ${SLIP} N*m }`);
+    const text = caseText({
+      ...layout(0.12),
+      stations: [
+        ['jam', 0, 0],
+        ['disc', 500, 1],
+      ],
+    }).replace('diameter: 50 mm }', `diameter: 50 mm, slip_torque: ${SLIP} N*m }`);
     const limiter = analyseCase(parseCase(text));
     expect(limiter.fits).toEqual([]);
     expect(Math.abs(r.dynamic.peakTorque / limiter.dynamic.peakTorque - 1)).toBeLessThan(0.005);
@@ -34,7 +49,7 @@ describe('hubFits: a shrink fit at the incident torque', () => {
     expect(a.element).toBe('the shrink fit at "disc"');
   });
 
-  it('the fit takes the energy a limiter would: ½Jω0² − T_s²/(2k) (shared reference 10.11, derived), within 2 % with the model\'s small damping', () => {
+  it("the fit takes the energy a limiter would: ½Jω0² − T_s²/(2k) (shared reference 10.11, derived), within 2 % with the model's small damping", () => {
     const slip = r.dynamic.slips.find((s) => s.kind === 'hub fit')!;
     const k = (79.3e9 * Math.PI * 0.05 ** 4) / 32 / 0.5;
     const w = (300 * 2 * Math.PI) / 60;

@@ -49,7 +49,10 @@ describe('modeFrequencies: which natural frequencies the element count resolves'
   it('at 4 elements flags the higher modes not converged, and at 40 the lowest three converged, as the closed form says', () => {
     const coarse = analyseCase(parseCase(shaft('analysis: { elements: 4 }\n'))).dynamic.frequencies;
     const fine = analyseCase(parseCase(shaft('analysis: { elements: 40 }\n'))).dynamic.frequencies;
-    for (const [list, n] of [[coarse, 4], [fine, 40]] as const) {
+    for (const [list, n] of [
+      [coarse, 4],
+      [fine, 40],
+    ] as const) {
       list.forEach((m, i) => {
         const err = Math.abs(m.frequency / exact(i + 1) - 1);
         expect(m.converged, `${n} elements, mode ${i + 1}: ${(100 * err).toFixed(2)} % off`).toBe(err <= MODE_TOLERANCE * 1.05 ? m.converged : false);
@@ -59,7 +62,7 @@ describe('modeFrequencies: which natural frequencies the element count resolves'
     expect(fine.slice(0, 3).every((m) => m.converged)).toBe(true);
   });
 
-  it('without the shaft\'s inertia the chain is exact for its lumped masses: every mode converged', () => {
+  it("without the shaft's inertia the chain is exact for its lumped masses: every mode converged", () => {
     const c = parseCase(shaft('analysis: { shaft_inertia: false }\n').replace('1e-9 kg*m^2', '2 kg*m^2'));
     expect(buildShaftModel(c).sides).toHaveLength(1);
     const f = analyseCase(c).dynamic.frequencies;

@@ -7,7 +7,7 @@ const fixture = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 
 const withDrive = (drive: string) => fixture.replace('        radius_of_gyration: 180 mm\n', `        radius_of_gyration: 180 mm\n    drive: ${drive}\n`);
 
 describe('checks on how the drive ran before the stop', () => {
-  it('warns when the running torque is off the motor\'s curve at the running speed', () => {
+  it("warns when the running torque is off the motor's curve at the running speed", () => {
     const r = analyseCase(parseCase(withDrive('{ rotor_inertia: 0.1 kg*m^2, running_torque: 50 N*m, curve: [{ speed: 0 rpm, torque: 200 N*m }, { speed: 160 rpm, torque: 0 N*m }] }')));
     // On the line from (0, 200) to (160 rpm, 0) the motor gives 200·(1 − 150/160) = 12.5 N·m at 150 rpm.
     expect(r.warnings.join(' ')).toMatch(/running torque of the motor at "flywheel" \(50 N·m\) is not on its curve at the running speed \(12\.5 N·m\)/);

@@ -5,12 +5,15 @@ import { caseOf, type Layout } from '../helpers/layout.ts';
 const layout = (drive?: string): Layout => ({
   rpm: 1460,
   segments: [[500, 50, 0]],
-  stations: [['motor end', 0, 1, drive ? `    drive: ${drive}` : undefined], ['jam', 500, 0]],
+  stations: [
+    ['motor end', 0, 1, drive ? `    drive: ${drive}` : undefined],
+    ['jam', 500, 0],
+  ],
   stop: 'jam',
 });
 
 describe('runningTorque: the torque at shaft speed in normal running', () => {
-  it('is the drive\'s power over the shaft speed, T = P/ω (Shigley 9th ed. Sec. 3-12)', () => {
+  it("is the drive's power over the shaft speed, T = P/ω (Shigley 9th ed. Sec. 3-12)", () => {
     const t = runningTorque(caseOf(layout('{ power: 7.5 kW }')))!;
     // Independent: T[N·m] = 9549.3·P[kW]/n[rpm] (REFERENCE 1.1.9, 60 000/2π).
     expect(Math.abs(t.torque / ((9549.2966 * 7.5) / 1460) - 1)).toBeLessThan(1e-7);

@@ -68,7 +68,7 @@ describe('reading a measured permanent twist back (Results.observedFindings.twis
     expect(f.meaning).toMatch(/jam giving way/);
   });
 
-  it('uses the case\'s own ± on speed when it states one', () => {
+  it("uses the case's own ± on speed when it states one", () => {
     const f = analyseCase(ep5Case({ speed: '300 rpm ± 1 %', observed: between(2.6) })).observedFindings.twist[0];
     expect(f.band.basis).toBe('case');
     expect(f.band.high).toBeCloseTo(rpm(303), 9);
@@ -129,7 +129,7 @@ describe('reading a measured permanent twist back (Results.observedFindings.twis
   });
 });
 
-describe('readTwistBack on any model\'s relation', () => {
+describe("readTwistBack on any model's relation", () => {
   it('never calls a zero measured twist past fracture, even where the model breaks at the most speed that leaves none', () => {
     // A relation that breaks at every speed: the zero twist's "at most" speed is not a twist past fracture.
     const c = ep5Case({ observed: between(0) });
@@ -149,7 +149,7 @@ describe('readTwistBack on any model\'s relation', () => {
   });
 });
 
-describe('judgeByInterval: the Monte Carlo judges against the recorded speed\'s band, as the single run does', () => {
+describe("judgeByInterval: the Monte Carlo judges against the recorded speed's band, as the single run does", () => {
   it('a twist whose speed lies inside the default ±10 % band is consistent with --samples 0 and with the Monte Carlo alike', () => {
     // The measured 2.6° needs ω_m from the hand read-back (ep5SpeedFor: shared REFERENCE.md 3.1.6
     // and 3.1.9, derived from Beer & Johnston Sec. 3.9–3.11); the recorded speed is set 5 % below
@@ -182,7 +182,8 @@ describe('judgeByInterval: the Monte Carlo judges against the recorded speed\'s 
 describe('the words of a "less" finding follow the material\'s strength basis', () => {
   const steel = ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa', 'tensile_strength: 630 MPa', 'elongation: 12 %', 'reduction_of_area: 35 %', 'density: 7850 kg/m^3'];
   const less = (basis?: string, analysis?: string[]) =>
-    investigate(ep5Case({ observed: between(0.3, ' ± 0.05 deg'), material: basis ? [...steel, `strength_basis: ${basis}`] : steel, ...(analysis ? { analysis } : {}) }), { samples: 50 }).observedFindings.twist[0];
+    investigate(ep5Case({ observed: between(0.3, ' ± 0.05 deg'), material: basis ? [...steel, `strength_basis: ${basis}`] : steel, ...(analysis ? { analysis } : {}) }), { samples: 50 })
+      .observedFindings.twist[0];
 
   it('typical, with 0 % scatter: the mean strength, not a published minimum (with the Monte Carlo too)', () => {
     const f = less('typical', ['strength_scatter: 0 %']);

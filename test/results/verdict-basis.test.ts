@@ -21,7 +21,9 @@ describe('verdictBasis: which result the verdict stands on', () => {
     expect(basis(fixture.replace('  at: jam', '  at: jam\n  duration: 5 ms')).reason).toMatch(/dynamic model because the stop took 5\.00 ms/);
     expect(basis(fixture.replace('  at: jam', '  at: jam\n  torque_capacity: 1 kN*m')).reason).toMatch(/the case has a jam that can slip/);
     expect(basis(fixture.replace('      diameter: 50 mm', '      diameter: 50 mm\n      shear_torque: 1 kN*m')).reason).toMatch(/the case has a shear pin/);
-    expect(basis(fixture.replace('        radius_of_gyration: 180 mm\n', '        radius_of_gyration: 180 mm\n    drive: { rotor_inertia: 0.1 kg*m^2, torque: 10 N*m }\n')).reason).toMatch(/a drive acts at "flywheel"/);
+    expect(basis(fixture.replace('        radius_of_gyration: 180 mm\n', '        radius_of_gyration: 180 mm\n    drive: { rotor_inertia: 0.1 kg*m^2, torque: 10 N*m }\n')).reason).toMatch(
+      /a drive acts at "flywheel"/,
+    );
     const two = fixture.replace('  - name: flywheel', '  - name: hub\n    at: 400 mm\n    parts: [{ shape: inertia, inertia: 0.2 kg*m^2 }]\n  - name: flywheel');
     const b = basis(two);
     expect(b.basis).toBe('dynamic model');

@@ -3,8 +3,8 @@ import { dynamicMetrics, investigate } from '../../src/finding/investigate.ts';
 import { runDynamicUncertainty } from '../../src/uncertainty/uncertainty.ts';
 import { rampedOneDisc } from '../helpers/ramped-one-disc.ts';
 
-describe('the dynamic model\'s chance of yield against brute force (slow)', () => {
-  it('on a small ramped stop, 40 runs with the energy method\'s 10 000 samples agree with 2000 dynamic runs within their joint error', () => {
+describe("the dynamic model's chance of yield against brute force (slow)", () => {
+  it("on a small ramped stop, 40 runs with the energy method's 10 000 samples agree with 2000 dynamic runs within their joint error", () => {
     const c = rampedOneDisc(10_000, 40);
     const r = investigate(c);
     const chance = r.uncertainty!.dynamic!.yieldChance;

@@ -23,8 +23,38 @@ describe('the laws of the energy method, at full strength', () => {
     });
     fc.assert(
       fc.property(arb, fc.integer({ min: 10, max: 200 }), fc.double({ min: 0.01, max: 100, noNaN: true }), ({ rpm, len, d, j }, d2, j2) => {
-        const fwd = analyseCase(parseCase(caseText(rpm, [[len, d], [len, d2]], [['a', 0, j], ['jam', len, 0], ['b', 2 * len, j2]])));
-        const rev = analyseCase(parseCase(caseText(rpm, [[len, d2], [len, d]], [['b', 0, j2], ['jam', len, 0], ['a', 2 * len, j]])));
+        const fwd = analyseCase(
+          parseCase(
+            caseText(
+              rpm,
+              [
+                [len, d],
+                [len, d2],
+              ],
+              [
+                ['a', 0, j],
+                ['jam', len, 0],
+                ['b', 2 * len, j2],
+              ],
+            ),
+          ),
+        );
+        const rev = analyseCase(
+          parseCase(
+            caseText(
+              rpm,
+              [
+                [len, d2],
+                [len, d],
+              ],
+              [
+                ['b', 0, j2],
+                ['jam', len, 0],
+                ['a', 2 * len, j],
+              ],
+            ),
+          ),
+        );
         return (
           Math.abs(fwd.sides[0].peakTorque / rev.sides[1].peakTorque - 1) < 1e-12 &&
           Math.abs(fwd.sides[1].peakTorque / rev.sides[0].peakTorque - 1) < 1e-12 &&

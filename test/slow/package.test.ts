@@ -19,7 +19,10 @@ describe('the packed package', () => {
     const app = join(work, 'app');
     execFileSync('mkdir', ['-p', app]);
     writeFileSync(join(app, 'package.json'), JSON.stringify({ name: 'app', private: true, type: 'module', overrides: { '@uwdata/flechette': '2.6.0' } }));
-    execFileSync('npm', ['install', '--prefer-offline', '--ignore-scripts', '--no-audit', '--no-fund', join(work, tarball), `${join(root, 'node_modules', '@types', 'node')}`], { cwd: app, stdio: 'pipe' });
+    execFileSync('npm', ['install', '--prefer-offline', '--ignore-scripts', '--no-audit', '--no-fund', join(work, tarball), `${join(root, 'node_modules', '@types', 'node')}`], {
+      cwd: app,
+      stdio: 'pipe',
+    });
     expect(readdirSync(join(app, 'node_modules', 'shaftcase'))).not.toContain('bench');
     writeFileSync(
       join(app, 'use.ts'),
@@ -30,7 +33,10 @@ describe('the packed package', () => {
         'console.log(JSON.stringify({ verdict: f.verdict, ratio: f.yieldRatio, schema: SCHEMA_VERSION }));',
       ].join('\n'),
     );
-    writeFileSync(join(app, 'tsconfig.json'), JSON.stringify({ compilerOptions: { module: 'NodeNext', moduleResolution: 'NodeNext', strict: true, outDir: 'out', types: ['node'], skipLibCheck: false }, files: ['use.ts'] }));
+    writeFileSync(
+      join(app, 'tsconfig.json'),
+      JSON.stringify({ compilerOptions: { module: 'NodeNext', moduleResolution: 'NodeNext', strict: true, outDir: 'out', types: ['node'], skipLibCheck: false }, files: ['use.ts'] }),
+    );
     execFileSync(join(root, 'node_modules', '.bin', 'tsc'), ['-p', '.'], { cwd: app, stdio: 'pipe' });
     const out = JSON.parse(execFileSync(process.execPath, [join(app, 'out', 'use.js')], { cwd: app, encoding: 'utf8' }));
     expect(out.schema).toBe(2);

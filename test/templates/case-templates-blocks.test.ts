@@ -28,7 +28,19 @@ function everyBlock(name: string): string {
 describe('case templates with every optional block filled in with its example values', () => {
   it.each(['case-metric.yaml', 'case-us.yaml'])('%s has the drive, belt, limiter, shear pin, key, tolerance and twist blocks', (name) => {
     const t = template(name);
-    for (const block of [/^ {4}#\| drive:$/m, /^ {4}#\| {3}belt:/m, /^ {4}#\| {5}slip_torque:/m, /slip_torque: [^}]+\}/, /shear_torque: [^}]+\}/, /^ {4}#\| key: \{/m, /^ {2}#\| samples:/m, /^ {2}#\| strength_scatter:/m, /^ {2}#\| permanent_twist:/m, /rotor_inertia:/, /curve:/]) {
+    for (const block of [
+      /^ {4}#\| drive:$/m,
+      /^ {4}#\| {3}belt:/m,
+      /^ {4}#\| {5}slip_torque:/m,
+      /slip_torque: [^}]+\}/,
+      /shear_torque: [^}]+\}/,
+      /^ {4}#\| key: \{/m,
+      /^ {2}#\| samples:/m,
+      /^ {2}#\| strength_scatter:/m,
+      /^ {2}#\| permanent_twist:/m,
+      /rotor_inertia:/,
+      /curve:/,
+    ]) {
       expect(t).toMatch(block);
     }
     // Where to find a rotor's WK² and a speed–torque curve; the speed through a reducer divided, not multiplied.

@@ -53,7 +53,7 @@ describe('monteCarloChance(ratios)', () => {
 });
 
 describe('controlVariateChance(fine, coarse)', () => {
-  it('its 95 % interval covers the known chance in at least 90 % of seeded repeats, and is narrower than the plain runs\' interval', () => {
+  it("its 95 % interval covers the known chance in at least 90 % of seeded repeats, and is narrower than the plain runs' interval", () => {
     // A smaller version of test/slow/chance-coverage.test.ts (more repeats, 10 000 cheap samples).
     for (const [a0, k, r] of [
       [0.13, 1, 0.04], // p ≈ 0.33, a loose relation
@@ -74,7 +74,7 @@ describe('controlVariateChance(fine, coarse)', () => {
     expect(c).toMatchObject({ runs: 40, controlSamples: 10_000 });
   });
 
-  it('where every fine run agrees, the interval is Wilson\'s from the fine runs alone, and holds the point', () => {
+  it("where every fine run agrees, the interval is Wilson's from the fine runs alone, and holds the point", () => {
     // Every fine run below 1, and the cheap samples say so too: 0 of 40 is [0, 8.8 %], not [0, 0].
     const coarse = Float64Array.from({ length: 1000 }, (_, i) => 0.5 + 0.1 * Math.sin(i));
     const fine = Float64Array.from(coarse.subarray(0, 40), (x, i) => 0.8 * x * (1 + 0.01 * Math.cos(3 * i)));
@@ -83,7 +83,10 @@ describe('controlVariateChance(fine, coarse)', () => {
     expect(c.interval[1]).toBeCloseTo(0.0876, 4);
     expect(c.probability).toBeGreaterThanOrEqual(0);
     expect(c.probability).toBeLessThanOrEqual(c.interval[1]);
-    const every = controlVariateChance(fine.map((y) => 4 * y), coarse);
+    const every = controlVariateChance(
+      fine.map((y) => 4 * y),
+      coarse,
+    );
     expect(every.interval).toEqual(wilsonInterval(1, 40));
   });
 

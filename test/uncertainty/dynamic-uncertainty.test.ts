@@ -24,7 +24,7 @@ describe('the uncertainty run through the dynamic model', () => {
     expect(p50).toBeLessThanOrEqual(p95);
   });
 
-  it('with every tolerance zero, its percentiles collapse onto the single run\'s dynamic yield ratio', () => {
+  it("with every tolerance zero, its percentiles collapse onto the single run's dynamic yield ratio", () => {
     const c = parseCase(text.replace('speed: 40 rpm ± 5 %', 'speed: 40 rpm ± 0 %').concat('\nanalysis:\n  samples: 50\n  dynamic_samples: 3\n  strength_scatter: 0 %\n'));
     const single = withFinding(analyseCase(c)).verdictYieldRatio;
     expect(investigate(c).uncertainty!.dynamic!.percentiles.yieldRatio).toEqual([single, single, single]);
@@ -39,8 +39,8 @@ describe('the uncertainty run through the dynamic model', () => {
   });
 });
 
-describe('the dynamic model\'s chance of yield', () => {
-  it('is a control-variate estimate whose point is the JSON\'s yield_probability, within its interval', () => {
+describe("the dynamic model's chance of yield", () => {
+  it("is a control-variate estimate whose point is the JSON's yield_probability, within its interval", () => {
     const r = investigate(parseCase(text.concat('\nanalysis:\n  samples: 2000\n  dynamic_samples: 12\n')));
     const d = r.uncertainty!.dynamic!;
     expect(d.yieldChance).toMatchObject({ method: 'control-variates', runs: 12, controlSamples: 2000 });
@@ -51,7 +51,7 @@ describe('the dynamic model\'s chance of yield', () => {
     expect(j.uncertainty.dynamic.yield_probability).toBe(d.yieldChance.probability);
   });
 
-  it('each sample takes the base run\'s element count: at that count a run gives the refined run\'s verdict yield ratio', () => {
+  it("each sample takes the base run's element count: at that count a run gives the refined run's verdict yield ratio", () => {
     const c = parseCase(text);
     const base = analyseCase(c);
     expect(base.dynamic.refinement.length).toBeGreaterThan(1);

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { normalCdf } from '../../src/uncertainty/normal-cdf.ts';
 
 describe('normalCdf(x)', () => {
-  it('agrees with jstat\'s normal.cdf within 1.5e-7 (the bound of Abramowitz & Stegun 7.1.26)', () => {
+  it("agrees with jstat's normal.cdf within 1.5e-7 (the bound of Abramowitz & Stegun 7.1.26)", () => {
     for (let x = -8; x <= 8; x += 0.25) expect(Math.abs(normalCdf(x) - jStat.normal.cdf(x, 0, 1))).toBeLessThan(1.5e-7);
   });
 

@@ -33,7 +33,7 @@ describe('the speed interval behind a measured twist', () => {
   const text = readFileSync(new URL('granulator-tramp-metal.yaml', dir), 'utf8');
   const balance = '\nanalysis:\n  dynamic_plasticity: false\n  samples: 400\n';
 
-  it('contains the single run\'s speed for the measured twist, and the finding is judged by it', () => {
+  it("contains the single run's speed for the measured twist, and the finding is judged by it", () => {
     const c = parseCase(text.replace('angle: 4 deg', 'angle: 4 deg ± 1 deg').concat(balance));
     const r = investigate(c);
     const [lo, hi] = r.uncertainty!.observed[0].speedInterval!;

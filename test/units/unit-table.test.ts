@@ -54,7 +54,7 @@ describe('unit factors', () => {
     expect(unitFactor('kN·m/rad', 'stiffness')).toBe(1e3);
   });
 
-  it('normaliseUnit brings typed spellings to the table\'s', () => {
+  it("normaliseUnit brings typed spellings to the table's", () => {
     expect(normaliseUnit('kg·m²')).toBe('kg*m^2');
     expect(normaliseUnit('lb ft2')).toBe('lb*ft^2');
     expect(normaliseUnit('N/mm2')).toBe('N/mm^2');

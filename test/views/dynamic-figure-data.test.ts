@@ -9,7 +9,7 @@ const sample = (f: string) => withFinding(analyseCase(parseCase(readFileSync(new
 const r = sample('roll-line-limiter-two-sides.yaml');
 
 describe('figure data from Results', () => {
-  it('torque history: the finding\'s governing piece and each slip element, in ms and N·m', () => {
+  it("torque history: the finding's governing piece and each slip element, in ms and N·m", () => {
     const d = torqueHistoryData(r);
     const names = [...new Set(d.points.map((p) => p.series))];
     expect(names.slice(1)).toEqual(r.dynamic.histories.torques.map((s) => s.name));
@@ -19,7 +19,7 @@ describe('figure data from Results', () => {
     expect(first[first.length - 1].x).toBeCloseTo(r.dynamic.duration * 1000, 6);
   });
 
-  it('the piece named in the torque history is the finding\'s governing piece, not the one of highest peak torque (granulator)', () => {
+  it("the piece named in the torque history is the finding's governing piece, not the one of highest peak torque (granulator)", () => {
     const g = sample('granulator-tramp-metal.yaml');
     // The dynamic model's highest peak torque is in "rotor body"; the finding governs by stress / shear yield, "sheave seat".
     const top = g.dynamic.pieces.reduce((a, b) => (b.peakTorque > a.peakTorque ? b : a));

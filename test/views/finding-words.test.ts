@@ -23,7 +23,9 @@ describe('finding words', () => {
 
   it('chanceSentence says how the chance was obtained and its interval', () => {
     const f = { chance: { model: 'dynamic model', probability: 0.36, interval: [0.31, 0.413], method: 'control-variates', runs: 40, controlSamples: 10000 } } as unknown as Finding;
-    expect(chanceSentence(f)).toBe("Chance of yield under the case's tolerances: 36 % (95 % interval 31 % to 41 %), from 40 runs of the dynamic model, corrected by 10000 energy-method samples of the same draws (control variates).");
+    expect(chanceSentence(f)).toBe(
+      "Chance of yield under the case's tolerances: 36 % (95 % interval 31 % to 41 %), from 40 runs of the dynamic model, corrected by 10000 energy-method samples of the same draws (control variates).",
+    );
     expect(chanceSentence({ chance: undefined } as unknown as Finding)).toBeUndefined();
   });
 });

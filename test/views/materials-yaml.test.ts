@@ -7,7 +7,7 @@ import { MATERIAL_FIELDS } from '../../src/materials/material.ts';
 import { materialsToYaml } from '../../src/views/materials-yaml.ts';
 
 describe('materialsToYaml (materials --yaml)', () => {
-  it('reads back through the case reader as the library\'s materials, every value within six significant figures', () => {
+  it("reads back through the case reader as the library's materials, every value within six significant figures", () => {
     const text = materialsToYaml(MATERIAL_LIBRARY);
     const indented = text.replace(/^#.*\n/gm, '');
     const base = readFileSync(new URL('../data/one-disc.yaml', import.meta.url), 'utf8');

@@ -44,14 +44,16 @@ describe('resultsToJson: plastic and observed', () => {
   });
 
   it('writes "none" and "unknown" (no fracture limit, no speed) as null, never Infinity, so the output is valid JSON', () => {
-    const r = withFinding(analyseCase(
-      ep5Case({
-        material: ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa'],
-        segments: ['- { length: 250 mm, diameter: 40 mm }', '- { length: 250 mm, diameter: 60 mm }'],
-        stations: ['- { name: middle, at: 250 mm }'],
-        observed: ['permanent_twist:', '  - { between: [middle, disc], angle: 1 deg }'],
-      }),
-    ));
+    const r = withFinding(
+      analyseCase(
+        ep5Case({
+          material: ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa'],
+          segments: ['- { length: 250 mm, diameter: 40 mm }', '- { length: 250 mm, diameter: 60 mm }'],
+          stations: ['- { name: middle, at: 250 mm }'],
+          observed: ['permanent_twist:', '  - { between: [middle, disc], angle: 1 deg }'],
+        }),
+      ),
+    );
     const j = resultsToJson(r) as Record<string, any>;
     expect(j.observed[0].speed_for_measured_rad_s).toBeNull();
     expect(j.observed[0].yield_onset_speed_rad_s).toBeNull();

@@ -23,7 +23,7 @@ describe('renderSummary past yield and with observations', () => {
     expect(text).toMatch(/ELASTIC/);
   });
 
-  it('shows the read-back when the case records a twist, with the speed found and the band\'s basis', () => {
+  it("shows the read-back when the case records a twist, with the speed found and the band's basis", () => {
     const r = withFinding(analyseCase(ep5Case({ observed: ['permanent_twist:', '  - { between: [seized bearing, disc], angle: 0.5 deg }'] })));
     const text = renderSummary(r);
     expect(text).toMatch(/Read back from the damage:/);

@@ -31,7 +31,7 @@ describe('resize --json', () => {
     expect(resize.key).toMatchObject({ shear_stress_Pa: expect.any(Number), bearing_stress_Pa: expect.any(Number), shears_before_shaft_yields: false });
   });
 
-  it('gives null for what the case does not say: the limiter\'s lower end and the key', () => {
+  it("gives null for what the case does not say: the limiter's lower end and the key", () => {
     const { j } = json('edger-arbor-two-sides.yaml');
     expect(j.resize.limiter.min_Nm).toBeNull();
     // One loaded station a side, instantaneous stop, no drive: the energy method is exact.
@@ -41,7 +41,7 @@ describe('resize --json', () => {
     expect(j.resize.running.torque_Nm).toBeNull();
   });
 
-  it('carries the pick in snake_case, with its rule, and every option\'s flags', () => {
+  it("carries the pick in snake_case, with its rule, and every option's flags", () => {
     const { j } = json('screw-conveyor-jam-us.yaml');
     expect(j.resize.recommended).toMatchObject({ option: 'material:aisi-4340-qt540', reason: expect.stringMatching(/keeps N = 1.5/) });
     expect(j.resize.pick_rule).toMatch(/least change/);

@@ -14,8 +14,14 @@ const render = (text: string) => {
 };
 const layout = (drive?: string): Layout => ({
   rpm: 300,
-  segments: [[200, 40, 0, 1.5], [300, 50, 0]],
-  stations: [['pulley', 0, 2, drive && `    drive: ${drive}`], ['jam', 500, 0]],
+  segments: [
+    [200, 40, 0, 1.5],
+    [300, 50, 0],
+  ],
+  stations: [
+    ['pulley', 0, 2, drive && `    drive: ${drive}`],
+    ['jam', 500, 0],
+  ],
   stop: 'jam',
 });
 

@@ -21,7 +21,18 @@ describe('resultsToJson: the dynamic model', () => {
     expect(d.duration_s).toBe(r.dynamic.duration);
     expect(d.time_step_s).toBe(r.dynamic.timeStep);
     expect(d.elements).toBe(r.dynamic.elements);
-    expect(d.segments[0]).toEqual({ from_m: 0.1, to_m: 0.2, peak_torque_Nm: r.dynamic.pieces[0].peakTorque, elastic_peak_torque_Nm: r.dynamic.pieces[0].elasticPeakTorque, shear_stress_Pa: r.dynamic.pieces[0].shearStress, yield_ratio: r.dynamic.pieces[0].yieldRatio, permanent_twist_rad: r.dynamic.pieces[0].permanentTwist, max_shear_strain: r.dynamic.pieces[0].maxShearStrain, broken: false, break_time_s: null });
+    expect(d.segments[0]).toEqual({
+      from_m: 0.1,
+      to_m: 0.2,
+      peak_torque_Nm: r.dynamic.pieces[0].peakTorque,
+      elastic_peak_torque_Nm: r.dynamic.pieces[0].elasticPeakTorque,
+      shear_stress_Pa: r.dynamic.pieces[0].shearStress,
+      yield_ratio: r.dynamic.pieces[0].yieldRatio,
+      permanent_twist_rad: r.dynamic.pieces[0].permanentTwist,
+      max_shear_strain: r.dynamic.pieces[0].maxShearStrain,
+      broken: false,
+      break_time_s: null,
+    });
     expect(d.slip.map((s: any) => s.element)).toEqual(['the torque limiter in "limiter hub seat"', 'the belt at "drive pulley"']);
     expect(d.slip[0].energy_J).toBe(r.dynamic.slips[0].energy);
     expect(d.slip[0].angle_rad).toBe(r.dynamic.slips[0].angle);

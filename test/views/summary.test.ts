@@ -10,31 +10,33 @@ import { dynamicLines, renderSummary } from '../../src/views/summary.ts';
 const sample = (f: string) => withFinding(analyseCase(parseCase(readFileSync(new URL(`../../sample-cases/${f}`, import.meta.url), 'utf8'))));
 
 describe('the summary with the dynamic model', () => {
-  it('shows each side\'s peak as carried, and like for like its elastic peak and ratio; the lowest frequencies; what slipped', () => {
+  it("shows each side's peak as carried, and like for like its elastic peak and ratio; the lowest frequencies; what slipped", () => {
     const r = sample('granulator-tramp-metal.yaml');
     const lines = dynamicLines(r, "the finding's model").join('\n');
     const s = r.dynamic.sides[0];
     const elastic = Math.max(...r.dynamic.pieces.map((p) => p.elasticPeakTorque));
     expect(elastic).toBeGreaterThan(s.dynamicPeakTorque);
-    expect(lines).toContain(`peak torque as carried ${show(s.dynamicPeakTorque, 'torque', 'metric')} (capped past yield); elastic ${show(elastic, 'torque', 'metric')}, stress / shear yield ${sig(s.dynamicYieldRatio)}`);
+    expect(lines).toContain(
+      `peak torque as carried ${show(s.dynamicPeakTorque, 'torque', 'metric')} (capped past yield); elastic ${show(elastic, 'torque', 'metric')}, stress / shear yield ${sig(s.dynamicYieldRatio)}`,
+    );
     expect(lines).not.toContain('energy method');
     expect(lines).toContain(`${sig(r.dynamic.naturalFrequencies[0])}`);
     expect(lines).toMatch(/the belt at "drive sheave" \(slip torque 1870 N·m\) slipped .* still slipping at the end/);
   });
 
-  it('opens with the one finding line and its model\'s reason, and heads the other model as a comparison', () => {
+  it("opens with the one finding line and its model's reason, and heads the other model as a comparison", () => {
     const r = sample('granulator-tramp-metal.yaml');
     const text = renderSummary(r);
     const lines = text.split('\n');
     expect(lines[3]).toBe(`Finding: ${findingSentence(r.finding, 'metric')}`);
     expect(lines[4]).toBe(`  Why this model: ${r.verdictReason}`);
     expect(text).not.toMatch(/Verdict/);
-    expect(text.indexOf('Dynamic model (the finding\'s model')).toBeLessThan(text.indexOf('For comparison, the energy method'));
+    expect(text.indexOf("Dynamic model (the finding's model")).toBeLessThan(text.indexOf('For comparison, the energy method'));
     const edger = renderSummary(sample('edger-arbor-two-sides.yaml'));
-    expect(edger.indexOf('Energy method (the finding\'s model')).toBeLessThan(edger.indexOf('Dynamic model (for comparison'));
+    expect(edger.indexOf("Energy method (the finding's model")).toBeLessThan(edger.indexOf('Dynamic model (for comparison'));
   });
 
-  it('compares the models like for like: the dynamic model\'s elastic peak against the energy method\'s', () => {
+  it("compares the models like for like: the dynamic model's elastic peak against the energy method's", () => {
     const r = sample('edger-arbor-two-sides.yaml');
     const text = renderSummary(r);
     const worst = Math.max(...r.dynamic.sides.map((s) => Math.abs(Math.max(...r.dynamic.pieces.filter((p) => p.side === s.side).map((p) => p.elasticPeakTorque)) / s.energyPeakTorque - 1)));

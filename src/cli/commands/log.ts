@@ -33,7 +33,8 @@ export async function logCommand(dir: string, opts: LogOptions, io: Io, now: Dat
     try {
       writeNewFile(opts.html, renderLogPage(log, now.toISOString(), notes));
     } catch (e) {
-      if ((e as NodeJS.ErrnoException).code === 'EEXIST') throw new UsageError(`${opts.html} exists; the log never writes over a file: give a new name, such as incident-log-${now.toISOString().slice(0, 10)}.html`);
+      if ((e as NodeJS.ErrnoException).code === 'EEXIST')
+        throw new UsageError(`${opts.html} exists; the log never writes over a file: give a new name, such as incident-log-${now.toISOString().slice(0, 10)}.html`);
       throw systemFault(e, 'the log page', opts.html) ?? (e instanceof SystemFault ? e : e);
     }
   }

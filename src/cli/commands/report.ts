@@ -43,7 +43,13 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
   const template = readTemplate(opts.template);
   const photos = readPhotos(loaded.file, loaded.text, loaded.case.observed.photos);
   // Everything the report shows is computed here, once; rendering only reads it.
-  const computed = buildReportData(loaded.case, { samples: opts.samples, seed: opts.seed, factor: opts.factor, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings });
+  const computed = buildReportData(loaded.case, {
+    samples: opts.samples,
+    seed: opts.seed,
+    factor: opts.factor,
+    onDynamicProgress: terminalProgress('Dynamic model under the tolerances'),
+    inputWarnings,
+  });
   // A case of an asset: its place in the history, from the cases around it.
   const data = { ...computed, results: withAssetHistory(loaded, computed.results) };
   const { results } = data;
@@ -76,9 +82,20 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
     }
   }
 
-  const written = await writeReport({ caseFile: loaded.file, caseText: loaded.text, photos, files, caseId: loaded.case.meta.id, date: run.date, ranAt: now, ...(loaded.site ? { siteCatalogue: loaded.site.text } : {}) });
+  const written = await writeReport({
+    caseFile: loaded.file,
+    caseText: loaded.text,
+    photos,
+    files,
+    caseId: loaded.case.meta.id,
+    date: run.date,
+    ranAt: now,
+    ...(loaded.site ? { siteCatalogue: loaded.site.text } : {}),
+  });
   const lines = [`Wrote the report ${written.folder}/`, ...files.map((f) => `  ${f.path}`)];
-  lines.push(`Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${loaded.site ? 'the materials catalogue, ' : ''}${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`);
+  lines.push(
+    `Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${loaded.site ? 'the materials catalogue, ' : ''}${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`,
+  );
   lines.push(`Open ${written.folder}/report.html`);
   lines.push(`Finding: ${findingSentence(results.finding, results.case.units)}`);
   io.out(lines.join('\n') + '\n');

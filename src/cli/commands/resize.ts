@@ -16,7 +16,13 @@ export function resizeCommand(path: string, opts: { factor?: number; json?: bool
   const loaded = loadCase(path);
   const inputWarnings = screenInputs(loaded, opts.strict, io);
   // The options table shows no observations, so the twist read-back (reruns of the dynamic model) is made for --json only.
-  const results = investigate(loaded.case, { samples: opts.samples, seed: opts.seed, onDynamicProgress: terminalProgress('Dynamic model under the tolerances'), inputWarnings, readBack: opts.json === true });
+  const results = investigate(loaded.case, {
+    samples: opts.samples,
+    seed: opts.seed,
+    onDynamicProgress: terminalProgress('Dynamic model under the tolerances'),
+    inputWarnings,
+    readBack: opts.json === true,
+  });
   const z = resizeCase(loaded.case, results, { factor: opts.factor });
   io.out(opts.json ? JSON.stringify(resizeToJson(z), null, 2) + '\n' : renderResize(z));
 }

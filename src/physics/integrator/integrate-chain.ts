@@ -200,9 +200,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     peakTime: rec.peakTime,
     history: rec.history(),
     laws: st.laws,
-    belts: st.drives.map((d, i) =>
-      d.beltSlipTorque === undefined ? undefined : { slipWork: d.slipWork, slipAngle: d.slipAngle, peakTorque: rec.peakBelt[i], slippingAtEnd: !d.stuck },
-    ),
+    belts: st.drives.map((d, i) => (d.beltSlipTorque === undefined ? undefined : { slipWork: d.slipWork, slipAngle: d.slipAngle, peakTorque: rec.peakBelt[i], slippingAtEnd: !d.stuck })),
     jam: sys.stop.torqueCapacity === undefined ? undefined : { slipWork: st.jamWork, slipAngle: st.jamSlipAngle, slippingAtEnd: st.jam !== 0 },
     peakJamTorque: rec.peakJam,
     events,

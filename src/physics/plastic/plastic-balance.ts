@@ -130,11 +130,5 @@ function pieceState(p: BalancePiece, phi: number): PieceState {
 }
 
 function sameLaw(a: TorsionLaw, b: TorsionLaw): boolean {
-  return (
-    a.outerRadius === b.outerRadius &&
-    a.innerRadius === b.innerRadius &&
-    a.shearModulus === b.shearModulus &&
-    a.shearYield === b.shearYield &&
-    a.hardeningModulus === b.hardeningModulus
-  );
+  return a.outerRadius === b.outerRadius && a.innerRadius === b.innerRadius && a.shearModulus === b.shearModulus && a.shearYield === b.shearYield && a.hardeningModulus === b.hardeningModulus;
 }

@@ -91,8 +91,7 @@ export function energyPerLength(l: TorsionLaw, phi: number): number {
   const core = rho > c1 ? (Math.PI / 4) * g * phi ** 2 * (a ** 4 - c1 ** 4) : 0;
   // w = τ_Y(γ − γ_Y/2) + H(γ − γ_Y)²/2 in the rim.
   const rim = 2 * Math.PI * l.shearYield * ((phi * (c2 ** 3 - a ** 3)) / 3 - (gy * (c2 ** 2 - a ** 2)) / 4);
-  const hardening =
-    h > 0 ? Math.PI * h * ((phi ** 2 * (c2 ** 4 - a ** 4)) / 4 - (2 * phi * gy * (c2 ** 3 - a ** 3)) / 3 + (gy ** 2 * (c2 ** 2 - a ** 2)) / 2) : 0;
+  const hardening = h > 0 ? Math.PI * h * ((phi ** 2 * (c2 ** 4 - a ** 4)) / 4 - (2 * phi * gy * (c2 ** 3 - a ** 3)) / 3 + (gy ** 2 * (c2 ** 2 - a ** 2)) / 2) : 0;
   return core + rim + hardening;
 }
 

@@ -50,9 +50,7 @@ export class SeriesBackbone {
     this.firstToBreak = Number.isFinite(Tf) ? breakTorque.indexOf(Tf) : -1;
     // A piece that breaks at the same torque is at its own fracture rate, read straight (the
     // inverse of a nearly flat curve would lose digits there).
-    this.fractureTwist = Number.isFinite(Tf)
-      ? pieces.reduce((s, p, i) => s + p.length * (breakTorque[i] <= Tf * (1 + 1e-12) ? p.fractureTwistRate! : sectionTwistRate(p.law, Tf)), 0)
-      : Infinity;
+    this.fractureTwist = Number.isFinite(Tf) ? pieces.reduce((s, p, i) => s + p.length * (breakTorque[i] <= Tf * (1 + 1e-12) ? p.fractureTwistRate! : sectionTwistRate(p.law, Tf)), 0) : Infinity;
   }
 
   /** T₀(θ), N·m, θ ≥ 0. */

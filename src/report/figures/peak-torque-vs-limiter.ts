@@ -28,14 +28,21 @@ export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeR
   if (l.min !== undefined && !l.windowEmpty) marks.push(Plot.rect([{ x1: t(l.min), x2: t(l.max) }], { x1: 'x1', x2: 'x2', y1: yMin, y2: yMax, fill: '#cfe3cf' }));
   marks.push(
     Plot.ruleY([unlimited], { stroke: '#b00', strokeDasharray: '5 3' }),
-    Plot.text([{ x: points[0].x, y: unlimited }], { x: 'x', y: 'y', text: () => 'no limiter: the incident\'s peak', dy: -7, dx: 4, textAnchor: 'start', fill: '#b00' }),
+    Plot.text([{ x: points[0].x, y: unlimited }], { x: 'x', y: 'y', text: () => "no limiter: the incident's peak", dy: -7, dx: 4, textAnchor: 'start', fill: '#b00' }),
     Plot.ruleX([t(l.max)], { stroke: '#1f4e9c' }),
     Plot.text([{ x: t(l.max), y: yMax }], { x: 'x', y: 'y', text: () => 'allowable', dy: 8, dx: 4, textAnchor: 'start', fill: '#1f4e9c' }),
   );
   if (l.min !== undefined) {
     marks.push(
       Plot.ruleX([t(l.min)], { stroke: '#555', strokeDasharray: '2 3' }),
-      Plot.text([{ x: t(l.min), y: yMin }], { x: 'x', y: 'y', text: () => (l.windowEmpty ? 'running × service factor (window empty)' : 'running × service factor'), dy: -8, dx: -4, textAnchor: 'end' }),
+      Plot.text([{ x: t(l.min), y: yMin }], {
+        x: 'x',
+        y: 'y',
+        text: () => (l.windowEmpty ? 'running × service factor (window empty)' : 'running × service factor'),
+        dy: -8,
+        dx: -4,
+        textAnchor: 'end',
+      }),
     );
   }
   marks.push(Plot.line(points, { x: 'x', y: 'y', stroke: 'black' }));
@@ -51,7 +58,6 @@ export function peakTorqueAgainstLimiterFigure(results: Results, resize: ResizeR
   };
   const window = l.min === undefined ? 'the lower end is unknown (no running torque in the case)' : l.windowEmpty ? 'the window is empty' : 'shaded: the window of settings';
   const title = `Repeat-incident peak torque against the limiter's setting at "${l.station}"`;
-  const caption =
-    `Both axes logarithmic. Peak torque between the limiter and the stop in a repeat of the incident against the limiter's slip torque (${l.sweep[0].method}${l.slip.slipMethod === 'dynamic model' ? "; the option's own setting is checked through the dynamic model in the text" : ''}). Dashed red line: the incident's peak without a limiter. Blue line: the shaft's allowable torque at the design factor; ${window}.`;
+  const caption = `Both axes logarithmic. Peak torque between the limiter and the stop in a repeat of the incident against the limiter's slip torque (${l.sweep[0].method}${l.slip.slipMethod === 'dynamic model' ? "; the option's own setting is checked through the dynamic model in the text" : ''}). Dashed red line: the incident's peak without a limiter. Blue line: the shaft's allowable torque at the design factor; ${window}.`;
   return { name: 'resize-peak-torque-vs-limiter', title, caption, svg: plotToSvg(options, title, caption) };
 }

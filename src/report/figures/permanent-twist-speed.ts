@@ -40,15 +40,49 @@ function figure(r: Results, f: TwistFinding, i: number): ReportFigure {
   const marks: Plot.Markish[] = [
     band,
     ...(tol > 0
-      ? [Plot.rect([{ x1: 0, x2: xMax, y1: Math.max(0, measured - tol), y2: measured + tol }], { x1: 'x1', x2: 'x2', y1: 'y1', y2: 'y2', fill: '#59a14f', fillOpacity: 0.18, ariaDescription: 'measured twist band', title: () => `measured ${show(f.measurement.angle, 'angle', u)} ± ${show(f.angleTolerance, 'angle', u)}` })]
+      ? [
+          Plot.rect([{ x1: 0, x2: xMax, y1: Math.max(0, measured - tol), y2: measured + tol }], {
+            x1: 'x1',
+            x2: 'x2',
+            y1: 'y1',
+            y2: 'y2',
+            fill: '#59a14f',
+            fillOpacity: 0.18,
+            ariaDescription: 'measured twist band',
+            title: () => `measured ${show(f.measurement.angle, 'angle', u)} ± ${show(f.angleTolerance, 'angle', u)}`,
+          }),
+        ]
       : []),
     Plot.ruleX([rpm(f.recordedSpeed)], { stroke: '#f28e2b', strokeWidth: 1.5, ariaDescription: 'recorded speed' }),
     Plot.ruleY([measured], { stroke: '#59a14f', strokeWidth: 1.5, strokeDasharray: '5,3', ariaDescription: 'measured twist' }),
     Plot.ruleY([0]),
     Plot.line(curve, { x: 'x', y: 'y', stroke: '#4e79a7', strokeWidth: 2, ariaDescription: 'permanent twist against speed' }),
-    Plot.dot(curve, { x: 'x', y: 'y', r: 3, fill: 'transparent', stroke: 'none', title: (p: { x: number; y: number }) => `${sig(p.x)} ${unitLabel('speed', u)}: ${sig(p.y)} ${unitLabel('angle', u)} permanent twist` }),
-    Plot.text([{ x: rpm(f.recordedSpeed), y: yTop }], { x: 'x', y: 'y', text: () => `recorded ${show(f.recordedSpeed, 'speed', u, 4)}`, dy: 10, dx: 4, textAnchor: 'start', ariaDescription: 'recorded speed label' }),
-    Plot.text([{ x: 0, y: measured }], { x: 'x', y: 'y', text: () => `measured ${show(f.measurement.angle, 'angle', u)}`, dy: -6, dx: 4, textAnchor: 'start', ariaDescription: 'measured twist label' }),
+    Plot.dot(curve, {
+      x: 'x',
+      y: 'y',
+      r: 3,
+      fill: 'transparent',
+      stroke: 'none',
+      title: (p: { x: number; y: number }) => `${sig(p.x)} ${unitLabel('speed', u)}: ${sig(p.y)} ${unitLabel('angle', u)} permanent twist`,
+    }),
+    Plot.text([{ x: rpm(f.recordedSpeed), y: yTop }], {
+      x: 'x',
+      y: 'y',
+      text: () => `recorded ${show(f.recordedSpeed, 'speed', u, 4)}`,
+      dy: 10,
+      dx: 4,
+      textAnchor: 'start',
+      ariaDescription: 'recorded speed label',
+    }),
+    Plot.text([{ x: 0, y: measured }], {
+      x: 'x',
+      y: 'y',
+      text: () => `measured ${show(f.measurement.angle, 'angle', u)}`,
+      dy: -6,
+      dx: 4,
+      textAnchor: 'start',
+      ariaDescription: 'measured twist label',
+    }),
   ];
   if (f.speedForMeasured !== undefined && f.measurement.angle > 0) {
     const hit = { x: rpm(f.speedForMeasured), y: measured };
@@ -76,7 +110,6 @@ function figure(r: Results, f: TwistFinding, i: number): ReportFigure {
     ? ` (orange line); shaded green, the 5–95 % interval of the speeds that explain the measured twist over the case's tolerances, ${show(lo, 'speed', u, 4)} to ${show(hi, 'speed', u, 4)}`
     : ` with its ${f.band.basis === 'default' ? 'default ±10 %' : 'stated'} band (shaded orange)`;
   const title = `Permanent twist between "${a}" and "${b}" against the speed at the stop`;
-  const caption =
-    `Predicted permanent twist between the stations for a stop from each speed; the recorded ${show(f.recordedSpeed, 'speed', u, 4)}${bandWords}, and the measured ${show(f.measurement.angle, 'angle', u)}${tol > 0 ? ` ± ${show(f.angleTolerance, 'angle', u)} (its band shaded green across)` : ' (the case states no ± on it)'}: ${read}.`;
+  const caption = `Predicted permanent twist between the stations for a stop from each speed; the recorded ${show(f.recordedSpeed, 'speed', u, 4)}${bandWords}, and the measured ${show(f.measurement.angle, 'angle', u)}${tol > 0 ? ` ± ${show(f.angleTolerance, 'angle', u)} (its band shaded green across)` : ' (the case states no ± on it)'}: ${read}.`;
   return { name: `permanent-twist-speed-${i + 1}`, title, caption, svg: plotToSvg(options, title, caption) };
 }

@@ -34,7 +34,15 @@ export function sensitivityFigure(r: Results): ReportFigure | undefined {
   const label = (end: 'low' | 'high', outward: 'left' | 'right') =>
     Plot.text(
       half(end).filter((d) => (outward === 'right' ? d.value >= r.yieldRatio : d.value < r.yieldRatio)),
-      { x: 'x2', y: 'name', text: (d) => sig(d.value), dx: outward === 'right' ? 4 : -4, textAnchor: outward === 'right' ? 'start' : 'end', fill: end === 'low' ? LOW : HIGH, ariaDescription: `${end} end value` },
+      {
+        x: 'x2',
+        y: 'name',
+        text: (d) => sig(d.value),
+        dx: outward === 'right' ? 4 : -4,
+        textAnchor: outward === 'right' ? 'start' : 'end',
+        fill: end === 'low' ? LOW : HIGH,
+        ariaDescription: `${end} end value`,
+      },
     );
   const marks: Plot.Markish[] = [
     Plot.barX(half('low'), { x1: 'x1', x2: 'x2', y: 'name', fill: LOW, insetTop: 6, insetBottom: 6, ariaDescription: 'input at the low end of its band' }),

@@ -57,12 +57,25 @@ export function shaftSchematicFigure(r: Results): ReportFigure | undefined {
   const px = (x: number) => MARGIN.left + ((x - xDomain[0]) / (xDomain[1] - xDomain[0])) * innerWidth;
   const stationText = (s: (typeof c.stations)[number]) => (s === stop ? `STOP: ${s.name}` : s.name);
   const stationLabels = placeLabels(c.stations, (s) => px(len(s.at)), stationText, FIGURE_WIDTH);
-  const partLabels = placeLabels(blocks, (b) => px(b.at), (b) => b.label, FIGURE_WIDTH);
+  const partLabels = placeLabels(
+    blocks,
+    (b) => px(b.at),
+    (b) => b.label,
+    FIGURE_WIDTH,
+  );
   const rows = Math.max(1, ...stationLabels.map((l) => l.row + 1));
   const partRows = Math.max(1, ...partLabels.map((l) => l.row + 1));
   // Plot's text anchor and offset are one value per mark: one mark per anchor and row.
-  const anchored = <T,>(labels: PlacedLabel<T>[], mark: (ls: PlacedLabel<T>[], anchor: 'start' | 'middle' | 'end', row: number) => Plot.Markish) =>
-    (['start', 'middle', 'end'] as const).flatMap((a) => [...new Set(labels.map((l) => l.row))].map((row) => mark(labels.filter((l) => l.anchor === a && l.row === row), a, row)));
+  const anchored = <T>(labels: PlacedLabel<T>[], mark: (ls: PlacedLabel<T>[], anchor: 'start' | 'middle' | 'end', row: number) => Plot.Markish) =>
+    (['start', 'middle', 'end'] as const).flatMap((a) =>
+      [...new Set(labels.map((l) => l.row))].map((row) =>
+        mark(
+          labels.filter((l) => l.anchor === a && l.row === row),
+          a,
+          row,
+        ),
+      ),
+    );
 
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
@@ -73,17 +86,68 @@ export function shaftSchematicFigure(r: Results): ReportFigure | undefined {
     x: { domain: xDomain, label: `position from the shaft's start (${unitLabel('length', u)})`, labelAnchor: 'center' },
     y: { domain: yDomain, label: `radius (${unitLabel('length', u)})` },
     marks: [
-      Plot.rect(blocks.filter((b) => !b.toScale), { x1: 'x1', x2: 'x2', y1: 'y1', y2: 'y2', fill: '#efe6d3', stroke: '#6b5a3a', strokeDasharray: '4,3', title: (b: Block) => `${b.label} (not to scale)` }),
-      Plot.rect(blocks.filter((b) => b.toScale), { x1: 'x1', x2: 'x2', y1: 'y1', y2: 'y2', fill: '#d9c7a3', stroke: '#6b5a3a', fillOpacity: 0.9, title: (b: Block) => `${b.label}: ${sig(b.x2 - b.x1, 3)} × Ø${sig(b.y2 - b.y1, 3)} ${unitLabel('length', u)}, centred at ${sig(b.at, 4)}` }),
-      Plot.rect(segments, { x1: (s) => len(s.start), x2: (s) => len(s.end), y1: (s) => len(-s.diameter / 2), y2: (s) => len(s.diameter / 2), fill: '#b8bec7', stroke: '#333', title: (s: (typeof segments)[number]) => `${s.label ?? `segment ${s.index + 1}`}: Ø${sig(len(s.diameter), 3)} ${unitLabel('length', u)}, ${sig(len(s.start), 4)} to ${sig(len(s.end), 4)}` }),
-      Plot.rect(segments.filter((s) => s.bore > 0), { x1: (s) => len(s.start), x2: (s) => len(s.end), y1: (s) => len(-s.bore / 2), y2: (s) => len(s.bore / 2), fill: 'white', stroke: '#333', strokeDasharray: '3,2' }),
+      Plot.rect(
+        blocks.filter((b) => !b.toScale),
+        { x1: 'x1', x2: 'x2', y1: 'y1', y2: 'y2', fill: '#efe6d3', stroke: '#6b5a3a', strokeDasharray: '4,3', title: (b: Block) => `${b.label} (not to scale)` },
+      ),
+      Plot.rect(
+        blocks.filter((b) => b.toScale),
+        {
+          x1: 'x1',
+          x2: 'x2',
+          y1: 'y1',
+          y2: 'y2',
+          fill: '#d9c7a3',
+          stroke: '#6b5a3a',
+          fillOpacity: 0.9,
+          title: (b: Block) => `${b.label}: ${sig(b.x2 - b.x1, 3)} × Ø${sig(b.y2 - b.y1, 3)} ${unitLabel('length', u)}, centred at ${sig(b.at, 4)}`,
+        },
+      ),
+      Plot.rect(segments, {
+        x1: (s) => len(s.start),
+        x2: (s) => len(s.end),
+        y1: (s) => len(-s.diameter / 2),
+        y2: (s) => len(s.diameter / 2),
+        fill: '#b8bec7',
+        stroke: '#333',
+        title: (s: (typeof segments)[number]) => `${s.label ?? `segment ${s.index + 1}`}: Ø${sig(len(s.diameter), 3)} ${unitLabel('length', u)}, ${sig(len(s.start), 4)} to ${sig(len(s.end), 4)}`,
+      }),
+      Plot.rect(
+        segments.filter((s) => s.bore > 0),
+        { x1: (s) => len(s.start), x2: (s) => len(s.end), y1: (s) => len(-s.bore / 2), y2: (s) => len(s.bore / 2), fill: 'white', stroke: '#333', strokeDasharray: '3,2' },
+      ),
       Plot.text(segments, { x: (s) => len((s.start + s.end) / 2), y: (s) => len(-s.diameter / 2), text: (s) => `Ø${sig(len(s.diameter), 3)}`, dy: 10, fontSize: 9 }),
-      Plot.ruleX(c.stations.filter((s) => s !== stop), { x: (s) => len(s.at), stroke: '#777', strokeDasharray: '2,3' }),
+      Plot.ruleX(
+        c.stations.filter((s) => s !== stop),
+        { x: (s) => len(s.at), stroke: '#777', strokeDasharray: '2,3' },
+      ),
       Plot.ruleX([stop], { x: (s) => len(s.at), stroke: '#b22222', strokeWidth: 2.5 }),
       ...anchored(stationLabels, (ls, a, row) =>
-        Plot.text(ls, { x: (l) => len(l.item.at), y: yDomain[1], text: (l) => stationText(l.item), textAnchor: a, lineAnchor: 'bottom', dy: -4 - 12 * row, fill: (l) => (l.item === stop ? '#b22222' : '#333'), fontWeight: 'bold', ariaDescription: 'station label' }),
+        Plot.text(ls, {
+          x: (l) => len(l.item.at),
+          y: yDomain[1],
+          text: (l) => stationText(l.item),
+          textAnchor: a,
+          lineAnchor: 'bottom',
+          dy: -4 - 12 * row,
+          fill: (l) => (l.item === stop ? '#b22222' : '#333'),
+          fontWeight: 'bold',
+          ariaDescription: 'station label',
+        }),
       ),
-      ...anchored(partLabels, (ls, a, row) => Plot.text(ls, { x: (l) => l.item.at, y: yDomain[0], text: (l) => l.item.label, textAnchor: a, lineAnchor: 'bottom', dy: -3 - 11 * row, fontSize: 9, fill: '#6b5a3a', ariaDescription: 'part label' })),
+      ...anchored(partLabels, (ls, a, row) =>
+        Plot.text(ls, {
+          x: (l) => l.item.at,
+          y: yDomain[0],
+          text: (l) => l.item.label,
+          textAnchor: a,
+          lineAnchor: 'bottom',
+          dy: -3 - 11 * row,
+          fontSize: 9,
+          fill: '#6b5a3a',
+          ariaDescription: 'part label',
+        }),
+      ),
     ],
   };
   const title = 'The shaft as modelled';
@@ -99,4 +163,3 @@ function partSize(p: Part, shaftDiameter: number, shaftLength: number): { width:
   if (p.speedRatio === 1 && p.shape === 'mass') return { width: nominalWidth * 2, height: 2 * Math.SQRT2 * p.dimensions.radius_of_gyration, toScale: false };
   return { width: nominalWidth, height: 2 * shaftDiameter, toScale: false };
 }
-

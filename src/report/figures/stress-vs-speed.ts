@@ -55,12 +55,32 @@ export function stressVsSpeedFigure(r: Results): ReportFigure | undefined {
           ]
         : []),
       Plot.line(points, { x: 'x', y: 'y', stroke: '#1f4e8c', strokeWidth: 2, strokeOpacity: r.yieldRatio > 1 ? 0.55 : 1, ariaDescription: 'elastic stress' }),
-      Plot.dot(points, { x: 'x', y: 'y', r: 4, fill: 'transparent', stroke: 'none', title: (p: { x: number; y: number }) => `${sig(p.x)} ${unitLabel('speed', u)}: elastic ${sig(p.y)} ${unitLabel('stress', u)}` }),
+      Plot.dot(points, {
+        x: 'x',
+        y: 'y',
+        r: 4,
+        fill: 'transparent',
+        stroke: 'none',
+        title: (p: { x: number; y: number }) => `${sig(p.x)} ${unitLabel('speed', u)}: elastic ${sig(p.y)} ${unitLabel('stress', u)}`,
+      }),
       ...(r.yieldRatio > 1
         ? [
             // Past yield the real stress is held at shear yield (elastic–perfectly plastic): the capped value.
-            Plot.line(points.map((p) => ({ x: p.x, y: Math.min(p.y, tauY) })), { x: 'x', y: 'y', stroke: '#b22222', strokeWidth: 2.5, ariaDescription: 'capped stress' }),
-            Plot.text([incident], { x: 'x', y: 'y', text: () => 'elastic: fictitious past yield', dy: -14, dx: -8, textAnchor: 'end', fill: '#1f4e8c', fontStyle: 'italic', ariaDescription: 'elastic past yield note' }),
+            Plot.line(
+              points.map((p) => ({ x: p.x, y: Math.min(p.y, tauY) })),
+              { x: 'x', y: 'y', stroke: '#b22222', strokeWidth: 2.5, ariaDescription: 'capped stress' },
+            ),
+            Plot.text([incident], {
+              x: 'x',
+              y: 'y',
+              text: () => 'elastic: fictitious past yield',
+              dy: -14,
+              dx: -8,
+              textAnchor: 'end',
+              fill: '#1f4e8c',
+              fontStyle: 'italic',
+              ariaDescription: 'elastic past yield note',
+            }),
           ]
         : []),
       Plot.dot([incident], { x: 'x', y: 'y', r: 5, fill: '#b22222' }),
@@ -71,7 +91,8 @@ export function stressVsSpeedFigure(r: Results): ReportFigure | undefined {
   const where = yieldShown
     ? `yield begins at ${show(yieldSpeed, 'speed', u)}, ${sig((100 * yieldSpeed) / r.speed)} % of the incident's ${show(r.speed, 'speed', u, 4)}`
     : `yield would begin only at ${show(yieldSpeed, 'speed', u)}, beyond the plotted range`;
-  const capped = r.yieldRatio > 1 ? ' Above yield the blue line is fictitious (no real stress exceeds shear yield); the red line is the stress the section can really carry, capped at shear yield.' : '';
+  const capped =
+    r.yieldRatio > 1 ? ' Above yield the blue line is fictitious (no real stress exceeds shear yield); the red line is the stress the section can really carry, capped at shear yield.' : '';
   const caption = `The elastic stress in the most-loaded piece grows in proportion to the speed at the stop (energy method); ${where}.${capped}`;
   return { name: 'stress-vs-speed', title, caption, svg: plotToSvg(options, title, caption) };
 }

@@ -53,9 +53,7 @@ export function frameFigure(plot: Element, title: string, caption: string): stri
     .filter(([, v]) => v !== null)
     .map(([a, v]) => ` ${a}="${escapeXml(v!)}"`)
     .join('');
-  const captionText = lines
-    .map((l, i) => `<text x="0" y="${TITLE_HEIGHT + height + 8 + (i + 1) * CAPTION_LINE - 4}" font-size="12" text-anchor="start">${escapeXml(l)}</text>`)
-    .join('');
+  const captionText = lines.map((l, i) => `<text x="0" y="${TITLE_HEIGHT + height + 8 + (i + 1) * CAPTION_LINE - 4}" font-size="12" text-anchor="start">${escapeXml(l)}</text>`).join('');
   return (
     `<svg xmlns="http://www.w3.org/2000/svg" role="img" width="${width}" height="${total}" viewBox="0 0 ${width} ${total}"${attrs}>` +
     `<title>${escapeXml(title)}</title><desc>${escapeXml(caption)}</desc>` +

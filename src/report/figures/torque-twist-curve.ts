@@ -42,7 +42,18 @@ export function torqueTwistFigure(r: Results): ReportFigure | undefined {
   ];
   if (Number.isFinite(piece.yieldTorque) && piece.yielded) {
     marks.push(Plot.ruleY([tq(piece.plasticTorque)], { stroke: '#999', strokeDasharray: '2,3', ariaDescription: 'fully plastic torque' }));
-    marks.push(Plot.text([{ x: 0, y: tq(piece.plasticTorque) }], { x: 'x', y: 'y', text: () => `fully plastic ${show(piece.plasticTorque, 'torque', u)}`, dy: -7, dx: 6, textAnchor: 'start', fill: '#666', ariaDescription: 'fully plastic label' }));
+    marks.push(
+      Plot.text([{ x: 0, y: tq(piece.plasticTorque) }], {
+        x: 'x',
+        y: 'y',
+        text: () => `fully plastic ${show(piece.plasticTorque, 'torque', u)}`,
+        dy: -7,
+        dx: 6,
+        textAnchor: 'start',
+        fill: '#666',
+        ariaDescription: 'fully plastic label',
+      }),
+    );
   }
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,

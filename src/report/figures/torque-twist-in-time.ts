@@ -31,7 +31,15 @@ export function torqueTwistInTimeFigure(r: Results): ReportFigure | undefined {
     Plot.dot([rest], { x: 'x', y: 'y', fill: '#000', r: 3.5, ariaDescription: 'permanent twist' }),
     Plot.text([rest], { x: 'x', y: 'y', text: () => `permanent twist ${show(p.permanentTwist, 'angle', u)}`, dy: 14, textAnchor: 'end', ariaDescription: 'permanent twist label' }),
     Plot.ruleY([tq(p.peakTorque)], { stroke: '#999', strokeDasharray: '2,3', ariaDescription: 'peak torque' }),
-    Plot.text([{ x: Math.min(...xs), y: tq(p.peakTorque) }], { x: 'x', y: 'y', text: () => `peak ${show(p.peakTorque, 'torque', u)}`, dy: -7, textAnchor: 'start', fill: '#666', ariaDescription: 'peak label' }),
+    Plot.text([{ x: Math.min(...xs), y: tq(p.peakTorque) }], {
+      x: 'x',
+      y: 'y',
+      text: () => `peak ${show(p.peakTorque, 'torque', u)}`,
+      dy: -7,
+      textAnchor: 'start',
+      fill: '#666',
+      ariaDescription: 'peak label',
+    }),
   ];
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,

@@ -30,7 +30,14 @@ export function yieldRatioAgainstDiameterFigure(results: Results, resize: Resize
   const marks: Plot.Markish[] = [
     Plot.ruleX(k.stockSizes.map(d), { y1: yMin, y2: tickTop, stroke: '#888' }),
     Plot.ruleY([1 / resize.designFactor], { stroke: '#b00', strokeDasharray: '5 3' }),
-    Plot.text([{ x: d(k.sweep[k.sweep.length - 1].diameter), y: 1 / resize.designFactor }], { x: 'x', y: 'y', text: () => `1/N = ${sig(1 / resize.designFactor)} (N = ${sig(resize.designFactor)})`, dy: -7, textAnchor: 'end', fill: '#b00' }),
+    Plot.text([{ x: d(k.sweep[k.sweep.length - 1].diameter), y: 1 / resize.designFactor }], {
+      x: 'x',
+      y: 'y',
+      text: () => `1/N = ${sig(1 / resize.designFactor)} (N = ${sig(resize.designFactor)})`,
+      dy: -7,
+      textAnchor: 'end',
+      fill: '#b00',
+    }),
     Plot.ruleX([d(k.segment.diameter)], { stroke: '#555', strokeDasharray: '2 3' }),
     Plot.text([{ x: d(k.segment.diameter), y: yMax }], { x: 'x', y: 'y', text: () => 'present', dy: 8, dx: 4, textAnchor: 'start' }),
     Plot.line(ownPoints, { x: 'x', y: 'y', stroke: '#6a8fc7', strokeDasharray: '4 2' }),
@@ -38,7 +45,10 @@ export function yieldRatioAgainstDiameterFigure(results: Results, resize: Resize
   ];
   if (k.stockDiameter !== undefined && k.stockRerun) {
     const pt = [{ x: d(k.stockDiameter), y: sideYieldRatio(k.stockRerun, k.side) }];
-    marks.push(Plot.dot(pt, { x: 'x', y: 'y', r: 4, fill: 'black' }), Plot.text(pt, { x: 'x', y: 'y', text: () => `stock Ø${sig(pt[0].x)} ${unitLabel('length', u)}`, dx: 6, dy: -8, textAnchor: 'start' }));
+    marks.push(
+      Plot.dot(pt, { x: 'x', y: 'y', r: 4, fill: 'black' }),
+      Plot.text(pt, { x: 'x', y: 'y', text: () => `stock Ø${sig(pt[0].x)} ${unitLabel('length', u)}`, dx: 6, dy: -8, textAnchor: 'start' }),
+    );
   }
   const options: Plot.PlotOptions = {
     width: FIGURE_WIDTH,
@@ -51,7 +61,6 @@ export function yieldRatioAgainstDiameterFigure(results: Results, resize: Resize
     marks,
   };
   const title = `Repeat-incident stress / shear yield against the diameter of ${seg}`;
-  const caption =
-    `Highest stress / shear yield on side ${k.side} (solid) and of ${seg} itself (dashed) in a repeat of the incident, the other segments as they are and the bore ratio kept; each point is a rerun of the elastic energy method. Dashed red line: 1/N for the design factor N = ${sig(resize.designFactor)}. Ticks at the foot: stock sizes (${resize.stockSeries}).`;
+  const caption = `Highest stress / shear yield on side ${k.side} (solid) and of ${seg} itself (dashed) in a repeat of the incident, the other segments as they are and the bore ratio kept; each point is a rerun of the elastic energy method. Dashed red line: 1/N for the design factor N = ${sig(resize.designFactor)}. Ticks at the foot: stock sizes (${resize.stockSeries}).`;
   return { name: 'resize-yield-ratio-vs-diameter', title, caption, svg: plotToSvg(options, title, caption) };
 }

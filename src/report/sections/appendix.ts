@@ -15,7 +15,7 @@ export const appendixSection: ReportSection = {
       `| SHA-256 of the case file | \`${source.sha256}\` |`,
     ].join('\n');
     const files = escapeMarkdown(
-      'The report folder also holds results.json (every number at full precision, SI, with the inputs as parsed), the tables above as CSV files in the tables folder (full precision, in the units shown) and each figure as an SVG file in the figures folder; the zip beside it adds the case file, its photos and MANIFEST.txt with every file\'s SHA-256.',
+      "The report folder also holds results.json (every number at full precision, SI, with the inputs as parsed), the tables above as CSV files in the tables folder (full precision, in the units shown) and each figure as an SVG file in the figures folder; the zip beside it adds the case file, its photos and MANIFEST.txt with every file's SHA-256.",
     );
     return `${table}\n\n${files}\n\n**The case file as given:**\n\n${codeBlock(source.text, 'yaml')}`;
   },

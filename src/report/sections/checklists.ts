@@ -16,7 +16,12 @@ export function inspectionItems(r: Investigation): string[] {
   const seg = f.piece.segment;
   const name = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
   const keyed = c.stations.filter((s) => s.key && s.at >= f.piece.start - 1e-9 && s.at <= f.piece.end + 1e-9).map((s) => `"${s.name}"`);
-  const where = [keyed.length > 0 ? `the keyseat under ${keyed.join(' and ')}` : '', seg.kt !== 1 ? `the fillets at the ends of ${name} (kt ${sig(seg.kt)})` : `${name} along its length and the fillets at its ends`].filter(Boolean).join(' and ');
+  const where = [
+    keyed.length > 0 ? `the keyseat under ${keyed.join(' and ')}` : '',
+    seg.kt !== 1 ? `the fillets at the ends of ${name} (kt ${sig(seg.kt)})` : `${name} along its length and the fillets at its ends`,
+  ]
+    .filter(Boolean)
+    .join(' and ');
   const method = f.brittle ? 'dye penetrant (brittle material: look for cracks, not bending)' : 'magnetic particle (dye penetrant where not magnetic)';
   const side = r.sides.find((s) => s.side === f.side);
   const stations = side ? side.stations.map((s) => `"${s}"`).join(', ') : 'every loaded station';

@@ -11,7 +11,9 @@ export const couplingsSection: ReportSection = {
     if (lines.length === 0) return undefined;
     return [
       bulletList(lines.map(escapeMarkdown)),
-      escapeMarkdown("A flexible coupling is a spring in series with the shaft: its compliance adds to the shaft's in both the energy method and the dynamic model, so it lowers the peak torque and the natural frequencies. The ratings are the maker's; its service factors and the coupling's condition govern."),
+      escapeMarkdown(
+        "A flexible coupling is a spring in series with the shaft: its compliance adds to the shaft's in both the energy method and the dynamic model, so it lowers the peak torque and the natural frequencies. The ratings are the maker's; its service factors and the coupling's condition govern.",
+      ),
     ].join('\n\n');
   },
 };

@@ -12,7 +12,8 @@ export const driveProtectionSection: ReportSection = {
     if (d.protection.length === 0) return undefined;
     const lines = d.protection.map((p) => {
       const out = [`Drive at "${p.station}":`];
-      if (p.torqueLimit !== undefined) out.push(`the drive holds the motor's torque to ${show(p.torqueLimit, 'torque', u)} at the motor shaft (its torque limit), and the dynamic model follows that limit from the stop on.`);
+      if (p.torqueLimit !== undefined)
+        out.push(`the drive holds the motor's torque to ${show(p.torqueLimit, 'torque', u)} at the motor shaft (its torque limit), and the dynamic model follows that limit from the stop on.`);
       if (p.tripAfter !== undefined) {
         out.push(
           p.trippedAt === undefined

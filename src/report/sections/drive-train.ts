@@ -14,7 +14,9 @@ export const driveTrainSection: ReportSection = {
     return [
       escapeMarkdown(weakestSentence(f, u) ?? ''),
       ['| order | element | capacity | torque in the incident | ratio | gives way when it |', '| ---: | :--- | ---: | ---: | ---: | :--- |', ...rows].join('\n'),
-      escapeMarkdown("Torques at shaft speed, where each element sits, by the finding's model. A shaft piece's torque is its elastic peak, as the finding's stress over shear yield; a device that slipped or parted stands at a ratio of at least 1. The order is by ratio: the first to reach its capacity gives way first."),
+      escapeMarkdown(
+        "Torques at shaft speed, where each element sits, by the finding's model. A shaft piece's torque is its elastic peak, as the finding's stress over shear yield; a device that slipped or parted stands at a ratio of at least 1. The order is by ratio: the first to reach its capacity gives way first.",
+      ),
     ].join('\n\n');
   },
 };

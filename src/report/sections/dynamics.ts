@@ -31,10 +31,18 @@ export function renderDynamicsBody(r: Results): string {
   out.push('| side | stations | peak torque, energy method (elastic) | peak torque as carried, dynamic model | stress / shear yield, energy method | stress / shear yield, dynamic model |');
   out.push('|---|---|---|---|---|---|');
   for (const s of d.sides) {
-    const stations = r.sides.find((x) => x.side === s.side)?.stations.map(escapeMarkdown).join(', ') ?? '';
+    const stations =
+      r.sides
+        .find((x) => x.side === s.side)
+        ?.stations.map(escapeMarkdown)
+        .join(', ') ?? '';
     out.push(`| ${s.side} | ${stations} | ${show(s.energyPeakTorque, 'torque', u)} | ${show(s.dynamicPeakTorque, 'torque', u)} | ${sig(s.energyYieldRatio)} | ${sig(s.dynamicYieldRatio)} |`);
   }
-  out.push('', `The finding (page 1) stands on the ${r.verdictBasis}. The dynamic model's peak torque in this table is the one carried (capped past yield where a piece yields); its stress / shear yield is that of the same chain kept elastic, like for like with the energy method's.`, '');
+  out.push(
+    '',
+    `The finding (page 1) stands on the ${r.verdictBasis}. The dynamic model's peak torque in this table is the one carried (capped past yield where a piece yields); its stress / shear yield is that of the same chain kept elastic, like for like with the energy method's.`,
+    '',
+  );
 
   const capped = d.pieces.some((p) => p.elasticPeakTorque > p.peakTorque * (1 + 1e-6));
   out.push('### Peak torque along the shaft, dynamic model', '');
@@ -49,7 +57,12 @@ export function renderDynamicsBody(r: Results): string {
   }
   out.push('');
   if (capped) {
-    out.push(escapeMarkdown('Past yield the shaft elements carry at most their fully plastic torque; the shear stress and stress / shear yield are those of the same chain solved with the shaft kept elastic (the elastic check, like the energy method\'s), which says how far past yield the incident went.'), '');
+    out.push(
+      escapeMarkdown(
+        "Past yield the shaft elements carry at most their fully plastic torque; the shear stress and stress / shear yield are those of the same chain solved with the shaft kept elastic (the elastic check, like the energy method's), which says how far past yield the incident went.",
+      ),
+      '',
+    );
   }
 
   out.push(...protectionLines(r, d));
@@ -83,7 +96,7 @@ export function renderDynamicsDetails(r: Results): string {
 function refinementText(d: DynamicResult): string {
   if (d.refinement.length <= 1) return `${d.elements} shaft element${d.elements === 1 ? '' : 's'}.`;
   const counts = d.refinement.map((x) => x.elements).join(', ');
-  return `shaft split into ${counts} elements in turn${d.converged ? ', until no piece\'s peak torque changed by more than 0.5 %.' : '; the peak torques had not yet settled to 0.5 %.'}`;
+  return `shaft split into ${counts} elements in turn${d.converged ? ", until no piece's peak torque changed by more than 0.5 %." : '; the peak torques had not yet settled to 0.5 %.'}`;
 }
 
 function protectionLines(r: Results, d: DynamicResult): string[] {
@@ -96,12 +109,16 @@ function protectionLines(r: Results, d: DynamicResult): string[] {
     out.push('|---|---|---|---|---|---|');
     for (const s of d.slips) {
       const first = s.firstSlip === undefined ? 'did not slip' : `${sig(s.firstSlip * 1000)} ms`;
-      out.push(`| ${escapeMarkdown(s.element)} | ${show(s.slipTorque, 'torque', u)} | ${first} | ${showSlipAngle(s.angle, u)} | ${show(s.energy, 'energy', u)} | ${s.slippingAtEnd ? 'still slipping' : 'holding'} |`);
+      out.push(
+        `| ${escapeMarkdown(s.element)} | ${show(s.slipTorque, 'torque', u)} | ${first} | ${showSlipAngle(s.angle, u)} | ${show(s.energy, 'energy', u)} | ${s.slippingAtEnd ? 'still slipping' : 'holding'} |`,
+      );
     }
     out.push('');
   }
   for (const p of d.pins) {
-    out.push(`- ${escapeMarkdown(p.element)} (parting torque ${show(p.shearTorque, 'torque', u)}): ${p.partedAt === undefined ? 'held' : `parted at ${sig(p.partedAt * 1000)} ms; the shaft beyond it carried nothing afterwards`}.`);
+    out.push(
+      `- ${escapeMarkdown(p.element)} (parting torque ${show(p.shearTorque, 'torque', u)}): ${p.partedAt === undefined ? 'held' : `parted at ${sig(p.partedAt * 1000)} ms; the shaft beyond it carried nothing afterwards`}.`,
+    );
   }
   for (const b of d.belts) {
     const c = b.slip.capstan;
@@ -119,7 +136,9 @@ function protectionLines(r: Results, d: DynamicResult): string[] {
   const limiters = d.slips.filter((s) => s.kind === 'torque limiter');
   if (limiters.length > 0) {
     const worst = Math.max(...d.pieces.map((p) => p.yieldRatio));
-    out.push(`- ${limiters.some((s) => s.firstSlip !== undefined) ? 'The limiter slipped' : 'The limiter did not slip'}; the highest stress / shear yield anywhere on the shaft is ${sig(worst)}${worst < 1 ? ', so the shaft stayed below yield' : ''}.`);
+    out.push(
+      `- ${limiters.some((s) => s.firstSlip !== undefined) ? 'The limiter slipped' : 'The limiter did not slip'}; the highest stress / shear yield anywhere on the shaft is ${sig(worst)}${worst < 1 ? ', so the shaft stayed below yield' : ''}.`,
+    );
   }
   out.push('');
   return out;
@@ -127,7 +146,7 @@ function protectionLines(r: Results, d: DynamicResult): string[] {
 
 function frequencyLines(r: Results, d: DynamicResult): string[] {
   const out: string[] = ['### Natural frequencies, stop held', ''];
-  out.push('| mode | side | frequency | share of the side\'s energy after an instantaneous stop |');
+  out.push("| mode | side | frequency | share of the side's energy after an instantaneous stop |");
   out.push('|---|---|---|---|');
   d.frequencies.forEach((m, i) => {
     out.push(`| ${i + 1} | ${m.side} | ${sig(m.frequency)} Hz | ${sig(100 * m.participation, 3)} % |`);

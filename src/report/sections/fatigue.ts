@@ -21,7 +21,7 @@ export const fatigueSection: ReportSection = {
       '',
     );
     out.push(bulletList(z.notes.map(escapeMarkdown)), '');
-    if (r.assetHistory) out.push('### This asset\'s history', '', ...assetHistorySentences(r.assetHistory).map((l) => escapeMarkdown(l) + '\n'));
+    if (r.assetHistory) out.push("### This asset's history", '', ...assetHistorySentences(r.assetHistory).map((l) => escapeMarkdown(l) + '\n'));
     out.push(bulletList(FATIGUE_CAUTIONS.map((c) => `**${escapeMarkdown(c)}**`)));
     return out.join('\n');
   },

@@ -43,7 +43,10 @@ function verdicts(r: Investigation): string {
   const items = [
     `The finding (page 1) stands on the ${f.basis}; past yield on the ${f.pastYieldModel}.`,
     ...(f.basis === 'dynamic model'
-      ? r.dynamic.sides.map((s) => `Dynamic model, side ${s.side}: peak torque as carried ${show(s.dynamicPeakTorque, 'torque', u)}; elastic peak ${show(elasticDynamicPeak(r.dynamic, s.side), 'torque', u)}, stress / shear yield ${sig(s.dynamicYieldRatio)}.`)
+      ? r.dynamic.sides.map(
+          (s) =>
+            `Dynamic model, side ${s.side}: peak torque as carried ${show(s.dynamicPeakTorque, 'torque', u)}; elastic peak ${show(elasticDynamicPeak(r.dynamic, s.side), 'torque', u)}, stress / shear yield ${sig(s.dynamicYieldRatio)}.`,
+        )
       : []),
     ...r.sides.map((s) => {
       const worst = s.pieces.reduce((a, b) => (b.yieldRatio > a.yieldRatio ? b : a));
@@ -52,11 +55,15 @@ function verdicts(r: Investigation): string {
     }),
     whyTheModelsDiffer(r),
     ...(r.pastYieldBasis === 'dynamic model' && r.dynamic.yielded
-      ? [`Past yield in time, the dynamic model caps the torque in ${describeDynamicPiece(mostTwisted(r), u)} at ${show(mostTwisted(r).peakTorque, 'torque', u)} and leaves a permanent twist of ${show(mostTwisted(r).permanentTwist, 'angle', u)} there.`]
+      ? [
+          `Past yield in time, the dynamic model caps the torque in ${describeDynamicPiece(mostTwisted(r), u)} at ${show(mostTwisted(r).peakTorque, 'torque', u)} and leaves a permanent twist of ${show(mostTwisted(r).permanentTwist, 'angle', u)} there.`,
+        ]
       : []),
     ...(r.plastic.verdict === 'elastic'
       ? []
-      : [`Past yield${r.pastYieldBasis === 'dynamic model' ? ', for comparison,' : ','} the energy balance caps the peak torque at ${show(r.plastic.peakTorque, 'torque', u)}${r.plastic.verdict === 'fracture predicted' ? ' (at the break)' : ''}: the torque every key, hub and coupling between the stop and the loaded stations had to carry.`]),
+      : [
+          `Past yield${r.pastYieldBasis === 'dynamic model' ? ', for comparison,' : ','} the energy balance caps the peak torque at ${show(r.plastic.peakTorque, 'torque', u)}${r.plastic.verdict === 'fracture predicted' ? ' (at the break)' : ''}: the torque every key, hub and coupling between the stop and the loaded stations had to carry.`,
+        ]),
     r.warnings.length > 0
       ? `The engine raised ${r.warnings.length} warning${r.warnings.length === 1 ? '' : 's'} about the model's fit to this case (listed under the method); weigh the numbers with them.`
       : "The engine raised no warning about the model's fit to this case.",
@@ -89,7 +96,11 @@ function pastYield(r: Results): string {
   } else {
     const atBreak = p.sides.some((s) => s.verdict === 'fracture predicted');
     out.push(`**${escapeMarkdown(`The pieces that went past yield${atBreak ? ' (at the break, where fracture is predicted)' : ''}`)}**`, markdownTable(pieces));
-    out.push(escapeMarkdown("The permanent twist shows on the shaft as the surface offset between a piece's ends and the helix angle an originally axial line (keyway wall, grinding mark, paint line) now makes."));
+    out.push(
+      escapeMarkdown(
+        "The permanent twist shows on the shaft as the surface offset between a piece's ends and the helix angle an originally axial line (keyway wall, grinding mark, paint line) now makes.",
+      ),
+    );
   }
   if (p.brittleNotes.length > 0) out.push(bulletList(p.brittleNotes.map(escapeMarkdown)));
   return out.join('\n\n');
@@ -109,7 +120,10 @@ function twistReadBack(r: Results): string[] {
   });
   const words = twist.map((f) => {
     const [a, b] = f.measurement.between;
-    const shielded = f.curve.length > 0 && !Number.isFinite(f.yieldOnsetSpeed) ? ' The shaft between these stations does not yield at any speed: a weaker piece elsewhere in the run yields first and takes the energy.' : '';
+    const shielded =
+      f.curve.length > 0 && !Number.isFinite(f.yieldOnsetSpeed)
+        ? ' The shaft between these stations does not yield at any speed: a weaker piece elsewhere in the run yields first and takes the energy.'
+        : '';
     const fracture = f.beyondFracture ? ' At that speed the model predicts fracture: check the measurement and the fracture strain.' : '';
     const text = `**${escapeMarkdown(`${a} – ${b}: ${TWIST_HEAD[f.finding].toLowerCase()}.`)}** ${escapeMarkdown(`Recorded speed ${bandText(f, u)}.${shielded} ${f.meaning}${fracture}`)}`;
     return f.measurement.method ? `${text}\n\n${escapeMarkdown(`Measured by: ${f.measurement.method}`)}` : text;
@@ -124,7 +138,12 @@ function fractureReading(r: Results): string[] {
   const o = f.observation;
   const at = o.at === undefined ? '' : ` at ${typeof o.at === 'number' ? show(o.at, 'length', u) : `"${o.at}"`}`;
   const word = f.agreement === 'agrees' ? 'Agrees with the prediction' : f.agreement === 'disagrees' ? 'Disagrees with the prediction' : 'Not comparable with the prediction';
-  const out = ['### Fracture', `Observed: **${escapeMarkdown(`${o.type}${at}`)}**.${o.notes ? ` ${escapeMarkdown(o.notes)}` : ''}`, escapeMarkdown(f.meaning), `**${word}.** ${escapeMarkdown(f.comparison)}`];
+  const out = [
+    '### Fracture',
+    `Observed: **${escapeMarkdown(`${o.type}${at}`)}**.${o.notes ? ` ${escapeMarkdown(o.notes)}` : ''}`,
+    escapeMarkdown(f.meaning),
+    `**${word}.** ${escapeMarkdown(f.comparison)}`,
+  ];
   if (o.type !== 'none') out.push(escapeMarkdown(`Source: ${f.source}.`), `> ${escapeMarkdown(f.caution)}`);
   return out;
 }

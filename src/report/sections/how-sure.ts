@@ -39,12 +39,14 @@ export const howSureSection: ReportSection = {
               `the same inputs were drawn ${u.dynamic.samples} times (same seed; analysis.dynamic_samples) through the dynamic model. Its stress / shear yield has a median of ${sig(u.dynamic.percentiles.yieldRatio[1])}, 90 % of the runs between ${sig(u.dynamic.percentiles.yieldRatio[0])} and ${sig(u.dynamic.percentiles.yieldRatio[2])}. For comparison, through the energy method (${u.samples} samples): ${chanceOfYieldWords(u).toLowerCase()}; median ${sig(y50)}, 90 % between ${sig(y5)} and ${sig(y95)}, single run ${sig(r.yieldRatio)}.`,
             )}`,
           ]
-        : [`**Through the energy method (the finding's model):** ${escapeMarkdown(`${chanceOfYieldWords(u)}. The single run gives stress / shear yield ${sig(r.yieldRatio)}; over the tolerances the median is ${sig(y50)} and 90 % of the samples lie between ${sig(y5)} and ${sig(y95)}.`)}`]),
+        : [
+            `**Through the energy method (the finding's model):** ${escapeMarkdown(`${chanceOfYieldWords(u)}. The single run gives stress / shear yield ${sig(r.yieldRatio)}; over the tolerances the median is ${sig(y50)} and 90 % of the samples lie between ${sig(y5)} and ${sig(y95)}.`)}`,
+          ]),
       ...observedWords(r, u),
     ];
     if (u.sensitivity.length > 0) {
       out.push('**Which input matters most**', markdownTable(uncertaintySensitivityTable(r)!));
-      out.push(escapeMarkdown('Each input is swung to the ends of its band (±2σ) with the others held at the single run\'s values.'));
+      out.push(escapeMarkdown("Each input is swung to the ends of its band (±2σ) with the others held at the single run's values."));
       const finding = sensitivityFinding(r)!;
       out.push(`**${escapeMarkdown(finding[0].toUpperCase() + finding.slice(1))}**`);
     }
@@ -57,9 +59,14 @@ function distributionWords(u: Uncertainty): string[] {
   const used = new Set(u.inputs.map((i) => i.basis));
   const cov = `${sig(100 * u.strengthScatter)} %`;
   const out: string[] = [];
-  if (used.has('band')) out.push('A stated ± band is taken as two standard deviations of a normal distribution: a careful measurement or log reading falls inside its stated band about 95 % of the time.');
-  if (used.has('minimum')) out.push(`A handbook minimum strength is taken as the 5th percentile of a normal distribution with a coefficient of variation of ${cov} (analysis.strength_scatter): the real bar is probably stronger.`);
-  if (used.has('typical')) out.push(`A typical strength (or a case material's, unless it says strength_basis: minimum) is taken as the mean of a normal distribution with a coefficient of variation of ${cov}.`);
+  if (used.has('band'))
+    out.push('A stated ± band is taken as two standard deviations of a normal distribution: a careful measurement or log reading falls inside its stated band about 95 % of the time.');
+  if (used.has('minimum'))
+    out.push(
+      `A handbook minimum strength is taken as the 5th percentile of a normal distribution with a coefficient of variation of ${cov} (analysis.strength_scatter): the real bar is probably stronger.`,
+    );
+  if (used.has('typical'))
+    out.push(`A typical strength (or a case material's, unless it says strength_basis: minimum) is taken as the mean of a normal distribution with a coefficient of variation of ${cov}.`);
   if (u.strengthScatter === 0) out.push('Material strengths are not varied (analysis.strength_scatter is 0 %).');
   return out;
 }

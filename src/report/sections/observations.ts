@@ -23,7 +23,11 @@ export const observationsSection: ReportSection = {
     if (o.permanentTwist.length > 0) {
       out.push('**Permanent twist measured**');
       out.push(
-        ['| between | angle | how it was measured |', '| :--- | ---: | :--- |', ...o.permanentTwist.map((t) => `| ${escapeMarkdown(t.between.join(' and '))} | ${show(t.angle, 'angle', u)} | ${t.method ? escapeMarkdown(t.method) : '—'} |`)].join('\n'),
+        [
+          '| between | angle | how it was measured |',
+          '| :--- | ---: | :--- |',
+          ...o.permanentTwist.map((t) => `| ${escapeMarkdown(t.between.join(' and '))} | ${show(t.angle, 'angle', u)} | ${t.method ? escapeMarkdown(t.method) : '—'} |`),
+        ].join('\n'),
       );
     }
     if (o.fracture) {

@@ -20,10 +20,14 @@ export const recommendationsSection: ReportSection = {
   render({ results, resize }) {
     const e = escapeMarkdown;
     const out = [
-      e(`Each option is checked against a repeat of the recorded incident by a rerun of the changed case through the elastic energy method, and under the running torque. Present shaft, the finding: ${findingSentence(results.finding, results.case.units)}`),
+      e(
+        `Each option is checked against a repeat of the recorded incident by a rerun of the changed case through the elastic energy method, and under the running torque. Present shaft, the finding: ${findingSentence(results.finding, results.case.units)}`,
+      ),
       e(factorSentence(resize)),
       optionsTable(resize),
-      e("Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate."),
+      e(
+        "Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate.",
+      ),
       `**${e(recommendedSentence(resize))}**`,
       e(`The rule: ${resize.pickRule}`),
       `${e('Why each flagged option is not advisable, each option in words, and what they rest on:')} ${linkTo(OPTIONS_TITLE, 'see the appendix')}.`,

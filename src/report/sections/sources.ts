@@ -23,7 +23,7 @@ export const sourcesSection: ReportSection = {
     if ([...materials, ...formulas].some((x) => x.fromMemory)) {
       out.push(
         escapeMarkdown(
-          '(†) Entered from memory: some value or section number of this source was recalled rather than read from the printed page when it was put into the program. The program\'s library keeps, value by value, which ones and how sure; check them in the source named before relying on them.',
+          "(†) Entered from memory: some value or section number of this source was recalled rather than read from the printed page when it was put into the program. The program's library keeps, value by value, which ones and how sure; check them in the source named before relying on them.",
         ),
       );
     }

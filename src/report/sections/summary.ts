@@ -45,15 +45,22 @@ export const summarySection: ReportSection = {
     ].join('\n>\n');
     const out = [`**What happened.** ${e(whatHappened(r))}`, finding];
     const observed = observedLines(r);
-    if (observed.length > 0) out.push(`**Observed, against the model** (${linkTo(findingsSection.title, 'the read-back')}, ${linkTo(observationsSection.title, 'the observations')}):\n\n${observed.map((l) => `- ${l}`).join('\n')}`);
+    if (observed.length > 0)
+      out.push(
+        `**Observed, against the model** (${linkTo(findingsSection.title, 'the read-back')}, ${linkTo(observationsSection.title, 'the observations')}):\n\n${observed.map((l) => `- ${l}`).join('\n')}`,
+      );
     out.push(`**Disposition: ${ACTION_WORDS[f.action]}.** ${e(f.disposition)}`);
     out.push(remedyParagraph(resize));
     const where = r.finding.piece.segment.label ? `"${r.finding.piece.segment.label}"` : `segment ${r.finding.piece.segment.index + 1}`;
     out.push(
       `### ${e(`Inspect at the critical location: ${where}, side ${f.side}`)} (${linkTo(machineSection.title, 'the machine')})`,
-      inspectionItems(r).map((i) => `- ${box} ${e(i)}`).join('\n'),
+      inspectionItems(r)
+        .map((i) => `- ${box} ${e(i)}`)
+        .join('\n'),
       `### Before it runs again (${linkTo(recommendationsSection.title, 'guarding and restart')})`,
-      beforeRunningItems(r).map((i) => `- ${box} ${e(i)}`).join('\n'),
+      beforeRunningItems(r)
+        .map((i) => `- ${box} ${e(i)}`)
+        .join('\n'),
       signOff(r),
     );
     return out.join('\n\n');
@@ -77,7 +84,9 @@ function observedLines(r: Investigation): string[] {
   const f = r.finding;
   const lines = f.measured.map((m) => {
     const speed = m.speedForMeasured === undefined ? '' : m.finding === 'consistent' ? '' : `; a stop from ${show(m.speedForMeasured, 'speed', u, 4)} would leave it`;
-    return e(`Permanent twist ${m.between.join(' – ')}: measured ${show(m.measured, 'angle', u)}, the model gives ${show(m.predicted, 'angle', u)} at the recorded ${show(r.speed, 'speed', u, 4)}: ${TWIST_HEAD[m.finding].toLowerCase()}${speed}.`);
+    return e(
+      `Permanent twist ${m.between.join(' – ')}: measured ${show(m.measured, 'angle', u)}, the model gives ${show(m.predicted, 'angle', u)} at the recorded ${show(r.speed, 'speed', u, 4)}: ${TWIST_HEAD[m.finding].toLowerCase()}${speed}.`,
+    );
   });
   const fr = r.observedFindings.fracture;
   if (fr) {
@@ -85,7 +94,12 @@ function observedLines(r: Investigation): string[] {
     lines.push(e(`Fracture: ${fr.observation.type === 'none' ? 'none found' : fr.observation.type}; ${word}.`));
   }
   const o = r.case.observed;
-  const recorded = [['key', o.key], ['hub', o.hub]].filter(([, v]) => v?.trim()).map(([label, v]) => `${label}: ${v!.trim()}`);
+  const recorded = [
+    ['key', o.key],
+    ['hub', o.hub],
+  ]
+    .filter(([, v]) => v?.trim())
+    .map(([label, v]) => `${label}: ${v!.trim()}`);
   if (recorded.length > 0) lines.push(e(`Recorded: ${recorded.join('; ')}.`));
   return lines;
 }
@@ -94,7 +108,8 @@ function observedLines(r: Investigation): string[] {
 function remedyParagraph(z: ResizeResult): string {
   const remedy = recommendedRemedy(z);
   const link = linkTo(recommendationsSection.title, 'what goes back in');
-  if (!remedy) return `**Recommended remedy:** ${e('none of the options of resize alone; each has a flag. Combine them (for example a stronger shaft and a torque limiter) and check the combination with the machine builder')} (${link}).`;
+  if (!remedy)
+    return `**Recommended remedy:** ${e('none of the options of resize alone; each has a flag. Combine them (for example a stronger shaft and a torque limiter) and check the combination with the machine builder')} (${link}).`;
   return `**Recommended remedy:** ${e(`${remedy.action}.`)} ${e(`Key figure: ${remedy.figure}. Why this one: ${remedy.why.replace(/\.$/, '')}.`)} (${link})`;
 }
 

@@ -30,19 +30,21 @@ export function plasticPiecesTable(r: Results): ReportTable | undefined {
       { label: 'fracture strain' },
     ],
     rows: r.plastic.sides.flatMap((s) =>
-      s.pieces.filter((p) => p.yielded || p.state.fractured).map((p) => [
-        s.side,
-        `${segmentName(p.piece.segment)}${p.state.fractured ? ' (breaks)' : ''}`,
-        inDisplay(p.piece.start, 'length', u),
-        inDisplay(p.piece.end, 'length', u),
-        torque(p.yieldTorque),
-        torque(p.plasticTorque),
-        inDisplay(p.state.permanentTwist, 'angle', u),
-        inDisplay(p.surfaceOffset, 'length', u),
-        inDisplay(p.helixAngle, 'angle', u),
-        p.state.maxShearStrain,
-        p.fractureStrain ?? 'unknown',
-      ]),
+      s.pieces
+        .filter((p) => p.yielded || p.state.fractured)
+        .map((p) => [
+          s.side,
+          `${segmentName(p.piece.segment)}${p.state.fractured ? ' (breaks)' : ''}`,
+          inDisplay(p.piece.start, 'length', u),
+          inDisplay(p.piece.end, 'length', u),
+          torque(p.yieldTorque),
+          torque(p.plasticTorque),
+          inDisplay(p.state.permanentTwist, 'angle', u),
+          inDisplay(p.surfaceOffset, 'length', u),
+          inDisplay(p.helixAngle, 'angle', u),
+          p.state.maxShearStrain,
+          p.fractureStrain ?? 'unknown',
+        ]),
     ),
   };
 }

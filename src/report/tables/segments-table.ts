@@ -20,16 +20,6 @@ export function segmentsTable(r: Results): ReportTable {
       { label: 'material' },
       { label: 'kt' },
     ],
-    rows: r.case.shaft.segments.map((s) => [
-      s.index + 1,
-      s.label ?? null,
-      len(s.start),
-      len(s.end),
-      len(s.end - s.start),
-      len(s.diameter),
-      s.bore > 0 ? len(s.bore) : null,
-      s.material,
-      s.kt,
-    ]),
+    rows: r.case.shaft.segments.map((s) => [s.index + 1, s.label ?? null, len(s.start), len(s.end), len(s.end - s.start), len(s.diameter), s.bore > 0 ? len(s.bore) : null, s.material, s.kt]),
   };
 }

@@ -26,7 +26,9 @@ export function uncertaintyPercentilesTable(r: Results): ReportTable | undefined
       row('stress / shear yield (elastic method, kt applied)', undefined, single.yieldRatio, p.yieldRatio),
       row('highest shear stress (elastic method)', 'stress', single.maxShearStress, p.maxShearStress),
       row('peak torque (past yield: capped by plasticity)', 'torque', single.peakTorque, p.peakTorque),
-      ...(p.permanentTwist && single.permanentTwist !== undefined && (p.permanentTwist[2] > 0 || single.permanentTwist > 0) ? [row('permanent twist (largest side)', 'angle', single.permanentTwist, p.permanentTwist)] : []),
+      ...(p.permanentTwist && single.permanentTwist !== undefined && (p.permanentTwist[2] > 0 || single.permanentTwist > 0)
+        ? [row('permanent twist (largest side)', 'angle', single.permanentTwist, p.permanentTwist)]
+        : []),
     ],
   };
 }

@@ -23,7 +23,12 @@ export function uncertaintySensitivityTable(r: Results): ReportTable | undefined
       { label: 'stress / shear yield, input at the low end of its band' },
       { label: 'stress / shear yield, input at the high end' },
       { label: 'swing of stress / shear yield' },
-      ...(twist ? [{ label: 'permanent twist, low end', unit: unitLabel('angle', u) }, { label: 'permanent twist, high end', unit: unitLabel('angle', u) }] : []),
+      ...(twist
+        ? [
+            { label: 'permanent twist, low end', unit: unitLabel('angle', u) },
+            { label: 'permanent twist, high end', unit: unitLabel('angle', u) },
+          ]
+        : []),
     ],
     rows: un.sensitivity.map((s, i) => [i + 1, inputName(s.input), s.low, s.high, Math.abs(s.high - s.low), ...(twist ? [deg(s.twistLow), deg(s.twistHigh)] : [])]),
   };

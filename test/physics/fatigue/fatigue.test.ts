@@ -39,7 +39,7 @@ function bisect(f: (x: number) => number, lo: number, hi: number): number {
 }
 
 describe('rainflow counting (ASTM E1049-85, Sec. 5.4.4)', () => {
-  it('counts the standard\'s example sequence −2, 1, −3, 5, −1, 3, −4, 4, −2 exactly as its table does', () => {
+  it("counts the standard's example sequence −2, 1, −3, 5, −1, 3, −4, 4, −2 exactly as its table does", () => {
     // ASTM E1049-85 (2017), Fig. 6 and its table of counts: range 3: ½, 4: 1½, 6: ½, 8: 1, 9: ½
     // (from memory, confident; the four cycles of eight ranges add up, as they must).
     const cycles = rainflow([-2, 1, -3, 5, -1, 3, -4, 4, -2]);
@@ -106,7 +106,7 @@ describe('strain–life (Coffin–Manson–Basquin)', () => {
     expect(strainAmplitudeAtLife(life.cycles!, SAE1045)).toBeCloseTo(0.005, 12);
   });
 
-  it('with the plastic term left out, the life is Basquin\'s closed form N = ½(E·ε_a/σ′_f)^(1/b)', () => {
+  it("with the plastic term left out, the life is Basquin's closed form N = ½(E·ε_a/σ′_f)^(1/b)", () => {
     const elastic = { ...SAE1045, fatigueDuctilityCoefficient: 1e-30 };
     const ea = 0.002;
     const closed = 0.5 * ((elastic.elasticModulus * ea) / elastic.fatigueStrengthCoefficient) ** (1 / elastic.fatigueStrengthExponent);
@@ -117,7 +117,7 @@ describe('strain–life (Coffin–Manson–Basquin)', () => {
     const r = neuberRange(600 * MPa, 2.5, SAE1045);
     const ea = r.strainRange / 2;
     const E = SAE1045.elasticModulus;
-    const logN2 = bisect((x) => (1227 * MPa / E) * (10 ** x) ** -0.095 + 1.0 * (10 ** x) ** -0.66 - ea, 0, 20);
+    const logN2 = bisect((x) => ((1227 * MPa) / E) * (10 ** x) ** -0.095 + 1.0 * (10 ** x) ** -0.66 - ea, 0, 20);
     const N = 10 ** logN2 / 2;
     expect(Math.abs(lifeAtStrainAmplitude(ea, SAE1045).cycles! / N - 1)).toBeLessThan(0.01);
     // A low-cycle life: some thousands of cycles at this notch strain.
@@ -125,7 +125,7 @@ describe('strain–life (Coffin–Manson–Basquin)', () => {
     expect(N).toBeLessThan(1e5);
   });
 
-  it('says where a strain amplitude is beyond the relation\'s reach', () => {
+  it("says where a strain amplitude is beyond the relation's reach", () => {
     expect(lifeAtStrainAmplitude(5, SAE1045)).toEqual({ cycles: 0.5, beyond: 'first reversal' });
     expect(lifeAtStrainAmplitude(1e-6, SAE1045)).toEqual({ cycles: undefined, beyond: 'endurance' });
   });

@@ -25,7 +25,7 @@ describe('belts and a soft jam: rigid until they slip, then Coulomb', () => {
     expect(r.belts[0]!.peakTorque).toBeLessThanOrEqual(Tb * (1 + 1e-9));
   });
 
-  it('the belt\'s friction work accounts for the energy lost, with the motor\'s work added', () => {
+  it("the belt's friction work accounts for the energy lost, with the motor's work added", () => {
     const r = integrateChain(
       chain({ J: [0, 1], k: [1e5], c: [4], speed: 50, preload: [300], drives: [{ node: 1, line: { speeds: [0, 40, 52], torques: [900, 1100, 0] }, rotorInertia: 2, beltSlipTorque: 1200 }] }),
       { duration: 0.5, timeStep: 5e-5 },
@@ -50,7 +50,7 @@ describe('belts and a soft jam: rigid until they slip, then Coulomb', () => {
     expect(Math.abs(e.final - (e.initial + e.boundaryWork - e.slipWork)) / e.initial).toBeLessThan(1e-9);
   });
 
-  it('a soft jam that cannot give the ramp\'s deceleration slips from the start', () => {
+  it("a soft jam that cannot give the ramp's deceleration slips from the start", () => {
     // The stop node (0.5 kg·m²) would need 0.5·50/0.001 = 25 kN·m to follow a 1 ms ramp; the jam holds 3 kN·m.
     const r = integrateChain(chain({ J: [0.5, 1], k: [1e5], speed: 50, torqueCapacity: 3000, ramp: 0.001 }), { duration: 0.05, timeStep: 2e-5 });
     expect(r.events[0]).toMatchObject({ time: 0, what: 'starts to slip' });

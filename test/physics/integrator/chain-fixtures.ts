@@ -113,10 +113,21 @@ export function odexSlip(J: number, k: number, c: number, Ts: number, w0: number
     return hit ?? prev;
   };
   // Stick: y = [φ, φ̇, unused].
-  const stick = root((_t, y) => [y[1], -(k * y[0] + c * y[1]) / J, 0], [0, w0, 0], (y) => k * y[0] + c * y[1] - Ts, 1);
+  const stick = root(
+    (_t, y) => [y[1], -(k * y[0] + c * y[1]) / J, 0],
+    [0, w0, 0],
+    (y) => k * y[0] + c * y[1] - Ts,
+    1,
+  );
   // Slide: y = [φ, φ̇, x], time from the slip's start.
   const xRate = (y: number[]) => (c > 0 ? (Ts - k * y[2]) / c : 0);
   const x0 = c > 0 ? stick.y[0] : Ts / k;
-  const slide = root((_t, y) => [y[1], -Ts / J, xRate(y)], [stick.y[0], stick.y[1], x0], (y) => -(y[1] - xRate(y)), 1, true);
+  const slide = root(
+    (_t, y) => [y[1], -Ts / J, xRate(y)],
+    [stick.y[0], stick.y[1], x0],
+    (y) => -(y[1] - xRate(y)),
+    1,
+    true,
+  );
   return { start: stick.t, slipWork: Ts * (slide.y[0] - stick.y[0] - (slide.y[2] - x0)) };
 }

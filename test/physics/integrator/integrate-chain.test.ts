@@ -57,7 +57,7 @@ describe('integrateChain: one mass on a massless shaft', () => {
     expect(r.peakTorque[0]).toBeCloseTo(150 + Math.sqrt(100 ** 2 + 1e4 * 100), 0);
   });
 
-  it('locates the moment the motor\'s speed reaches zero: a quarter period after the stop under its own running torque', () => {
+  it("locates the moment the motor's speed reaches zero: a quarter period after the stop under its own running torque", () => {
     // With T_b = T_d the mass swings about the running twist T_d/k at speed ω0·cos(ωn·t) (10.3),
     // so it is at rest at t = T_n/4 = 15.708 ms, between the steps of 0.2 ms.
     const line = { speeds: [0], torques: [50] };
@@ -80,7 +80,15 @@ describe('integrateChain: the properties of the scheme', () => {
 
   it('closes its energy books with damping, a ramped stop and a motor', () => {
     const r = integrateChain(
-      chain({ J: [0.5, 0.2, 1.5], k: [4e5, 2e5], c: [20, 10], speed: 60, ramp: 0.004, preload: [300, 300], drives: [{ node: 2, line: { speeds: [0, 50, 70], torques: [900, 700, 0] }, rotorInertia: 0 }] }),
+      chain({
+        J: [0.5, 0.2, 1.5],
+        k: [4e5, 2e5],
+        c: [20, 10],
+        speed: 60,
+        ramp: 0.004,
+        preload: [300, 300],
+        drives: [{ node: 2, line: { speeds: [0, 50, 70], torques: [900, 700, 0] }, rotorInertia: 0 }],
+      }),
       { duration: 0.2, timeStep: 5e-5 },
     );
     expect(Math.abs(books(r)) / r.energy.initial).toBeLessThan(1e-9);
@@ -147,7 +155,7 @@ describe('integrateChain: the properties of the scheme', () => {
       }
       commit() {}
       energy(t: number) {
-        return k0 * (t * t / 2 + t ** 4 / (4 * thr * thr));
+        return k0 * ((t * t) / 2 + t ** 4 / (4 * thr * thr));
       }
     }
     const spec = { J: [0, 1], k: [k0], speed: 20 };

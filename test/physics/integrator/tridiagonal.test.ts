@@ -6,7 +6,11 @@ import { TridiagonalSolver } from '../../../src/physics/integrator/tridiagonal.t
 describe('TridiagonalSolver', () => {
   it('solves diagonally dominant symmetric systems as ml-matrix does', () => {
     const system = fc.integer({ min: 1, max: 30 }).chain((n) =>
-      fc.record({ off: fc.array(fc.double({ min: -10, max: 10, noNaN: true }), { minLength: n - 1, maxLength: n - 1 }), extra: fc.array(fc.double({ min: 0.1, max: 10, noNaN: true }), { minLength: n, maxLength: n }), b: fc.array(fc.double({ min: -100, max: 100, noNaN: true }), { minLength: n, maxLength: n }) }),
+      fc.record({
+        off: fc.array(fc.double({ min: -10, max: 10, noNaN: true }), { minLength: n - 1, maxLength: n - 1 }),
+        extra: fc.array(fc.double({ min: 0.1, max: 10, noNaN: true }), { minLength: n, maxLength: n }),
+        b: fc.array(fc.double({ min: -100, max: 100, noNaN: true }), { minLength: n, maxLength: n }),
+      }),
     );
     fc.assert(
       fc.property(system, ({ off, extra, b }) => {

@@ -152,8 +152,16 @@ describe('PlasticElementLaw, Masing branches', () => {
       fc.property(fc.array(fc.double({ min: -5, max: 5, noNaN: true }), { minLength: 1, maxLength: 5 }), (pts) => {
         const p = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
         const n = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
-        const a = drive(p, pts.map((x) => x * thetaY), 50);
-        const b = drive(n, pts.map((x) => -x * thetaY), 50);
+        const a = drive(
+          p,
+          pts.map((x) => x * thetaY),
+          50,
+        );
+        const b = drive(
+          n,
+          pts.map((x) => -x * thetaY),
+          50,
+        );
         return a.every((t, i) => Math.abs(t + b[i]) <= 1e-6 * yieldTorque(tl));
       }),
       { numRuns: 30 },
@@ -164,7 +172,11 @@ describe('PlasticElementLaw, Masing branches', () => {
     fc.assert(
       fc.property(fc.array(fc.double({ min: -5, max: 5, noNaN: true }), { minLength: 1, maxLength: 5 }), (pts) => {
         const l = new PlasticElementLaw(new SeriesBackbone([{ law: tl, length: L }]));
-        const out = drive(l, pts.map((x) => x * thetaY), 50);
+        const out = drive(
+          l,
+          pts.map((x) => x * thetaY),
+          50,
+        );
         const most = Math.max(...pts.map(Math.abs)) * thetaY;
         return out.every((t) => Math.abs(t) <= torqueAtTwistRate(tl, most / L) * (1 + 1e-6));
       }),

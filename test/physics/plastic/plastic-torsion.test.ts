@@ -56,7 +56,7 @@ describe('elastic–plastic torsion, solid bar', () => {
     const phi = twistRateAtTorque(ep1, 4600);
     expect(phi * L).toBeCloseTo(0.14812, 4);
     expect(rel(phi * L, 0.1483)).toBeLessThan(0.002);
-    expect(((150e6 / 77e9 / phi) * 1000)).toBeCloseTo(15.78, 1);
+    expect((150e6 / 77e9 / phi) * 1000).toBeCloseTo(15.78, 1);
   });
 
   it('the permanent twist after unloading from 4.60 kN·m matches EP1 (0.03129 rad ≈ 1.8°)', () => {
@@ -182,7 +182,12 @@ describe('elastic–plastic torsion, hollow section', () => {
 
 describe('laws of the torque–twist relation (properties)', () => {
   const anyLaw = fc
-    .record({ c2: fc.double({ min: 0.005, max: 0.3, noNaN: true }), ratio: fc.double({ min: 0, max: 0.95, noNaN: true }), tauY: fc.double({ min: 50e6, max: 1000e6, noNaN: true }), h: fc.constantFrom(0, 1e8, 1e9) })
+    .record({
+      c2: fc.double({ min: 0.005, max: 0.3, noNaN: true }),
+      ratio: fc.double({ min: 0, max: 0.95, noNaN: true }),
+      tauY: fc.double({ min: 50e6, max: 1000e6, noNaN: true }),
+      h: fc.constantFrom(0, 1e8, 1e9),
+    })
     .map(({ c2, ratio, tauY, h }) => law(c2, ratio * c2, 79.3e9, tauY, h));
 
   it('torque never falls as the twist grows, never exceeds the elastic line, and (perfectly plastic) never exceeds T_P', () => {

@@ -37,7 +37,7 @@ function ringSection(l: TorsionLaw, rings = 4000) {
 
 const law = (c2: number, c1: number, h = 0): TorsionLaw => ({ outerRadius: c2, innerRadius: c1, shearModulus: 79.3e9, shearYield: 300e6, hardeningModulus: h });
 
-describe('branchTorque (Masing\'s rule for a reversal)', () => {
+describe("branchTorque (Masing's rule for a reversal)", () => {
   it('agrees with a ring-by-ring section model on unloading and reverse loading back to the mirrored point, solid and hollow', () => {
     fc.assert(
       fc.property(fc.constantFrom(0, 0.5), fc.double({ min: 1.2, max: 8, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true }), fc.constantFrom(0, 2e9), (ratio, u1, f, h) => {

@@ -11,7 +11,10 @@ describe('SeriesBackbone', () => {
       fc.property(fc.double({ min: 0, max: 8, noNaN: true }), fc.constantFrom(0, 1e9), (u, h) => {
         const l = law(0.02, 0.005, 300e6, h);
         const one = new SeriesBackbone([{ law: l, length: 0.6 }]);
-        const two = new SeriesBackbone([{ law: l, length: 0.3 }, { law: l, length: 0.3 }]);
+        const two = new SeriesBackbone([
+          { law: l, length: 0.3 },
+          { law: l, length: 0.3 },
+        ]);
         const th = u * one.yieldTwist;
         return Math.abs(two.torque(th) - one.torque(th)) <= 1e-9 * yieldTorque(l);
       }),
@@ -19,10 +22,13 @@ describe('SeriesBackbone', () => {
     );
   });
 
-  it('a thick and a thin piece: the twist is the sum of each piece\'s twist at the one torque (Beer & Johnston, shafts in series; from memory, confident)', () => {
+  it("a thick and a thin piece: the twist is the sum of each piece's twist at the one torque (Beer & Johnston, shafts in series; from memory, confident)", () => {
     const thin = law(0.015, 0, 300e6);
     const thick = law(0.03, 0, 300e6);
-    const b = new SeriesBackbone([{ law: thin, length: 0.4 }, { law: thick, length: 0.5 }]);
+    const b = new SeriesBackbone([
+      { law: thin, length: 0.4 },
+      { law: thick, length: 0.5 },
+    ]);
     for (const u of [0.5, 1.5, 3, 10]) {
       const th = u * b.yieldTwist;
       const T = b.torque(th);
@@ -32,7 +38,10 @@ describe('SeriesBackbone', () => {
   });
 
   it('rises monotonically with a tangent never above the elastic stiffness, matching a central difference (property)', () => {
-    const b = new SeriesBackbone([{ law: law(0.015, 0, 300e6), length: 0.4 }, { law: law(0.03, 0.01, 250e6, 2e9), length: 0.5 }]);
+    const b = new SeriesBackbone([
+      { law: law(0.015, 0, 300e6), length: 0.4 },
+      { law: law(0.03, 0.01, 250e6, 2e9), length: 0.5 },
+    ]);
     fc.assert(
       fc.property(fc.double({ min: 0.01, max: 10, noNaN: true }), (u) => {
         const th = u * b.yieldTwist;

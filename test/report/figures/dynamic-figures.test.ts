@@ -9,7 +9,7 @@ import { withFinding } from '../../../src/finding/investigation.ts';
 
 const r = withFinding(analyseCase(parseCase(readFileSync(new URL('../../../sample-cases/roll-line-limiter-two-sides.yaml', import.meta.url), 'utf8'))));
 
-describe('the dynamic model\'s figures', () => {
+describe("the dynamic model's figures", () => {
   it.each([
     ['dynamic-torque', dynamicTorqueFigure],
     ['dynamic-speeds', dynamicSpeedsFigure],

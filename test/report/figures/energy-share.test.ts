@@ -4,7 +4,7 @@ import { fixture } from '../report-fixtures.ts';
 import { checkFigure } from './figure-checks.ts';
 
 describe('energyShareFigure', () => {
-  it('energyShareFigure draws one bar per part, their lengths in the ratio of the parts\' energies', () => {
+  it("energyShareFigure draws one bar per part, their lengths in the ratio of the parts' energies", () => {
     const r = fixture('two-sided-pump.yaml').results;
     const doc = checkFigure(energyShareFigure(r)!, 'energy-share', [/^share of the kinetic energy at the stop \(%\)/, /^A · impeller · impeller$/, /^B · motor · flywheel ×2$/]);
     const widths = [...doc.querySelectorAll('g[aria-label="bar"] rect')].map((b) => Number(b.getAttribute('width')));

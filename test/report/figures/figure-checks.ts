@@ -17,7 +17,11 @@ export function checkFigure(f: ReportFigure, name: string, axisLabels: RegExp[])
   expect(texts[0]).toBe(f.title);
   // The caption is drawn in, wrapped over lines.
   expect(texts.join(' ')).toContain(f.caption.split(' ').slice(0, 6).join(' '));
-  for (const label of axisLabels) expect(texts.some((t) => label.test(t)), String(label)).toBe(true);
+  for (const label of axisLabels)
+    expect(
+      texts.some((t) => label.test(t)),
+      String(label),
+    ).toBe(true);
   return document as unknown as Document;
 }
 

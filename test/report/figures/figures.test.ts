@@ -30,7 +30,7 @@ describe('the resize figures', () => {
     }
   });
 
-  it('the yield-ratio figure marks every stock size in its range and the design factor\'s line', () => {
+  it("the yield-ratio figure marks every stock size in its range and the design factor's line", () => {
     const { r, z } = load('screw-conveyor-jam-us.yaml');
     const fig = yieldRatioAgainstDiameterFigure(r, z)!;
     expect(fig.svg).toContain('1/N = 0.667 (N = 1.5)');
@@ -47,7 +47,7 @@ describe('the resize figures', () => {
     expect(fig.svg).toContain('window empty');
   });
 
-  it('the case\'s own text in a figure is escaped as SVG text', () => {
+  it("the case's own text in a figure is escaped as SVG text", () => {
     const { r, z } = load('granulator-tramp-metal.yaml', (t) => t.replace('label: sheave seat', 'label: "seat <&> 1"'));
     const fig = yieldRatioAgainstDiameterFigure(r, z)!;
     expect(fig.svg).toContain('seat &lt;&amp;&gt; 1');

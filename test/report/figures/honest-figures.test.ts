@@ -36,9 +36,14 @@ describe('honest figures', () => {
     expect(rect.querySelector('title')!.textContent).toMatch(/^cast sheave: 70 × Ø450 mm, centred at 60$/);
   });
 
-  it('labels never overlap one another nor run past the figure\'s edges, however crowded', () => {
+  it("labels never overlap one another nor run past the figure's edges, however crowded", () => {
     const items = [0, 3, 6, 400, 690, 700, 715].map((px, i) => ({ px, text: `STOP: inlet flight ${i}` }));
-    const placed = placeLabels(items, (t) => t.px, (t) => t.text, 720);
+    const placed = placeLabels(
+      items,
+      (t) => t.px,
+      (t) => t.text,
+      720,
+    );
     for (const p of placed) {
       expect(p.left).toBeGreaterThanOrEqual(0);
       expect(p.right).toBeLessThanOrEqual(720);
@@ -72,7 +77,10 @@ describe('honest figures', () => {
     expect(band.querySelector('title')!.textContent).toBe('measured 4° ± 1°');
     expect(f.caption).toContain('the measured 4° ± 1° (its band shaded green across)');
     // Its height spans 3° to 5° on the y scale the tick labels give.
-    const ticks = [...d.querySelectorAll('[aria-label="y-axis tick label"] text')].map((t) => ({ v: Number(t.textContent), px: Number(/translate\([-\d.]+,([-\d.]+)\)/.exec(t.getAttribute('transform')!)![1]) }));
+    const ticks = [...d.querySelectorAll('[aria-label="y-axis tick label"] text')].map((t) => ({
+      v: Number(t.textContent),
+      px: Number(/translate\([-\d.]+,([-\d.]+)\)/.exec(t.getAttribute('transform')!)![1]),
+    }));
     const y = (v: number) => ticks[0].px + ((v - ticks[0].v) * (ticks[ticks.length - 1].px - ticks[0].px)) / (ticks[ticks.length - 1].v - ticks[0].v);
     expect(Math.abs(Number(band.getAttribute('y')) - y(5))).toBeLessThan(1);
     expect(Math.abs(Number(band.getAttribute('y')) + Number(band.getAttribute('height')) - y(3))).toBeLessThan(1);
@@ -82,7 +90,7 @@ describe('honest figures', () => {
     expect(plain.caption).toContain('(the case states no ± on it)');
   });
 
-  it('the torque figure names the finding\'s governing piece, not the piece of highest peak torque', () => {
+  it("the torque figure names the finding's governing piece, not the piece of highest peak torque", () => {
     const r = fixture('sample').results;
     const f = dynamicTorqueFigure(r);
     expect(f.svg).toContain('— shaft "sheave seat" (the finding\'s governing piece)');
@@ -90,7 +98,7 @@ describe('honest figures', () => {
     expect(f.svg).not.toContain('most loaded');
   });
 
-  it('a time history that rings on to the end of its window says so, with the model\'s damping', () => {
+  it("a time history that rings on to the end of its window says so, with the model's damping", () => {
     const r = fixture('sample').results;
     const f = dynamicSpeedsFigure(r);
     expect(f.caption).toMatch(/Rings on at about constant amplitude to the end of the 231 ms window: drive sheave \(about ±\d+ rpm\)\. The model's only damping is 0\.5 % of critical/);

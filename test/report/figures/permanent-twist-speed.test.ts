@@ -49,7 +49,9 @@ describe('permanentTwistSpeedFigures', () => {
     const marks = [...parseSvg(fig.svg).querySelectorAll('[aria-description]')].map((e) => e.getAttribute('aria-description'));
     expect(marks).toContain('speeds that explain the measured twist');
     expect(marks).not.toContain('recorded speed band');
-    expect(fig.caption).toContain(`the 5–95 % interval of the speeds that explain the measured twist over the case's tolerances, ${show(f.speedRange[0]!, 'speed', 'metric', 4)} to ${show(f.speedRange[1]!, 'speed', 'metric', 4)}`);
+    expect(fig.caption).toContain(
+      `the 5–95 % interval of the speeds that explain the measured twist over the case's tolerances, ${show(f.speedRange[0]!, 'speed', 'metric', 4)} to ${show(f.speedRange[1]!, 'speed', 'metric', 4)}`,
+    );
   });
 
   it('draws nothing for a measured zero where no speed leaves any twist between the stations', () => {

@@ -18,7 +18,7 @@ describe('stressVsSpeedFigure', () => {
   });
 
   // The law the onset speed relies on: in the elastic energy method every stress scales with the speed.
-  it('the engine\'s stresses scale in proportion to the speed at the stop', () => {
+  it("the engine's stresses scale in proportion to the speed at the stop", () => {
     const r = fixture('two-sided-pump.yaml').results;
     fc.assert(
       fc.property(fc.double({ min: 0.01, max: 10, noNaN: true }), (k) => {

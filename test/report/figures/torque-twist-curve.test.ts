@@ -30,7 +30,7 @@ describe('torqueTwistFigure', () => {
     const side = r.plastic.sides[0];
     const piece = side.pieces[r.plastic.mostStrained.index];
     expect(fig.name).toBe('torque-twist');
-    expect(fig.caption).toContain(`${Number((side.peakTorque).toPrecision(3))} N·m`);
+    expect(fig.caption).toContain(`${Number(side.peakTorque.toPrecision(3))} N·m`);
     expect(fig.caption).toContain(`${Number(((piece.state.permanentTwist * 180) / Math.PI).toPrecision(3))}°`);
     expect(fig.caption).toContain(`${Number(piece.state.energy.toPrecision(3))} J`);
     expect(fig.svg).toContain(`permanent twist ${Number(((piece.state.permanentTwist * 180) / Math.PI).toPrecision(3))}°`);
@@ -42,7 +42,7 @@ describe('torqueTwistFigure', () => {
     expect(torqueTwistFigure(slow)).toBeUndefined();
   });
 
-  it('draws in the case\'s units (US: lbf·ft)', () => {
+  it("draws in the case's units (US: lbf·ft)", () => {
     const us = analyseCase({ ...ep5Case(), units: 'us' });
     expect(torqueTwistFigure(us)!.svg).toMatch(/torque \(lbf·ft\)/);
   });

@@ -14,7 +14,7 @@ describe('torqueTwistFigure where the verdict past yield stands on the dynamic m
   const r = analyseCase(parseCase(granulator), { readBack: false });
   const fig = torqueTwistFigure(r)!;
 
-  it('draws the piece\'s path in time and its permanent twist, with the dynamic model\'s numbers in the caption', () => {
+  it("draws the piece's path in time and its permanent twist, with the dynamic model's numbers in the caption", () => {
     expect(r.pastYieldBasis).toBe('dynamic model');
     const path = r.dynamic.yieldPath!;
     const p = r.dynamic.pieces[path.piece];
@@ -28,7 +28,7 @@ describe('torqueTwistFigure where the verdict past yield stands on the dynamic m
     expect(fig.caption).toContain(`turned ${show(path.plasticWork, 'energy', 'metric')} into heat by plastic flow`);
   });
 
-  it('its path stays within the piece\'s fully plastic torque, and it ends twisted about the permanent twist (the elastic ringing around it)', () => {
+  it("its path stays within the piece's fully plastic torque, and it ends twisted about the permanent twist (the elastic ringing around it)", () => {
     const path = r.dynamic.yieldPath!;
     const p = r.dynamic.pieces[path.piece];
     const seg = p.piece.segment;
@@ -42,7 +42,7 @@ describe('torqueTwistFigure where the verdict past yield stands on the dynamic m
     expect(Math.abs(path.twist[last] - path.torque[last] / k - p.permanentTwist)).toBeLessThan(0.02 * p.permanentTwist);
   });
 
-  it('is the energy balance\'s figure where the verdict stands on the energy method (one mass, an instant stop)', () => {
+  it("is the energy balance's figure where the verdict stands on the energy method (one mass, an instant stop)", () => {
     expect(torqueTwistFigure(analyseCase(ep5Case()))!.title).toMatch(/most strained piece \(side [AB]\)$/);
   });
 });

@@ -23,7 +23,7 @@ describe('findingsSection', () => {
     'fracture: { type: fatigue, at: disc, notes: "# not a heading" }',
   ]);
 
-  it('findingsSection opens with the finding\'s model, states no verdict of its own, and has its parts as sub-headings, no cautions of its own', () => {
+  it("findingsSection opens with the finding's model, states no verdict of its own, and has its parts as sub-headings, no cautions of its own", () => {
     expect(text).toMatch(/^- The finding \(page 1\) stands on the energy method; past yield on the energy balance\./);
     expect(text).not.toMatch(/Verdict|Finding:/);
     for (const h of ['Past yield', 'Measured permanent twist, read back to the stop', 'Fracture']) expect(html).toContain(`<h3>${h}</h3>`);
@@ -31,7 +31,7 @@ describe('findingsSection', () => {
     expect(html).not.toContain('<h2>');
   });
 
-  it('findingsSection gives the energy method\'s numbers per side, and the tables past yield', () => {
+  it("findingsSection gives the energy method's numbers per side, and the tables past yield", () => {
     expect(text).toMatch(/- Energy method, side B \(disc\): elastic peak torque .*, stress \/ shear yield [\d.]+\./);
     expect(html).toMatch(/<table>[\s\S]*permanent twist[\s\S]*<\/table>/);
     expect(text).toContain('**The pieces that went past yield**');

@@ -26,16 +26,18 @@ describe('howSureSection', () => {
     const o = r.uncertainty!.observed[0];
     expect(o.speedInterval).not.toBeNull();
     const [lo, hi] = o.speedInterval!;
-    expect(md).toContain(`Twist between "drive sheave" and "rotor": a stop from ${show(lo, 'speed', 'metric', 4)} to ${show(hi, 'speed', 'metric', 4)} (5–95 %) explains it; the recorded 420 rpm lies ${o.recordedInside ? 'inside' : 'outside'} that interval.`);
+    expect(md).toContain(
+      `Twist between "drive sheave" and "rotor": a stop from ${show(lo, 'speed', 'metric', 4)} to ${show(hi, 'speed', 'metric', 4)} (5–95 %) explains it; the recorded 420 rpm lies ${o.recordedInside ? 'inside' : 'outside'} that interval.`,
+    );
     // An independent look at the same numbers: 420 rpm is far above a 4° twist's speeds, so outside.
     expect(o.recordedInside).toBe(false);
-    expect(md).toContain(`| speed | speed | normal; the stated ± band is 2σ | rpm | 420 | ${sig(0.05 * 420 / 2)} | 2.5 |`);
+    expect(md).toContain(`| speed | speed | normal; the stated ± band is 2σ | rpm | 420 | ${sig((0.05 * 420) / 2)} | 2.5 |`);
   });
 
   it('howSureSection names a typical strength as the mean, and says when strengths are not varied', () => {
     // EP5's material is the case's own with no strength basis, so it is taken as typical.
     const typical = render(ep5CaseText({ speed: '300 rpm ± 4 %' })).md!;
-    expect(typical).toContain('A typical strength (or a case material\'s, unless it says strength_basis: minimum) is taken as the mean of a normal distribution with a coefficient of variation of 7 %');
+    expect(typical).toContain("A typical strength (or a case material's, unless it says strength_basis: minimum) is taken as the mean of a normal distribution with a coefficient of variation of 7 %");
     expect(typical).not.toContain('handbook minimum');
     const none = render(ep5CaseText({ speed: '300 rpm ± 4 %', analysis: ['strength_scatter: 0 %'] })).md!;
     expect(none).toContain('Material strengths are not varied (analysis.strength_scatter is 0 %).');
@@ -46,6 +48,10 @@ describe('howSureSection', () => {
     const { r, md } = render(ep5CaseText({ speed: '300 rpm ± 4 %' }));
     const top = r.uncertainty!.sensitivity[0];
     expect(md).toMatch(/\*\*Which input matters most\*\*\n\n\| rank \| input \|/);
-    expect(md!.trimEnd().split('\n').pop()).toMatch(new RegExp(`^\\*\\*[A-Z].* moves stress / shear yield most \\(from ${sig(top.low).replace('.', '\\.')} to ${sig(top.high).replace('.', '\\.')} across its band\\): measure it better first\\.\\*\\*$`));
+    expect(md!.trimEnd().split('\n').pop()).toMatch(
+      new RegExp(
+        `^\\*\\*[A-Z].* moves stress / shear yield most \\(from ${sig(top.low).replace('.', '\\.')} to ${sig(top.high).replace('.', '\\.')} across its band\\): measure it better first\\.\\*\\*$`,
+      ),
+    );
   });
 });

@@ -8,7 +8,7 @@ describe('observationsSection', () => {
     expect(observationsSection.render(f.ctx)).toMatch(/^The case file records no observations\. Record the key/);
   });
 
-  it('shows the measured twist in the case\'s units, the fracture, the free text and each photo with its caption', () => {
+  it("shows the measured twist in the case's units, the fracture, the free text and each photo with its caption", () => {
     const f = fixture('hostile.yaml');
     const md = observationsSection.render(f.ctx)!;
     expect(md).toContain('**Key:** \\<iframe src=javascript:alert(7)>');

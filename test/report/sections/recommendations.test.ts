@@ -28,12 +28,23 @@ describe('the report section "Recommendations: what goes back in"', () => {
   it('the appendix of every option says each in words, and what the options rest on', () => {
     const data = buildReportData(parseCase(granulator));
     const md = optionsSection.render({ ...data, run: RUN, source: { file: 'c.yaml', text: granulator, sha256: '0'.repeat(64) } })!;
-    for (const h of ['### Flagged: why these options are not advisable', '### Scale the side', '### Resize the critical segment only', '### Another material', '### Torque limiter or slip coupling', '### The key as fuse at "drive sheave"', '### What the options rest on']) expect(md).toContain(h);
+    for (const h of [
+      '### Flagged: why these options are not advisable',
+      '### Scale the side',
+      '### Resize the critical segment only',
+      '### Another material',
+      '### Torque limiter or slip coupling',
+      '### The key as fuse at "drive sheave"',
+      '### What the options rest on',
+    ])
+      expect(md).toContain(h);
   });
 
   it('ends with what the investigator decides, and for a yielded shaft the return-to-service caution', () => {
     const { md } = section(granulator);
-    expect(md.trimEnd().split('\n').pop()).toBe('*The investigator decides which option goes back in, with the machine builder, and records the return-to-service decision. A shaft that may have yielded is not returned to service on a calculation alone.*');
+    expect(md.trimEnd().split('\n').pop()).toBe(
+      '*The investigator decides which option goes back in, with the machine builder, and records the return-to-service decision. A shaft that may have yielded is not returned to service on a calculation alone.*',
+    );
   });
 
   it('renders to HTML with one table of the options', () => {
@@ -42,7 +53,7 @@ describe('the report section "Recommendations: what goes back in"', () => {
     expect(html).toMatch(/<td>Torque limiter at &quot;drive sheave&quot; \(flagged\)<\/td>/);
   });
 
-  it('escapes the case\'s own text: names and labels cannot break the table or add markup', () => {
+  it("escapes the case's own text: names and labels cannot break the table or add markup", () => {
     const text = granulator.replaceAll('drive sheave', 'sheave | *main* <b>').replace('label: sheave seat', 'label: "seat_[1]"');
     const html = new MarkdownIt().render(section(text).md);
     expect(html).toContain('Torque limiter at &quot;sheave | *main* &lt;b&gt;&quot;');
