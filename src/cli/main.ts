@@ -98,7 +98,8 @@ export async function runMain(argv: string[], io: Io = stdio, clock: () => Date 
     .option('--factor <N>', 'design factor for what goes back in, as for resize', designFactor)
     .option('--materials <file>', "the site's materials catalogue (default: the nearest materials.yaml in the case's folder or above)")
     .option('--strict', 'treat the plausibility warnings (values almost certainly mistyped) as errors: exit 2')
-    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number; strict?: boolean; materials?: string }) => {
+    .option('--json', 'print what was written as one JSON object (the folder, the zip, each file, the finding), SI units')
+    .action(async (file: string, opts: { template?: string; pdf?: boolean; samples?: number; seed?: number; factor?: number; strict?: boolean; materials?: string; json?: boolean }) => {
       const { reportCommand } = await import('./commands/report.ts');
       await reportCommand(file, opts, io, clock());
     });

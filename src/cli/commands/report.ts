@@ -19,6 +19,8 @@ import { withAssetHistory } from '../asset-history.ts';
 import { screenInputs } from '../input-warnings.ts';
 import type { Io } from '../io.ts';
 import { version } from '../version.ts';
+import { findingToJson } from '../../views/finding-json.ts';
+import { SCHEMA_VERSION } from '../../views/schema-version.ts';
 import { terminalProgress } from '../progress.ts';
 
 export interface ReportOptions {
@@ -33,6 +35,8 @@ export interface ReportOptions {
   strict?: boolean;
   /** The site's materials catalogue (else materials.yaml up the tree). */
   materials?: string;
+  /** Print what was written as one JSON object instead of lines. */
+  json?: boolean;
 }
 
 /** `shaftcase report CASE`: a new dated report folder and its zip beside the case. */
@@ -92,6 +96,11 @@ export async function reportCommand(path: string, opts: ReportOptions, io: Io, n
     ranAt: now,
     ...(loaded.site ? { siteCatalogue: loaded.site.text } : {}),
   });
+  if (opts.json) {
+    const report = { folder: written.folder, zip: written.zip, files: files.map((f) => f.path), open: `${written.folder}/report.html` };
+    io.out(JSON.stringify({ schema_version: SCHEMA_VERSION, report, finding: findingToJson(results.finding, results.case.units) }, null, 2) + '\n');
+    return;
+  }
   const lines = [`Wrote the report ${written.folder}/`, ...files.map((f) => `  ${f.path}`)];
   lines.push(
     `Wrote the bundle for the ticket ${written.zip} (the report, the case file, ${loaded.site ? 'the materials catalogue, ' : ''}${photos.length} photo${photos.length === 1 ? '' : 's'}, MANIFEST.txt)`,
