@@ -61,6 +61,8 @@ export interface TwistFinding {
    * where no loaded shaft lies between the stations.
    */
   readonly curve: { speed: number; permanentTwist: number }[];
+  /** Whether loaded shaft lies between the stations (the curve has points), known without building the curve. */
+  loadedShaft: boolean;
 }
 
 const MEANINGS: Record<TwistFindingCode, string> = {
@@ -162,6 +164,7 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
         finding,
         meaning: finding === 'consistent' ? 'No twist is expected between these stations (no loaded shaft), and none beyond the measurement tolerance was measured.' : MEANINGS.no_loaded_shaft,
         curve: [],
+        loadedShaft: false,
       };
     }
     const speed = rel.speedFor(m.angle);
@@ -181,6 +184,7 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
     let curve: TwistFinding['curve'] | undefined;
     return {
       ...base,
+      loadedShaft: speeds.length > 0,
       model: rel.model,
       predicted: rel.permanentAt(c.speed),
       yieldOnsetSpeed: onset,

@@ -72,7 +72,7 @@ export function twistFindingLines(f: TwistFinding, u: Units): string[] {
         : `    The measured twist needs a stop from ${show(f.speedForMeasured, 'speed', u, 4)} (kinetic energy ${show(f.energyForMeasured!, 'energy', u)}); recorded ${bandText(f, u)}.`,
     );
   }
-  if (f.curve.length > 0 && !Number.isFinite(f.yieldOnsetSpeed)) {
+  if (f.loadedShaft && !Number.isFinite(f.yieldOnsetSpeed)) {
     out.push('    The shaft between these stations does not yield at any speed: a weaker piece elsewhere in the run yields first and takes the energy.');
   }
   out.push(`    Read-back: ${FINDING_WORDS[f.finding]}. ${f.meaning}`);

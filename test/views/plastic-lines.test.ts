@@ -4,6 +4,8 @@ import { renderSummary } from '../../src/views/summary.ts';
 import { show } from '../../src/views/display-units.ts';
 import { ep5Case } from '../data/ep5-case.ts';
 import { withFinding } from '../../src/finding/investigation.ts';
+import { twistFindingLines } from '../../src/views/plastic-lines.ts';
+import { fixture } from '../report/report-fixtures.ts';
 
 describe('renderSummary past yield and with observations', () => {
   it('shows the plastic result and the overall verdict when the elastic yield ratio is at or above 1', () => {
@@ -37,5 +39,19 @@ describe('renderSummary past yield and with observations', () => {
     expect(text).toMatch(/Fracture: fatigue\./);
     expect(text).toMatch(/Source: ASM Handbook Vol\. 11/);
     expect(text).toMatch(/qualified failure examiner/);
+  });
+});
+
+describe('the read-back lines in check', () => {
+  it('never build the speed → twist curve (each point a rerun of the model; only the report draws it)', () => {
+    const f = fixture('sample').results.observedFindings.twist[0];
+    const untouched = Object.create(Object.getPrototypeOf(f), Object.getOwnPropertyDescriptors(f));
+    Object.defineProperty(untouched, 'curve', {
+      get() {
+        throw new Error('the curve was built');
+      },
+    });
+    expect(f.loadedShaft).toBe(true);
+    expect(twistFindingLines(untouched, 'metric').join('\n')).toMatch(/Read-back:/);
   });
 });

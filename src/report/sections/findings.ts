@@ -121,7 +121,7 @@ function twistReadBack(r: Results): string[] {
   const words = twist.map((f) => {
     const [a, b] = f.measurement.between;
     const shielded =
-      f.curve.length > 0 && !Number.isFinite(f.yieldOnsetSpeed)
+      f.loadedShaft && !Number.isFinite(f.yieldOnsetSpeed)
         ? ' The shaft between these stations does not yield at any speed: a weaker piece elsewhere in the run yields first and takes the energy.'
         : '';
     const fracture = f.beyondFracture ? ' At that speed the model predicts fracture: check the measurement and the fracture strain.' : '';
