@@ -1,6 +1,7 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { fillRequired, template } from '../helpers/filled-template.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { checkPlausibility, formatInputWarning, PLAUSIBLE } from '../../src/case/plausibility.ts';
 
@@ -198,21 +199,9 @@ describe('the bundled cases give no plausibility warning', () => {
     expect(checkPlausibility(parseCase(example, 'README example'), example)).toEqual([]);
   });
 
-  const template = (name: string) => readFileSync(fileURLToPath(new URL(`../../templates/${name}`, import.meta.url)), 'utf8');
   it.each(['case-metric.yaml', 'case-us.yaml'])('template %s filled in with its own examples', (name) => {
     // The same filling as test/templates/case-templates.test.ts: the US template's own example values.
-    const filled = template(name)
-      .replace(/^( {2}id:)/m, '$1 INC-1')
-      .replace(/^(speed:)/m, '$1 420 rpm')
-      .replace(/^( {2}at:)( +#)/m, '$1 rotor$2')
-      .replace(/^( {2}material:)\s*$/m, '$1 aisi-1045-cd')
-      .replace('{ length: , diameter: ,', '{ length: 20 in, diameter: 2 in,')
-      .replace(/^( {2}- name:)( +# REQUIRED\. Your name)/m, '$1 drive pulley$2')
-      .replace(/^( {4}at:)( +# REQUIRED\. Distance)/m, '$1 2 in$2')
-      .replace('{ shape: disc, name: , diameter: , thickness: ,', '{ shape: disc, name: pulley, diameter: 10 in, thickness: 2 in,')
-      .replace('bore: , material: }', 'bore: , material: gray-iron-30 }')
-      .replace(/^( {2}- name:)( +# REQUIRED\. The station)/m, '$1 rotor$2')
-      .replace(/^( {4}at:)( +# REQUIRED\.)$/m, '$1 18 in$2');
+    const filled = fillRequired(template(name));
     expect(checkPlausibility(parseCase(filled, name), filled)).toEqual([]);
   });
 });

@@ -1,28 +1,13 @@
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { fillRequired, template } from '../helpers/filled-template.ts';
 import { CaseError } from '../../src/case/case-error.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { keyFuses } from '../../src/resize/key-fuse.ts';
 
-const template = (name: string) => readFileSync(fileURLToPath(new URL(`../../templates/${name}`, import.meta.url)), 'utf8');
-
 /** Every optional block uncommented (the "#|" taken off, the indentation kept), then the required values filled in as the other template test does. */
 function everyBlock(name: string): string {
-  return template(name)
-    .replace(/^(\s*)#\| ?/gm, '$1')
-    .replace(/^( {2}id:)/m, '$1 INC-1')
-    .replace(/^(speed:)/m, '$1 420 rpm')
-    .replace(/^( {2}at:)( +#)/m, '$1 rotor$2')
-    .replace(/^( {2}material:)\s*$/m, '$1 aisi-1045-cd')
-    .replace('{ length: , diameter: ,', '{ length: 20 in, diameter: 2 in,')
-    .replace(/^( {2}- name:)( +# REQUIRED\. Your name)/m, '$1 drive pulley$2')
-    .replace(/^( {4}at:)( +# REQUIRED\. Distance)/m, '$1 2 in$2')
-    .replace('{ shape: disc, name: , diameter: , thickness: ,', '{ shape: disc, name: pulley, diameter: 10 in, thickness: 2 in,')
-    .replace('bore: , material: }', 'bore: , material: gray-iron-30 }')
-    .replace(/^( {2}- name:)( +# REQUIRED\. The station)/m, '$1 rotor$2')
-    .replace(/^( {4}at:)( +# REQUIRED\.)$/m, '$1 18 in$2');
+  return fillRequired(template(name).replace(/^(\s*)#\| ?/gm, '$1'));
 }
 
 describe('case templates with every optional block filled in with its example values', () => {
