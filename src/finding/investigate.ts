@@ -1,6 +1,6 @@
 import type { Case } from '../case/case.ts';
 import type { Metrics } from '../uncertainty/monte-carlo.ts';
-import { sampleMetrics } from '../uncertainty/sample-engine.ts';
+import { sampleMetrics, sampleMetricsOf } from '../uncertainty/sample-engine.ts';
 import { runDynamicUncertainty, runUncertainty } from '../uncertainty/uncertainty.ts';
 import { judgeByInterval } from '../results/twist-findings.ts';
 import { analyseCase } from '../results/analyse-case.ts';
@@ -51,11 +51,13 @@ export function investigate(c: Case, opts: InvestigateOptions = {}): Investigati
   const samples = opts.samples ?? u.samples;
   if (!u.wanted || samples === 0) return withFinding(results);
   const settings = { samples, seed: opts.seed ?? u.seed, strengthScatter: u.strengthScatter };
-  const uncertainty = runUncertainty(c, sampleMetrics, settings);
+  // Where the twist read-back stands on the dynamic model, the sampler's own read-back is not shown (below): not sought.
+  const engine = results.pastYieldBasis === 'dynamic model' ? (k: Case) => sampleMetricsOf(k, false) : sampleMetrics;
+  const uncertainty = runUncertainty(c, engine, settings);
   if (results.verdictBasis === 'dynamic model' && u.dynamicSamples > 0) {
     const elements = results.dynamic.elementTarget;
-    const engine = (k: Case) => dynamicMetrics(k, elements);
-    uncertainty.dynamic = runDynamicUncertainty(c, engine, { ...settings, samples: u.dynamicSamples }, uncertainty.yieldRatioSamples, opts.onDynamicProgress);
+    const dynamicEngine = (k: Case) => dynamicMetrics(k, elements);
+    uncertainty.dynamic = runDynamicUncertainty(c, dynamicEngine, { ...settings, samples: u.dynamicSamples }, uncertainty.yieldRatioSamples, opts.onDynamicProgress);
   }
   if (results.pastYieldBasis === 'dynamic model' && uncertainty.observed.length > 0) {
     // The sampler runs the energy balance; its speeds behind a measured twist are not the dynamic

@@ -1,24 +1,48 @@
 import type { Case } from '../case/case.ts';
 import type { ShaftModel } from '../model/shaft-model.ts';
+import type { ShaftPiece } from '../model/shaft-model.ts';
+import { yieldTorque } from '../physics/plastic/plastic-torsion.ts';
 import { bracketedRoot } from '../physics/root-find.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
 import { solveDynamics } from './dynamic-solve.ts';
-import { sideBalance } from './side-balance.ts';
+import { segmentLaw, sideBalance } from './side-balance.ts';
 import { balanceTwistRelation, type TwistRelation } from './twist-findings.ts';
+
+/** What a piece of shaft carried and kept in one run of the dynamic model. */
+export interface RecordedPiece {
+  piece: ShaftPiece;
+  permanentTwist: number;
+  broken: boolean;
+  /** Largest |torque| over the window, N·m. */
+  peakTorque: number;
+}
+
+interface Run {
+  twist: number;
+  broken: boolean;
+  /** Largest peak torque over first-yield torque among the pieces between the positions (net section, no kt). */
+  margin: number;
+}
 
 /** Points of the figure's curve: each is one run of the dynamic model. */
 const CURVE_POINTS = 12;
-/** Relative width in speed to which the inversions are carried. */
+/** Relative width in speed to which the inversions are carried (speeds are shown to 4 figures). */
 const SPEED_TOLERANCE = 1e-5;
 /** The onset of yield is found to this share of its speed (it sets the figure's range and the zero-twist reading, shown to 4 figures). */
 const ONSET_TOLERANCE = 1e-3;
+/** Trial speeds while bracketing the onset: a run below it predicts the onset from its yield margin (linear in speed), aimed this share beyond. */
+const ONSET_AIM = 0.02;
 /** Permanent twist below this is taken as none, rad (about 0.00006°, far below any measurement). */
 const NONE = 1e-6;
 /** Speed steps upward when looking for a speed that leaves a twist: ×1.5, this many times. */
 const MAX_GROWTH = 24;
-/** Steps from the energy balance's onset when bracketing the dynamic model's: ×(1 ± this), a few times. */
-const ONSET_STEP = 0.1;
-const ONSET_STEPS = 4;
+/** A step ×1.5 in speed that raises the yield margin of the pieces by less than this share finds their torque capped. */
+const SATURATED = 1e-3;
+/** A run far below the onset predicts it at most this many times its own speed. */
+const MAX_ONSET_JUMP = 4;
+/** Steps down from a run past the onset when bracketing it: ÷(1 + this); and the most trial runs the bracketing makes. */
+const ONSET_STEP = 0.25;
+const ONSET_STEPS = 5;
 const EPS = 1e-9;
 
 /**
@@ -31,25 +55,52 @@ const EPS = 1e-9;
  * sides that load the positions (`sideInertia`, per side of `model`), as the energy balance names
  * it. Undefined when no piece lies between the positions.
  */
-export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: readonly number[], elementTarget: number, x1: number, x2: number): TwistRelation | undefined {
+export function dynamicTwistRelation(
+  c: Case,
+  model: ShaftModel,
+  sideInertia: readonly number[],
+  elementTarget: number,
+  x1: number,
+  x2: number,
+  recorded?: readonly RecordedPiece[],
+): TwistRelation | undefined {
   const inside = (p: { start: number; end: number }) => p.start >= x1 - EPS && p.end <= x2 + EPS;
   const involved = model.sides.flatMap((s, i) => (s.pieces.some(inside) ? [sideInertia[i]] : []));
   if (involved.length === 0) return undefined;
   const inertia = involved.reduce((a, b) => a + b, 0);
   const fixed: Case = { ...c, analysis: { ...c.analysis, elements: elementTarget, dynamicPlasticity: true } };
-  const runs = new Map<number, { twist: number; broken: boolean }>();
+  const yieldTorqueOf = new Map<ShaftPiece['segment'], number>();
+  const pieceYield = (p: ShaftPiece) => {
+    let t = yieldTorqueOf.get(p.segment);
+    if (t === undefined) {
+      const law = segmentLaw(c, p.segment);
+      t = law ? yieldTorque(law) : Infinity;
+      yieldTorqueOf.set(p.segment, t);
+    }
+    return t;
+  };
+  /** What one run left between the positions: permanent twist, a break anywhere, and the largest peak torque / first-yield torque of the pieces there. */
+  const summary = (pieces: readonly RecordedPiece[]): Run => {
+    let twist = 0;
+    let margin = 0;
+    for (const p of pieces) {
+      if (!inside(p.piece)) continue;
+      twist += p.permanentTwist;
+      margin = Math.max(margin, p.peakTorque / pieceYield(p.piece));
+    }
+    return { twist, broken: pieces.some((p) => p.broken), margin };
+  };
+  const runs = new Map<number, Run>();
+  // The case's own run at the recorded speed is the same chain and laws: it is not run again.
+  if (recorded) runs.set(c.speed, summary(recorded));
   const run = (w: number) => {
     const hit = runs.get(w);
     if (hit) return hit;
-    let out = { twist: 0, broken: false };
+    let out: Run = { twist: 0, broken: false, margin: 0 };
     if (w > 0) {
       const sol = solveDynamics({ ...fixed, speed: w }, model).final;
       const damage = dynamicPieceDamage(sol.chain, sol.run.laws);
-      let twist = 0;
-      sol.chain.pieces.forEach((p, i) => {
-        if (inside(p.piece)) twist += damage[i].permanentTwist;
-      });
-      out = { twist, broken: damage.some((d) => d.broken) };
+      out = summary(sol.chain.pieces.map((p, i) => ({ piece: p.piece, permanentTwist: damage[i].permanentTwist, broken: damage[i].broken, peakTorque: sol.piecePeak[i] })));
     }
     runs.set(w, out);
     return out;
@@ -58,8 +109,13 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
   /** A bracket [lo, hi] with twist(lo) ≤ t < twist(hi) from the runs so far, growing upward from the recorded speed. */
   const bracket = (t: number): [number, number] | undefined => {
     let w = c.speed;
+    let margin = -Infinity;
     for (let k = 0; permanentAt(w) <= t; k++) {
-      if (k >= MAX_GROWTH) return undefined;
+      // The pieces there stay short of yield while the speed grows half as much again and their
+      // torque does not grow with it: something else caps it (a weaker piece fully plastic, a slip).
+      const m = run(w).margin;
+      if (k >= MAX_GROWTH || (m < 1 && m <= margin * (1 + SATURATED))) return undefined;
+      margin = m;
       w *= 1.5;
     }
     const known = [...runs.entries()].sort((a, b) => a[0] - b[0]);
@@ -74,13 +130,27 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
   const onset = (): number => {
     if (onsetSpeed !== undefined) return onsetSpeed;
     const b = onsetBracket() ?? bracket(NONE);
-    onsetSpeed = b === undefined ? Infinity : bisect((w) => permanentAt(w) > NONE, b[0], b[1], ONSET_TOLERANCE);
+    onsetSpeed = b === undefined ? Infinity : onsetIn(b[0], b[1]);
     return onsetSpeed;
   };
   /**
-   * A narrow bracket of the dynamic model's onset around the energy balance's (closed form, the
-   * same laws with all of a side's energy into its shaft), which it lies near where little else
-   * takes energy: steps of 10 % from there, a few each way; undefined when that does not bracket it.
+   * Where permanent twist starts, between a speed that leaves none and one that leaves some: the
+   * root of the pieces' yield margin less one (largest peak torque over first-yield torque; it
+   * rises smoothly through 1 at the onset and on towards the fully plastic torque past it), by
+   * Brent's method, which needs far fewer runs than halving the bracket.
+   */
+  const onsetIn = (lo: number, hi: number): number => {
+    const g = (w: number) => {
+      const r = run(w);
+      return r.twist > NONE ? Math.max(r.margin - 1, Number.MIN_VALUE) : Math.min(r.margin - 1, 0);
+    };
+    return bracketedRoot(g, lo, hi, ONSET_TOLERANCE * hi);
+  };
+  /**
+   * A bracket of the dynamic model's onset, starting from the energy balance's (closed form, the
+   * same laws with all of a side's energy into its shaft): a run that leaves no twist predicts the
+   * onset from its yield margin (the torques grow about in proportion to the speed), aimed a little
+   * beyond; a run that leaves some steps down. Undefined when a few runs do not bracket it.
    */
   const onsetBracket = (): [number, number] | undefined => {
     const guess = balanceTwistRelation(
@@ -90,12 +160,20 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
       x2,
     )?.onset();
     if (guess === undefined || !Number.isFinite(guess) || !(guess > 0)) return undefined;
-    const yields = permanentAt(guess) > NONE;
+    let lo = 0;
+    let hi = Infinity;
+    for (const [w, r] of runs) {
+      if (r.twist > NONE) hi = Math.min(hi, w);
+      else lo = Math.max(lo, w);
+    }
     let w = guess;
     for (let k = 0; k < ONSET_STEPS; k++) {
-      const next = yields ? w / (1 + ONSET_STEP) : w * (1 + ONSET_STEP);
-      if (yields !== permanentAt(next) > NONE) return yields ? [next, w] : [w, next];
-      w = next;
+      const r = run(w);
+      if (r.twist > NONE) hi = Math.min(hi, w);
+      else lo = Math.max(lo, w);
+      if (lo > 0 && hi < Infinity) return [lo, hi];
+      if (r.twist > NONE) w = w / (1 + ONSET_STEP);
+      else w = r.margin > 0 ? Math.min((w / r.margin) * (1 + ONSET_AIM), MAX_ONSET_JUMP * w) : MAX_ONSET_JUMP * w;
     }
     return undefined;
   };
@@ -118,14 +196,4 @@ export function dynamicTwistRelation(c: Case, model: ShaftModel, sideInertia: re
     breaksBefore: (t) => bracket(t) === undefined && [...runs.values()].some((r) => r.broken),
     curvePoints: CURVE_POINTS,
   };
-}
-
-/** The edge of `yes` between lo (no) and hi (yes) to a relative width `tol`, by bisection. */
-function bisect(yes: (w: number) => boolean, lo: number, hi: number, tol: number): number {
-  while (hi - lo > tol * hi) {
-    const mid = 0.5 * (lo + hi);
-    if (yes(mid)) hi = mid;
-    else lo = mid;
-  }
-  return lo;
 }

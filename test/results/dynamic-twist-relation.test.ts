@@ -67,6 +67,25 @@ describe('dynamicTwistRelation: the speed → permanent twist relation through t
     }
   });
 
+  it("finds the onset of yield where the closed form puts first yield: one mass stopped at once, T_Y = √(J·k)·ω, within the onset's 0.1 % tolerance", () => {
+    // For an instant stop with no damping and no shaft inertia the dynamic model's elastic peak is
+    // the energy method's, T = ω·√(J·k) (REFERENCE EP5, linear in ω): first yield at ω = T_Y/√(J·k),
+    // which is the energy balance's closed-form onset.
+    const { dynamic, balance } = relations(ep5('300 rpm'));
+    expect(rel(dynamic.onset(), balance.onset())).toBeLessThan(1e-3);
+  });
+
+  it("takes the case's own run at the recorded speed from the base solution (no rerun) and finds the same twist as a rerun does", () => {
+    const c = parseCase(ep5('300 rpm', 'duration'));
+    const r = analyseCase(c, { readBack: false });
+    const model = buildShaftModel(c);
+    const inertias = analysePlastic(c, model, r.sides).balances.map((b) => b.inertia);
+    const seeded = dynamicTwistRelation(c, model, inertias, r.dynamic.elementTarget, 0, 0.5, r.dynamic.pieces)!;
+    const rerun = dynamicTwistRelation(c, model, inertias, r.dynamic.elementTarget, 0, 0.5)!;
+    expect(seeded.permanentAt(c.speed)).toBeGreaterThan(0);
+    expect(rel(seeded.permanentAt(c.speed), rerun.permanentAt(c.speed))).toBeLessThan(1e-12);
+  });
+
   it('leaves no twist below the onset of yield and more with more speed (property)', () => {
     const { dynamic } = relations(ep5('300 rpm', 'duration'));
     const onset = dynamic.onset();

@@ -1,4 +1,4 @@
-import { plasticTorque, energyPerLength, residualTwistRate, torqueAtTwistRate, twistRateAtTorque, yieldTorque, type TorsionLaw } from './plastic-torsion.ts';
+import { plasticTorque, energyPerLength, residualTwistRate, rigidity, torqueAtTwistRate, twistRateAtTorque, yieldTorque, type TorsionLaw } from './plastic-torsion.ts';
 import { bracketedRoot, growUntil } from '../root-find.ts';
 
 /** One piece of shaft in a side's run, for the energy balance. */
@@ -63,9 +63,16 @@ export class PlasticBalance {
     return { torque, energy: pieces.reduce((s, p) => s + p.energy, 0), pieces };
   }
 
-  /** The weakest piece's twist rate at which the side has absorbed `energy` (J ≥ 0). */
+  /**
+   * The weakest piece's twist rate at which the side has absorbed `energy` (J ≥ 0). While every
+   * piece is elastic the side is a chain of linear springs in series, E = T²/2·Σ L/(G·J_p), so the
+   * torque is √(2E/Σ L/(G·J_p)) in closed form (the root would find the same to its tolerance; the
+   * Monte Carlo, most of whose samples stay elastic, runs this).
+   */
   twistRateForEnergy(energy: number): number {
     if (energy <= 0) return 0;
+    const elastic = this.elasticLimit();
+    if (energy <= elastic.energy) return Math.sqrt((2 * energy) / elastic.compliance) / rigidity(this.pieces[this.weakest].law);
     const f = (phi: number) => this.stateAt(phi).energy;
     const w = this.pieces[this.weakest].law;
     const hi = growUntil(f, energy, Math.max(1e-12, Math.min(w.shearYield, 1e12) / w.shearModulus / w.outerRadius))!;
@@ -110,6 +117,16 @@ export class PlasticBalance {
     if (!(ty < this.torqueLimit())) return Infinity;
     return this.stateAt(this.twistRateAtTorque(ty)).energy;
   }
+
+  /** The side's compliance Σ L/(G·J_p), rad/(N·m), and the strain energy at which its first piece yields, J (kept: the Monte Carlo asks per sample). */
+  private elasticLimit(): { compliance: number; energy: number } {
+    if (this.elastic) return this.elastic;
+    const compliance = this.pieces.reduce((s, p) => s + p.length / rigidity(p.law), 0);
+    const ty = Math.min(...this.pieces.map((p) => yieldTorque(p.law)));
+    this.elastic = { compliance, energy: Number.isFinite(ty) ? 0.5 * ty * ty * compliance : Infinity };
+    return this.elastic;
+  }
+  private elastic?: { compliance: number; energy: number };
 
   /** The most torque the side can carry, N·m: the weakest piece's fully plastic torque, or Infinity when it hardens. */
   torqueLimit(): number {

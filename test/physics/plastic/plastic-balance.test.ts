@@ -71,6 +71,19 @@ describe('PlasticBalance, pieces in series', () => {
     expect(rel(b.stateForEnergy(e).torque, Math.sqrt((2 * e) / c))).toBeLessThan(1e-9);
   });
 
+  it('the closed form below first yield meets the root above it: the state is continuous at the first-yield energy', () => {
+    // Below the first-yield energy the balance takes T = √(2E/C) directly; just above it the root
+    // of the energy. Both sides of the boundary give the same torque and twist to a part in 10⁶.
+    const b = new PlasticBalance([piece(0.4, thick), piece(0.25, thin)]);
+    const ey = 0.5 * yieldTorque(thin) ** 2 * (0.4 / rigidity(thick) + 0.25 / rigidity(thin));
+    const below = b.stateForEnergy(ey * (1 - 1e-9));
+    const above = b.stateForEnergy(ey * (1 + 1e-9));
+    expect(rel(below.torque, yieldTorque(thin))).toBeLessThan(1e-6);
+    expect(rel(above.torque, below.torque)).toBeLessThan(1e-6);
+    expect(rel(above.pieces[1].twist, below.pieces[1].twist)).toBeLessThan(1e-6);
+    expect(rel(below.energy, ey)).toBeLessThan(1e-8);
+  });
+
   it('splitting a piece into two of the same law changes nothing', () => {
     const whole = new PlasticBalance([piece(0.3, thin), piece(0.2, thick)]).stateForEnergy(8000);
     const split = new PlasticBalance([piece(0.1, thin), piece(0.2, thick), piece(0.2, thin)]).stateForEnergy(8000);
