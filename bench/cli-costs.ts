@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const SAMPLES = fileURLToPath(new URL('../../sample-cases/', import.meta.url));
-const BIN = fileURLToPath(new URL('../src/cli/bin.js', import.meta.url));
+const BIN = fileURLToPath(new URL('../cli/bin.js', import.meta.url));
 /** Clock ticks per second of /proc/self/stat's times (USER_HZ, 100 on Linux). */
 const TICKS = 100;
 

@@ -120,7 +120,8 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     }
   }
   const inertias = balances.map((b) => b.inertia);
-  const relation = (x1: number, x2: number) => (pastYieldInTime ? dynamicTwistRelation(c, model, inertias, dynamic.elementTarget, x1, x2, dynamic.pieces) : balanceTwistRelation(model.sides, balances, x1, x2));
+  const relation = (x1: number, x2: number) =>
+    pastYieldInTime ? dynamicTwistRelation(c, model, inertias, dynamic.elementTarget, x1, x2, dynamic.pieces) : balanceTwistRelation(model.sides, balances, x1, x2);
   const observedFindings = {
     twist: opts.readBack === false ? [] : readTwistBack(c, relation),
     fracture: readFracture(c, pastYieldInTime ? dynamicFracturePrediction(dynamic, plastic, verdict) : balanceFracturePrediction(plastic)),

@@ -3,6 +3,7 @@ import type { Side } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
 import { energyPerLength, plasticTorque, torqueAtTwistRate, yieldTorque, yieldTwistRate } from '../physics/plastic/plastic-torsion.ts';
 import type { MostStrained, PlasticPieceResult, PlasticResult, PlasticSideResult, PlasticVerdict } from './plastic-result.ts';
+import type { BalanceState } from '../physics/plastic/plastic-balance.ts';
 import { sideBalance, type SideBalance } from './side-balance.ts';
 
 /** Points on the loading path drawn for the most strained piece. */
@@ -100,6 +101,17 @@ export function sideEndState(b: SideBalance, energy: number) {
   const state = breaks ? b.balance.stateAt(limit.twistRate) : b.balance.stateForEnergy(energy);
   if (breaks) state.pieces[limit.piece!] = { ...state.pieces[limit.piece!], fractured: true };
   return { state, limit, breaks };
+}
+
+/**
+ * The same end state without the fracture limit unless the side breaks: the state that absorbs
+ * `energy` has a piece at its fracture twist rate exactly when that energy reaches the limit (the
+ * energy grows with the twist rate of every piece), so the limit is sought only then. For the
+ * Monte Carlo's samples, most of which do not break.
+ */
+export function sideEndStateOnly(b: SideBalance, energy: number): BalanceState {
+  const state = b.balance.stateForEnergy(energy);
+  return state.pieces.some((p) => p.fractured) ? sideEndState(b, energy).state : state;
 }
 
 /** The permanent twist of a side's run at its end state, rad: 0 where a piece breaks (the run is in two; its unbroken pieces keep theirs). */

@@ -2,7 +2,7 @@ import type { Case } from '../case/case.ts';
 import { buildShaftModel } from '../model/shaft-model.ts';
 import { energyMethodSide } from '../physics/energy-method.ts';
 import { speedForPermanentTwist, type ReadBackSide } from '../physics/read-back.ts';
-import { sideEndState, sidePermanentTwist } from '../results/analyse-plastic.ts';
+import { sideEndStateOnly, sidePermanentTwist } from '../results/analyse-plastic.ts';
 import { sideBalance } from '../results/side-balance.ts';
 import type { Metrics } from './monte-carlo.ts';
 
@@ -37,7 +37,7 @@ export function sampleMetricsOf(c: Case, readBack: boolean): Metrics {
     }
     const inertia = e.parts.reduce((s, p) => s + p.reflectedInertia, 0);
     const b = sideBalance(side, c, inertia);
-    const { state } = sideEndState(b, e.kineticEnergy);
+    const state = sideEndStateOnly(b, e.kineticEnergy);
     peakTorque = Math.max(peakTorque, state.torque);
     permanentTwist = Math.max(permanentTwist, sidePermanentTwist(state));
     readBackSides.push({ balance: b.balance, inertia, between: [] });

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { copyToTemp } from '../io/io-fixtures.ts';
 import { SAMPLE } from '../report/report-fixtures.ts';
 
-const BIN = fileURLToPath(new URL('../../dist/src/cli/bin.js', import.meta.url));
+const BIN = fileURLToPath(new URL('../../dist/cli/bin.js', import.meta.url));
 
 // `npm test` builds dist/ first; this runs the CLI as a user would, to check the built report path loads.
 describe.skipIf(!existsSync(BIN))('the built CLI', () => {

@@ -7,7 +7,7 @@ import { runMain } from '../../src/cli/main.ts';
 import { copyToTemp } from '../io/io-fixtures.ts';
 
 const fixture = fileURLToPath(new URL('../data/one-disc.yaml', import.meta.url));
-const bin = fileURLToPath(new URL('../../dist/src/cli/bin.js', import.meta.url));
+const bin = fileURLToPath(new URL('../../dist/cli/bin.js', import.meta.url));
 
 async function cli(...argv: string[]) {
   let out = '';

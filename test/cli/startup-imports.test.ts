@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 
 const SRC = fileURLToPath(new URL('../../src/', import.meta.url));
+const DIST_CLI = fileURLToPath(new URL('../../dist/cli/', import.meta.url));
 /** Packages only the report needs; `check` must never load them. */
 const REPORT_ONLY = ['@observablehq/plot', 'linkedom', 'arquero', 'markdown-it', 'jszip', 'playwright-core'];
 
@@ -51,6 +52,20 @@ describe('start-up of the CLI', () => {
   it("check --json does not load the terminal summary's views", () => {
     const { files } = staticGraph(join(SRC, 'cli', 'commands', 'check.ts'));
     expect([...files].some((f) => f.endsWith('/views/summary.ts'))).toBe(false);
+  });
+
+  it("the bundled CLI (dist/cli, what `npx shaftcase` runs): check's chunks hold none of the report's libraries, and the report's do", () => {
+    // `npm test` bundles before the tests run (scripts/bundle.mjs). A command's chunk is loaded by
+    // bin.js's `import()`; what it loads with it are its static imports, walked as above.
+    const bin = join(DIST_CLI, 'bin.js');
+    const chunkOf = (command: string) => join(DIST_CLI, readFileSync(bin, 'utf8').match(new RegExp(`import\\("\\./(${command}-[\\w-]+\\.js)"\\)`))![1]);
+    const text = (command: string) => [...staticGraph(chunkOf(command)).files].map((f) => readFileSync(f, 'utf8')).join('\n');
+    const signatures = ['observablehq', 'linkedom', 'markdown-it', 'JSZip'];
+    const check = text('check');
+    expect(check).toMatch(/shear yield/);
+    for (const s of signatures) expect(check.includes(s), s).toBe(false);
+    const report = text('report');
+    for (const s of signatures) expect(report.includes(s), s).toBe(true);
   });
 
   it('the report command itself does reach them (so the check above looks at the right graph)', () => {

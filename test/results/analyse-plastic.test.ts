@@ -1,4 +1,8 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { buildShaftModel } from '../../src/model/shaft-model.ts';
+import { sideEndState, sideEndStateOnly } from '../../src/results/analyse-plastic.ts';
+import { sideBalance } from '../../src/results/side-balance.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { ep5Case } from '../data/ep5-case.ts';
 
@@ -117,5 +121,26 @@ describe('how the permanent twist shows on the surface', () => {
     const piece = analyseCase(ep5Case()).plastic.sides[0].pieces[0];
     expect(piece.surfaceOffset * 1000).toBeCloseTo(0.82, 2);
     expect((piece.helixAngle * 180) / Math.PI).toBeCloseTo(0.094, 3);
+  });
+});
+
+describe('the end state without the fracture limit (the Monte Carlo sample engine)', () => {
+  it('is the full end state, torque, twist and break, at every energy from elastic to past the break (property)', () => {
+    const material = ['shear_modulus: 79.3 GPa', 'yield_strength: 530 MPa', 'fracture_strain: 0.05'];
+    const c = ep5Case({ material });
+    const side = buildShaftModel(c).sides[0];
+    const b = sideBalance(side, c, 0.98646);
+    const limit = b.balance.fractureLimit().energy;
+    fc.assert(
+      fc.property(fc.double({ min: 1e-4, max: 3, noNaN: true }), (share) => {
+        const energy = share * limit;
+        const full = sideEndState(b, energy).state;
+        const lean = sideEndStateOnly(b, energy);
+        expect(lean.torque).toBeCloseTo(full.torque, 6);
+        expect(lean.pieces.map((p) => p.fractured)).toEqual(full.pieces.map((p) => p.fractured));
+        lean.pieces.forEach((p, i) => expect(Math.abs(p.twist - full.pieces[i].twist)).toBeLessThan(1e-9 * (1 + Math.abs(full.pieces[i].twist))));
+      }),
+      { numRuns: 60 },
+    );
   });
 });

@@ -14,6 +14,7 @@ afterAll(() => rmSync(work, { recursive: true, force: true }));
 describe('the packed package', () => {
   it('installs from its tarball and gives analyseCase, the finding and their types by the package name', () => {
     execFileSync('npx', ['tsc', '-p', 'tsconfig.json'], { cwd: root, stdio: 'pipe' });
+    execFileSync(process.execPath, ['scripts/bundle.mjs'], { cwd: root, stdio: 'pipe' });
     execFileSync('npm', ['pack', '--ignore-scripts', '--pack-destination', work], { cwd: root, stdio: 'pipe' });
     const tarball = readdirSync(work).find((f) => f.endsWith('.tgz'))!;
     const app = join(work, 'app');
@@ -42,5 +43,9 @@ describe('the packed package', () => {
     expect(out.schema).toBe(2);
     expect(['elastic', 'yielded locally', 'yielded', 'fracture predicted']).toContain(out.verdict);
     expect(out.ratio).toBeGreaterThan(0);
+    // The command as installed: the bundled CLI (dist/cli) on one of the shipped sample cases.
+    const sample = join(app, 'node_modules', 'shaftcase', 'sample-cases', 'exhaust-fan-seized-impeller.yaml');
+    const checked = JSON.parse(execFileSync(join(app, 'node_modules', '.bin', 'shaftcase'), ['check', '--json', '--samples', '0', sample], { cwd: app, encoding: 'utf8' }));
+    expect(checked.finding.verdict).toBeTypeOf('string');
   });
 });
