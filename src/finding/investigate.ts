@@ -4,6 +4,8 @@ import { sampleMetrics, sampleMetricsOf } from '../uncertainty/sample-engine.ts'
 import { runDynamicUncertainty, runUncertainty } from '../uncertainty/uncertainty.ts';
 import { judgeByInterval } from '../results/twist-findings.ts';
 import { analyseCase } from '../results/analyse-case.ts';
+import { dynamicPeakMetrics } from '../results/dynamic-result.ts';
+import { buildShaftModel } from '../model/shaft-model.ts';
 import { withInputWarnings, type InputWarnings } from '../results/input-warnings.ts';
 import type { Results } from '../results/results.ts';
 import { withFinding, type Investigation } from './investigation.ts';
@@ -37,8 +39,10 @@ export function metricsOf(r: Results): Metrics {
  * fixes the dynamic model's element count (the base run's, so a sample pays for no refinement).
  */
 export function dynamicMetrics(k: Case, elements?: number): Metrics {
-  const r = analyseCase(k, { readBack: false, ...(elements === undefined ? {} : { elements }) });
-  return { yieldRatio: r.verdictYieldRatio, maxShearStress: r.dynamic.maxShearStress, peakTorque: r.dynamic.peakTorque };
+  const c = elements === undefined ? k : { ...k, analysis: { ...k.analysis, elements } };
+  // The verdict stands on the dynamic model for every sample: which model it takes depends on the
+  // case's parts (drives, slips, stations, a ramp), not on the values drawn.
+  return dynamicPeakMetrics(c, buildShaftModel(c));
 }
 
 /**

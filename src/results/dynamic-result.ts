@@ -8,13 +8,13 @@ import { shearStress } from '../physics/torsion.ts';
 import { PlasticElementLaw } from '../physics/plastic/plastic-element-law.ts';
 import { BacklashLaw } from '../physics/backlash-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
-import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
+import { dynamicPieceDamage, type PieceDamage } from './dynamic-piece-damage.ts';
 import { modeFrequencies, type ModeFrequency } from './mode-convergence.ts';
 import { dynamicHistories, type DynamicHistories, type Series } from './dynamic-histories.ts';
 import { yieldPath, type YieldPath } from './yield-path.ts';
 import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
-import { solveDynamics } from './dynamic-solve.ts';
+import { solveDynamics, type DynamicSolve } from './dynamic-solve.ts';
 
 /** The dynamic model's result for one piece of shaft (a segment cut at stations). */
 export interface DynamicPiece {
@@ -161,12 +161,8 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
   );
   const breakTime = (i: number) => run.events.find((e) => e.what === 'breaks' && e.source.kind === 'element' && chain.elements[e.source.index].pieces.includes(i))?.time;
   const plasticLaws = run.laws.filter((l): l is PlasticElementLaw => l instanceof PlasticElementLaw);
-  const pastYield = plasticLaws.some((l) => l.yielded) || damage.some((d) => d.broken);
-  const elasticPeak = pastYield ? elasticPeaks(c, model, solve.target) : piecePeak;
+  const elasticPeak = elasticPeaksOf(c, model, solve, damage);
   const pieces: DynamicPiece[] = chain.pieces.map((p, i) => {
-    const seg = p.piece.segment;
-    const tauY = verdictShearStrength(c.materials[seg.material], c.analysis.criterion);
-    const tau = seg.kt * shearStress(elasticPeak[i], seg.diameter, seg.bore);
     const d = damage[i];
     const broke = d.broken ? { breakTime: breakTime(i) } : {};
     return {
@@ -175,9 +171,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
       peakTorque: piecePeak[i],
       peakTime: pieceTime[i],
       elasticPeakTorque: elasticPeak[i],
-      shearStress: tau,
-      shearYield: tauY,
-      yieldRatio: tau / tauY,
+      ...pieceStress(c, p.piece, elasticPeak[i]),
       ...d,
       ...broke,
     };
@@ -282,6 +276,39 @@ function shaftElementName(chain: Chain, e: number): string {
 /** Each piece's peak torque with the shaft elements elastic, the same chain (element count) otherwise, N·m. */
 function elasticPeaks(c: Case, model: ShaftModel, target: number): number[] {
   return solveDynamics({ ...c, analysis: { ...c.analysis, dynamicPlasticity: false, elements: target } }, model).final.piecePeak;
+}
+
+/** The peaks the elastic check stands on: the run's own, or, where it yielded or broke, the same chain's with its elements elastic (`DynamicPiece.elasticPeakTorque`). */
+function elasticPeaksOf(c: Case, model: ShaftModel, solve: DynamicSolve, damage: readonly PieceDamage[]): number[] {
+  const pastYield = solve.final.run.laws.some((l) => l instanceof PlasticElementLaw && l.yielded) || damage.some((d) => d.broken);
+  return pastYield ? elasticPeaks(c, model, solve.target) : solve.final.piecePeak;
+}
+
+/** A piece's elastic check at a peak torque: kt times the outer-fibre stress, the verdict's shear strength, and their ratio. */
+function pieceStress(c: Case, piece: ShaftPiece, peakTorque: number): { shearStress: number; shearYield: number; yieldRatio: number } {
+  const seg = piece.segment;
+  const tauY = verdictShearStrength(c.materials[seg.material], c.analysis.criterion);
+  const tau = seg.kt * shearStress(peakTorque, seg.diameter, seg.bore);
+  return { shearStress: tau, shearYield: tauY, yieldRatio: tau / tauY };
+}
+
+/**
+ * Only the dynamic model's peaks a Monte Carlo sample keeps (the verdict's stress / shear yield,
+ * the highest stress, the highest torque as carried), by the same solution and the same checks as
+ * `dynamicResult`, without what only the views read (histories, events, mode convergence).
+ */
+export function dynamicPeakMetrics(c: Case, model: ShaftModel): { yieldRatio: number; maxShearStress: number; peakTorque: number } {
+  const solve = solveDynamics(c, model);
+  const { chain, run, piecePeak } = solve.final;
+  const elasticPeak = elasticPeaksOf(c, model, solve, dynamicPieceDamage(chain, run.laws));
+  let yieldRatio = -Infinity;
+  let maxShearStress = -Infinity;
+  chain.pieces.forEach((p, i) => {
+    const s = pieceStress(c, p.piece, elasticPeak[i]);
+    yieldRatio = Math.max(yieldRatio, s.yieldRatio);
+    maxShearStress = Math.max(maxShearStress, s.shearStress);
+  });
+  return { yieldRatio, maxShearStress, peakTorque: Math.max(...piecePeak) };
 }
 
 function optional<K extends string, V>(key: K, value: V | undefined): Partial<Record<K, V>> {

@@ -3,6 +3,8 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
+import { dynamicPeakMetrics } from '../../src/results/dynamic-result.ts';
+import { buildShaftModel } from '../../src/model/shaft-model.ts';
 import { polarMoment } from '../../src/physics/torsion.ts';
 import { odexSlip } from '../physics/integrator/chain-fixtures.ts';
 
@@ -189,5 +191,19 @@ describe('a drive given only by its power', () => {
     const r = analyseCase(parseCase(readFileSync(new URL('../../sample-cases/screw-conveyor-jam-us.yaml', import.meta.url), 'utf8')));
     expect(r.verdictBasis).toBe('dynamic model');
     expect(r.warnings.filter((w) => /given only by its power.*unconservative/.test(w))).toHaveLength(1);
+  });
+});
+
+describe('dynamicPeakMetrics: the peaks a Monte Carlo sample keeps', () => {
+  it("are dynamicResult's own, to the last digit, where the shaft stays elastic and where it yields", () => {
+    for (const [slip, yields] of [
+      ['100 kN*m', true],
+      ['2 kN*m', false],
+    ] as const) {
+      const c = parseCase(limiterCase(slip));
+      const d = analyseCase(c, { readBack: false }).dynamic;
+      expect(d.yieldRatio >= 1).toBe(yields);
+      expect(dynamicPeakMetrics(c, buildShaftModel(c))).toEqual({ yieldRatio: d.yieldRatio, maxShearStress: d.maxShearStress, peakTorque: d.peakTorque });
+    }
   });
 });
