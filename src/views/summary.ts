@@ -18,6 +18,19 @@ import { textTable } from './text-table.ts';
  * like with the energy method, the elastic peak and its stress over shear yield; the lowest
  * frequencies; what slipped or parted. `role` says whether it is the finding's model or a comparison.
  */
+/**
+ * ' in "bearing journal"': where along a side the largest torque as carried was. Past yield it is
+ * often not the governing piece, which is capped at its fully plastic torque while a stouter
+ * neighbour, with shaft inertia between them, carries more.
+ */
+function carriedWhere(d: Results['dynamic'], side: string): string {
+  const mine = d.pieces.filter((p) => p.side === side);
+  if (mine.length < 2) return '';
+  const top = mine.reduce((a, b) => (b.peakTorque > a.peakTorque ? b : a));
+  const seg = top.piece.segment;
+  return ` in ${seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`}`;
+}
+
 export function dynamicLines(r: Results, role: string): string[] {
   const d = r.dynamic;
   const u = r.case.units;
@@ -27,7 +40,7 @@ export function dynamicLines(r: Results, role: string): string[] {
     const capped = elastic > s.dynamicPeakTorque * (1 + 1e-6);
     out.push(
       capped
-        ? `  side ${s.side}  peak torque as carried ${show(s.dynamicPeakTorque, 'torque', u)} (capped past yield); elastic ${show(elastic, 'torque', u)}, stress / shear yield ${sig(s.dynamicYieldRatio)}`
+        ? `  side ${s.side}  peak torque as carried ${show(s.dynamicPeakTorque, 'torque', u)}${carriedWhere(d, s.side)} (past yield a piece carries at most its fully plastic torque); elastic ${show(elastic, 'torque', u)}, stress / shear yield ${sig(s.dynamicYieldRatio)}`
         : `  side ${s.side}  peak torque ${show(s.dynamicPeakTorque, 'torque', u)} (elastic), stress / shear yield ${sig(s.dynamicYieldRatio)}`,
     );
   }

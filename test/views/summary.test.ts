@@ -16,8 +16,15 @@ describe('the summary with the dynamic model', () => {
     const s = r.dynamic.sides[0];
     const elastic = Math.max(...r.dynamic.pieces.map((p) => p.elasticPeakTorque));
     expect(elastic).toBeGreaterThan(s.dynamicPeakTorque);
+    // The largest torque as carried is not the governing piece's: that one is capped at its fully
+    // plastic torque, (2π/3)·τ_Y·c³ (Beer & Johnston, Mechanics of Materials, Sec. 3.9; from memory,
+    // confident), while a stouter piece beyond it carries more. The line says where.
+    const top = r.dynamic.pieces.reduce((a, b) => (b.peakTorque > a.peakTorque ? b : a));
+    const governing = r.dynamic.pieces[r.dynamic.governing];
+    expect(top.piece.segment.label).not.toBe(governing.piece.segment.label);
+    expect(governing.peakTorque).toBeLessThan(top.peakTorque);
     expect(lines).toContain(
-      `peak torque as carried ${show(s.dynamicPeakTorque, 'torque', 'metric')} (capped past yield); elastic ${show(elastic, 'torque', 'metric')}, stress / shear yield ${sig(s.dynamicYieldRatio)}`,
+      `peak torque as carried ${show(s.dynamicPeakTorque, 'torque', 'metric')} in "${top.piece.segment.label}" (past yield a piece carries at most its fully plastic torque); elastic ${show(elastic, 'torque', 'metric')}, stress / shear yield ${sig(s.dynamicYieldRatio)}`,
     );
     expect(lines).not.toContain('energy method');
     expect(lines).toContain(`${sig(r.dynamic.naturalFrequencies[0])}`);
