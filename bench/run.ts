@@ -127,11 +127,11 @@ const errMine = relError(mine, exact);
 // searched down to ODEX_TIGHTEST and only while one run stays within ODEX_RUN_BUDGET: odex's work
 // grows steeply as its tolerance tightens, and the search must not hold the bench up.
 const ODEX_TIGHTEST = 1e-10;
-const ODEX_RUN_BUDGET = 6_000; // ms
+const ODEX_RUN_BUDGET = 4_000; // ms
 /** The loosest tolerance tried: at 1e-1 one odex run on this chain took more than 10 s (measured 2026-12-02), at 1e-3 about 2 s, already far inside the integrator's error. */
 const ODEX_LOOSEST = 1e-3;
 /** The whole search stops within this much time, ms. */
-const ODEX_SEARCH_BUDGET = 25_000;
+const ODEX_SEARCH_BUDGET = 10_000;
 const searchEnd = performance.now() + ODEX_SEARCH_BUDGET;
 let tol = ODEX_LOOSEST * 10;
 let errOdex = Infinity;
