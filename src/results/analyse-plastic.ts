@@ -104,12 +104,14 @@ export function sideEndState(b: SideBalance, energy: number) {
 }
 
 /**
- * The same end state without the fracture limit unless the side breaks: the state that absorbs
- * `energy` has a piece at its fracture twist rate exactly when that energy reaches the limit (the
- * energy grows with the twist rate of every piece), so the limit is sought only then. For the
- * Monte Carlo's samples, most of which do not break.
+ * The same end state without the fracture limit while the side is elastic unless it breaks there
+ * (a brittle piece): the state that absorbs `energy` has a piece at its fracture twist rate exactly
+ * when that energy reaches the limit (the energy grows with the twist rate of every piece), so the
+ * limit is sought only then. For the Monte Carlo's samples, most of which stay elastic.
  */
 export function sideEndStateOnly(b: SideBalance, energy: number): BalanceState {
+  // Past the elastic limit the fracture limit is cheaper than the root it may make needless.
+  if (energy > b.balance.elasticLimitEnergy()) return sideEndState(b, energy).state;
   const state = b.balance.stateForEnergy(energy);
   return state.pieces.some((p) => p.fractured) ? sideEndState(b, energy).state : state;
 }

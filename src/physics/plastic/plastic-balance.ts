@@ -1,4 +1,4 @@
-import { plasticTorque, energyPerLength, residualTwistRate, rigidity, torqueAtTwistRate, twistRateAtTorque, yieldTorque, type TorsionLaw } from './plastic-torsion.ts';
+import { plasticTorque, energyPerLength, residualTwistRate, rigidity, torqueAtTwistRate, twistRateAtTorque, yieldTorque, yieldTwistRate, type TorsionLaw } from './plastic-torsion.ts';
 import { bracketedRoot, growUntil } from '../root-find.ts';
 
 /** One piece of shaft in a side's run, for the energy balance. */
@@ -75,8 +75,16 @@ export class PlasticBalance {
     if (energy <= elastic.energy) return Math.sqrt((2 * energy) / elastic.compliance) / rigidity(this.pieces[this.weakest].law);
     const f = (phi: number) => this.stateAt(phi).energy;
     const w = this.pieces[this.weakest].law;
-    const hi = growUntil(f, energy, Math.max(1e-12, Math.min(w.shearYield, 1e12) / w.shearModulus / w.outerRadius))!;
-    return bracketedRoot((phi) => f(phi) - energy, 0, hi, 1e-14 * hi);
+    // Past the elastic limit the root lies between the weakest piece's twist rate there and the
+    // rate at which the weakest pieces alone, carrying at least their first-yield torque over the
+    // twist past their own first yield, have taken all the energy: a bracket without a search.
+    const lo = Math.sqrt((2 * elastic.energy) / elastic.compliance) / rigidity(w);
+    const sameLength = this.pieces.reduce((sum, p, i) => (this.sameAsWeakest[i] ? sum + p.length : sum), 0);
+    const bound = yieldTwistRate(w) + energy / (yieldTorque(w) * sameLength);
+    // Within rounding of the elastic limit the limit is the state.
+    if (f(lo) >= energy) return lo;
+    const hi = Number.isFinite(bound) && bound > lo && f(bound) >= energy ? bound : growUntil(f, energy, Math.max(1e-12, Math.min(w.shearYield, 1e12) / w.shearModulus / w.outerRadius))!;
+    return bracketedRoot((phi) => f(phi) - energy, hi === bound ? lo : 0, hi, 1e-14 * hi);
   }
 
   /** The state that has absorbed `energy`, J. */
@@ -119,6 +127,11 @@ export class PlasticBalance {
   }
 
   /** The side's compliance Σ L/(G·J_p), rad/(N·m), and the strain energy at which its first piece yields, J (kept: the Monte Carlo asks per sample). */
+  /** Strain energy at which the side's first piece yields, J (Infinity where none can). */
+  elasticLimitEnergy(): number {
+    return this.elasticLimit().energy;
+  }
+
   private elasticLimit(): { compliance: number; energy: number } {
     if (this.elastic) return this.elastic;
     const compliance = this.pieces.reduce((s, p) => s + p.length / rigidity(p.law), 0);
