@@ -63,6 +63,17 @@ export class PlasticBalance {
     return { torque, energy: pieces.reduce((s, p) => s + p.energy, 0), pieces };
   }
 
+  /** The energy the side has absorbed when the weakest piece twists at rate φ, J: `stateAt(φ).energy` without building the state (the root's inner loop). */
+  energyAt(phi: number): number {
+    const torque = torqueAtTwistRate(this.pieces[this.weakest].law, phi);
+    let energy = 0;
+    for (let i = 0; i < this.pieces.length; i++) {
+      const p = this.pieces[i];
+      energy += energyPerLength(p.law, this.sameAsWeakest[i] ? phi : twistRateAtTorque(p.law, torque)) * p.length;
+    }
+    return energy;
+  }
+
   /**
    * The weakest piece's twist rate at which the side has absorbed `energy` (J ≥ 0). While every
    * piece is elastic the side is a chain of linear springs in series, E = T²/2·Σ L/(G·J_p), so the
@@ -73,7 +84,7 @@ export class PlasticBalance {
     if (energy <= 0) return 0;
     const elastic = this.elasticLimit();
     if (energy <= elastic.energy) return Math.sqrt((2 * energy) / elastic.compliance) / rigidity(this.pieces[this.weakest].law);
-    const f = (phi: number) => this.stateAt(phi).energy;
+    const f = (phi: number) => this.energyAt(phi);
     const w = this.pieces[this.weakest].law;
     // Past the elastic limit the root lies between the weakest piece's twist rate there and the
     // rate at which the weakest pieces alone, carrying at least their first-yield torque over the

@@ -174,3 +174,15 @@ describe('PlasticBalance.fractureLimit', () => {
     expect(b.yieldOnsetEnergy([0])).toBe(Infinity);
   });
 });
+
+describe('PlasticBalance.energyAt', () => {
+  it("is the state's energy at every twist rate, elastic and past yield, for pieces in series (property)", () => {
+    const b = new PlasticBalance([piece(0.4, law(0.03, 0, 79.3e9, 300e6)), piece(0.25, law(0.02, 0, 79.3e9, 300e6)), piece(0.1, law(0.025, 0.01, 79.3e9, 300e6, 2e9))]);
+    fc.assert(
+      fc.property(fc.double({ min: 1e-6, max: 5, noNaN: true }), (phi) => {
+        expect(b.energyAt(phi)).toBe(b.stateAt(phi).energy);
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
