@@ -161,6 +161,35 @@ export const FIT_SHAPE = mapping(
   "A shrink or press fit of this station's hub on the shaft.",
 );
 
+export const GEARBOX_SHAPE = mapping(
+  {
+    ratio: {
+      shape: { type: 'number', min: L.speedRatio[0], max: L.speedRatio[1], about: "The gear stage's ratio: its input (motor side) speed over its output speed, this station's shaft (nameplate)." },
+      example: 19.4,
+      required: true,
+    },
+    rated_output_torque: quantity('torque', "The gear unit's rated output torque (nameplate or catalogue, M2 at service factor 1).", '2.8 kN*m', true),
+    service_factor: {
+      shape: {
+        type: 'number',
+        min: L.factor[0],
+        max: L.factor[1],
+        about: "The gear unit's service factor (nameplate or catalogue fB); the rated output torque times it is what it is checked against.",
+      },
+      example: 1.4,
+    },
+    efficiency: { shape: { type: 'number', min: L.efficiency[0], max: L.efficiency[1], about: "The gear unit's efficiency, forward (catalogue), above 0 and at most 1; left out: 1." }, example: 0.96 },
+    back_drivable: {
+      shape: {
+        type: 'boolean',
+        about: 'false for a self-locking worm (the catalogue says it will not back-drive, or its lead angle is below the friction angle): the load cannot turn the motor side backwards.',
+      },
+      example: true,
+    },
+  },
+  "The gear unit whose output is this station's shaft; the motor or the parts behind it turn at its ratio.",
+);
+
 export const STATION_SHAPE = mapping(
   {
     name: text('The station’s name, used by stop.at and observed twist.', 'rotor', true),
@@ -169,6 +198,9 @@ export const STATION_SHAPE = mapping(
     drive: { shape: DRIVE_SHAPE },
     key: { shape: KEY_SHAPE },
     fit: { shape: FIT_SHAPE },
+    gearbox: { shape: GEARBOX_SHAPE },
+    backstop: { shape: { type: 'boolean', about: 'true where a backstop (a one-way clutch, a holdback) at this station stops the shaft turning backwards.' }, example: true },
+    backstop_rated_torque: quantity('torque', "The backstop's rated torque (catalogue), against which the rebound torque it held is checked.", '6 kN*m'),
   },
   'A place on the shaft: a hub, the jam, a motor.',
 );
