@@ -168,15 +168,21 @@ export const GEARBOX_SHAPE = mapping(
       example: 19.4,
       required: true,
     },
-    rated_output_torque: quantity('torque', "The gear unit's rated output torque (nameplate or catalogue, M2 at service factor 1).", '2.8 kN*m', true),
+    rated_output_torque: quantity(
+      'torque',
+      "The output torque on the gearmotor's nameplate (M2 at the motor's rated power), or a bare gear unit's own rated torque from its catalogue.",
+      '2.65 kN*m',
+      true,
+    ),
     service_factor: {
       shape: {
         type: 'number',
         min: L.factor[0],
         max: L.factor[1],
-        about: "The gear unit's service factor (nameplate or catalogue fB); the rated output torque times it is what it is checked against.",
+        about:
+          "The service factor on the nameplate or in the catalogue (fB: the gear unit's rating over that output torque); left out: 1. The unit is checked against rated_output_torque × service_factor.",
       },
-      example: 1.4,
+      example: 2,
     },
     efficiency: { shape: { type: 'number', min: L.efficiency[0], max: L.efficiency[1], about: "The gear unit's efficiency, forward (catalogue), above 0 and at most 1; left out: 1." }, example: 0.96 },
     back_drivable: {

@@ -121,9 +121,9 @@ export interface Station {
 export interface Gearbox {
   /** Input speed over output speed (the nameplate's ratio), > 0. */
   ratio: number;
-  /** Rated output torque, N·m (the catalogue's or nameplate's M2 at service factor 1). */
+  /** Rated output torque, N·m: a gearmotor's nameplate output torque (at the motor's rated power), or a bare unit's catalogue rating. */
   ratedOutputTorque: number;
-  /** Service factor fB; the unit is checked against ratedOutputTorque × serviceFactor. Default 1. */
+  /** Service factor fB (the gear unit's rating over that output torque); the unit is checked against ratedOutputTorque × serviceFactor, its own rating. Default 1. */
   serviceFactor: number;
   /** Forward efficiency, (0, 1]: the torque passed from input to output is multiplied by it. Default 1. */
   efficiency: number;

@@ -11,7 +11,7 @@ const GEARBOX_KEYS = keysOf(GEARBOX_SHAPE);
  * is taken as back-drivable unless the case says `back_drivable: false`.
  */
 export function readGearbox(r: CaseReader, path: Path): Gearbox | undefined {
-  if (!r.map(path, GEARBOX_KEYS, { example: 'a mapping such as { ratio: 19.4, rated_output_torque: 2.8 kN*m, service_factor: 1.4, efficiency: 0.96, back_drivable: true }' })) return undefined;
+  if (!r.map(path, GEARBOX_KEYS, { example: 'a mapping such as { ratio: 19.4, rated_output_torque: 2.65 kN*m, service_factor: 2, efficiency: 0.96, back_drivable: true }' })) return undefined;
   const ratio = r.number([...path, 'ratio'], {
     required: true,
     example: "the gear unit's ratio, input speed over output speed, from the nameplate, from 0.001 to 1000, such as 19.4",
@@ -21,11 +21,11 @@ export function readGearbox(r: CaseReader, path: Path): Gearbox | undefined {
   const rated = r.quantity([...path, 'rated_output_torque'], 'torque', {
     required: true,
     positive: true,
-    example: 'the gear unit\'s rated output torque from its nameplate or catalogue (M2), such as "2.8 kN*m"',
+    example: 'the output torque on the gearmotor\'s nameplate (M2), or a bare gear unit\'s rated torque from its catalogue, such as "2.65 kN*m"',
   });
   const serviceFactor =
     r.number([...path, 'service_factor'], {
-      example: "the gear unit's service factor fB from its nameplate or catalogue, from 1 to 10, such as 1.4",
+      example: 'the service factor fB on the nameplate or in the catalogue, from 1 to 10, such as 2',
       min: NUMBER_LIMITS.factor[0],
       max: NUMBER_LIMITS.factor[1],
     }) ?? 1;

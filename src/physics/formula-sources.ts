@@ -131,4 +131,9 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     formula: 'rainflow counting; D = Σ nᵢ/Nᵢ',
     source: 'ASTM E1049-85 (2017), Sec. 5.4.4; Palmgren 1924, Miner 1945 (from memory)',
   },
+  {
+    what: "A gear stage's input torque at the incident peak, and the motor's torque passed through it",
+    formula: 'T_in = T_out/(η·i) driven forward, T_shaft = η·i·T_motor; η = P_out/P_in',
+    source: "The definition of a gear unit's efficiency as output over input power (common practice; Shigley's Mechanical Engineering Design, 9th ed., Ch. 13, worm gearing; from memory)",
+  },
 ];
