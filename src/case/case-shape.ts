@@ -192,6 +192,9 @@ export const GEARBOX_SHAPE = mapping(
       },
       example: true,
     },
+    module: quantity('length', "The module of the output gear's teeth (the gear on this shaft), for a first estimate of its tooth bending stress (Lewis); 25.4 mm over a diametral pitch.", '4 mm'),
+    face_width: quantity('length', "The output gear's face width (the teeth's width along the shaft).", '60 mm'),
+    teeth: { shape: { type: 'number', integer: true, min: 12, max: 10_000, about: "The output gear's tooth count." }, example: 78 },
   },
   "The gear unit whose output is this station's shaft; the motor or the parts behind it turn at its ratio.",
 );

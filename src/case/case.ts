@@ -129,6 +129,8 @@ export interface Gearbox {
   efficiency: number;
   /** false for a self-locking worm: the load side cannot turn the motor side backwards. Default true. */
   backDrivable: boolean;
+  /** The output gear's teeth (on the station's shaft), where the case gives them: module, m; face width, m; tooth count. */
+  outputGear?: { module: number; faceWidth: number; teeth: number };
 }
 
 /** A backstop (holdback, one-way clutch): the station's shaft cannot turn backwards. */

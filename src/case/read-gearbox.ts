@@ -2,6 +2,7 @@ import type { CaseReader, Path } from './case-reader.ts';
 import type { Backstop, Gearbox } from './case.ts';
 import { GEARBOX_SHAPE, keysOf } from './case-shape.ts';
 import { NUMBER_LIMITS } from './limits.ts';
+import { LEWIS_MIN_TEETH } from '../physics/lewis.ts';
 
 const GEARBOX_KEYS = keysOf(GEARBOX_SHAPE);
 
@@ -36,8 +37,24 @@ export function readGearbox(r: CaseReader, path: Path): Gearbox | undefined {
       max: NUMBER_LIMITS.efficiency[1],
     }) ?? 1;
   const backDrivable = r.boolean([...path, 'back_drivable']) ?? true;
+  const module = r.quantity([...path, 'module'], 'length', { positive: true, example: 'the output gear\'s module from the drawing or the maker, such as "4 mm" (25.4 mm over a diametral pitch)' });
+  const faceWidth = r.quantity([...path, 'face_width'], 'length', { positive: true, example: 'the output gear\'s face width, such as "60 mm"' });
+  const teeth = r.number([...path, 'teeth'], {
+    integer: true,
+    min: LEWIS_MIN_TEETH,
+    max: 10_000,
+    example: `the output gear's tooth count, a whole number from ${LEWIS_MIN_TEETH} (the Lewis table's fewest) up, such as 78`,
+  });
+  const given = [module, faceWidth, teeth].filter((x) => x !== undefined).length;
+  if (given > 0 && given < 3) {
+    const missing = (['module', 'face_width', 'teeth'] as const).find((k, i) => [module, faceWidth, teeth][i] === undefined && !r.has([...path, k]));
+    if (missing)
+      r.fail('E_MISSING', [...path, missing], 'the tooth bending estimate needs module, face_width and teeth together; give all three, such as module: 4 mm, face_width: 60 mm, teeth: 78, or none');
+  }
   if (ratio === undefined || !rated) return undefined;
-  return { ratio, ratedOutputTorque: rated.value, serviceFactor, efficiency, backDrivable };
+  const g: Gearbox = { ratio, ratedOutputTorque: rated.value, serviceFactor, efficiency, backDrivable };
+  if (module && faceWidth && teeth !== undefined) g.outputGear = { module: module.value, faceWidth: faceWidth.value, teeth };
+  return g;
 }
 
 /** A station's `backstop: true` with its `backstop_rated_torque`; undefined without a backstop. */

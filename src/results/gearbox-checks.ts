@@ -1,6 +1,7 @@
 import type { Case } from '../case/case.ts';
 import type { SideResult } from '../physics/energy-method.ts';
 import { forwardInputTorque } from '../physics/gear-stage.ts';
+import { lewisFormFactor, lewisStress, toothLoad } from '../physics/lewis.ts';
 import type { DynamicResult } from './dynamic-result.ts';
 import { hubTorque } from './hub-torque.ts';
 import type { VerdictBasis } from './verdict-basis.ts';
@@ -30,6 +31,12 @@ export interface GearboxCheck {
    * back-drivable or the dynamic model has no node at the station (or it is the stop).
    */
   heldTorque?: number;
+  /**
+   * Where the case gives the output gear's teeth: the tangential tooth load at the larger of the
+   * output and held torques, N, the Lewis form factor, and the Lewis bending stress, Pa (a first
+   * estimate, src/physics/lewis.ts).
+   */
+  tooth?: { load: number; formFactor: number; bendingStress: number };
 }
 
 /**
@@ -46,6 +53,9 @@ export function gearboxChecks(c: Case, basis: VerdictBasis, sides: readonly Side
       const through = hubTorque(c, s, basis, sides, dynamic);
       const capacity = g.ratedOutputTorque * g.serviceFactor;
       const hold = g.backDrivable ? undefined : dynamic.holds.find((h) => h.station === s.name);
+      const gear = g.outputGear;
+      const load = gear && toothLoad(Math.max(through.torque, hold?.peakTorque ?? 0), gear.module, gear.teeth);
+      const Y = gear && lewisFormFactor(gear.teeth);
       return {
         station: s.name,
         ratio: g.ratio,
@@ -59,6 +69,7 @@ export function gearboxChecks(c: Case, basis: VerdictBasis, sides: readonly Side
         inputTorque: forwardInputTorque(through.torque, g.ratio, g.efficiency),
         ratingRatio: through.torque / capacity,
         ...(hold ? { heldTorque: hold.peakTorque } : {}),
+        ...(gear && load !== undefined && Y !== undefined ? { tooth: { load, formFactor: Y, bendingStress: lewisStress(load, gear.faceWidth, gear.module, Y) } } : {}),
       };
     });
 }

@@ -70,6 +70,9 @@ export function gearboxCheckJson(g: GearboxCheck): Record<string, unknown> {
     input_torque_Nm: g.inputTorque,
     rating_ratio: g.ratingRatio,
     held_torque_Nm: g.heldTorque ?? null,
+    tooth_load_N: g.tooth?.load ?? null,
+    lewis_form_factor: g.tooth?.formFactor ?? null,
+    tooth_bending_stress_Pa: g.tooth?.bendingStress ?? null,
   };
 }
 

@@ -59,7 +59,11 @@ export function gearboxSentences(r: Results): string[] {
         : g.heldTorque > 0
           ? ` Self-locking, it held the shaft against turning back with up to ${show(g.heldTorque, 'torque', u)}.`
           : ' Self-locking; the shaft never tried to turn it backwards in the window.';
-    return `The ${sig(g.ratio)}:1 gearbox at "${g.station}" carried ${show(g.outputTorque, 'torque', u)}${g.upperBound ? ' (an upper bound)' : ''} at its output, ${show(g.inputTorque, 'torque', u)} at its input (output ÷ (ratio × efficiency)${eff}), ${sig(g.ratingRatio)} × ${rating}: ${verdict}.${held}`;
+    const tooth =
+      g.tooth === undefined
+        ? ''
+        : ` Its output gear's teeth, by the Lewis equation (a first estimate: the whole load on one tooth, no dynamic, load-sharing or stress-concentration factor; Shigley 9th ed. Sec. 14-1, from memory): tooth load ${show(g.tooth.load, 'force', u)}, form factor Y ${sig(g.tooth.formFactor)}, bending stress ${show(g.tooth.bendingStress, 'stress', u)}; compare it with the gear material's allowable bending stress from its maker.`;
+    return `The ${sig(g.ratio)}:1 gearbox at "${g.station}" carried ${show(g.outputTorque, 'torque', u)}${g.upperBound ? ' (an upper bound)' : ''} at its output, ${show(g.inputTorque, 'torque', u)} at its input (output ÷ (ratio × efficiency)${eff}), ${sig(g.ratingRatio)} × ${rating}: ${verdict}.${held}${tooth}`;
   });
 }
 

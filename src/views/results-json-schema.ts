@@ -193,6 +193,7 @@ const CHECK: Record<string, Json> = {
       input_torque_Nm: num('The torque at its input, output ÷ (ratio × efficiency), N·m.'),
       rating_ratio: num('Output torque over capacity.'),
       held_torque_Nm: orNull(num('Self-locking: the largest torque it held against back-driving, N·m.')),
+      tooth_bending_stress_Pa: orNull(num("The output gear's tooth bending stress by the Lewis equation, Pa: a first estimate.")),
     }),
   ),
   backstops: list(

@@ -91,3 +91,14 @@ describe("a station's backstop: backstop: true, backstop_rated_torque", () => {
     expect(at(text('    backstop: true\n    backstop_rated_torque: 6 kN'), 'backstop_rated_torque', 'stations[1].backstop_rated_torque')).toMatch(/torque/);
   });
 });
+
+describe("a gearbox's output gear teeth: module, face_width, teeth", () => {
+  it('reads all three, and refuses two without the third or a tooth count below the Lewis table', () => {
+    const c = parseCase(gearbox('{ ratio: 10, rated_output_torque: 2 kN*m, module: 4 mm, face_width: 60 mm, teeth: 78 }'));
+    expect(c.stations[1].gearbox!.outputGear).toEqual({ module: 0.004, faceWidth: 0.06, teeth: 78 });
+    expect(problems(gearbox('{ ratio: 10, rated_output_torque: 2 kN*m, module: 4 mm, face_width: 60 mm }'))).toMatch(
+      /stations\[1\]\.gearbox\.teeth: the tooth bending estimate needs module, face_width and teeth together/,
+    );
+    expect(problems(gearbox('{ ratio: 10, rated_output_torque: 2 kN*m, module: 4 mm, face_width: 60 mm, teeth: 9 }'))).toMatch(/gearbox\.teeth: 9 is out of range; give the output gear's tooth count/);
+  });
+});

@@ -113,3 +113,15 @@ describe('a backstop (backstop: true) in the dynamic model', () => {
     expect(r.warnings.join(' ')).toMatch(/The backstop at "jam" is not in the dynamic model \(it stands at the stop/);
   });
 });
+
+describe("a gearbox's output gear by the Lewis equation (a first estimate)", () => {
+  it('its bending stress is W_t/(F·m·Y) with W_t = 2T/(m·z) at the torque through its output and Y from the table', () => {
+    const t = text(gearbox(true).replace('back_drivable: true', 'back_drivable: true, module: 5 mm, face_width: 50 mm, teeth: 50'));
+    const g = run(t).r.gearboxes[0];
+    // By hand: d = 5 mm × 50 = 250 mm; W_t = 2T/d; Y(50) = 0.409 (Shigley 9th ed. Table 14-2, from memory).
+    const Wt = (2 * g.outputTorque) / 0.25;
+    expect(g.tooth!.load).toBeCloseTo(Wt, 6);
+    expect(g.tooth!.formFactor).toBe(0.409);
+    expect(g.tooth!.bendingStress / (Wt / (0.05 * 0.005 * 0.409))).toBeCloseTo(1, 12);
+  });
+});
