@@ -161,6 +161,44 @@ export const FIT_SHAPE = mapping(
   "A shrink or press fit of this station's hub on the shaft.",
 );
 
+export const GEARBOX_SHAPE = mapping(
+  {
+    ratio: {
+      shape: { type: 'number', min: L.speedRatio[0], max: L.speedRatio[1], about: "The gear stage's ratio: its input (motor side) speed over its output speed, this station's shaft (nameplate)." },
+      example: 19.4,
+      required: true,
+    },
+    rated_output_torque: quantity(
+      'torque',
+      "The output torque on the gearmotor's nameplate (M2 at the motor's rated power), or a bare gear unit's own rated torque from its catalogue.",
+      '2.65 kN*m',
+      true,
+    ),
+    service_factor: {
+      shape: {
+        type: 'number',
+        min: L.factor[0],
+        max: L.factor[1],
+        about:
+          "The service factor on the nameplate or in the catalogue (fB: the gear unit's rating over that output torque); left out: 1. The unit is checked against rated_output_torque × service_factor.",
+      },
+      example: 2,
+    },
+    efficiency: { shape: { type: 'number', min: L.efficiency[0], max: L.efficiency[1], about: "The gear unit's efficiency, forward (catalogue), above 0 and at most 1; left out: 1." }, example: 0.96 },
+    back_drivable: {
+      shape: {
+        type: 'boolean',
+        about: 'false for a self-locking worm (the catalogue says it will not back-drive, or its lead angle is below the friction angle): the load cannot turn the motor side backwards.',
+      },
+      example: true,
+    },
+    module: quantity('length', "The module of the output gear's teeth (the gear on this shaft), for a first estimate of its tooth bending stress (Lewis); 25.4 mm over a diametral pitch.", '4 mm'),
+    face_width: quantity('length', "The output gear's face width (the teeth's width along the shaft).", '60 mm'),
+    teeth: { shape: { type: 'number', integer: true, min: 12, max: 10_000, about: "The output gear's tooth count." }, example: 78 },
+  },
+  "The gear unit whose output is this station's shaft; the motor or the parts behind it turn at its ratio.",
+);
+
 export const STATION_SHAPE = mapping(
   {
     name: text('The station’s name, used by stop.at and observed twist.', 'rotor', true),
@@ -169,6 +207,9 @@ export const STATION_SHAPE = mapping(
     drive: { shape: DRIVE_SHAPE },
     key: { shape: KEY_SHAPE },
     fit: { shape: FIT_SHAPE },
+    gearbox: { shape: GEARBOX_SHAPE },
+    backstop: { shape: { type: 'boolean', about: 'true where a backstop (a one-way clutch, a holdback) at this station stops the shaft turning backwards.' }, example: true },
+    backstop_rated_torque: quantity('torque', "The backstop's rated torque (catalogue), against which the rebound torque it held is checked.", '6 kN*m'),
   },
   'A place on the shaft: a hub, the jam, a motor.',
 );

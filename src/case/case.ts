@@ -107,6 +107,36 @@ export interface Station {
   key?: ShaftKey;
   /** The shrink or press fit that holds this station's hub on the shaft (`fit:`), where the case gives one. */
   fit?: HubFit;
+  /** The gear unit whose output is this station's shaft (`gearbox:`), where the case gives one. */
+  gearbox?: Gearbox;
+  /** A backstop (one-way clutch) at this station (`backstop: true`): the shaft here cannot turn backwards. */
+  backstop?: Backstop;
+}
+
+/**
+ * A gear unit whose output shaft is the station's shaft. Its input is the motor side: the drive's
+ * rotor and the station's parts that turn at the ratio (their inertia is reflected as J·ratio², as
+ * for any geared part). Torques are at the output unless named otherwise.
+ */
+export interface Gearbox {
+  /** Input speed over output speed (the nameplate's ratio), > 0. */
+  ratio: number;
+  /** Rated output torque, N·m: a gearmotor's nameplate output torque (at the motor's rated power), or a bare unit's catalogue rating. */
+  ratedOutputTorque: number;
+  /** Service factor fB (the gear unit's rating over that output torque); the unit is checked against ratedOutputTorque × serviceFactor, its own rating. Default 1. */
+  serviceFactor: number;
+  /** Forward efficiency, (0, 1]: the torque passed from input to output is multiplied by it. Default 1. */
+  efficiency: number;
+  /** false for a self-locking worm: the load side cannot turn the motor side backwards. Default true. */
+  backDrivable: boolean;
+  /** The output gear's teeth (on the station's shaft), where the case gives them: module, m; face width, m; tooth count. */
+  outputGear?: { module: number; faceWidth: number; teeth: number };
+}
+
+/** A backstop (holdback, one-way clutch): the station's shaft cannot turn backwards. */
+export interface Backstop {
+  /** Rated torque, N·m (catalogue), where given. */
+  ratedTorque?: number;
 }
 
 /**

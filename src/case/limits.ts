@@ -72,6 +72,8 @@ export const NUMBER_LIMITS = {
   speedRatio: [0.001, 1000],
   count: [1, 10_000],
   friction: [0.001, 2],
+  /** A gear unit's efficiency, (0, 1]: at least 0.01 (0 would pass no torque; a self-locking worm still passes some 30 % forward), at most 1. */
+  efficiency: [0.01, 1],
   factor: [1, 10],
   samples: [1, 100_000],
   dynamicSamples: [0, 1000],

@@ -12,9 +12,12 @@ const ROTOR_NAME = /\b(motor|rotor)\b/i;
  * A station's `drive:`. The rotor's inertia is counted once, as a part: `rotor_inertia` (at the
  * motor's own speed) is added to the station's `parts` as "motor rotor"; without it the rotor is
  * the station's parts that turn at the drive's speed ratio. A rotor given both ways is refused.
- * `parts` is the station's list being built; the rotor part is appended to it.
+ * `parts` is the station's list being built; the rotor part is appended to it. `gearRatio` is the
+ * station's gearbox ratio, where it has one: without a belt the motor turns at it, so it is the
+ * drive's speed ratio where the case leaves that out, and a different one is refused (one fact,
+ * said once); with a belt the drive's ratio is the belt's times the gearbox's, and is not checked.
  */
-export function readDrive(r: CaseReader, path: Path, parts: Part[]): Drive | undefined {
+export function readDrive(r: CaseReader, path: Path, parts: Part[], gearRatio?: number): Drive | undefined {
   if (!r.map(path, DRIVE_KEYS)) return undefined;
   const givenRatio = r.number([...path, 'speed_ratio'], {
     example: "the motor's speed over the shaft's, from 0.001 to 1000, such as 3.52",
@@ -36,9 +39,17 @@ export function readDrive(r: CaseReader, path: Path, parts: Part[]): Drive | und
   });
 
   const geared = [...new Set(parts.filter((p) => p.speedRatio !== 1).map((p) => p.speedRatio))];
-  let speedRatio = givenRatio ?? 1;
-  if (givenRatio === undefined && geared.length === 1 && !rotorInertia) speedRatio = geared[0];
-  if (givenRatio === undefined && geared.length > 1 && !rotorInertia) {
+  if (gearRatio !== undefined && !belt && givenRatio !== undefined && Math.abs(givenRatio - gearRatio) > 1e-9 * gearRatio) {
+    r.fail(
+      'E_RANGE',
+      [...path, 'speed_ratio'],
+      `${givenRatio} differs from this station's gearbox ratio ${gearRatio}, and no belt lies between: the motor turns at the gearbox's ratio; give it once (leave drive.speed_ratio out, or make it ${gearRatio})`,
+    );
+    return undefined;
+  }
+  let speedRatio = givenRatio ?? (gearRatio !== undefined && !belt ? gearRatio : 1);
+  if (givenRatio === undefined && (gearRatio === undefined || belt) && geared.length === 1 && !rotorInertia) speedRatio = geared[0];
+  if (givenRatio === undefined && (gearRatio === undefined || belt) && geared.length > 1 && !rotorInertia) {
     r.fail('E_MISSING', [...path, 'speed_ratio'], `the station's parts turn at several speed ratios (${geared.join(', ')}); give the motor's, such as speed_ratio: ${geared[0]}`);
     return undefined;
   }

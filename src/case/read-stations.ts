@@ -6,6 +6,7 @@ import { readDrive } from './read-drive.ts';
 import { readKey } from './read-key.ts';
 import { keysOf, PART_SHAPE, STATION_SHAPE } from './case-shape.ts';
 import { readFit } from './read-fit.ts';
+import { readBackstop, readGearbox } from './read-gearbox.ts';
 import { NUMBER_LIMITS, SIZE_LIMITS } from './limits.ts';
 import { resolveMaterial } from './read-materials.ts';
 
@@ -35,7 +36,9 @@ export function readStations(r: CaseReader, shaftLength: number, caseMaterials: 
       const part = readPart(r, [...path, 'parts', j], caseMaterials, used);
       if (part) parts.push(part);
     }
-    const drive = r.has([...path, 'drive']) ? readDrive(r, [...path, 'drive'], parts) : undefined;
+    const gearbox = r.has([...path, 'gearbox']) ? readGearbox(r, [...path, 'gearbox']) : undefined;
+    const drive = r.has([...path, 'drive']) ? readDrive(r, [...path, 'drive'], parts, gearbox?.ratio) : undefined;
+    const backstop = readBackstop(r, path);
     const key = readKey(r, [...path, 'key'], caseMaterials, used);
     const fit = readFit(r, [...path, 'fit'], caseMaterials, used);
     if (name !== undefined && at) {
@@ -43,6 +46,8 @@ export function readStations(r: CaseReader, shaftLength: number, caseMaterials: 
       if (drive) station.drive = drive;
       if (key) station.key = key;
       if (fit) station.fit = fit;
+      if (gearbox) station.gearbox = gearbox;
+      if (backstop) station.backstop = backstop;
       stations.push(station);
     }
   }

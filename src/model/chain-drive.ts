@@ -2,6 +2,7 @@ import type { Drive, Station } from '../case/case.ts';
 import { reflectedInertia } from '../physics/inertia.ts';
 import { capLine, motorLine, reflectLine, torqueAt, type TorqueSpeedLine } from '../physics/motor-torque.ts';
 import { beltSlip, type BeltSlip } from '../physics/slip.ts';
+import { forwardTorque } from '../physics/gear-stage.ts';
 
 /** A drive as the chain carries it: everything at the machine shaft. */
 export interface ChainDrive {
@@ -27,7 +28,8 @@ export interface ChainDrive {
  * Settles a station's drive for the chain. The torque while pulled down: the case's `torque` or
  * `curve`; else the running torque held; else power ÷ motor speed held; else none (a motor that
  * tripped). The running torque (the shaft's twist before the stop): the case's `running_torque`;
- * else the curve at the motor's speed; else power ÷ motor speed; else none.
+ * else the curve at the motor's speed; else power ÷ motor speed; else none. Through a station's
+ * gearbox both pass forward at its efficiency, T_shaft = η·r·T_motor (src/physics/gear-stage.ts).
  */
 export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainDrive {
   const d = s.drive!;
@@ -75,6 +77,11 @@ export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainD
       warnings.push(`The running torque at "${s.name}" is above the drive's torque limit; the shaft is taken to run at the running torque given, and the limit applies from the stop.`);
   }
   if (d.tripAfter !== undefined) assumptions.push(`The drive at "${s.name}" trips ${Number((d.tripAfter * 1000).toPrecision(4))} ms after the stop begins; from then on the motor gives no torque.`);
+  const eta = s.gearbox?.efficiency ?? 1;
+  if (eta !== 1)
+    assumptions.push(
+      `The motor's torque at "${s.name}" reaches the shaft through the gearbox at its efficiency ${eta}: T_shaft = ${eta} × ${Number(r.toPrecision(4))} × T_motor; the rotor's inertia is reflected without loss.`,
+    );
   const rotorInertia = d.rotorParts.reduce((sum, i) => sum + reflectedInertia(s.parts[i].inertia, s.parts[i].speedRatio) * s.parts[i].count, 0);
   return {
     station: s.name,
@@ -82,8 +89,8 @@ export function chainDrive(s: Station, node: number, shaftSpeed: number): ChainD
     drive: d,
     rotorInertia,
     ...(d.belt ? { belt: beltSlip(d.belt) } : {}),
-    line: reflectLine(line, r),
-    runningTorque: running * r,
+    line: { ...reflectLine(line, r), torques: line.torques.map((t) => forwardTorque(t, r, eta)) },
+    runningTorque: forwardTorque(running, r, eta),
     assumptions,
     warnings,
   };

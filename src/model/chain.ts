@@ -39,6 +39,17 @@ export interface ChainElement {
   device?: { kind: 'torque limiter' | 'shear pin' | 'hub fit'; torque: number; segment: Segment; station?: string };
 }
 
+/**
+ * A node that cannot turn backwards: a station's backstop, or the output of a self-locking gearbox
+ * (`back_drivable: false`), whose motor side turns rigidly with the node (gears are rigid in the
+ * chain), so that the load side cannot drive the motor side backwards.
+ */
+export interface ChainHold {
+  node: number;
+  station: string;
+  kind: 'backstop' | 'self-locking gearbox';
+}
+
 /** A piece of shaft (a segment cut at stations) inside the chain, with its side. */
 export interface ChainPiece {
   piece: ShaftPiece;
@@ -55,6 +66,11 @@ export interface Chain {
   pieces: ChainPiece[];
   stopNode: number;
   drives: ChainDrive[];
+  /**
+   * The one-way nodes (backstops, self-locking gearboxes) at stations the chain has a node for,
+   * other than the stop (which the jam holds already).
+   */
+  holds: ChainHold[];
   /** Whether the shaft's own inertia is lumped onto the nodes. */
   shaftInertia: boolean;
 }
@@ -130,6 +146,7 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
   const stopNode = nodes.findIndex((n) => n.side === 'stop');
   const nodeAt = (x: number) => nodes.reduce((best, n, i) => (Math.abs(n.at - x) < Math.abs(nodes[best].at - x) ? i : best), 0);
   const drives: ChainDrive[] = [];
+  const holds: ChainHold[] = [];
   for (const s of c.stations) {
     if (s.at < lo - EPS || s.at > hi + EPS) continue;
     const i = Math.abs(s.at - stop.at) <= EPS ? stopNode : nodeAt(s.at);
@@ -137,6 +154,10 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
     nodes[i].stations.push(s.name);
     nodes[i].inertia += stationInertia(s);
     if (s.drive) drives.push(chainDrive(s, i, c.speed));
+    if (i !== stopNode && Math.abs(nodes[i].at - s.at) <= EPS) {
+      if (s.backstop) holds.push({ node: i, station: s.name, kind: 'backstop' });
+      else if (s.gearbox && !s.gearbox.backDrivable) holds.push({ node: i, station: s.name, kind: 'self-locking gearbox' });
+    }
   }
   if (opts.shaftInertia) {
     elements.forEach((el, e) => {
@@ -152,7 +173,7 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
   }
   placeFits(c, nodes, elements, stopNode);
   placeBacklash(elements, pieces);
-  return { nodes, elements, pieces, stopNode, drives, shaftInertia: opts.shaftInertia };
+  return { nodes, elements, pieces, stopNode, drives, holds, shaftInertia: opts.shaftInertia };
 }
 
 /** A segment's backlash goes on the middle one of its elements on each side (as a limiter does). */

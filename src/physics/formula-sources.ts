@@ -131,4 +131,14 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     formula: 'rainflow counting; D = Σ nᵢ/Nᵢ',
     source: 'ASTM E1049-85 (2017), Sec. 5.4.4; Palmgren 1924, Miner 1945 (from memory)',
   },
+  {
+    what: "A gear stage's input torque at the incident peak, and the motor's torque passed through it",
+    formula: 'T_in = T_out/(η·i) driven forward, T_shaft = η·i·T_motor; η = P_out/P_in',
+    source: "The definition of a gear unit's efficiency as output over input power (common practice; Shigley's Mechanical Engineering Design, 9th ed., Ch. 13, worm gearing; from memory)",
+  },
+  {
+    what: "A gear tooth's bending stress (a first estimate)",
+    formula: 'σ = W_t/(F·m·Y), W_t = 2T/(m·z); Y for 20° full-depth teeth by tooth count',
+    source: "Lewis equation: Shigley's Mechanical Engineering Design, 9th ed., Sec. 14-1, Eq. (14-3) and Table 14-2 (from memory; equation numbers: verify)",
+  },
 ];

@@ -17,6 +17,7 @@ import { dynamicsSection } from './sections/dynamics.ts';
 import { keysAndFitsSection } from './sections/keys-and-fits.ts';
 import { driveProtectionSection } from './sections/drive-protection.ts';
 import { couplingsSection } from './sections/couplings.ts';
+import { gearboxesSection } from './sections/gearboxes.ts';
 import { driveTrainSection } from './sections/drive-train.ts';
 import { backlashSection } from './sections/backlash.ts';
 import { optionsSection, recommendationsSection } from './sections/recommendations.ts';
@@ -72,6 +73,7 @@ export const REPORT_SECTIONS: readonly ReportSection[] = [
   fatigueSection,
   driveProtectionSection,
   couplingsSection,
+  gearboxesSection,
   backlashSection,
   methodSection,
   optionsSection,

@@ -15,6 +15,8 @@ import { hubFits } from './hub-fits.ts';
 import { keyChecks } from './key-checks.ts';
 import { couplingChecks } from './coupling-checks.ts';
 import { driveTrainElements } from './drive-train.ts';
+import { gearboxChecks } from './gearbox-checks.ts';
+import { backstopChecks } from './backstop-checks.ts';
 
 /** Share of a side's energy above which the shaft's own kinetic energy is worth a warning. */
 const SHAFT_ENERGY_WARNING = 0.05;
@@ -130,6 +132,14 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
   const fits = hubFits(c, basis.basis, sides, dynamic);
   const keys = keyChecks(c, basis.basis, sides, dynamic);
   const couplings = couplingChecks(c, basis.basis, sides, dynamic);
+  const gearboxes = gearboxChecks(c, basis.basis, sides, dynamic);
+  const backstops = backstopChecks(c, dynamic);
+  for (const b of backstops) {
+    if (!b.inDynamicModel)
+      warnings.push(
+        `The backstop at "${b.station}" is not in the dynamic model (${c.stop.at === b.station ? 'it stands at the stop, which the jam holds already' : 'the model has no node there: it lies beyond the loaded stations, or the shaft inertia is off and the station carries no parts'}); it took no rebound there.`,
+      );
+  }
   for (const f of fits) {
     if (!f.inDynamicModel)
       warnings.push(
@@ -167,7 +177,9 @@ export function analyseCase(c: Case, opts: AnalyseOptions = {}): Results {
     keys,
     fits,
     couplings,
-    driveTrain: driveTrainElements(basis.basis, sides, dynamic, keys, fits, couplings),
+    gearboxes,
+    backstops,
+    driveTrain: driveTrainElements(basis.basis, sides, dynamic, { keys, fits, couplings, gearboxes, backstops }),
     warnings,
     cautions: CAUTIONS,
   };

@@ -5,8 +5,10 @@ import type { DynamicResult } from './dynamic-result.ts';
 import type { FitCheck } from './hub-fits.ts';
 import type { KeyCheck } from './key-checks.ts';
 import type { VerdictBasis } from './verdict-basis.ts';
+import type { GearboxCheck } from './gearbox-checks.ts';
+import type { BackstopCheck } from './backstop-checks.ts';
 
-export type DriveTrainKind = 'shaft' | 'key' | 'fit' | 'coupling' | 'torque limiter' | 'shear pin';
+export type DriveTrainKind = 'shaft' | 'key' | 'fit' | 'coupling' | 'gearbox' | 'backstop' | 'torque limiter' | 'shear pin';
 
 /**
  * One element of the drive train with what it can carry and what it carried in the incident, both
@@ -33,17 +35,24 @@ const segmentName = (s: Segment) => (s.label ? `"${s.label}"` : `segment ${s.ind
 /**
  * The drive train's elements: the shaft's pieces (the verdict's model: capacity the torque at which
  * the kt stress reaches shear yield), each key (the lower of shearing off and crushing), each fit
- * (its slip torque), each coupling (its maximum torque, else its rated one), each torque limiter
- * (its setting) and shear pin (its parting torque).
+ * (its slip torque), each coupling (its maximum torque, else its rated one), each gearbox (its rated
+ * output torque × service factor, against the larger of the torque at its output and, self-locking,
+ * the torque it held against back-driving), each backstop (its rated torque where given, against
+ * the rebound it held), each torque limiter (its setting) and shear pin (its parting torque).
  */
 export function driveTrainElements(
   basis: VerdictBasis,
   sides: readonly SideResult[],
   dynamic: DynamicResult,
-  keys: readonly KeyCheck[],
-  fits: readonly FitCheck[],
-  couplings: readonly CouplingCheck[],
+  hubs: {
+    keys: readonly KeyCheck[];
+    fits: readonly FitCheck[];
+    couplings: readonly CouplingCheck[];
+    gearboxes: readonly GearboxCheck[];
+    backstops: readonly BackstopCheck[];
+  },
 ): DriveTrainElement[] {
+  const { keys, fits, couplings, gearboxes, backstops } = hubs;
   const out: DriveTrainElement[] = [];
   const shaftPieces =
     basis === 'energy method'
@@ -95,6 +104,30 @@ export function driveTrainElements(
       givesWayBy: c.peakRating === undefined ? 'passes its rated torque' : 'passes its maximum torque',
       torque: c.torque,
       ratio: c.capacityRatio,
+    });
+  }
+  for (const g of gearboxes) {
+    const torque = Math.max(g.outputTorque, g.heldTorque ?? 0);
+    out.push({
+      kind: 'gearbox',
+      element: `the gearbox at "${g.station}" (${Number(g.ratio.toPrecision(4))}:1${g.backDrivable ? '' : ', self-locking'})`,
+      where: g.station,
+      capacity: g.capacity,
+      givesWayBy: 'passes its rated output torque × service factor',
+      torque,
+      ratio: torque / g.capacity,
+    });
+  }
+  for (const b of backstops) {
+    const capacity = b.ratedTorque ?? Infinity;
+    out.push({
+      kind: 'backstop',
+      element: `the backstop at "${b.station}"`,
+      where: b.station,
+      capacity,
+      givesWayBy: b.ratedTorque === undefined ? 'holds the rebound (no rated torque given)' : 'passes its rated torque in the rebound',
+      torque: b.reboundTorque,
+      ratio: b.ratedTorque === undefined ? 0 : b.reboundTorque / b.ratedTorque,
     });
   }
   const segmentPeak = (seg: Segment) => Math.max(0, ...dynamic.pieces.filter((p) => p.piece.segment.index === seg.index).map((p) => p.peakTorque));

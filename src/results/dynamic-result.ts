@@ -106,6 +106,12 @@ export interface DynamicResult {
   eventCount: number;
   /** Each gap (a segment's backlash): the segment, the gap, rad, and how often it closed. */
   gaps: { segment: Segment; gap: number; contacts: number }[];
+  /**
+   * Each one-way node (a backstop, a self-locking gearbox) the dynamic model carries: its station,
+   * the largest torque it held the shaft with against turning backwards (the rebound torque, N·m
+   * at shaft speed; 0 where it never had to hold), and when it first held, s from the stop.
+   */
+  holds: { station: string; kind: 'backstop' | 'self-locking gearbox'; peakTorque: number; firstHeld?: number }[];
   /** Each drive's protection: its torque limit at the motor shaft, N·m, and when it tripped, s from the stop (undefined: it did not trip in the window). */
   protection: { station: string; torqueLimit?: number; tripAfter?: number; trippedAt?: number }[];
   /**
@@ -194,6 +200,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     if (src.kind === 'element') return slips.find((s) => s.elementIndex === src.index)?.element ?? pins.find((p) => p.elementIndex === src.index)?.element ?? shaftElementName(chain, src.index);
     if (src.kind === 'belt') return `The belt at "${chain.drives[src.index].station}"`;
     if (src.kind === 'motor') return `The motor at "${chain.drives[src.index].station}"`;
+    if (src.kind === 'hold') return `The ${chain.holds[src.index].kind} at "${chain.holds[src.index].station}"`;
     return `The jam at "${stopName}"`;
   };
   // A yielding element's turns and rejoined paths are bookkeeping of its hysteresis, not news.
@@ -230,6 +237,12 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
       const law = run.laws[e];
       return el.backlash && law instanceof BacklashLaw ? [{ segment: el.backlash.segment, gap: el.backlash.gap, contacts: law.contacts }] : [];
     }),
+    holds: chain.holds.map((h, k) => ({
+      station: h.station,
+      kind: h.kind,
+      peakTorque: run.holds[k].peakTorque,
+      ...optional('firstHeld', run.events.find((e) => e.source.kind === 'hold' && e.source.index === k)?.time),
+    })),
     protection: chain.drives.flatMap((d, i) =>
       d.drive.tripAfter === undefined && d.drive.torqueLimit === undefined
         ? []
@@ -260,6 +273,11 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
       c,
       chain.shaftInertia,
       chain.drives.flatMap((d) => d.assumptions),
+    ).concat(
+      chain.holds.map(
+        (h) =>
+          `The ${h.kind} at "${h.station}" holds the shaft there at standstill once it would turn backwards, with whatever torque that takes, and lets it go when the torques on it push it forward again: a rigid one-way stop${h.kind === 'self-locking gearbox' ? ' (the worm locks against the load; its motor side turns with the shaft there, as gears are rigid in the model)' : " (the backstop's own wind-up is left out)"}.`,
+      ),
     ),
     notes: [...runningChecks(chain, c.speed), ...solve.notes, ...chain.drives.flatMap((d) => d.warnings)],
   };

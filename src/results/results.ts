@@ -11,6 +11,8 @@ import type { FitCheck } from './hub-fits.ts';
 import type { KeyCheck } from './key-checks.ts';
 import type { CouplingCheck } from './coupling-checks.ts';
 import type { DriveTrainElement } from './drive-train.ts';
+import type { GearboxCheck } from './gearbox-checks.ts';
+import type { BackstopCheck } from './backstop-checks.ts';
 
 /**
  * The case's verdict. `elastic`: no yield anywhere; `yielded`: the net section yields and takes a
@@ -80,6 +82,10 @@ export interface Results {
   fits: FitCheck[];
   /** Each segment's coupling against the incident torque (empty without couplings). */
   couplings: CouplingCheck[];
+  /** Each station's gearbox against its rating × service factor at the incident torque (empty without gearboxes). */
+  gearboxes: GearboxCheck[];
+  /** Each station's backstop with the rebound torque it held (empty without backstops). */
+  backstops: BackstopCheck[];
   /** Every element of the drive train with its capacity and the torque it carried (unordered: the finding orders them). */
   driveTrain: DriveTrainElement[];
   /** Warnings about the model's fit to the case, in plain words; the case file's plausibility warnings first, where the CLI carries them in. */

@@ -1,5 +1,6 @@
 import type { Case } from '../case/case.ts';
 import { torqueFromPower } from '../physics/power.ts';
+import { forwardTorque } from '../physics/gear-stage.ts';
 
 /** The torque the shaft carries in normal running, where the case says. */
 export interface RunningTorque {
@@ -13,7 +14,8 @@ export interface RunningTorque {
 
 /**
  * The running torque at shaft speed from the first station with a `drive:`: its `running_torque`
- * (given at the motor shaft, so times the drive's speed ratio at the machine shaft), or else its
+ * (given at the motor shaft, so times the drive's speed ratio at the machine shaft, and the
+ * station's gearbox efficiency where it has one: src/physics/gear-stage.ts), or else its
  * `power` over the shaft speed ω (T = P/ω). ω is the case's speed at the stop, taken
  * as the running speed. Undefined when no drive gives either. The one place the resize options
  * read the drive: the dynamics model's fuller drive replaces what is read here, not the callers.
@@ -23,14 +25,20 @@ export function runningTorque(c: Case): RunningTorque | undefined {
     const d = s.drive;
     if (d?.runningTorque !== undefined) {
       const ratio = d.speedRatio;
+      const eta = s.gearbox?.efficiency ?? 1;
       return {
-        torque: d.runningTorque * ratio,
-        source: `running_torque of the drive at "${s.name}"${ratio !== 1 ? ` × its speed ratio ${ratio}` : ''}`,
+        torque: forwardTorque(d.runningTorque, ratio, eta),
+        source: `running_torque of the drive at "${s.name}"${ratio !== 1 ? ` × its speed ratio ${ratio}` : ''}${eta !== 1 ? ` × its gearbox's efficiency ${eta}` : ''}`,
         station: s.name,
       };
     }
     if (d?.power !== undefined) {
-      return { torque: torqueFromPower(d.power, c.speed), source: `power of the drive at "${s.name}" over the shaft speed, T = P/ω`, station: s.name };
+      const eta = s.gearbox?.efficiency ?? 1;
+      return {
+        torque: torqueFromPower(d.power, c.speed) * eta,
+        source: `power of the drive at "${s.name}" over the shaft speed, T = P/ω${eta !== 1 ? `, × its gearbox's efficiency ${eta}` : ''}`,
+        station: s.name,
+      };
     }
   }
   return undefined;

@@ -63,6 +63,7 @@ export function systemOf(
     initialTwist,
     speed,
     stop: { node: P, duration: stop.duration, ...(stop.torqueCapacity !== undefined ? { torqueCapacity: stop.torqueCapacity } : {}) },
+    ...(chain.holds.length > 0 ? { holds: chain.holds.map((h) => h.node) } : {}),
     drives: chain.drives.map((d) => ({
       node: d.node,
       line: d.line,

@@ -10,7 +10,7 @@ const INCH = 0.0254;
 const LBF = 0.45359237 * 9.80665;
 
 /** Display units by the case's `units:`; factors as in src/units/unit-table.ts (NIST SP 811). */
-const DISPLAY: Record<Case['units'], Record<'length' | 'torque' | 'stress' | 'energy' | 'inertia' | 'speed' | 'angle' | 'stiffness', DisplayUnit>> = {
+const DISPLAY: Record<Case['units'], Record<'length' | 'torque' | 'stress' | 'energy' | 'inertia' | 'speed' | 'angle' | 'stiffness' | 'force', DisplayUnit>> = {
   metric: {
     length: { label: 'mm', factor: 1e-3 },
     torque: { label: 'N·m', factor: 1 },
@@ -20,6 +20,7 @@ const DISPLAY: Record<Case['units'], Record<'length' | 'torque' | 'stress' | 'en
     speed: { label: 'rpm', factor: (2 * Math.PI) / 60 },
     angle: { label: '°', factor: Math.PI / 180 },
     stiffness: { label: 'kN·m/rad', factor: 1e3 },
+    force: { label: 'kN', factor: 1e3 },
   },
   us: {
     length: { label: 'in', factor: INCH },
@@ -30,6 +31,7 @@ const DISPLAY: Record<Case['units'], Record<'length' | 'torque' | 'stress' | 'en
     speed: { label: 'rpm', factor: (2 * Math.PI) / 60 },
     angle: { label: '°', factor: Math.PI / 180 },
     stiffness: { label: 'lbf·ft/rad', factor: LBF * 12 * INCH },
+    force: { label: 'lbf', factor: LBF },
   },
 };
 

@@ -28,7 +28,8 @@ export function driveTrainRows(f: Finding, u: Results['case']['units']): string[
     e.element,
     Number.isFinite(e.capacity) ? show(e.capacity, 'torque', u) : '—',
     show(e.torque, 'torque', u),
-    sig(e.ratio),
+    // Without a capacity (a backstop with no rating given) there is no ratio to show.
+    Number.isFinite(e.capacity) ? sig(e.ratio) : '—',
     e.givesWayBy,
   ]);
 }

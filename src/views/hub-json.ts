@@ -1,6 +1,8 @@
 import type { FitCheck } from '../results/hub-fits.ts';
 import type { KeyCheck } from '../results/key-checks.ts';
 import type { CouplingCheck } from '../results/coupling-checks.ts';
+import type { GearboxCheck } from '../results/gearbox-checks.ts';
+import type { BackstopCheck } from '../results/backstop-checks.ts';
 
 /** A key at the incident torque, SI, each strength's basis in words beside the number it sets. */
 export function keyCheckJson(k: KeyCheck): Record<string, unknown> {
@@ -50,5 +52,38 @@ export function couplingCheckJson(k: CouplingCheck): Record<string, unknown> {
     torque_Nm: k.torque,
     rated_ratio: k.ratedRatio,
     capacity_ratio: k.capacityRatio,
+  };
+}
+
+/** A gearbox against its rating × service factor at the incident torque, SI. */
+export function gearboxCheckJson(g: GearboxCheck): Record<string, unknown> {
+  return {
+    station: g.station,
+    ratio: g.ratio,
+    efficiency: g.efficiency,
+    back_drivable: g.backDrivable,
+    rated_output_torque_Nm: g.ratedOutputTorque,
+    service_factor: g.serviceFactor,
+    capacity_Nm: g.capacity,
+    output_torque_Nm: g.outputTorque,
+    torque_is_upper_bound: g.upperBound,
+    input_torque_Nm: g.inputTorque,
+    rating_ratio: g.ratingRatio,
+    held_torque_Nm: g.heldTorque ?? null,
+    tooth_load_N: g.tooth?.load ?? null,
+    lewis_form_factor: g.tooth?.formFactor ?? null,
+    tooth_bending_stress_Pa: g.tooth?.bendingStress ?? null,
+  };
+}
+
+/** A backstop with the rebound torque it held, SI. */
+export function backstopCheckJson(b: BackstopCheck): Record<string, unknown> {
+  return {
+    station: b.station,
+    rebound_torque_Nm: b.reboundTorque,
+    first_held_s: b.firstHeld ?? null,
+    rated_torque_Nm: b.ratedTorque ?? null,
+    ratio: b.ratio ?? null,
+    in_dynamic_model: b.inDynamicModel,
   };
 }

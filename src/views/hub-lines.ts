@@ -40,3 +40,43 @@ export function couplingSentences(r: Results): string[] {
     return `The ${kind} in ${seg} carried ${show(k.torque, 'torque', u)}, ${sig(k.capacityRatio)} × ${rating}: ${verdict}.${soft}`;
   });
 }
+
+/** One sentence per gearbox against its rating × service factor at the incident torque, in the case's units; empty without gearboxes. */
+export function gearboxSentences(r: Results): string[] {
+  const u = r.case.units;
+  return r.gearboxes.map((g) => {
+    const rating = `its rated output torque ${show(g.ratedOutputTorque, 'torque', u)} × service factor ${sig(g.serviceFactor)} = ${show(g.capacity, 'torque', u)}`;
+    const verdict =
+      g.ratingRatio > 1
+        ? "past its rating: inspect the gearing, its bearings and its output shaft before return (the maker's peak allowance, often some twice the rated torque for a few starts, decides whether it is damaged)"
+        : 'within its rating';
+    const eff = g.efficiency !== 1 ? `; the motor's torque reaches the shaft at its efficiency ${sig(g.efficiency)}` : '';
+    const held =
+      g.heldTorque === undefined
+        ? g.backDrivable
+          ? ''
+          : ' It is self-locking, but the dynamic model has no node at it (or it is the stop), so its lock is not modelled.'
+        : g.heldTorque > 0
+          ? ` Self-locking, it held the shaft against turning back with up to ${show(g.heldTorque, 'torque', u)}.`
+          : ' Self-locking; the shaft never tried to turn it backwards in the window.';
+    const tooth =
+      g.tooth === undefined
+        ? ''
+        : ` Its output gear's teeth, by the Lewis equation (a first estimate: the whole load on one tooth, no dynamic, load-sharing or stress-concentration factor; Shigley 9th ed. Sec. 14-1, from memory): tooth load ${show(g.tooth.load, 'force', u)}, form factor Y ${sig(g.tooth.formFactor)}, bending stress ${show(g.tooth.bendingStress, 'stress', u)}; compare it with the gear material's allowable bending stress from its maker.`;
+    return `The ${sig(g.ratio)}:1 gearbox at "${g.station}" carried ${show(g.outputTorque, 'torque', u)}${g.upperBound ? ' (an upper bound)' : ''} at its output, ${show(g.inputTorque, 'torque', u)} at its input (output ÷ (ratio × efficiency)${eff}), ${sig(g.ratingRatio)} × ${rating}: ${verdict}.${held}${tooth}`;
+  });
+}
+
+/** One sentence per backstop with the rebound torque it held, in the case's units; empty without backstops. */
+export function backstopSentences(r: Results): string[] {
+  const u = r.case.units;
+  return r.backstops.map((b) => {
+    if (!b.inDynamicModel) return `The backstop at "${b.station}" is not in the dynamic model (see the warnings); it took no rebound there.`;
+    if (b.reboundTorque <= 0) return `The backstop at "${b.station}" never had to hold: the shaft there did not try to turn backwards in the window.`;
+    const rated =
+      b.ratedTorque === undefined
+        ? ' (no rated torque given: compare it with the catalogue)'
+        : `, ${sig(b.ratio!)} × its rated ${show(b.ratedTorque, 'torque', u)}: ${b.ratio! > 1 ? 'past its rating: inspect its sprags or rollers and its torque arm' : 'within its rating'}`;
+    return `The backstop at "${b.station}" stopped the shaft turning backwards ${b.firstHeld !== undefined ? `${Number((b.firstHeld * 1000).toPrecision(3))} ms after the stop` : ''} and held a rebound torque of up to ${show(b.reboundTorque, 'torque', u)}${rated}.`;
+  });
+}

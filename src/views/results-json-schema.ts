@@ -183,11 +183,33 @@ const CHECK: Record<string, Json> = {
     'Each coupling against its rating.',
     open('One coupling.', { segment: { type: 'integer' }, rated_torque_Nm: num('Rated torque, N·m.'), torque_Nm: num('The torque it carried, N·m.') }),
   ),
+  gearboxes: list(
+    "Each station's gearbox: the torque at its output and input at the incident peak against its rated output torque × service factor.",
+    open('One gearbox.', {
+      station: str('Its station.'),
+      ratio: num('Input speed over output speed.'),
+      capacity_Nm: num('Rated output torque × service factor, N·m.'),
+      output_torque_Nm: num('The torque at its output, N·m.'),
+      input_torque_Nm: num('The torque at its input, output ÷ (ratio × efficiency), N·m.'),
+      rating_ratio: num('Output torque over capacity.'),
+      held_torque_Nm: orNull(num('Self-locking: the largest torque it held against back-driving, N·m.')),
+      tooth_bending_stress_Pa: orNull(num("The output gear's tooth bending stress by the Lewis equation, Pa: a first estimate.")),
+    }),
+  ),
+  backstops: list(
+    "Each station's backstop: the rebound torque it held.",
+    open('One backstop.', {
+      station: str('Its station.'),
+      rebound_torque_Nm: num('The largest torque it held against turning backwards, N·m.'),
+      rated_torque_Nm: orNull(num('Its rated torque, N·m.')),
+      in_dynamic_model: { type: 'boolean' },
+    }),
+  ),
   drive_train: list('Every element of the drive train in the order it would give way (the finding orders them).', {
     type: 'object',
     properties: {
       element: str('The element.'),
-      kind: str('Its kind (shaft, key, fit, coupling, limiter, pin).'),
+      kind: str('Its kind (shaft, key, fit, coupling, gearbox, backstop, torque limiter, shear pin).'),
       station_or_segment: str('Where it sits.'),
       capacity_Nm: orNull(num('The torque at which it gives way, N·m at shaft speed.')),
       gives_way_by: str('How it gives way.'),

@@ -4,7 +4,7 @@ import type { Investigation } from '../finding/investigation.ts';
 import { assetHistoryToJson, fatigueToJson } from './fatigue-json.ts';
 import { findingToJson } from './finding-json.ts';
 import { driveTrainJson } from './drive-train-table.ts';
-import { couplingCheckJson, fitCheckJson, keyCheckJson } from './hub-json.ts';
+import { backstopCheckJson, couplingCheckJson, fitCheckJson, gearboxCheckJson, keyCheckJson } from './hub-json.ts';
 import { SCHEMA_VERSION } from './schema-version.ts';
 import { observedFractureToJson, observedToJson, plasticToJson } from './plastic-json.ts';
 import type { Uncertainty } from '../uncertainty/uncertainty.ts';
@@ -48,6 +48,8 @@ export function resultsToJson(r: Investigation): Record<string, unknown> {
     keys: r.keys.map(keyCheckJson),
     fits: r.fits.map(fitCheckJson),
     couplings: r.couplings.map(couplingCheckJson),
+    gearboxes: r.gearboxes.map(gearboxCheckJson),
+    backstops: r.backstops.map(backstopCheckJson),
     drive_train: driveTrainJson(r.finding),
     finding: findingToJson(r.finding, r.case.units),
     asset: r.case.meta.asset ?? null,
@@ -83,6 +85,7 @@ function dynamicJson(d: DynamicResult): Record<string, unknown> {
     slip: d.slips.map((s) => ({ element: s.element, energy_J: s.energy, angle_rad: s.angle })),
     events: d.events.map((e) => ({ time_s: e.time, event: e.text })),
     backlash: d.gaps.map((g) => ({ segment: g.segment.index, label: g.segment.label ?? null, gap_rad: g.gap, contacts: g.contacts })),
+    holds: d.holds.map((h) => ({ station: h.station, kind: h.kind, peak_torque_Nm: h.peakTorque, first_held_s: h.firstHeld ?? null })),
     protection: d.protection.map((p) => ({ station: p.station, torque_limit_Nm: p.torqueLimit ?? null, trip_after_s: p.tripAfter ?? null, tripped_at_s: p.trippedAt ?? null })),
   };
 }

@@ -9,7 +9,7 @@ import { show, sig } from './display-units.ts';
 import { renderUncertaintyLines } from './uncertainty-summary.ts';
 import { observedLines, plasticLines } from './plastic-lines.ts';
 import { showSlipAngle } from './slip-angle.ts';
-import { couplingSentences, hubSentences } from './hub-lines.ts';
+import { backstopSentences, couplingSentences, gearboxSentences, hubSentences } from './hub-lines.ts';
 import { driveTrainRows, hasDriveTrain } from './drive-train-table.ts';
 import { textTable } from './text-table.ts';
 
@@ -117,6 +117,8 @@ export function renderSummary(r: Investigation): string {
   if (hubs.length > 0) out.push('', 'Keys and hub fits at the incident torque:', ...hubs.map((h) => `  - ${h}`));
   const couplings = couplingSentences(r);
   if (couplings.length > 0) out.push('', 'Couplings at the incident torque:', ...couplings.map((h) => `  - ${h}`));
+  const gears = [...gearboxSentences(r), ...backstopSentences(r)];
+  if (gears.length > 0) out.push('', 'Gearboxes and backstops at the incident torque:', ...gears.map((h) => `  - ${h}`));
   if (hasDriveTrain(f)) {
     out.push('', 'What gave way first (the drive train, weakest first; torques at shaft speed):');
     out.push(...textTable([['order', 'element', 'capacity', 'torque', 'ratio', 'gives way when it'], ...driveTrainRows(f, u)]).map((l) => `  ${l}`));

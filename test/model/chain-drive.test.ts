@@ -37,6 +37,23 @@ describe('chainDrive: a drive as the chain sees it', () => {
     expect(d.assumptions).toEqual([]);
   });
 
+  it("through a gearbox the motor's torque and the running torque reach the shaft at its efficiency, η·r·T (P_out = η·P_in); the rotor's inertia is reflected without loss", () => {
+    const curve = {
+      kind: 'curve' as const,
+      points: [
+        { speed: 0, torque: 100 },
+        { speed: 150, torque: 0 },
+      ],
+    };
+    const geared = { ...station({ speedRatio: 4, rotorParts: [1], torque: curve }), gearbox: { ratio: 4, ratedOutputTorque: 1000, serviceFactor: 1, efficiency: 0.8, backDrivable: true } };
+    const d = chainDrive(geared, 0, w);
+    // Power balance with efficiency: at shaft speed 10 rad/s the motor runs at 40 rad/s with T_m = 100·(1 − 40/150).
+    expect(torqueAt(d.line, 10)).toBeCloseTo(0.8 * 4 * (100 * (1 - 40 / 150)), 12);
+    expect(d.runningTorque).toBeCloseTo(0.8 * 4 * (100 * (1 - 120 / 150)), 12);
+    expect(d.rotorInertia).toBeCloseTo(0.2 * 16, 12);
+    expect(d.assumptions.join(' ')).toMatch(/through the gearbox at its efficiency 0\.8/);
+  });
+
   it('without a torque, holds the running torque, or power ÷ speed, or nothing, and says so', () => {
     const held = chainDrive(station({ speedRatio: 4, rotorParts: [1], runningTorque: 50 }), 0, w);
     expect(torqueAt(held.line, 0)).toBeCloseTo(200, 12);

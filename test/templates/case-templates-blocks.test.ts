@@ -20,6 +20,8 @@ describe('case templates with every optional block filled in with its example va
       /slip_torque: [^}]+\}/,
       /shear_torque: [^}]+\}/,
       /^ {4}#\| key: \{/m,
+      /^ {4}#\| gearbox: \{/m,
+      /^ {4}#\| backstop: true$/m,
       /^ {2}#\| samples:/m,
       /^ {2}#\| strength_scatter:/m,
       /^ {2}#\| permanent_twist:/m,
@@ -33,6 +35,9 @@ describe('case templates with every optional block filled in with its example va
     expect(t).toMatch(/speed–torque curve \(the maker's curve/);
     expect(t).toMatch(/motor's speed DIVIDED by the reducer's ratio/);
     expect(t).not.toMatch(/nameplate speed times the ratio/);
+    // Where a gearbox's rating and a worm's self-locking are found.
+    expect(t).toMatch(/nameplate's output torque M2/);
+    expect(t).toMatch(/does not back-drive, or a lead angle/);
     // Twist measured by what was in line before the jam, not by a line scribed after it.
     expect(t).toMatch(/keyway to keyway \(or spline to keyway\)/);
     expect(t).toMatch(/a dial indicator against a reference flat/);
@@ -53,6 +58,8 @@ describe('case templates with every optional block filled in with its example va
     expect(drive.runningTorque).toBeGreaterThan(0);
     expect(c.stations[0].parts.map((p) => p.name)).toContain('motor rotor');
     expect(c.stations[0].key).toBeDefined();
+    expect(c.stations[0].gearbox).toMatchObject({ serviceFactor: 2, efficiency: 0.96, backDrivable: true });
+    expect(c.stations[0].backstop?.ratedTorque).toBeGreaterThan(0);
     expect(c.shaft.segments.filter((s) => s.slipTorque !== undefined)).toHaveLength(1);
     expect(c.shaft.segments.filter((s) => s.shearTorque !== undefined)).toHaveLength(1);
     expect(c.stop.torqueCapacity).toBeGreaterThan(0);
@@ -64,5 +71,7 @@ describe('case templates with every optional block filled in with its example va
     expect(r.verdictBasis).toBe('dynamic model');
     expect(r.dynamic.slips.map((s) => s.element)).toContain('the belt at "drive pulley"');
     expect(keyFuses(c, r).map((k) => k.station)).toEqual(['drive pulley']);
+    // The gearbox and the backstop are rows of the drive train.
+    expect(r.driveTrain.map((e) => e.kind)).toEqual(expect.arrayContaining(['gearbox', 'backstop']));
   });
 });

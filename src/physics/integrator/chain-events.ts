@@ -1,10 +1,10 @@
-import { holdingJamTorque, motorPieceValue, stuckBeltTorque } from './chain-forces.ts';
+import { holdingJamTorque, holdingTorque, motorPieceValue, stuckBeltTorque } from './chain-forces.ts';
 import type { ChainStepper } from './chain-stepper.ts';
 import { setPiece, type DriveState } from './drive-state.ts';
 import { ElasticLaw } from '../torque-law.ts';
 
-/** Where an event comes from: an element's law, a drive's belt, the jam, or a drive's motor curve. */
-export type EventSource = { kind: 'element'; index: number } | { kind: 'belt'; index: number } | { kind: 'jam' } | { kind: 'motor'; index: number };
+/** Where an event comes from: an element's law, a drive's belt, the jam, a drive's motor curve, or a one-way node (`ChainSystem.holds`). */
+export type EventSource = { kind: 'element'; index: number } | { kind: 'belt'; index: number } | { kind: 'jam' } | { kind: 'motor'; index: number } | { kind: 'hold'; index: number };
 
 /** An event the integrator located in time. */
 export interface ChainEvent {
@@ -26,6 +26,7 @@ export function eventSources(st: ChainStepper): EventSource[] {
   });
   if (st.sys.stop.torqueCapacity !== undefined) out.push({ kind: 'jam' });
   st.drives.forEach((_, i) => out.push({ kind: 'motor', index: i }));
+  st.holdNode.forEach((_, i) => out.push({ kind: 'hold', index: i }));
   return out;
 }
 
@@ -44,6 +45,11 @@ export function eventValues(st: ChainStepper, sources: readonly EventSource[], o
       out[k] = d.stuck ? Math.abs(d.beltTorque) - d.beltSlipTorque! : -d.sigma * (d.vRT - st.vT[d.node]);
     } else if (src.kind === 'jam') {
       out[k] = st.jam === 0 ? Math.abs(holdingJamTorque(st)) - st.sys.stop.torqueCapacity! : -st.jam * (st.vT[st.P] - st.motion.speedAt(st.t + st.hT));
+    } else if (src.kind === 'hold') {
+      // Free: its speed going below zero; held: the holding torque turning negative (the torques on
+      // the node push it forward again).
+      const i = st.holdNode[src.index];
+      out[k] = st.held[src.index] ? -holdingTorque(st, i) : -st.vT[i];
     } else {
       out[k] = motorPieceValue(st, st.drives[src.index]);
     }
@@ -61,6 +67,7 @@ export function enterEvent(st: ChainStepper, src: EventSource, direction: number
   }
   if (src.kind === 'belt') return enterBelt(st, st.drives[src.index]);
   if (src.kind === 'jam') return enterJam(st);
+  if (src.kind === 'hold') return enterHold(st, src.index);
   const d = st.drives[src.index];
   setPiece(d, Math.max(0, Math.min(d.line.speeds.length, d.piece + (direction >= 0 ? 1 : -1))));
   st.dirty = true;
@@ -112,6 +119,27 @@ function enterJam(st: ChainStepper): string {
   if (Math.abs(R) <= cap * (1 + 1e-9)) return 'holds again';
   st.jam = R <= 0 ? 1 : -1;
   return 'slips again';
+}
+
+/**
+ * A one-way node reaching standstill on its way backwards is caught and held (its speed, within
+ * the located event's tolerance of zero, set to zero; the kinetic energy that takes is booked); a
+ * held one is let go once the torques on it push it forward.
+ */
+function enterHold(st: ChainStepper, k: number): string {
+  const i = st.holdNode[k];
+  st.dirty = true;
+  if (!st.held[k]) {
+    st.holdWork += 0.5 * st.jeff[i] * st.v[i] ** 2;
+    st.v[i] = 0;
+    st.held[k] = 1;
+    st.heldNode[i] = 1;
+    st.refreshStart();
+    return 'holds the shaft against turning backwards';
+  }
+  st.held[k] = 0;
+  st.heldNode[i] = 0;
+  return 'lets the shaft go forward again';
 }
 
 /**

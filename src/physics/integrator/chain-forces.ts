@@ -29,6 +29,8 @@ export interface StepperState {
   readonly P: number;
   readonly jam: -1 | 0 | 1;
   readonly drives: DriveState[];
+  /** 1 where a one-way node is held at standstill. */
+  readonly heldNode: Uint8Array;
   motorSpeed(d: DriveState, trial: boolean): number;
 }
 
@@ -64,6 +66,7 @@ function meanRate(st: StepperState, e: number): number {
 /** Acceleration of node i at the trial step's end, rad/s² (the ramp's for a holding stop node). */
 export function trialAcceleration(st: StepperState, i: number): number {
   if (i === st.P && st.jam === 0) return st.motion.accelerationAt(st.t + 0.5 * st.hT);
+  if (st.heldNode[i] === 1) return 0;
   return trialForce(st, i) / st.jeff[i];
 }
 
@@ -75,6 +78,14 @@ export function stuckBeltTorque(st: StepperState, d: DriveState): number {
 /** Torque the holding jam puts on the stop node at the trial end, N·m. */
 export function holdingJamTorque(st: StepperState): number {
   return st.jeff[st.P] * st.motion.accelerationAt(st.t + 0.5 * st.hT) - trialForce(st, st.P);
+}
+
+/**
+ * Torque a held one-way node's backstop (or locked worm) puts on it at the trial end, N·m, positive
+ * forward: what keeps the node at standstill against the torques that would turn it backwards.
+ */
+export function holdingTorque(st: StepperState, i: number): number {
+  return -trialForce(st, i);
 }
 
 /** Motor-curve event value for drive d at the trial end (> 0: its speed left the curve's piece). */
@@ -103,7 +114,7 @@ export function updateAccelerations(st: StepperState, h: number): void {
     acc[d.node] += d.stuck ? motorTorque(d, st.v[d.node]) : d.sigma * d.beltSlipTorque!;
   }
   if (st.jam !== 0) acc[P] -= st.jam * st.sys.stop.torqueCapacity!;
-  for (let i = 0; i < n; i++) acc[i] = jeff[i] > 0 ? acc[i] / jeff[i] : 0;
+  for (let i = 0; i < n; i++) acc[i] = jeff[i] > 0 && st.heldNode[i] === 0 ? acc[i] / jeff[i] : 0;
   if (st.jam === 0) acc[P] = st.motion.accelerationAt(st.t - 0.5 * h);
 }
 

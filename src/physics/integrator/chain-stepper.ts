@@ -73,7 +73,13 @@ export class ChainStepper {
   /** Jam: 0 holding (prescribed motion), ±1 slipping with the stop node ahead (+1) or behind the jam. */
   jam: -1 | 0 | 1 = 0;
   readonly drives: DriveState[];
+  /** The one-way nodes (`ChainSystem.holds`), whether each is held now, and 1 per node where it is held. */
+  readonly holdNode: Int32Array;
+  readonly held: Uint8Array;
+  readonly heldNode: Uint8Array;
   // Energy books, J.
+  /** Kinetic energy taken out where a one-way node is caught at standstill (its speed set to exactly 0 at the located event), J. */
+  holdWork = 0;
   dampingWork = 0;
   motorWork = 0;
   boundaryWork = 0;
@@ -110,6 +116,9 @@ export class ChainStepper {
     this.cEff = new Float64Array(Math.max(n - 1, 1));
     this.P = sys.stop.node;
     this.motion = new StopMotion(sys.speed, sys.stop.duration);
+    this.holdNode = Int32Array.from(sys.holds ?? []);
+    this.held = new Uint8Array(this.holdNode.length);
+    this.heldNode = new Uint8Array(n);
     this.drives = sys.drives.map((d) => ({ ...d, stuck: true, sigma: 0, vR: 0, vRT: 0, dphiR: 0, piece: 0, base: 0, slope: 0, lo: 0, hi: 0, beltTorque: 0, slipAngle: 0, slipWork: 0 }));
 
     // Running state: the running torque's twist, everything at ω0; then the stop's start at t = 0.
@@ -215,6 +224,15 @@ export class ChainStepper {
       if (P > 0) off[P - 1] = 0;
       if (P < m) off[P] = 0;
     }
+    // A held one-way node does not move in the step (Δφ = 0): its row is the identity and its
+    // neighbours lose their coupling to it, as for the holding jam.
+    for (let k = 0; k < this.holdNode.length; k++) {
+      if (!this.held[k]) continue;
+      const i = this.holdNode[k];
+      diag[i] = 1;
+      if (i > 0) off[i - 1] = 0;
+      if (i < m) off[i] = 0;
+    }
     this.solver.factor(diag, off);
     this.hFactored = h;
     this.dirty = false;
@@ -304,6 +322,7 @@ export class ChainStepper {
       if (P > 0) rhs[P - 1] += w[P - 1] * dG;
       if (P < m) rhs[P + 1] += w[P] * dG;
     }
+    for (let k = 0; k < this.holdNode.length; k++) if (this.held[k]) rhs[this.holdNode[k]] = 0;
     this.solver.solve(rhs, this.dphi);
   }
 

@@ -25,6 +25,12 @@ export interface ChainSystem {
   /** The node that stops, and how. */
   stop: SystemStop;
   drives: SystemDrive[];
+  /**
+   * Nodes that cannot turn backwards (a backstop, a self-locking gearbox): each is free while it
+   * turns forward, and held at standstill once its speed would go below zero, until the torques on
+   * it push it forward again. Absent: none.
+   */
+  holds?: readonly number[];
 }
 
 export interface SystemStop {

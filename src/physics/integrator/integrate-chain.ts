@@ -1,6 +1,6 @@
 import { enterEvent, eventSources, eventValues, locateEvent, type ChainEvent } from './chain-events.ts';
 import { ChainRecorder, type ChainHistory } from './chain-recorder.ts';
-import { chainEnergy, holdingJamTorque, motorPieceValue } from './chain-forces.ts';
+import { chainEnergy, holdingJamTorque, holdingTorque, motorPieceValue } from './chain-forces.ts';
 import { ChainStepper } from './chain-stepper.ts';
 import { tripDrive } from './drive-state.ts';
 import type { ChainSystem } from './chain-system.ts';
@@ -48,6 +48,8 @@ export interface IntegrationResult {
   laws: TorqueLaw[];
   /** One per drive; undefined where the drive has no belt. */
   belts: (BeltOutcome | undefined)[];
+  /** One per one-way node (`ChainSystem.holds`): the largest torque it held the shaft with against turning backwards, N·m (0: never held). */
+  holds: { peakTorque: number }[];
   /** The soft jam, when it has a torque capacity. */
   jam?: { slipWork: number; slipAngle: number; slippingAtEnd: boolean };
   /** Largest torque the shaft put on a soft jam, N·m (0 for a jam that holds any torque). */
@@ -78,11 +80,14 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
   const rec = new ChainRecorder(st, opts.duration, opts.samples ?? 400);
   const belt = new Float64Array(st.drives.length);
   const soft = sys.stop.torqueCapacity !== undefined;
+  const peakHold = new Float64Array(st.holdNode.length);
   // Belt torques at every step (for their peaks); the jam's only where it is kept (a soft jam's
   // peak, and the history's samples), as it costs a sum over the stop node's neighbours.
   const measure = (sampling: boolean): number => {
     // Each belt's torque was found with the event values of this same trial end.
     for (let i = 0; i < st.drives.length; i++) belt[i] = st.drives[i].beltSlipTorque === undefined ? NaN : st.drives[i].beltTorque;
+    // A held one-way node's torque at this same trial end, for its peak (the rebound it takes).
+    for (let k = 0; k < peakHold.length; k++) if (st.held[k]) peakHold[k] = Math.max(peakHold[k], holdingTorque(st, st.holdNode[k]));
     if (!soft && !sampling) return 0;
     return st.jam === 0 ? -holdingJamTorque(st) : st.jam * sys.stop.torqueCapacity!;
   };
@@ -201,6 +206,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     history: rec.history(),
     laws: st.laws,
     belts: st.drives.map((d, i) => (d.beltSlipTorque === undefined ? undefined : { slipWork: d.slipWork, slipAngle: d.slipAngle, peakTorque: rec.peakBelt[i], slippingAtEnd: !d.stuck })),
+    holds: Array.from(peakHold, (peakTorque) => ({ peakTorque })),
     jam: sys.stop.torqueCapacity === undefined ? undefined : { slipWork: st.jamWork, slipAngle: st.jamSlipAngle, slippingAtEnd: st.jam !== 0 },
     peakJamTorque: rec.peakJam,
     events,
@@ -210,7 +216,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
       motorWork: st.motorWork,
       boundaryWork: st.boundaryWork,
       dampingWork: st.dampingWork + st.laws.reduce((s, l) => s + (l.dampingWork ?? 0), 0),
-      slipWork: lawWork + otherLaw + st.drives.reduce((w, d) => w + d.slipWork, 0) + st.jamWork,
+      slipWork: lawWork + otherLaw + st.drives.reduce((w, d) => w + d.slipWork, 0) + st.jamWork + st.holdWork,
       released,
     },
   };
