@@ -44,7 +44,7 @@ export function resizeCase(c: Case, results: Investigation, options: ResizeOptio
   const critical = criticalSegment(c, results, designFactor);
   const limiter = torqueLimiter(c, results, running, designFactor, serviceFactor);
   const wheels = ratedSpeedChecks(c);
-  const limited = { station: limiter.station, setting: limiter.max, sidePeakTorque: results.sides.find((s) => s.side === limiter.side)!.peakTorque };
+  const limited = { station: limiter.station, setting: limiter.max, sidePeakTorque: limiter.slip.unlimitedTorque };
 
   const flagged = withFlags({
     results,
