@@ -9,7 +9,7 @@ import { sideYieldRatio } from './side-ratio.ts';
  * because then no practical shaft survives a repeat and only limiting the torque does.
  */
 export const PICK_RULE =
-  'The pick is the least change that keeps the design factor N both in a repeat of the incident and under the running torque, with no flag against it. In order of change: the present sizes and material, where they already keep N; another material of the same family on the same drawing; the critical segment alone; every segment of the side scaled; a torque limiter. Where the side would have to grow by more than analysis.max_scale, the torque limiter is tried first.';
+  'The pick is the least change that keeps the design factor N both in a repeat of the incident and under the running torque, with no flag against it. In order of change: the present sizes and material, where they already keep N; another material of the same family on the same drawing; the critical segment alone; every segment of the side scaled; a torque limiter. Where the side would have to grow by more than analysis.max_scale, the torque limiter is tried first. Where none of these passes, the combinations, in order: a torque limiter (one on each side of the stop that needs one) set at a stated torque inside its window on a like-for-like shaft; the same with a stronger material of the same family; the same with the pieces that cannot carry it made larger.';
 
 interface Candidate {
   option: OptionId;
@@ -64,9 +64,27 @@ export function recommendOption(z: Omit<ResizeResult, 'recommended' | 'pickRule'
     flags: l.flags,
     why: `a torque limiter at "${l.station}" holds a repeat of the incident to a stress / shear yield of ${r3(l.yieldRatio)} against ${allowed} with the present sizes${l.min === undefined ? '; its lowest setting is not known until the running torque is' : ''}${s.practical ? '' : `, where the side would have to grow ×${r3(s.s)}, beyond analysis.max_scale ${r3(s.maxScale)}, for a shaft alone to survive`}`,
   };
-  const order = s.practical ? [present, ...materials, critical, scale, limiter] : [present, limiter, ...materials, critical, scale];
+  const combined = z.combined.map((o): Candidate => ({ option: o.option, flags: o.flags, why: combinedWhy(z, o, running) }));
+  // The combinations are made only where no option alone passes (resizeCase), so they come last.
+  const order = [...(s.practical ? [present, ...materials, critical, scale, limiter] : [present, limiter, ...materials, critical, scale]), ...combined];
   const pick = order.find((c) => c.flags.length === 0);
   return pick && { option: pick.option, reason: `${pick.why}. It is the least change by the rule that passes every check.` };
+}
+
+/** Why a combined option, in words: what it combines, its ratio, and what the single limiter lacked. */
+function combinedWhy(z: Omit<ResizeResult, 'recommended' | 'pickRule'>, o: ResizeResult['combined'][number], running: (keeps: boolean | undefined, factor: number | undefined) => string): string {
+  const N = z.designFactor;
+  const set = o.limiters
+    .map((l) => `"${l.station}" set at the ${l.settingRule === 'lowest that runs the machine' ? 'lowest setting that runs the machine' : `${l.settingRule.replace('the window', 'its window')}`}`)
+    .join(' and ');
+  const shaft =
+    o.option === 'limiter_setting'
+      ? 'a shaft of the present sizes and material'
+      : o.option === 'limiter_material'
+        ? `a shaft of ${o.material!.name} on the present drawing, the same family as the present shaft`
+        : `the present material with ${o.segments.map((g) => `${g.segment.label ? `"${g.segment.label}"` : `segment ${g.segment.index + 1}`} ×${r3(g.growth)}`).join(', ')}`;
+  const alone = z.limiter.flags.length > 0 ? `; the limiter alone at the top of its window does not pass (${z.limiter.flags[0].split(/[:(]/)[0].trim()})` : '';
+  return `${o.limiters.length > 1 ? 'torque limiters' : 'a torque limiter'} at ${set}, on ${shaft}, ${o.limiters.length > 1 ? 'hold' : 'holds'} a repeat of the incident to a stress / shear yield of ${r3(o.yieldRatio)} against ${r3(1 / N)}${alone}; ${running(o.running.keeps, o.running.factorWithKt)}`;
 }
 
 function runningFlags(keeps: boolean | undefined): string[] {

@@ -1,6 +1,19 @@
 import type { ResizeResult } from '../../resize/resize-result.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from '../../views/resize-rows.ts';
-import { criticalSegmentSentence, factorSentence, flaggedOptions, recommendedSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from '../../views/resize-words.ts';
+import {
+  COMBINED_WHY,
+  combinedName,
+  combinedSentences,
+  criticalSegmentSentence,
+  factorSentence,
+  fuseWords,
+  flaggedOptions,
+  recommendedSentence,
+  keySentences,
+  limiterSentences,
+  materialsSentence,
+  scaleSideSentence,
+} from '../../views/resize-words.ts';
 import { findingSentence } from '../../views/finding-words.ts';
 import { linkTo } from '../anchor.ts';
 import { bulletList, escapeMarkdown } from '../markdown-text.ts';
@@ -55,7 +68,11 @@ export const optionsSection: ReportSection = {
     part('Scale the side', [scaleSideSentence(resize)]);
     part('Resize the critical segment only', [criticalSegmentSentence(resize)]);
     part('Another material', [materialsSentence(resize)]);
-    part('Torque limiter or slip coupling', limiterSentences(resize));
+    part('Torque limiter or slip coupling', [...limiterSentences(resize), `Behind it, ${fuseWords(resize.limiter.fuses, resize.results.case.units)}.`]);
+    if (resize.combined.length > 0) {
+      out.push(`### ${e('Combined options')}`, e(COMBINED_WHY));
+      for (const o of resize.combined) part(combinedName(o), combinedSentences(resize, o));
+    }
     if (resize.keys.length === 0) part('The key as fuse', ['No key is given in the case.']);
     for (const k of resize.keys) part(`The key as fuse at "${k.station}"`, keySentences(resize, k));
     part('What the options rest on', resize.notes);
