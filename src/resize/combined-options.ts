@@ -41,6 +41,8 @@ export interface SetLimiter {
   setting: number;
   /** How the setting was chosen: the window's middle, its top, or its bottom. */
   settingRule: 'middle of the window' | 'top of the window' | 'lowest that runs the machine';
+  /** The setting is the present shaft's (its window's middle or top), kept on a stronger shaft for margin. */
+  presentWindow: boolean;
   /** Lowest setting that runs the machine (running torque × service factor), N·m; undefined where unknown or no drive torque passes this side. */
   min?: number;
   /** Highest setting the option's shaft allows (its weakest piece's yield torque with kt over N), N·m. */
@@ -236,6 +238,7 @@ function build(
       ...p,
       setting: settings[i].setting,
       settingRule: settings[i].settingRule,
+      presentWindow: changed.shaft !== x.c.shaft && settings[i].settingRule !== 'lowest that runs the machine',
       min: w.min,
       max: w.max,
       weakest: w.weakest,

@@ -78,7 +78,9 @@ export function fuseOrder(present: Case, option: Case, finding: Finding, station
     const seatChanged = e.kind !== 'coupling' && seatDiameter(present, x) !== seatDiameter(option, x);
     const needed = designFactor * through(x);
     steps.push({ kind: e.kind, element: e.element, givesWayBy: e.givesWayBy, capacity: e.capacity, multiple: e.capacity / setting, seatChanged });
-    if (e.capacity < needed * (1 - 1e-12)) uprate.push({ ...steps[steps.length - 1], needed });
+    // A fit at the stop is the jam's own slip (src/results/fit-at-stop.ts): it caps what it carries, so it is not one to uprate.
+    const jamSlip = e.kind === 'fit' && Math.abs(x - stop) <= EPS;
+    if (!jamSlip && e.capacity < needed * (1 - 1e-12)) uprate.push({ ...steps[steps.length - 1], needed });
   }
   steps.sort((a, b) => a.capacity - b.capacity);
   return { station, setting, steps, uprate };

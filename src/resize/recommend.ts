@@ -75,7 +75,10 @@ export function recommendOption(z: Omit<ResizeResult, 'recommended' | 'pickRule'
 function combinedWhy(z: Omit<ResizeResult, 'recommended' | 'pickRule'>, o: ResizeResult['combined'][number], running: (keeps: boolean | undefined, factor: number | undefined) => string): string {
   const N = z.designFactor;
   const set = o.limiters
-    .map((l) => `"${l.station}" set at the ${l.settingRule === 'lowest that runs the machine' ? 'lowest setting that runs the machine' : `${l.settingRule.replace('the window', 'its window')}`}`)
+    .map(
+      (l) =>
+        `"${l.station}" set at the ${l.settingRule === 'lowest that runs the machine' ? 'lowest setting that runs the machine' : l.settingRule.replace('the window', l.presentWindow ? "the present shaft's window" : 'its window')}`,
+    )
     .join(' and ');
   const shaft =
     o.option === 'limiter_setting'

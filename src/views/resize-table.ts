@@ -63,7 +63,7 @@ export function renderResize(z: ResizeResult): string {
       ...z.materials.map((x) => [x.material.key, sig(x.yieldRatio), x.keepsFactor ? 'yes' : 'no', `×${sig(x.change.peakTorque)}`, x.material.strengthBasis ?? '—']),
     ]),
   );
-  section('Torque limiter or slip coupling', [...limiterSentences(z), `Behind it, ${fuseWords(z.limiter.fuses, u)}.`]);
+  section('Torque limiter or slip coupling', [...limiterSentences(z), `In the order of giving way, ${fuseWords(z.limiter.fuses, u)}.`]);
   if (z.combined.length > 0) {
     out.push('', 'Combined options', `  ${COMBINED_WHY}`);
     for (const o of z.combined) section(`  ${combinedName(o)}`, combinedSentences(z, o));

@@ -170,6 +170,7 @@ export function combinedName(o: CombinedOption): string {
 /** "set at 2140 N·m, the middle of its window 1500 to 3030 N·m": a limiter's stated setting in words. */
 export function settingWords(l: SetLimiter, u: Case['units']): string {
   const at = `set at ${show(l.setting, 'torque', u)}`;
+  if (l.presentWindow) return `${at}, the ${l.settingRule.replace('the window', "the present shaft's window")}, where this shaft allows up to ${show(l.max, 'torque', u)}`;
   if (l.settingRule === 'middle of the window') return `${at}, the middle of its window ${show(l.min!, 'torque', u)} to ${show(l.max, 'torque', u)}`;
   if (l.settingRule === 'top of the window') return `${at}, the top of its window${l.min === undefined ? ' (its lower end needs the running torque)' : ''}`;
   return `${at}, the lowest setting that runs the machine (the running torque × the service factor), with the shaft's window reaching ${show(l.max, 'torque', u)}`;
@@ -211,7 +212,7 @@ export function combinedSentences(z: ResizeResult, o: CombinedOption): string[] 
     out.push(
       `The limiter at "${l.station}" (side ${l.side}), ${settingWords(l, u)}. In a repeat of the incident the peak torque between it and the stop is ${show(s.peakTorque, 'torque', u)}${s.slipEnergy > 0 ? `; it slips through ${show(s.slipAngle, 'angle', u)} and dissipates ${show(s.slipEnergy, 'energy', u)}` : '; it does not slip'}; side ${l.side}'s stress / shear yield ${sig(l.yieldRatio)} (${s.method}).`,
     );
-    out.push(`Behind it, ${fuseWords(l.fuses, u)}.`);
+    out.push(`In the order of giving way, ${fuseWords(l.fuses, u)}.`);
   }
   for (const x of o.otherSides) if (x.yieldRatio * z.designFactor > 1 + 1e-9) out.push(`Side ${x.side} (stress / shear yield ${sig(x.yieldRatio)}) has no limiter in this option.`);
   out.push(`Under the running torque: ${runningWords(o.running, u)}.`);

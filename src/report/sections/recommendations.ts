@@ -68,7 +68,7 @@ export const optionsSection: ReportSection = {
     part('Scale the side', [scaleSideSentence(resize)]);
     part('Resize the critical segment only', [criticalSegmentSentence(resize)]);
     part('Another material', [materialsSentence(resize)]);
-    part('Torque limiter or slip coupling', [...limiterSentences(resize), `Behind it, ${fuseWords(resize.limiter.fuses, resize.results.case.units)}.`]);
+    part('Torque limiter or slip coupling', [...limiterSentences(resize), `In the order of giving way, ${fuseWords(resize.limiter.fuses, resize.results.case.units)}.`]);
     if (resize.combined.length > 0) {
       out.push(`### ${e('Combined options')}`, e(COMBINED_WHY));
       for (const o of resize.combined) part(combinedName(o), combinedSentences(resize, o));
