@@ -90,7 +90,8 @@ describe('the pick of what goes back in, by the stated rule', () => {
     expect(walk([as('limiter_setting', ['test flag']), as('limiter_material', []), as('limiter_segments', [])])).toBe('limiter_material');
     expect(walk([as('limiter_setting', ['test flag']), as('limiter_material', ['test flag']), as('limiter_segments', [])])).toBe('limiter_segments');
     // An option alone that passes comes before any combination.
-    expect(recommendOption({ ...flagged(z, ['critical', 'scale', 'limiter']), combined: [as('limiter_setting', [])] })?.option).toBe('material:aisi-4340-qt540');
+    const goodMaterial = { ...flagged(z, ['critical', 'scale', 'limiter']), materials: z.materials.map((m) => ({ ...m, flags: m.material.key === 'aisi-4340-qt540' ? [] : ['test flag'] })) };
+    expect(recommendOption({ ...goodMaterial, combined: [as('limiter_setting', [])] })?.option).toBe('material:aisi-4340-qt540');
   });
 
   it('where the present shaft already keeps N, a replacement like for like', () => {
