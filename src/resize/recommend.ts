@@ -9,7 +9,7 @@ import { sideYieldRatio } from './side-ratio.ts';
  * because then no practical shaft survives a repeat and only limiting the torque does.
  */
 export const PICK_RULE =
-  'The pick is the least change that keeps the design factor N both in a repeat of the incident and under the running torque, with no flag against it. In order of change: the present sizes and material, where they already keep N; another material of the same family on the same drawing; the critical segment alone; every segment of the side scaled; a torque limiter. Where the side would have to grow by more than analysis.max_scale, the torque limiter is tried first. Where none of these passes, the combinations, in order: a torque limiter (one on each side of the stop that needs one) set at a stated torque inside its window on a like-for-like shaft; the same with a stronger material of the same family; the same with the pieces that cannot carry it made larger.';
+  'The pick is the least change that keeps the design factor N both in a repeat of the incident and under the running torque, with no flag against it. In order of change: the present sizes and material, where they already keep N; another material of the same family on the same drawing; the critical segment alone; every segment of the side scaled; a torque limiter. Where the side would have to grow by more than analysis.max_scale, the torque limiter is tried first. Where none passes, the combinations: a limiter (one a side where both need one) at a stated setting on a like-for-like shaft, then with a stronger material of the same family, then with larger pieces.';
 
 interface Candidate {
   option: OptionId;
@@ -71,23 +71,18 @@ export function recommendOption(z: Omit<ResizeResult, 'recommended' | 'pickRule'
   return pick && { option: pick.option, reason: `${pick.why}. It is the least change by the rule that passes every check.` };
 }
 
-/** Why a combined option, in words: what it combines, its ratio, and what the single limiter lacked. */
+/** Why a combined option, in words: its ratio, and what the limiter alone lacked (what it combines is the change's to say). */
 function combinedWhy(z: Omit<ResizeResult, 'recommended' | 'pickRule'>, o: ResizeResult['combined'][number], running: (keeps: boolean | undefined, factor: number | undefined) => string): string {
-  const N = z.designFactor;
-  const set = o.limiters
-    .map(
-      (l) =>
-        `"${l.station}" set at the ${l.settingRule === 'lowest that runs the machine' ? 'lowest setting that runs the machine' : l.settingRule.replace('the window', l.presentWindow ? "the present shaft's window" : 'its window')}`,
-    )
-    .join(' and ');
-  const shaft =
-    o.option === 'limiter_setting'
-      ? 'a shaft of the present sizes and material'
-      : o.option === 'limiter_material'
-        ? `a shaft of ${o.material!.name} on the present drawing, the same family as the present shaft`
-        : `the present material with ${o.segments.map((g) => `${g.segment.label ? `"${g.segment.label}"` : `segment ${g.segment.index + 1}`} ×${r3(g.growth)}`).join(', ')}`;
-  const alone = z.limiter.flags.length > 0 ? `; the limiter alone at the top of its window does not pass (${z.limiter.flags[0].split(/[:(]/)[0].trim()})` : '';
-  return `${o.limiters.length > 1 ? 'torque limiters' : 'a torque limiter'} at ${set}, on ${shaft}, ${o.limiters.length > 1 ? 'hold' : 'holds'} a repeat of the incident to a stress / shear yield of ${r3(o.yieldRatio)} against ${r3(1 / N)}${alone}; ${running(o.running.keeps, o.running.factorWithKt)}`;
+  const alone =
+    z.limiter.flags.length > 0
+      ? `, where the limiter alone at the top of its window does not (it ${z.limiter.flags[0]
+          .split(/[:(]/)[0]
+          .trim()
+          .replace(/^its window is empty$/, 'has an empty window')
+          .replace(/^does not/, 'does not')})`
+      : '';
+  const what = o.option === 'limiter_setting' ? 'a like-for-like shaft' : o.option === 'limiter_material' ? `a shaft of ${o.material!.key}, the same family as the present one,` : 'the larger pieces';
+  return `with ${what} the ${o.limiters.length > 1 ? 'limiters hold' : 'limiter holds'} a repeat of the incident to a stress / shear yield of ${r3(o.yieldRatio)} against ${r3(1 / z.designFactor)}${alone}; ${running(o.running.keeps, o.running.factorWithKt)}`;
 }
 
 function runningFlags(keeps: boolean | undefined): string[] {

@@ -194,34 +194,29 @@ export function ladderWords(f: FuseOrder, u: Case['units']): string {
   return [...(steps.length > 0 ? [`behind it ${steps.join(', ')}`] : []), ...uprate].join('; ');
 }
 
-/** A combined option in words: what it combines, each limiter's setting and slip, the order of giving way, its shaft. */
+/** A combined option in words: its shaft, each limiter's setting, slip and the order of giving way behind it. */
 export function combinedSentences(z: ResizeResult, o: CombinedOption): string[] {
   const u = z.results.case.units;
-  const out: string[] = [];
-  if (o.option === 'limiter_material')
-    out.push(
-      `The shaft of ${o.material!.name} (${o.material!.key}) on the present drawing, the same family as the present shaft: the weakest of that family in the library that carries N × each setting with the overshoot the limiter's last rerun showed.`,
-    );
-  if (o.option === 'limiter_segments')
-    out.push(
-      `The present material, with ${o.segments.map((g) => `${segName(g.segment)} Ø${showDiameter(g.segment.diameter, u)} → ${showDiameter(g.stockDiameter, u)} (×${sig(g.growth)}, stock size, bore ratio kept)`).join('; ')}: each piece of the limited run that could not carry N × its setting with the overshoot made larger.`,
-    );
-  if (o.option === 'limiter_setting') out.push('A shaft of the present sizes and material (like for like), the limiter set inside its window rather than at its top.');
+  const shaft =
+    o.option === 'limiter_setting'
+      ? 'A shaft of the present sizes and material (like for like).'
+      : o.option === 'limiter_material'
+        ? `A shaft of ${o.material!.name} (${o.material!.key}) on the present drawing: the weakest of the present shaft's family in the library that carries N × each setting with the overshoot the last rerun showed.`
+        : `The present material, with ${o.segments.map((g) => `${segName(g.segment)} Ø${showDiameter(g.segment.diameter, u)} → ${showDiameter(g.stockDiameter, u)} (×${sig(g.growth)}, stock size, bore ratio kept)`).join('; ')}: each piece of the limited run that could not carry N × its setting with the overshoot made larger.`;
+  const out = [shaft];
   for (const l of o.limiters) {
     const s = l.slip;
     out.push(
-      `The limiter at "${l.station}" (side ${l.side}), ${settingWords(l, u)}. In a repeat of the incident the peak torque between it and the stop is ${show(s.peakTorque, 'torque', u)}${s.slipEnergy > 0 ? `; it slips through ${show(s.slipAngle, 'angle', u)} and dissipates ${show(s.slipEnergy, 'energy', u)}` : '; it does not slip'}; side ${l.side}'s stress / shear yield ${sig(l.yieldRatio)} (${s.method}).`,
+      `The limiter at "${l.station}" (side ${l.side}), ${settingWords(l, u)}: in a repeat of the incident the peak torque between it and the stop is ${show(s.peakTorque, 'torque', u)}${s.slipEnergy > 0 ? `, it slips through ${show(s.slipAngle, 'angle', u)} and dissipates ${show(s.slipEnergy, 'energy', u)}` : ' and it does not slip'}; side ${l.side}'s stress / shear yield ${sig(l.yieldRatio)} (${s.method}). In the order of giving way, ${fuseWords(l.fuses, u)}.`,
     );
-    out.push(`In the order of giving way, ${fuseWords(l.fuses, u)}.`);
   }
   for (const x of o.otherSides) if (x.yieldRatio * z.designFactor > 1 + 1e-9) out.push(`Side ${x.side} (stress / shear yield ${sig(x.yieldRatio)}) has no limiter in this option.`);
-  out.push(`Under the running torque: ${runningWords(o.running, u)}.`);
   return out;
 }
 
 /** Which combinations are made and why, one sentence for the views' heading of the combined options. */
 export const COMBINED_WHY =
-  "Where no option alone passes, the engineer combines: a torque limiter set at a stated torque inside its window (the middle, on a log scale, where both ends are known), one on each side of the stop that needs one; then, where that still fails, the same limiter with a stronger material of the same family, then with the pieces that cannot carry it made larger. A key or a shear pin is not combined as the fuse: a key is no dependable fuse, and a pin that parts leaves the stop's own stress wave as it is.";
+  "Made where no option alone passes: a torque limiter (one on each side of the stop that needs one) set at a stated torque inside its window (its middle on a log scale where both ends are known), then, where that fails, with a stronger material of the same family, then with the pieces that cannot carry it made larger. A key or a shear pin is not combined as the fuse: a key is no dependable fuse, and a pin that parts leaves the stop's own stress wave as it is.";
 
 /** Where resize picks nothing: why, in plain words (the combination that came nearest, and what stops it). */
 export function noPickSentence(z: ResizeResult): string {

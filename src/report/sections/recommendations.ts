@@ -1,4 +1,5 @@
 import type { ResizeResult } from '../../resize/resize-result.ts';
+import { sig } from '../../views/display-units.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from '../../views/resize-rows.ts';
 import {
   COMBINED_WHY,
@@ -24,7 +25,8 @@ export const OPTIONS_TITLE = 'Appendix: every option for what goes back in';
 /**
  * What goes back in (`shaftcase resize`, computed once before the report is rendered): the options
  * table, the recommended one, the guarding and restart recommendations, and what the investigator
- * decides. Each option in words, and what they rest on, are in the appendix (`optionsSection`).
+ * decides. The rule of the pick, the columns, each option in words, and what they rest on, are in
+ * the appendix (`optionsSection`), to keep the body short.
  * Every text (the case's names and labels among them) is escaped.
  */
 export const recommendationsSection: ReportSection = {
@@ -38,12 +40,8 @@ export const recommendationsSection: ReportSection = {
       ),
       e(factorSentence(resize)),
       optionsTable(resize),
-      e(
-        "Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate.",
-      ),
       `**${e(recommendedSentence(resize))}**`,
-      e(`The rule: ${resize.pickRule}`),
-      `${e('Why each flagged option is not advisable, each option in words, and what they rest on:')} ${linkTo(OPTIONS_TITLE, 'see the appendix')}.`,
+      `${e('The rule of the pick, the columns, why each flagged option is not advisable, each option in words, and what they rest on:')} ${linkTo(OPTIONS_TITLE, 'see the appendix')}.`,
     ];
     out.push('### Guarding and restart', bulletList(resize.guarding.map((g) => e(`${g.topic}: ${g.text}`))));
     const decision = [
@@ -61,9 +59,25 @@ export const optionsSection: ReportSection = {
   title: OPTIONS_TITLE,
   render({ resize }) {
     const e = escapeMarkdown;
-    const out: string[] = [];
-    const flagged = flaggedOptions(resize);
-    if (flagged.length > 0) out.push(`### ${e('Flagged: why these options are not advisable')}`, bulletList(flagged.map((o) => e(`${o.name}: ${o.flags.join('; ')}.`))));
+    const out: string[] = [
+      e(`The rule: ${resize.pickRule}`),
+      e(
+        "Running factor: shear yield over the stress under the running torque, with kt (and static). Stiffness and natural frequency: new over present; the frequency is the dynamic model's lowest of the side where the verdict stands on it, else the energy method's single-mass estimate.",
+      ),
+    ];
+    // The materials whose one flag is their factor go in one line, to keep the appendix short; the terminal lists each.
+    const factorOnly = resize.materials.filter((m) => m.flags.length === 1 && !m.keepsFactor && m.running.keeps !== false);
+    const grouped = factorOnly.length > 1 ? new Set(factorOnly.map((m) => `Material ${m.material.key}`)) : new Set<string>();
+    const flagged = flaggedOptions(resize).filter((o) => !grouped.has(o.name));
+    const lines = flagged.map((o) => `${o.name}: ${o.flags.join('; ')}.`);
+    if (grouped.size > 0) {
+      lines.splice(
+        flagged.findIndex((o) => o.name.startsWith('Material ')) < 0 ? lines.length : flagged.findIndex((o) => o.name.startsWith('Material ')),
+        0,
+        `Materials ${factorOnly.map((m) => `${m.material.key} (${sig(m.yieldRatio)})`).join(', ')}: each fails its own design factor: a repeat of the incident takes it to the stress / shear yield in brackets, above the ${sig(1 / resize.designFactor)} that N = ${sig(resize.designFactor)} allows.`,
+      );
+    }
+    if (lines.length > 0) out.push(`### ${e('Flagged: why these options are not advisable')}`, bulletList(lines.map(e)));
     const part = (title: string, lines: readonly string[]) => out.push(`### ${e(title)}`, bulletList(lines.map(e)));
     part('Scale the side', [scaleSideSentence(resize)]);
     part('Resize the critical segment only', [criticalSegmentSentence(resize)]);
