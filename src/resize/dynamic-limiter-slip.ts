@@ -24,10 +24,19 @@ export interface DynamicLimiterSlip {
   dampingWork: number;
   /** Highest stress / shear yield of the limited side in the rerun. */
   yieldRatio: number;
+  /** The peak torque of each piece from the limiter to the stop in the rerun (ends in m, N·m). */
+  runPeaks: RunPeak[];
   /** The rerun's result. */
   rerun: Results;
   /** Where the stop is instantaneous and the peak stands well above the setting: the stop's own stress wave in the piece that carries the peak (see `stopWaveAbove`). */
   stopWave?: StopWave;
+}
+
+/** A piece's peak torque in a rerun: its ends, m, and the peak, N·m. */
+export interface RunPeak {
+  start: number;
+  end: number;
+  peakTorque: number;
 }
 
 /** The torsional stress wave of an instantaneous stop in one piece of shaft. */
@@ -48,33 +57,67 @@ const ABOVE_SETTING = 0.1;
  * over the pieces from the limiter's station to the stop. Undefined when no segment can hold it.
  */
 export function dynamicLimiterSlip(c: Case, station: string, side: SideName, setting: number): DynamicLimiterSlip | undefined {
-  const place = limiterPlace(c, station);
-  if (!place) return undefined;
-  const rerun = designRun(withLimiter(place.case, place.segment, setting));
+  return dynamicLimitersSlip(c, [{ station, side, setting }])?.[0];
+}
+
+/** A limiter to put into a case: its station, the side whose parts drive through it and its slip torque, N·m. */
+export interface LimiterAt {
+  station: string;
+  side: SideName;
+  setting: number;
+}
+
+/**
+ * Several limiters (one a side of the stop, say) put into the case together, each as
+ * `dynamicLimiterSlip` puts one, and the changed case rerun once: one time integration for all of
+ * them, since each side's slip changes what the stop takes from the other. One result per limiter,
+ * in the order given; undefined when a limiter's place cannot hold one.
+ */
+export function dynamicLimitersSlip(c: Case, limiters: readonly LimiterAt[]): DynamicLimiterSlip[] | undefined {
+  let changed = c;
+  const placed: { from: number; to: number; existing: boolean }[] = [];
+  for (const l of limiters) {
+    const place = limiterPlace(changed, l.station);
+    if (!place) return undefined;
+    changed = withLimiter(place.case, place.segment, l.setting);
+    placed.push({ from: place.start, to: place.end, existing: place.existing });
+  }
+  const rerun = designRun(changed);
   const d = rerun.dynamic;
-  const seg = place.case.shaft.segments[place.segment];
-  const name = seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
-  const slip = d.slips.find((s) => s.kind === 'torque limiter' && s.element === `the torque limiter in ${name}`);
-  if (!slip) return undefined;
   const stop = c.stations.find((s) => s.name === c.stop.at)!.at;
-  const reach = Math.abs(c.stations.find((s) => s.name === station)!.at - stop) + 1e-9;
-  const run = d.pieces.filter((p) => p.side === side && Math.max(Math.abs(p.piece.start - stop), Math.abs(p.piece.end - stop)) <= reach);
-  const peakTorque = Math.max(0, ...run.map((p) => p.peakTorque));
-  const wave = stopWaveAbove(c, run, setting, peakTorque);
-  return {
-    segment: place.original.index,
-    from: place.start,
-    to: place.end,
-    existing: place.existing,
-    peakTorque,
-    slipEnergy: slip.energy,
-    slipAngle: slip.angle,
-    energyLeft: d.energy.final,
-    dampingWork: d.energy.dampingWork,
-    yieldRatio: d.sides.find((s) => s.side === side)?.dynamicYieldRatio ?? d.yieldRatio,
-    rerun,
-    ...(wave ? { stopWave: wave } : {}),
+  const nameAt = (from: number, to: number) => {
+    const seg = changed.shaft.segments.find((g) => g.slipTorque !== undefined && Math.abs(g.start - from) <= 1e-9 && Math.abs(g.end - to) <= 1e-9)!;
+    return seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`;
   };
+  const out: DynamicLimiterSlip[] = [];
+  for (const [i, l] of limiters.entries()) {
+    const { from, to, existing } = placed[i];
+    // Limiters in pieces of one segment share its name: they are told apart by their order along the shaft.
+    const element = `the torque limiter in ${nameAt(from, to)}`;
+    const rank = placed.filter((p) => nameAt(p.from, p.to) === nameAt(from, to) && p.from < from - 1e-9).length;
+    const slip = d.slips.filter((s) => s.kind === 'torque limiter' && s.element === element).sort((a, b) => (a.elementIndex ?? 0) - (b.elementIndex ?? 0))[rank];
+    if (!slip) return undefined;
+    const reach = Math.abs(c.stations.find((s) => s.name === l.station)!.at - stop) + 1e-9;
+    const run = d.pieces.filter((p) => p.side === l.side && Math.max(Math.abs(p.piece.start - stop), Math.abs(p.piece.end - stop)) <= reach);
+    const peakTorque = Math.max(0, ...run.map((p) => p.peakTorque));
+    const wave = stopWaveAbove(c, run, l.setting, peakTorque);
+    out.push({
+      segment: c.shaft.segments.find((g) => g.start <= from + 1e-9 && to <= g.end + 1e-9)!.index,
+      from,
+      to,
+      existing,
+      peakTorque,
+      slipEnergy: slip.energy,
+      slipAngle: slip.angle,
+      energyLeft: d.energy.final,
+      dampingWork: d.energy.dampingWork,
+      yieldRatio: d.sides.find((s) => s.side === l.side)?.dynamicYieldRatio ?? d.yieldRatio,
+      runPeaks: run.map((p) => ({ start: p.piece.start, end: p.piece.end, peakTorque: p.peakTorque })),
+      rerun,
+      ...(wave ? { stopWave: wave } : {}),
+    });
+  }
+  return out;
 }
 
 /**

@@ -1,10 +1,9 @@
 import type { Case, Segment, ShaftKey } from '../case/case.ts';
 import type { Material } from '../materials/material.ts';
+import type { Investigation } from '../finding/investigation.ts';
 import { keyBearingStress, keyShearStress } from '../physics/key-stress.ts';
-import { shearUltimate, shearYield } from '../physics/shear-strength.ts';
-import type { Results } from '../results/results.ts';
+import { shearYield } from '../physics/shear-strength.ts';
 import type { RunningTorque } from '../results/running-torque.ts';
-import { runToStop, shaftRun, weakestPiece } from './shaft-run.ts';
 
 /** A key's stresses under one torque. */
 export interface KeyStress {
@@ -45,11 +44,13 @@ export interface KeyFuse {
 
 /**
  * Every key in the case, checked under the incident torque, the limiter's setting and the running
- * torque. Stresses from Shigley 9th ed. Sec. 7-7 (src/physics/key-stress.ts). The torque through a
- * key is the peak torque of the side its station is on (the energy method does not split a side's
- * torque between its stations); a key at the stop takes both sides' peaks together, an upper bound.
+ * torque. Stresses from Shigley 9th ed. Sec. 7-7 (src/physics/key-stress.ts). The incident torque
+ * through a key is the one the finding's drive train gives it (`Finding.driveTrain`, the verdict's
+ * model through `Results.keys`: the dynamic model's peak as carried, or the energy method's side
+ * peak), so `check` and `resize` judge the key at one torque; its shear-off, crushing and the
+ * shaft's yield torque are those of the same check (src/results/key-checks.ts).
  */
-export function keyFuses(c: Case, r: Results, limiter?: LimiterSetting, running?: RunningTorque): KeyFuse[] {
+export function keyFuses(c: Case, r: Investigation, limiter?: LimiterSetting, running?: RunningTorque): KeyFuse[] {
   return c.stations.filter((s) => s.key).map((s) => keyFuse(c, r, s.name, limiter, running));
 }
 
@@ -57,11 +58,11 @@ export function keyFuses(c: Case, r: Results, limiter?: LimiterSetting, running?
 export interface LimiterSetting {
   station: string;
   setting: number;
-  /** The limited side's incident peak torque, N·m. */
+  /** The limited side's incident peak torque by the finding's model, N·m. */
   sidePeakTorque: number;
 }
 
-function keyFuse(c: Case, r: Results, station: string, limiter?: LimiterSetting, running?: RunningTorque): KeyFuse {
+function keyFuse(c: Case, r: Investigation, station: string, limiter?: LimiterSetting, running?: RunningTorque): KeyFuse {
   const s = c.stations.find((x) => x.name === station)!;
   const stop = c.stations.find((x) => x.name === c.stop.at)!;
   const key = s.key!;
@@ -75,14 +76,12 @@ function keyFuse(c: Case, r: Results, station: string, limiter?: LimiterSetting,
     return { torque, shearStress: shear, bearingStress: bearing, shearRatio: shear / tauY, bearingRatio: bearing / material.yieldStrength! };
   };
 
-  const incidentTorque = torqueThrough(c, r, s.at, stop.at);
-  const shearOff = material.tensileStrength !== undefined ? shearUltimate(material.tensileStrength) : tauY;
+  const check = r.keys.find((k) => k.station === station)!;
+  const element = r.finding.driveTrain.find((e) => e.kind === 'key' && e.where === station);
+  const incidentTorque = element?.torque ?? check.torque;
+  const { shearOffTorque, crushTorque, shaftYieldTorque } = check;
   const shearOffBasis =
     material.tensileStrength !== undefined ? 'taking its ultimate shear strength as 0.67·Sut, Shigley 9th ed. Sec. 6-15' : 'taking its shear yield, as the key material has no tensile strength';
-  const shearOffTorque = shearOff / keyShearStress(1, d, key.width, key.length);
-  const crushTorque = material.yieldStrength! / keyBearingStress(1, d, key.height, key.length, key.hubDepth);
-  const run = s.at === stop.at ? loadedRun(c, r) : runToStop(c, station);
-  const shaftYieldTorque = weakestPiece(run)?.yieldTorque ?? Infinity;
 
   const out: KeyFuse = {
     station,
@@ -121,19 +120,4 @@ function segmentAt(c: Case, at: number, stopAt: number): Segment {
 function between(c: Case, at: number, station: string, stopAt: number): boolean {
   const from = c.stations.find((x) => x.name === station)!.at;
   return Math.min(from, stopAt) - 1e-9 <= at && at <= Math.max(from, stopAt) + 1e-9;
-}
-
-/** The incident torque the shaft carries at position `at`. */
-function torqueThrough(c: Case, r: Results, at: number, stopAt: number): number {
-  if (Math.abs(at - stopAt) <= 1e-9) return r.sides.reduce((sum, s) => sum + s.peakTorque, 0);
-  const side = r.sides.find((s) => s.side === (at < stopAt ? 'A' : 'B'));
-  if (!side) return 0;
-  const far = Math.max(...side.stations.map((n) => Math.abs(c.stations.find((x) => x.name === n)!.at - stopAt)));
-  return Math.abs(at - stopAt) <= far + 1e-9 ? side.peakTorque : 0;
-}
-
-/** The whole loaded run, both sides (for a key at the stop). */
-function loadedRun(c: Case, r: Results) {
-  const ends = r.sides.flatMap((s) => s.pieces.flatMap((p) => [p.piece.start, p.piece.end]));
-  return shaftRun(c, Math.min(...ends), Math.max(...ends));
 }

@@ -1,6 +1,6 @@
 import type { SideName } from '../model/shaft-model.ts';
 import type { Results } from '../results/results.ts';
-import { dynamicLimiterSlip, type StopWave } from './dynamic-limiter-slip.ts';
+import { dynamicLimitersSlip, type RunPeak, type StopWave } from './dynamic-limiter-slip.ts';
 
 export type SlipMethod = 'energy method' | 'dynamic model';
 
@@ -36,6 +36,8 @@ export interface LimiterSlip {
   modelledInExisting?: boolean;
   /** Dynamic model: the limited side's highest stress / shear yield in the rerun. */
   yieldRatio?: number;
+  /** Dynamic model: the peak torque of each piece from the limiter to the stop in the rerun. */
+  runPeaks?: RunPeak[];
   /** Dynamic model: energy its damping took in the rerun, J. */
   dampingWork?: number;
   /** Why the energy method was kept where the verdict stands on the dynamic model. */
@@ -73,39 +75,57 @@ export interface LimiterPlace {
  * limiter's station cannot hold a limiter (a shear pin is there), the energy method is kept and `note` says so.
  */
 export function limiterSlip(r: Results, place: LimiterPlace, setting: number, energyOnly = false): LimiterSlip {
-  const energy = energyLimiterSlip(r, place, setting);
-  if (energyOnly || r.verdictBasis !== 'dynamic model') return energy;
-  const d = dynamicLimiterSlip(r.case, place.station, place.side, setting);
+  if (energyOnly || r.verdictBasis !== 'dynamic model') return energyLimiterSlip(r, place, setting);
+  const unlimited = r.dynamic.sides.find((s) => s.side === place.side)?.dynamicPeakTorque;
+  return limitersSlip(r, [{ ...place, setting }], () => unlimited)[0];
+}
+
+/** The case and its energy method per side, with the model the verdict stands on: what a limiter's slip reads. */
+export type SlipBasis = Pick<Results, 'case' | 'sides' | 'verdictBasis'>;
+
+/**
+ * Several limiters (one a side of the stop) in a repeat of the incident, each as `limiterSlip` takes
+ * one: by the energy method per side, or, where the verdict stands on the dynamic model, all put
+ * into the case together and the changed case rerun once (`dynamicLimitersSlip`). `unlimited`
+ * gives a side's incident peak without a limiter by the dynamic model where it is known (else the
+ * energy method's is shown).
+ */
+export function limitersSlip(r: SlipBasis, places: readonly (LimiterPlace & { setting: number })[], unlimited: (side: SideName) => number | undefined): LimiterSlip[] {
+  const energy = places.map((p) => energyLimiterSlip(r, p, p.setting));
+  if (r.verdictBasis !== 'dynamic model') return energy;
+  const d = dynamicLimitersSlip(r.case, places);
   if (!d) {
-    return {
-      ...energy,
-      note: `The shaft beside "${place.station}" toward the stop cannot hold a limiter in the model (a shear pin is there), so the slip is the energy method's although the verdict stands on the dynamic model.`,
-    };
+    return energy.map((e, i) => ({
+      ...e,
+      note: `The shaft beside "${places[i].station}" toward the stop cannot hold a limiter in the model (a shear pin is there), so the slip is the energy method's although the verdict stands on the dynamic model.`,
+    }));
   }
-  const seg = r.case.shaft.segments[d.segment];
-  const unlimited = r.dynamic.sides.find((s) => s.side === place.side)?.dynamicPeakTorque ?? energy.unlimitedTorque;
-  return {
-    setting,
-    energy: energy.energy,
-    unlimitedTorque: unlimited,
-    peakTorque: d.peakTorque,
-    storedEnergy: d.energyLeft,
-    slipEnergy: d.slipEnergy,
-    slipAngle: d.slipAngle,
-    slipMethod: 'dynamic model',
-    method: `dynamic model: the limiter put into ${seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`} beside "${place.station}" as a slip element and the changed case rerun in time`,
-    segment: d.segment,
-    modelledFrom: d.from,
-    modelledTo: d.to,
-    modelledInExisting: d.existing,
-    yieldRatio: d.yieldRatio,
-    dampingWork: d.dampingWork,
-    ...(d.stopWave ? { stopWave: d.stopWave } : {}),
-  };
+  return d.map((x, i) => {
+    const seg = r.case.shaft.segments[x.segment];
+    return {
+      setting: places[i].setting,
+      energy: energy[i].energy,
+      unlimitedTorque: unlimited(places[i].side) ?? energy[i].unlimitedTorque,
+      peakTorque: x.peakTorque,
+      storedEnergy: x.energyLeft,
+      slipEnergy: x.slipEnergy,
+      slipAngle: x.slipAngle,
+      slipMethod: 'dynamic model',
+      method: `dynamic model: the limiter put into ${seg.label ? `"${seg.label}"` : `segment ${seg.index + 1}`} beside "${places[i].station}" as a slip element and the changed case rerun in time`,
+      segment: x.segment,
+      modelledFrom: x.from,
+      modelledTo: x.to,
+      modelledInExisting: x.existing,
+      yieldRatio: x.yieldRatio,
+      runPeaks: x.runPeaks,
+      dampingWork: x.dampingWork,
+      ...(x.stopWave ? { stopWave: x.stopWave } : {}),
+    };
+  });
 }
 
 /** The energy method's limiter slip. Parts nearer the stop than the limiter still drive the shaft unlimited; their energy is not the limiter's. */
-export function energyLimiterSlip(r: Results, place: LimiterPlace, setting: number): LimiterSlip {
+export function energyLimiterSlip(r: Pick<Results, 'case' | 'sides'>, place: LimiterPlace, setting: number): LimiterSlip {
   const side = r.sides.find((s) => s.side === place.side)!;
   const stations = r.case.stations;
   const stop = stations.find((s) => s.name === r.case.stop.at)!;

@@ -1,5 +1,6 @@
 import { materialFamily } from '../materials/material-family.ts';
 import type { SideName } from '../model/shaft-model.ts';
+import type { CombinedOption } from './combined-options.ts';
 import type { KeyFuse } from './key-fuse.ts';
 import type { ResizeResult } from './resize-result.ts';
 import type { RunningCheck } from './running-check.ts';
@@ -10,9 +11,9 @@ import { sideYieldRatio } from './side-ratio.ts';
 // given to three significant figures; torques and sizes are the views' to show in the case's units.
 
 /** A resize result before its options are flagged and one is picked. */
-export type Unflagged = Omit<ResizeResult, 'scaleSide' | 'criticalSegment' | 'materials' | 'limiter' | 'keys' | 'recommended' | 'pickRule'> & {
+export type Unflagged = Omit<ResizeResult, 'scaleSide' | 'criticalSegment' | 'materials' | 'limiter' | 'keys' | 'combined' | 'recommended' | 'pickRule'> & {
   [K in 'scaleSide' | 'criticalSegment' | 'limiter']: Omit<ResizeResult[K], 'flags'>;
-} & { materials: Omit<ResizeResult['materials'][number], 'flags'>[]; keys: KeyFuse[] };
+} & { materials: Omit<ResizeResult['materials'][number], 'flags'>[]; keys: KeyFuse[]; combined: CombinedOption[] };
 
 /** Relative slack on "keeps the factor": a ratio at 1/N to rounding is within it. */
 const SLACK = 1e-9;
@@ -106,5 +107,32 @@ export function withFlags(z: Unflagged): Omit<ResizeResult, 'recommended' | 'pic
     ],
   }));
 
-  return { ...z, scaleSide: { ...s, flags: scaleFlags }, criticalSegment: { ...k, flags: criticalFlags }, materials, limiter: { ...l, flags: limiterFlags }, keys };
+  const combined = z.combined.map((o) => ({ ...o, flags: combinedFlags(o, N, z.maxScale) }));
+
+  return { ...z, scaleSide: { ...s, flags: scaleFlags }, criticalSegment: { ...k, flags: criticalFlags }, materials, limiter: { ...l, flags: limiterFlags }, keys, combined };
+}
+
+/** A combined option's flags, by the rules of the single options: its factor in a repeat and in running, each limiter's window and reach, a segment grown past max_scale. */
+function combinedFlags(o: CombinedOption, designFactor: number, maxScale: number): string[] {
+  const wave = o.limiters.find((l) => l.slip.stopWave && l.yieldRatio * designFactor > 1 + SLACK)?.slip.stopWave;
+  return [
+    ...o.segments
+      .filter((g) => g.growth > maxScale + SLACK)
+      .map(
+        (g) =>
+          `impractical: ${g.segment.label ? `"${g.segment.label}"` : `segment ${g.segment.index + 1}`} would grow ×${r3(g.growth)}, beyond analysis.max_scale ${r3(maxScale)}; no bearing, hub or housing of the machine takes that`,
+      ),
+    ...factorFlag(o.yieldRatio, designFactor).map((f) => (wave ? `${f} (the instantaneous stop's stress wave in ${wave.piece}, which no limiter cuts)` : f)),
+    ...runningFlag(o.running, designFactor),
+    ...o.limiters.flatMap((l) => [
+      ...(l.min !== undefined && l.setting < l.min * (1 - SLACK) ? [`the limiter at "${l.station}" is set below the lowest setting that runs the machine (the running torque × service factor)`] : []),
+      ...(l.setting > l.max * (1 + SLACK) ? [`the limiter at "${l.station}" is set above what the shaft from there to the stop allows at N = ${r3(designFactor)}`] : []),
+      ...(l.unlimitedStations.length > 0
+        ? [`the parts at ${l.unlimitedStations.map((n) => `"${n}"`).join(', ')} lie between the limiter at "${l.station}" and the stop and still drive the shaft unlimited`]
+        : []),
+    ]),
+    ...o.otherSides
+      .filter((s) => s.yieldRatio * designFactor > 1 + SLACK)
+      .map((s) => `does not protect side ${s.side} of the stop (stress / shear yield ${r3(s.yieldRatio)}): that side needs its own`),
+  ];
 }

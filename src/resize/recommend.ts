@@ -9,7 +9,7 @@ import { sideYieldRatio } from './side-ratio.ts';
  * because then no practical shaft survives a repeat and only limiting the torque does.
  */
 export const PICK_RULE =
-  'The pick is the least change that keeps the design factor N both in a repeat of the incident and under the running torque, with no flag against it. In order of change: the present sizes and material, where they already keep N; another material of the same family on the same drawing; the critical segment alone; every segment of the side scaled; a torque limiter. Where the side would have to grow by more than analysis.max_scale, the torque limiter is tried first.';
+  'The pick is the least change that keeps the design factor N both in a repeat of the incident and under the running torque, with no flag against it. In order of change: the present sizes and material, where they already keep N; another material of the same family on the same drawing; the critical segment alone; every segment of the side scaled; a torque limiter. Where the side would have to grow by more than analysis.max_scale, the torque limiter is tried first. Where none passes, the combinations: a limiter (one a side where both need one) at a stated setting on a like-for-like shaft, then with a stronger material of the same family, then with larger pieces.';
 
 interface Candidate {
   option: OptionId;
@@ -64,9 +64,25 @@ export function recommendOption(z: Omit<ResizeResult, 'recommended' | 'pickRule'
     flags: l.flags,
     why: `a torque limiter at "${l.station}" holds a repeat of the incident to a stress / shear yield of ${r3(l.yieldRatio)} against ${allowed} with the present sizes${l.min === undefined ? '; its lowest setting is not known until the running torque is' : ''}${s.practical ? '' : `, where the side would have to grow ×${r3(s.s)}, beyond analysis.max_scale ${r3(s.maxScale)}, for a shaft alone to survive`}`,
   };
-  const order = s.practical ? [present, ...materials, critical, scale, limiter] : [present, limiter, ...materials, critical, scale];
+  const combined = z.combined.map((o): Candidate => ({ option: o.option, flags: o.flags, why: combinedWhy(z, o, running) }));
+  // The combinations are made only where no option alone passes (resizeCase), so they come last.
+  const order = [...(s.practical ? [present, ...materials, critical, scale, limiter] : [present, limiter, ...materials, critical, scale]), ...combined];
   const pick = order.find((c) => c.flags.length === 0);
   return pick && { option: pick.option, reason: `${pick.why}. It is the least change by the rule that passes every check.` };
+}
+
+/** Why a combined option, in words: its ratio, and what the limiter alone lacked (what it combines is the change's to say). */
+function combinedWhy(z: Omit<ResizeResult, 'recommended' | 'pickRule'>, o: ResizeResult['combined'][number], running: (keeps: boolean | undefined, factor: number | undefined) => string): string {
+  const alone =
+    z.limiter.flags.length > 0
+      ? `, where the limiter alone at the top of its window does not (it ${z.limiter.flags[0]
+          .split(/[:(]/)[0]
+          .trim()
+          .replace(/^its window is empty$/, 'has an empty window')
+          .replace(/^does not/, 'does not')})`
+      : '';
+  const what = o.option === 'limiter_setting' ? 'a like-for-like shaft' : o.option === 'limiter_material' ? `a shaft of ${o.material!.key}, the same family as the present one,` : 'the larger pieces';
+  return `with ${what} the ${o.limiters.length > 1 ? 'limiters hold' : 'limiter holds'} a repeat of the incident to a stress / shear yield of ${r3(o.yieldRatio)} against ${r3(1 / z.designFactor)}${alone}; ${running(o.running.keeps, o.running.factorWithKt)}`;
 }
 
 function runningFlags(keeps: boolean | undefined): string[] {

@@ -2,7 +2,9 @@ import type { Case } from '../case/case.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import type { Results } from '../results/results.ts';
 import { runningTorque } from '../results/running-torque.ts';
+import { combinedOptions } from './combined-options.ts';
 import { criticalSegment } from './critical-segment.ts';
+import { fuseOrder } from './fuse-order.ts';
 import { designCheck, type DesignCheck } from './design-run.ts';
 import { guardingRecommendations } from './guarding.ts';
 import { keyFuses } from './key-fuse.ts';
@@ -27,7 +29,9 @@ export interface ResizeOptions {
  * segment, another material, a torque limiter, the key as a fuse; each checked by rerunning the
  * changed case through the engine against a repeat of the incident, and under the running torque;
  * each flagged where it is not advisable (src/resize/option-flags.ts) and one picked by the stated
- * rule (src/resize/recommend.ts, `PICK_RULE`).
+ * rule (src/resize/recommend.ts, `PICK_RULE`). Where no option alone passes, the combined options
+ * (src/resize/combined-options.ts) are made, flagged by the same rules, and the rule picks among
+ * all of them.
  * Pure: `results` is analyseCase(c).
  */
 export function resizeCase(c: Case, results: Investigation, options: ResizeOptions = {}): ResizeResult {
@@ -44,9 +48,11 @@ export function resizeCase(c: Case, results: Investigation, options: ResizeOptio
   const critical = criticalSegment(c, results, designFactor);
   const limiter = torqueLimiter(c, results, running, designFactor, serviceFactor);
   const wheels = ratedSpeedChecks(c);
-  const limited = { station: limiter.station, setting: limiter.max, sidePeakTorque: results.sides.find((s) => s.side === limiter.side)!.peakTorque };
+  const limited = { station: limiter.station, setting: limiter.max, sidePeakTorque: limiter.slip.unlimitedTorque };
 
-  const flagged = withFlags({
+  const materials = otherMaterials(c, designFactor);
+
+  const singles = withFlags({
     results,
     designFactor,
     serviceFactor,
@@ -54,15 +60,20 @@ export function resizeCase(c: Case, results: Investigation, options: ResizeOptio
     present: { running: runningCheck(c, running, designFactor) },
     scaleSide: { ...scale, ...effects(scale.stockRerun) },
     criticalSegment: { ...critical, ...(critical.stockRerun ? effects(critical.stockRerun) : {}) },
-    materials: otherMaterials(c, designFactor).map((m) => ({ ...m, ...effects(m.rerun) })),
-    limiter: { ...limiter, running: runningCheck(c, running, designFactor) },
+    materials: materials.map((m) => ({ ...m, ...effects(m.rerun) })),
+    limiter: { ...limiter, running: runningCheck(c, running, designFactor), fuses: fuseOrder(c, c, results.finding, limiter.station, limiter.slip, designFactor) },
     keys: keyFuses(c, results, limited, running),
+    combined: [],
     ratedSpeed: wheels,
     guarding: guardingRecommendations(c, wheels),
     stockSeries: STOCK_SERIES[c.units].text,
     notes: resizeNotes(results, limiter.slip.slipMethod === 'dynamic model', designFactor, STOCK_SERIES[c.units].text),
     cautions: results.cautions,
   });
+  const single = recommendOption(singles);
+  if (single) return { ...singles, recommended: single, pickRule: PICK_RULE };
+  // No option alone passes: the combinations, flagged by the same rules (computed only here, for their cost).
+  const flagged = withFlags({ ...singles, combined: combinedOptions({ c, results, running, designFactor, serviceFactor, limiter, materials }) });
   return { ...flagged, recommended: recommendOption(flagged), pickRule: PICK_RULE };
 }
 

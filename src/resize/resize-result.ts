@@ -1,5 +1,7 @@
 import type { Investigation } from '../finding/investigation.ts';
+import type { CombinedId, CombinedOption } from './combined-options.ts';
 import type { CriticalSegmentOption } from './critical-segment.ts';
+import type { FuseOrder } from './fuse-order.ts';
 import type { Recommendation } from './guarding.ts';
 import type { KeyFuse } from './key-fuse.ts';
 import type { MaterialOption } from './other-materials.ts';
@@ -22,10 +24,11 @@ export interface Flagged {
 
 /**
  * An option as the result names it: `present` (the present sizes and material), `scale_side`,
- * `critical_segment`, `material:<key>` (one of `materials`, by its key) or `limiter`, the names of
- * the JSON's blocks. A key is never picked (it is no dependable fuse), so it has no id.
+ * `critical_segment`, `material:<key>` (one of `materials`, by its key), `limiter`, or a combined
+ * option (`limiter_setting`, `limiter_material`, `limiter_segments`, one of `combined`), the names
+ * of the JSON's blocks. A key is never picked (it is no dependable fuse), so it has no id.
  */
-export type OptionId = 'present' | 'scale_side' | 'critical_segment' | 'limiter' | `material:${string}`;
+export type OptionId = 'present' | 'scale_side' | 'critical_segment' | 'limiter' | `material:${string}` | CombinedId;
 
 /** The option the rule picks (src/resize/recommend.ts), with why. */
 export interface Recommended {
@@ -49,8 +52,10 @@ export interface ResizeResult {
   scaleSide: ScaleSideOption & OptionEffects & Flagged;
   criticalSegment: CriticalSegmentOption & Partial<OptionEffects> & Flagged;
   materials: (MaterialOption & OptionEffects & Flagged)[];
-  limiter: LimiterOption & { running: RunningCheck } & Flagged;
+  limiter: LimiterOption & { running: RunningCheck; fuses: FuseOrder } & Flagged;
   keys: (KeyFuse & Flagged)[];
+  /** A limiter at a stated setting with the present or a stronger shaft (src/resize/combined-options.ts), where they differ from the single options. */
+  combined: (CombinedOption & Flagged)[];
   /** The one option the rule picks; undefined where every option has a flag. */
   recommended: Recommended | undefined;
   /** The rule of the pick, in words (`PICK_RULE`). */

@@ -1,5 +1,6 @@
 import type { Case } from '../case/case.ts';
 import type { SideName } from '../model/shaft-model.ts';
+import type { SideResult } from '../physics/energy-method.ts';
 import type { Results } from '../results/results.ts';
 import type { RunningTorque } from '../results/running-torque.ts';
 import { limiterSlip, type LimiterSlip } from './limiter-slip.ts';
@@ -65,14 +66,7 @@ export function torqueLimiter(c: Case, r: Results, running: RunningTorque | unde
   const otherSides = r.sides.filter((s) => s.side !== side).map((s) => ({ side: s.side, yieldRatio: Math.max(...s.pieces.map((p) => p.yieldRatio)) }));
 
   const slip = limiterSlip(r, place, max);
-  // Pieces between the limiter and the stop carry the held torque; any others keep the incident's.
-  const reach = Math.abs(at.at - stop.at) + 1e-9;
-  const energyYieldRatio = Math.max(
-    ...sideResult.pieces.map((p) => {
-      const inRun = Math.max(Math.abs(p.piece.start - stop.at), Math.abs(p.piece.end - stop.at)) <= reach;
-      return inRun ? (p.yieldRatio * slip.peakTorque) / sideResult.peakTorque : p.yieldRatio;
-    }),
-  );
+  const energyYieldRatio = limitedYieldRatio(c, sideResult, station, slip.peakTorque);
   const yieldRatio = slip.yieldRatio ?? energyYieldRatio;
   // Settings spaced evenly on a log scale, from well below the window to past the unlimited peak.
   const low = Math.min(max, min ?? max) / 6;
@@ -96,4 +90,20 @@ export function torqueLimiter(c: Case, r: Results, running: RunningTorque | unde
     otherSides,
     sweep,
   };
+}
+
+/**
+ * The energy method's highest stress / shear yield on a side with a limiter at `station` holding
+ * the run from there to the stop to `heldTorque`: the pieces of that run scale with the held
+ * torque, any others keep the incident's.
+ */
+export function limitedYieldRatio(c: Case, side: SideResult, station: string, heldTorque: number): number {
+  const stop = c.stations.find((s) => s.name === c.stop.at)!;
+  const reach = Math.abs(c.stations.find((s) => s.name === station)!.at - stop.at) + 1e-9;
+  return Math.max(
+    ...side.pieces.map((p) => {
+      const inRun = Math.max(Math.abs(p.piece.start - stop.at), Math.abs(p.piece.end - stop.at)) <= reach;
+      return inRun ? (p.yieldRatio * heldTorque) / side.peakTorque : p.yieldRatio;
+    }),
+  );
 }

@@ -20,6 +20,8 @@ function repeatRatio(z: ResizeResult, id: OptionId): number {
   if (id === 'scale_side') return sideYieldRatio(z.scaleSide.stockRerun, z.scaleSide.side);
   if (id === 'critical_segment') return sideYieldRatio(z.criticalSegment.stockRerun!, z.criticalSegment.side);
   if (id === 'limiter') return z.limiter.yieldRatio;
+  const o = z.combined.find((x) => x.option === id);
+  if (o) return o.yieldRatio;
   return z.materials.find((m) => `material:${m.material.key}` === id)!.yieldRatio;
 }
 
@@ -27,7 +29,7 @@ function repeatRatio(z: ResizeResult, id: OptionId): number {
 export function recommendedRemedy(z: ResizeResult): RemedyWords | undefined {
   const p = z.recommended;
   if (!p) return undefined;
-  const replace = z.results.finding.action === 'replace' && p.option === 'limiter' ? 'Replace the shaft and ' : '';
+  const replace = z.results.finding.action === 'replace' && (p.option === 'limiter' || p.option === 'limiter_setting') ? 'Replace the shaft and ' : '';
   const change = recommendedChange(z, p.option).replace(/\.$/, '');
   return {
     option: p.option,

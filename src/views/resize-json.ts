@@ -1,10 +1,11 @@
 import type { YieldCriterion } from '../case/case.ts';
+import type { FuseOrder } from '../resize/fuse-order.ts';
 import type { KeyFuse, KeyStress } from '../resize/key-fuse.ts';
 import type { Flagged, ResizeResult } from '../resize/resize-result.ts';
 import type { RunningCheck } from '../resize/running-check.ts';
 import { sideOf, sideYieldRatio } from '../resize/side-ratio.ts';
 import { resultsToJson } from './results-json.ts';
-import { criticalSegmentSentence, limiterSentences, recommendedChange, materialsSentence, scaleSideSentence } from './resize-words.ts';
+import { combinedSentences, criticalSegmentSentence, limiterSentences, recommendedChange, materialsSentence, scaleSideSentence } from './resize-words.ts';
 
 /** The `resize --json` object: the `check --json` object with `resize` added. SI, units in key names. */
 export function resizeToJson(z: ResizeResult): Record<string, unknown> {
@@ -81,13 +82,45 @@ export function resizeJson(z: ResizeResult): Record<string, unknown> {
       modelled_from_m: l.slip.modelledFrom ?? null,
       modelled_to_m: l.slip.modelledTo ?? null,
       flags: l.flags,
+      fuses: fusesJson(l.fuses),
       reason: limiterSentences(z).join(' '),
     },
+    combined: z.combined.map((o) => ({
+      option: o.option,
+      material: o.material?.key ?? null,
+      segments: o.segments.map((g) => ({ segment: g.segment.index, diameter_m: g.segment.diameter, stock_diameter_m: g.stockDiameter, growth: g.growth })),
+      limiters: o.limiters.map((x) => ({
+        at: x.station,
+        side: x.side,
+        setting_Nm: x.setting,
+        setting_rule: x.settingRule,
+        min_Nm: x.min ?? null,
+        max_Nm: x.max,
+        peak_torque_Nm: x.slip.peakTorque,
+        yield_ratio: x.yieldRatio,
+        slip_energy_J: x.slip.slipEnergy,
+        slip_angle_rad: x.slip.slipAngle,
+        slip_method: x.slip.slipMethod,
+        fuses: fusesJson(x.fuses),
+      })),
+      yield_ratio: o.yieldRatio,
+      running: runningJson(o.running),
+      flags: o.flags,
+      reason: combinedSentences(z, o).join(' '),
+    })),
     key: z.keys.length > 0 ? keyJson(z.keys[0], z.results.case.analysis.criterion) : null,
     keys: z.keys.map((k) => keyJson(k, z.results.case.analysis.criterion)),
     rated_speed: z.ratedSpeed.map((w) => ({ station: w.station, part: w.part, speed_rad_s: w.speed, rated_speed_rad_s: w.ratedSpeed, over: w.over })),
     guarding: z.guarding.map((g) => `${g.topic}: ${g.text}`),
     notes: z.notes,
+  };
+}
+
+function fusesJson(f: FuseOrder): Record<string, unknown> {
+  return {
+    setting_Nm: f.setting,
+    order: f.steps.map((s) => ({ element: s.element, kind: s.kind, capacity_Nm: s.capacity, multiple_of_setting: s.multiple, seat_changed: s.seatChanged })),
+    uprate: f.uprate.map((s) => ({ element: s.element, kind: s.kind, capacity_Nm: s.capacity, needed_Nm: s.needed })),
   };
 }
 

@@ -2,7 +2,7 @@ import type { OptionId, ResizeResult } from '../resize/resize-result.ts';
 import { sideOf, sideYieldRatio } from '../resize/side-ratio.ts';
 import type { StiffnessChange } from '../resize/stiffness-change.ts';
 import { show, sig } from './display-units.ts';
-import { runningWords, segName } from './resize-words.ts';
+import { combinedName, runningWords, segName } from './resize-words.ts';
 import { showDiameter } from './show-diameter.ts';
 
 /** One option as a row of the options table; every cell is text. */
@@ -105,6 +105,24 @@ export function optionRows(z: ResizeResult): OptionRow[] {
     running: runningWords(l.running, u),
     stiffness: 'unchanged',
   });
+
+  for (const o of z.combined) {
+    const settings = o.limiters.map((x) => `set ${show(x.setting, 'torque', u)}`).join(', ');
+    const shaft =
+      o.option === 'limiter_setting'
+        ? 'present shaft'
+        : o.option === 'limiter_material'
+          ? o.material!.key
+          : o.segments.map((g) => `${segName(g.segment)} Ø${showDiameter(g.segment.diameter, u)} → ${showDiameter(g.stockDiameter, u)}`).join(', ');
+    rows.push({
+      option: `${combinedName(o)}${mark(o.option, o.flags)}`,
+      change: `${settings}; ${shaft}`,
+      yieldRatio: sig(o.yieldRatio),
+      peakTorque: show(Math.max(...o.limiters.map((x) => x.slip.peakTorque)), 'torque', u),
+      running: runningWords(o.running, u),
+      stiffness: o.option === 'limiter_setting' ? 'unchanged' : '—',
+    });
+  }
 
   for (const key of z.keys) {
     rows.push({

@@ -1,7 +1,20 @@
 import type { ResizeResult } from '../resize/resize-result.ts';
 import { show, sig } from './display-units.ts';
 import { optionRows, ROW_HEADINGS, type OptionRow } from './resize-rows.ts';
-import { criticalSegmentSentence, factorSentence, flaggedOptions, recommendedSentence, keySentences, limiterSentences, materialsSentence, scaleSideSentence } from './resize-words.ts';
+import {
+  COMBINED_WHY,
+  combinedName,
+  combinedSentences,
+  criticalSegmentSentence,
+  factorSentence,
+  fuseWords,
+  flaggedOptions,
+  recommendedSentence,
+  keySentences,
+  limiterSentences,
+  materialsSentence,
+  scaleSideSentence,
+} from './resize-words.ts';
 import { findingSentence } from './finding-words.ts';
 import { textTable } from './text-table.ts';
 
@@ -50,7 +63,11 @@ export function renderResize(z: ResizeResult): string {
       ...z.materials.map((x) => [x.material.key, sig(x.yieldRatio), x.keepsFactor ? 'yes' : 'no', `×${sig(x.change.peakTorque)}`, x.material.strengthBasis ?? '—']),
     ]),
   );
-  section('Torque limiter or slip coupling', limiterSentences(z));
+  section('Torque limiter or slip coupling', [...limiterSentences(z), `In the order of giving way, ${fuseWords(z.limiter.fuses, u)}.`]);
+  if (z.combined.length > 0) {
+    out.push('', 'Combined options', `  ${COMBINED_WHY}`);
+    for (const o of z.combined) section(`  ${combinedName(o)}`, combinedSentences(z, o));
+  }
   if (z.keys.length === 0) section('The key as fuse', ['No key is given: add key: { width, height, length, material } to the station whose hub is keyed to check it.']);
   for (const k of z.keys) section('The key as fuse', keySentences(z, k));
   section(

@@ -1,4 +1,6 @@
 import type { Case } from '../case/case.ts';
+import type { CombinedOption, SetLimiter } from '../resize/combined-options.ts';
+import type { FuseOrder } from '../resize/fuse-order.ts';
 import type { KeyFuse } from '../resize/key-fuse.ts';
 import type { OptionId, ResizeResult } from '../resize/resize-result.ts';
 import { sideYieldRatio } from '../resize/side-ratio.ts';
@@ -152,7 +154,75 @@ export function optionName(z: ResizeResult, id: OptionId): string {
   if (id === 'scale_side') return `Scale side ${z.scaleSide.side} ×${sig(z.scaleSide.s)}`;
   if (id === 'critical_segment') return `Resize ${segName(z.criticalSegment.segment)} only`;
   if (id === 'limiter') return `Torque limiter at "${z.limiter.station}"`;
+  const o = z.combined.find((x) => x.option === id);
+  if (o) return combinedName(o);
   return `Material ${id.slice('material:'.length)}`;
+}
+
+/** A combined option's name: "Limiter at "drive sheave" at a stated setting, like-for-like shaft". */
+export function combinedName(o: CombinedOption): string {
+  const at = `${o.limiters.length > 1 ? 'Limiters' : 'Limiter'} at ${o.limiters.map((l) => `"${l.station}"`).join(' and ')}`;
+  if (o.option === 'limiter_setting') return `${at}, stated setting`;
+  if (o.option === 'limiter_material') return `${at} + ${o.material!.key}`;
+  return `${at} + larger ${o.segments.map((g) => segName(g.segment)).join(', ')}`;
+}
+
+/** "set at 2140 N·m, the middle of its window 1500 to 3030 N·m": a limiter's stated setting in words. */
+export function settingWords(l: SetLimiter, u: Case['units']): string {
+  const at = `set at ${show(l.setting, 'torque', u)}`;
+  if (l.presentWindow) return `${at}, the ${l.settingRule.replace('the window', "the present shaft's window")}, where this shaft allows up to ${show(l.max, 'torque', u)}`;
+  if (l.settingRule === 'middle of the window') return `${at}, the middle of its window ${show(l.min!, 'torque', u)} to ${show(l.max, 'torque', u)}`;
+  if (l.settingRule === 'top of the window') return `${at}, the top of its window${l.min === undefined ? ' (its lower end needs the running torque)' : ''}`;
+  return `${at}, the lowest setting that runs the machine (the running torque × the service factor), with the shaft's window reaching ${show(l.max, 'torque', u)}`;
+}
+
+/** "the limiter at "drive sheave" is the fuse at 2140 N·m; behind it the shaft in "sheave seat" gives way at 2.13 × the setting, …", and what must be stronger. */
+export function fuseWords(f: FuseOrder, u: Case['units']): string {
+  return `the limiter at "${f.station}" is the fuse at ${show(f.setting, 'torque', u)}${f.steps.length + f.uprate.length > 0 ? `; ${ladderWords(f, u)}` : ''}`;
+}
+
+/** "behind it the shaft in "sheave seat" gives way at 2.13 × the setting, the key at "drive sheave" at 2.73 ×; fit a coupling of rating at least …". */
+export function ladderWords(f: FuseOrder, u: Case['units']): string {
+  const steps = f.steps.map(
+    (s, i) => `${s.element} ${i === 0 ? 'gives way ' : ''}at ${sig(s.multiple)} ×${i === 0 ? ' the setting' : ''}${s.seatChanged ? ' (at its present size: size it again for the new seat)' : ''}`,
+  );
+  const uprate = f.uprate.map((s) =>
+    s.kind === 'coupling'
+      ? `fit a coupling of rating at least ${show(s.needed, 'torque', u)} in place of ${s.element}`
+      : `${s.element} must carry ${show(s.needed, 'torque', u)} (N × the repeat's torque through it; it gives way at ${show(s.capacity, 'torque', u)})`,
+  );
+  return [...(steps.length > 0 ? [`behind it ${steps.join(', ')}`] : []), ...uprate].join('; ');
+}
+
+/** A combined option in words: its shaft, each limiter's setting, slip and the order of giving way behind it. */
+export function combinedSentences(z: ResizeResult, o: CombinedOption): string[] {
+  const u = z.results.case.units;
+  const shaft =
+    o.option === 'limiter_setting'
+      ? 'A shaft of the present sizes and material (like for like).'
+      : o.option === 'limiter_material'
+        ? `A shaft of ${o.material!.name} (${o.material!.key}) on the present drawing: the weakest of the present shaft's family in the library that carries N × each setting with the overshoot the last rerun showed.`
+        : `The present material, with ${o.segments.map((g) => `${segName(g.segment)} Ø${showDiameter(g.segment.diameter, u)} → ${showDiameter(g.stockDiameter, u)} (×${sig(g.growth)}, stock size, bore ratio kept)`).join('; ')}: each piece of the limited run that could not carry N × its setting with the overshoot made larger.`;
+  const out = [shaft];
+  for (const l of o.limiters) {
+    const s = l.slip;
+    out.push(
+      `The limiter at "${l.station}" (side ${l.side}), ${settingWords(l, u)}: in a repeat of the incident the peak torque between it and the stop is ${show(s.peakTorque, 'torque', u)}${s.slipEnergy > 0 ? `, it slips through ${show(s.slipAngle, 'angle', u)} and dissipates ${show(s.slipEnergy, 'energy', u)}` : ' and it does not slip'}; side ${l.side}'s stress / shear yield ${sig(l.yieldRatio)} (${s.method}). In the order of giving way, ${fuseWords(l.fuses, u)}.`,
+    );
+  }
+  for (const x of o.otherSides) if (x.yieldRatio * z.designFactor > 1 + 1e-9) out.push(`Side ${x.side} (stress / shear yield ${sig(x.yieldRatio)}) has no limiter in this option.`);
+  return out;
+}
+
+/** Which combinations are made and why, one sentence for the views' heading of the combined options. */
+export const COMBINED_WHY =
+  "Made where no option alone passes: a torque limiter (one on each side of the stop that needs one) set at a stated torque inside its window (its middle on a log scale where both ends are known), then, where that fails, with a stronger material of the same family, then with the pieces that cannot carry it made larger. A key or a shear pin is not combined as the fuse: a key is no dependable fuse, and a pin that parts leaves the stop's own stress wave as it is.";
+
+/** Where resize picks nothing: why, in plain words (the combination that came nearest, and what stops it). */
+export function noPickSentence(z: ResizeResult): string {
+  const nearest = [...z.combined].sort((a, b) => a.yieldRatio - b.yieldRatio)[0];
+  if (!nearest) return 'none of the options alone; each has a flag. Combine them (for example a stronger shaft and a torque limiter) and check the combination with the machine builder.';
+  return `none of the options alone or combined passes every check. The nearest, ${combinedName(nearest).replace(/^L/, 'l')}: ${nearest.flags[0]}. Decide the remedy with the machine builder.`;
 }
 
 /** Every option with its flags, in the table's order, those without a flag left out. */
@@ -163,13 +233,14 @@ export function flaggedOptions(z: ResizeResult): { name: string; flags: string[]
     ...z.materials.map((m) => ({ name: `Material ${m.material.key}`, flags: m.flags })),
     { name: optionName(z, 'limiter'), flags: z.limiter.flags },
     ...z.keys.map((k) => ({ name: `Key as fuse at "${k.station}"`, flags: k.flags })),
+    ...z.combined.map((o) => ({ name: combinedName(o), flags: o.flags })),
   ].filter((o) => o.flags.length > 0);
 }
 
 /** The pick with its key figure in the case's units: "Recommended: fit a torque limiter at …". */
 export function recommendedSentence(z: ResizeResult): string {
   const p = z.recommended;
-  if (!p) return 'Recommended: none of the options alone; each has a flag below. Combine them (for example a stronger shaft and a torque limiter) and check the combination, with the machine builder.';
+  if (!p) return `Recommended: ${noPickSentence(z)}`;
   return `Recommended: ${recommendedChange(z, p.option)} Why: ${p.reason}`;
 }
 
@@ -192,6 +263,17 @@ export function recommendedChange(z: ResizeResult, id: OptionId): string {
         ? `set at no more than ${show(l.max, 'torque', u)} (the lower end of its window needs the running torque)`
         : `set within ${show(l.min, 'torque', u)} to ${show(l.max, 'torque', u)}, checked at ${show(l.slip.setting, 'torque', u)}`;
     return `fit a torque limiter at "${l.station}", ${window}, on a shaft of the present sizes and material.`;
+  }
+  const o = z.combined.find((x) => x.option === id);
+  if (o) {
+    const limiters = o.limiters.map((l) => `a torque limiter at "${l.station}" ${settingWords(l, u)}`).join(' and ');
+    const shaft =
+      o.option === 'limiter_setting'
+        ? 'a shaft of the present sizes and material'
+        : o.option === 'limiter_material'
+          ? `a shaft of ${o.material!.name} (${o.material!.key}) on the present drawing`
+          : `the present material with ${o.segments.map((g) => `${segName(g.segment)} Ø${showDiameter(g.segment.diameter, u)} → ${showDiameter(g.stockDiameter, u)}`).join('; ')}`;
+    return `fit ${limiters}, on ${shaft}; ${o.limiters.map((l) => ladderWords(l.fuses, u)).join('; ')}.`;
   }
   const m = z.materials.find((x) => `material:${x.material.key}` === id)!;
   return `make the shaft of ${m.material.name} (${m.material.key}) on the present drawing.`;

@@ -104,9 +104,11 @@ describe('renderReport', () => {
       /\*\*Observed, against the model\*\* .*\n\n- Permanent twist drive sheave – rotor: measured 4°, the model gives 8\.9° at the recorded 420 rpm: less than the recorded speed explains; a stop from 296\.1 rpm would leave it\.\n- Fracture: none found; agrees with the model\./,
     );
     expect(box('sample')).toMatch(/\*\*Disposition: REPLACE THE SHAFT\.\*\* Not fit to return/);
-    // The remedy is resize's pick (none for the granulator: every option alone has a flag), with its figure where there is one.
-    expect(report('sample').data.resize.recommended).toBeUndefined();
-    expect(box('sample')).toMatch(/\*\*Recommended remedy:\*\* none of the options of resize alone; each has a flag\. .*\(\[what goes back in\]\(#recommendations-what-goes-back-in\)\)/);
+    // The remedy is resize's pick (for the granulator a combination: every option alone has a flag), with its figure.
+    expect(report('sample').data.resize.recommended?.option).toBe('limiter_setting');
+    expect(box('sample')).toMatch(
+      /\*\*Recommended remedy:\*\* Replace the shaft and fit a torque limiter at "drive sheave" set at 2140 N·m, the middle of its window .*\(\[what goes back in\]\(#recommendations-what-goes-back-in\)\)/,
+    );
     const picked = CASES.filter((n) => report(n).data.resize.recommended);
     expect(picked.length).toBeGreaterThan(0);
     for (const n of picked) {

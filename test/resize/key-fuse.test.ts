@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runningTorque } from '../../src/results/running-torque.ts';
 import { keyFuses } from '../../src/resize/key-fuse.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 import { rel, run, type Layout } from '../helpers/layout.ts';
 
 const key = (k: string, drive = '{ running_torque: 500 N*m }') => `    drive: ${drive}\n    key: ${k}`;
@@ -17,7 +18,8 @@ const layout = (k: string): Layout => ({
   stop: 'jam',
 });
 const fusesOf = (l: Layout, limiter?: { station: string; setting: number }) => {
-  const { c, r } = run(l);
+  const { c, r: results } = run(l);
+  const r = withFinding(results);
   const lim = limiter && { ...limiter, sidePeakTorque: r.sides[0].peakTorque };
   return { r, fuses: keyFuses(c, r, lim, runningTorque(c)) };
 };
@@ -35,10 +37,11 @@ describe('the key as a fuse', () => {
     expect(k.atRunning!.factor).toBeCloseTo(Math.min(530e6 / Math.sqrt(3) / 41.667e6, 530e6 / 125e6), 3);
   });
 
-  it("under the incident torque the key carries its side's peak torque: τ = 2T/(d·w·l) (Shigley 9th ed. Sec. 7-7)", () => {
+  it("under the incident torque the key carries the torque the finding's drive train gives it: τ = 2T/(d·w·l) (Shigley 9th ed. Sec. 7-7)", () => {
     const { r, fuses } = fusesOf(layout('{ width: 12 mm, height: 8 mm, length: 50 mm, material: aisi-1045-cd }'));
-    const T = r.sides[0].peakTorque;
+    const T = r.finding.driveTrain.find((e) => e.kind === 'key')!.torque;
     expect(fuses[0].incident.torque).toBe(T);
+    expect(T).toBe(r.keys[0].torque);
     expect(rel(fuses[0].incident.shearStress, (2 * T) / (0.04 * 0.012 * 0.05))).toBeLessThan(1e-12);
     expect(rel(fuses[0].incident.bearingStress, (4 * T) / (0.04 * 0.008 * 0.05))).toBeLessThan(1e-12);
   });

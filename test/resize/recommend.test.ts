@@ -67,10 +67,31 @@ describe('the pick of what goes back in, by the stated rule', () => {
     expect(recommendOption(withGoodMaterial)?.option).toBe('limiter');
   });
 
-  it('the granulator: every option has a flag, so none alone is picked', () => {
+  it('the granulator: every option alone has a flag, so the rule goes on to the combinations and picks the limiter at the middle of its window', () => {
     const z = resized('granulator-tramp-metal.yaml');
-    expect(z.recommended).toBeUndefined();
     expect(z.limiter.flags[0]).toMatch(/fails its own design factor: .* 0.717, above the 0.667 .* stress wave in "rotor body", which no limiter cuts/);
+    expect(recommendOption({ ...z, combined: [] })).toBeUndefined();
+    expect(z.recommended?.option).toBe('limiter_setting');
+    const o = z.combined.find((x) => x.option === 'limiter_setting')!;
+    expect(o.flags).toEqual([]);
+    // √(1500 N·m × 3030 N·m): the window's middle on a log scale; its repeat keeps N.
+    expect(o.limiters[0].setting).toBeCloseTo(Math.sqrt(z.limiter.min! * z.limiter.max), 6);
+    expect(o.yieldRatio * 1.5).toBeLessThanOrEqual(1);
+    expect(z.recommended?.reason).toMatch(
+      /with a like-for-like shaft the limiter holds a repeat of the incident to a stress \/ shear yield of 0.482 against 0.667, where the limiter alone at the top of its window does not \(it fails its own design factor\)/,
+    );
+  });
+
+  it('the combinations come after every option alone, in their own order', () => {
+    const z = resized('granulator-tramp-metal.yaml');
+    const o = z.combined[0];
+    const as = (option: 'limiter_setting' | 'limiter_material' | 'limiter_segments', flags: string[]) => ({ ...o, option, flags, material: z.materials[0].material });
+    const walk = (combined: ReturnType<typeof as>[]) => recommendOption({ ...z, combined })?.option;
+    expect(walk([as('limiter_setting', ['test flag']), as('limiter_material', []), as('limiter_segments', [])])).toBe('limiter_material');
+    expect(walk([as('limiter_setting', ['test flag']), as('limiter_material', ['test flag']), as('limiter_segments', [])])).toBe('limiter_segments');
+    // An option alone that passes comes before any combination.
+    const goodMaterial = { ...flagged(z, ['critical', 'scale', 'limiter']), materials: z.materials.map((m) => ({ ...m, flags: m.material.key === 'aisi-4340-qt540' ? [] : ['test flag'] })) };
+    expect(recommendOption({ ...goodMaterial, combined: [as('limiter_setting', [])] })?.option).toBe('material:aisi-4340-qt540');
   });
 
   it('where the present shaft already keeps N, a replacement like for like', () => {

@@ -4,6 +4,7 @@ import { CaseError } from '../../src/case/case-error.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { keyFuses } from '../../src/resize/key-fuse.ts';
+import { withFinding } from '../../src/finding/investigation.ts';
 
 /** Every optional block uncommented (the "#|" taken off, the indentation kept), then the required values filled in as the other template test does. */
 function everyBlock(name: string): string {
@@ -70,7 +71,7 @@ describe('case templates with every optional block filled in with its example va
     // The motor and its belt are in the dynamic model, and the verdict stands on it.
     expect(r.verdictBasis).toBe('dynamic model');
     expect(r.dynamic.slips.map((s) => s.element)).toContain('the belt at "drive pulley"');
-    expect(keyFuses(c, r).map((k) => k.station)).toEqual(['drive pulley']);
+    expect(keyFuses(c, withFinding(r)).map((k) => k.station)).toEqual(['drive pulley']);
     // The gearbox and the backstop are rows of the drive train.
     expect(r.driveTrain.map((e) => e.kind)).toEqual(expect.arrayContaining(['gearbox', 'backstop']));
   });

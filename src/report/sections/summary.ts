@@ -4,6 +4,7 @@ import type { ResizeResult } from '../../resize/resize-result.ts';
 import { show } from '../../views/display-units.ts';
 import { chanceSentence, findingSentence } from '../../views/finding-words.ts';
 import { recommendedRemedy } from '../../views/remedy-words.ts';
+import { noPickSentence } from '../../views/resize-words.ts';
 import { linkTo } from '../anchor.ts';
 import { escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
@@ -108,8 +109,7 @@ function observedLines(r: Investigation): string[] {
 function remedyParagraph(z: ResizeResult): string {
   const remedy = recommendedRemedy(z);
   const link = linkTo(recommendationsSection.title, 'what goes back in');
-  if (!remedy)
-    return `**Recommended remedy:** ${e('none of the options of resize alone; each has a flag. Combine them (for example a stronger shaft and a torque limiter) and check the combination with the machine builder')} (${link}).`;
+  if (!remedy) return `**Recommended remedy:** ${e(noPickSentence(z))} (${link}).`;
   return `**Recommended remedy:** ${e(`${remedy.action}.`)} ${e(`Key figure: ${remedy.figure}. Why this one: ${remedy.why.replace(/\.$/, '')}.`)} (${link})`;
 }
 
