@@ -5,6 +5,8 @@ export interface FormulaSource {
   formula: string;
   /** Book, edition, section or equation; "from memory" where recalled rather than read. */
   source: string;
+  /** Listed only where the case has this element (a fit, a gearbox, a gearbox whose teeth are checked); otherwise always. */
+  only?: 'fit' | 'gearbox' | 'gear teeth';
 }
 
 /**
@@ -109,11 +111,13 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     what: 'Contact pressure of a shrink or press fit (thick-walled cylinders)',
     formula: 'p = (δ_d/2) / [ (R/E_o)·((r_o² + R²)/(r_o² − R²) + ν_o) + (R/E_i)·((R² + r_i²)/(R² − r_i²) − ν_i) ]',
     source: "Shigley's Mechanical Engineering Design, 9th ed., Sec. 3-16, Eq. (3-56) (from memory; equation number: verify)",
+    only: 'fit',
   },
   {
     what: 'Torque a shrink or press fit holds before it slips',
     formula: 'T = π·μ·p·d²·L/2',
     source: 'Shigley 9th ed., Sec. 7-8 (from memory, confident; section number: verify)',
+    only: 'fit',
   },
   {
     what: 'Local stress and strain range at a notch (fatigue of a jam)',
@@ -135,10 +139,12 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     what: "A gear stage's input torque at the incident peak, and the motor's torque passed through it",
     formula: 'T_in = T_out/(η·i) driven forward, T_shaft = η·i·T_motor; η = P_out/P_in',
     source: "The definition of a gear unit's efficiency as output over input power (common practice; Shigley's Mechanical Engineering Design, 9th ed., Ch. 13, worm gearing; from memory)",
+    only: 'gearbox',
   },
   {
     what: "A gear tooth's bending stress (a first estimate)",
     formula: 'σ = W_t/(F·m·Y), W_t = 2T/(m·z); Y for 20° full-depth teeth by tooth count',
     source: "Lewis equation: Shigley's Mechanical Engineering Design, 9th ed., Sec. 14-1, Eq. (14-3) and Table 14-2 (from memory; equation numbers: verify)",
+    only: 'gear teeth',
   },
 ];

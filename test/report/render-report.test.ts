@@ -265,6 +265,9 @@ describe('renderReport', () => {
       'Hyndman & Fan',
     ])
       expect(sources).toContain(s);
+    // The sample (the granulator) has no fit and no gearbox: their formulas are not the report's.
+    expect(report('sample').data.results.fits).toHaveLength(0);
+    for (const s of ['Lamé', 'thick-walled cylinders', 'Lewis equation', "gear unit's efficiency"]) expect(sources).not.toContain(s);
   });
 
   it("the method lists the engine's warnings and the assumptions past yield", () => {

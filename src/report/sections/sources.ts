@@ -6,7 +6,7 @@ import type { ReportSection } from '../report-context.ts';
 /** The mark beside a source of which some value was entered from memory, explained once below the lists. */
 const MARK = ' (†)';
 
-/** Where every formula and every material value comes from: each published source named, and one line on what was entered from memory. */
+/** Where every formula the report used and every material value comes from: each published source named, and one line on what was entered from memory. */
 export const sourcesSection: ReportSection = {
   id: 'sources',
   title: 'Appendix: materials and sources',
@@ -18,7 +18,9 @@ export const sourcesSection: ReportSection = {
     const materials = Object.values(r.case.materials)
       .sort((a, b) => a.key.localeCompare(b.key))
       .map((m) => line(`${m.name} (${m.key})`, m.source));
-    const formulas = FORMULA_SOURCES.map((f) => line(`${f.what}: ${f.formula}`, f.source));
+    // A formula of an element the case does not have is not one this report used.
+    const has = { fit: r.fits.length > 0, gearbox: r.gearboxes.length > 0, 'gear teeth': r.gearboxes.some((g) => g.tooth !== undefined) };
+    const formulas = FORMULA_SOURCES.filter((f) => f.only === undefined || has[f.only]).map((f) => line(`${f.what}: ${f.formula}`, f.source));
     const out = ['**Materials**', bulletList(materials.map((m) => m.text)), '**Formulas**', bulletList(formulas.map((f) => f.text))];
     if ([...materials, ...formulas].some((x) => x.fromMemory)) {
       out.push(
