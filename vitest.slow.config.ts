@@ -1,13 +1,23 @@
 import { defineConfig } from 'vitest/config';
 
-// npm run test:slow: the long statistical checks, left out of the default suite.
+// npm run test:slow: the long statistical checks, the full fuzz of the case reader and the killed
+// report at every step, left out of the default suite.
+const PACKAGE = 'test/slow/package.test.ts';
+
 export default defineConfig({
   test: {
-    include: ['test/slow/**/*.test.ts'],
-    // The 20 000-case fuzz of the case reader runs apart (npm run test:fuzz): one known input still
-    // takes 5–6 s through the dynamic read-back (an engine-speed matter, issue 12), past its 5 s bound.
-    exclude: process.env.SHAFTCASE_FUZZ ? [] : ['test/slow/fuzz-case.test.ts'],
+    // A process per file (process.cpuUsage, the fuzz's bound per input, is then that file's own), and
+    // two at a time: vitest's default on a 2-core machine is one, leaving a core idle through the
+    // fuzz's shards (test/slow/fuzz-case-*.test.ts).
+    pool: 'forks',
+    maxWorkers: 2,
     testTimeout: 600_000,
     env: { TZ: 'UTC' },
+    projects: [
+      // The package test rebuilds dist/ (tsc rewrites every file); it runs first and alone, so no
+      // test that runs the built CLI (the fuzz's processes, the killed report) reads a file mid-write.
+      { extends: true, test: { name: 'build', include: [PACKAGE], sequence: { groupOrder: 0 } } },
+      { extends: true, test: { name: 'slow', include: ['test/slow/**/*.test.ts'], exclude: [PACKAGE, 'node_modules/**'], sequence: { groupOrder: 1 } } },
+    ],
   },
 });

@@ -54,8 +54,13 @@ export class CaseError extends Error {
   }
 }
 
-/** `case.yaml:14:17 shaft.segments[1].diameter: "40" has no unit; …` */
+/**
+ * `case.yaml:14:17 shaft.segments[1].diameter: "40" has no unit; …`: one line, always. A value or
+ * key the message quotes may hold a line break (YAML folds an empty line inside a plain value into
+ * one, and a quoted value may spell "\n"); it is shown as the two characters \n, so no user text
+ * starts a line of its own that reads as another problem.
+ */
 export function formatProblem(file: string, p: CaseProblem): string {
   const where = p.position ? `${file}:${p.position.line}:${p.position.column}` : file;
-  return p.path ? `${where} ${p.path}: ${p.message}` : `${where}: ${p.message}`;
+  return (p.path ? `${where} ${p.path}: ${p.message}` : `${where}: ${p.message}`).replace(/\r\n|\r|\n/g, '\\n');
 }

@@ -115,4 +115,13 @@ describe('parseCase reports each mistake with file:line:column, the field path a
     const text = base + 'observed:\n  photos:\n    - path: ../../etc/passwd\n';
     expect(problems(text).join('\n')).toMatch(/observed\.photos\[0\]\.path: "\.\.\/\.\.\/etc\/passwd" points outside the case folder/);
   });
+
+  it('a value holding a line break (an empty line inside a plain value) is quoted on one line, so each problem stays one line', () => {
+    // Found by the fuzz (seed 99, input 872): "at: jam" followed by an empty line and a deeper
+    // indented word folds into "jam\npar", and the message quoting it spanned two lines.
+    const text = base.replace('  at: jam', '  at: jam\n\n    par');
+    const msgs = problems(text);
+    expect(msgs).toContainEqual(`case.yaml:${lineOf(text, 'at: jam')}:7 stop.at: no station is named "jam\\npar"; give one of "jam", "flywheel"`);
+    for (const m of msgs) expect(m).toMatch(/^case\.yaml:\d+:\d+ \S+: /);
+  });
 });

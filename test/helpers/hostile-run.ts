@@ -1,8 +1,10 @@
 // Runs a case file's text as the CLI's check would, for the hostile-input tests: either it is
-// refused with positioned problems (a CaseError), or it runs to an investigation whose JSON and
-// summary hold only finite numbers. Anything else thrown is a bug and is rethrown.
+// refused with positioned problems (a CaseError), or it runs, with its plausibility warnings, to an
+// investigation whose JSON and summary hold only finite numbers. Anything else thrown is a bug and
+// is rethrown.
 import { CaseError } from '../../src/case/case-error.ts';
 import { parseCase } from '../../src/case/parse-case.ts';
+import { checkPlausibility } from '../../src/case/plausibility.ts';
 import { investigate } from '../../src/finding/investigate.ts';
 import { resultsToJson } from '../../src/views/results-json.ts';
 import { renderSummary } from '../../src/views/summary.ts';
@@ -17,7 +19,8 @@ export function runHostile(text: string, samples = 20): HostileOutcome {
     if (e instanceof CaseError) return { refused: true, message: e.message };
     throw e;
   }
-  const r = investigate(c, { samples });
+  const inputWarnings = { file: 'case.yaml', warnings: checkPlausibility(c, text) };
+  const r = investigate(c, { samples, inputWarnings });
   return { refused: false, json: resultsToJson(r), summary: renderSummary(r) };
 }
 
