@@ -1,6 +1,7 @@
 import type { Results } from '../../results/results.ts';
 import type { DynamicResult } from '../../results/dynamic-result.ts';
 import { show, sig } from '../../views/display-units.ts';
+import { dampingSentence, ringingWords } from '../../views/damping-words.ts';
 import { showSlipAngle } from '../../views/slip-angle.ts';
 import { escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
@@ -66,6 +67,8 @@ export function renderDynamicsBody(r: Results): string {
   }
 
   out.push(...protectionLines(r, d));
+  const damping = [dampingSentence(r), ringingWords(r)].filter((x): x is string => x !== undefined);
+  if (damping.length > 0) out.push('### Damping and ringing', '', ...damping.map((x) => `- ${escapeMarkdown(x)}`), '');
   return out.join('\n') + '\n';
 }
 
