@@ -83,8 +83,12 @@ function readProtection(r: CaseReader, path: (string | number)[]): Pick<Segment,
 }
 
 /**
- * A segment's `coupling: { stiffness, rated_torque, peak_torque }` from the coupling's data sheet;
- * no stiffness: a rigid coupling, checked for its rating only.
+ * A segment's `coupling: { stiffness, rated_torque, peak_torque, damping_ratio }` from the
+ * coupling's data sheet; no stiffness: a rigid coupling, checked for its rating only. The damping is
+ * read as a ratio ζ of critical. Makers of elastomeric couplings often give the relative damping
+ * ψ = ΔW/W_el instead, the energy one cycle dissipates over the elastic energy at its amplitude
+ * (DIN 740-2; from memory, verify); for a viscous damper at resonance ΔW = π·c·ω·A² = 2πζ·k·A² and
+ * W_el = ½k·A², so ψ = 4πζ and ζ = ψ/(4π) (derived here), which the template and the example say.
  */
 function readCoupling(r: CaseReader, path: (string | number)[]): Segment['coupling'] {
   if (!r.map(path, COUPLING_KEYS, { example: 'a mapping such as { stiffness: 120 kN*m/rad, rated_torque: 4 kN*m, peak_torque: 8 kN*m }' })) return undefined;
