@@ -21,7 +21,8 @@ export function dampingSentence(r: Results): string | undefined {
   const d: DynamicDamping = r.dynamic.damping;
   if (!(d.total > 0) || d.dampers.length === 0) return undefined;
   const [first, ...rest] = d.dampers;
-  if (rest.length === 0) return `Damping: ${damperName(first)} (${pct(first.dampingRatio)} of critical) is the model's only damping; it dissipated ${show(d.total, 'energy', r.case.units)} over the window.`;
+  if (rest.length === 0)
+    return `Damping: ${damperName(first)} (${pct(first.dampingRatio)} of critical) is the model's only damping; it dissipated ${show(d.total, 'energy', r.case.units)} over the window.`;
   const head = `${damperName(first)} (${pct(first.dampingRatio)} of critical) took ${pct(first.share)} of the ${show(d.total, 'energy', r.case.units)} the model's damping dissipated over the window`;
   const tail = rest.map((x) => `${damperName(x)} (${pct(x.dampingRatio)}) ${pct(x.share)}`);
   return `Damping: ${[head, ...tail].join('; ')}.`;
