@@ -132,13 +132,13 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     source: 'ASTM E1049-85 (2017), Sec. 5.4.4; Palmgren 1924, Miner 1945 (from memory)',
   },
   {
-    what: 'Fully plastic torque of a keyed seat: the net section, the keyseat removed (numerical integration of the sand heap)',
-    formula: 'T_P = 2τ_Y·∫φ dA (+ 2τ_Y·φ_i·A_bore), φ the distance to the nearest outer boundary',
-    source: 'Nadai, Theory of Flow and Fracture of Solids, vol. 1, 1950 (sand-heap analogy); Hill, The Mathematical Theory of Plasticity, 1950, Ch. VIII (from memory, confident)',
+    what: 'Fully plastic torque of a keyed seat (net section, sand heap)',
+    formula: 'T_P = 2τ_Y·∫φ dA',
+    source: 'Nadai, Theory of Flow and Fracture of Solids, vol. 1, 1950 (from memory, confident)',
   },
   {
-    what: 'Damping of each element of the dynamic model (stiffness-proportional, a ratio per shaft segment and coupling)',
-    formula: 'c_i = (2ζ_i/ω₁)·k_i; in series c_e = k_e²·Σ c_i/k_i²; ζ from a relative damping ψ: ζ = ψ/(4π)',
-    source: 'Clough & Penzien, Dynamics of Structures, Sec. 12-4 (Rayleigh damping); DIN 740-2 (relative damping of flexible couplings) (from memory); the series form and ψ = 4πζ derived',
+    what: 'Damping per element of the dynamic model',
+    formula: 'c_i = (2ζ_i/ω₁)·k_i; ζ = ψ/(4π)',
+    source: 'Clough & Penzien, Dynamics of Structures, Sec. 12-4; DIN 740-2 (from memory)',
   },
 ];

@@ -15,7 +15,6 @@ import { yieldPath, type YieldPath } from './yield-path.ts';
 import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
 import { solveDynamics } from './dynamic-solve.ts';
-import { keyedSeatNotes } from './side-balance.ts';
 import { dynamicDamping, type DynamicDamping } from './dynamic-damping.ts';
 
 /** The dynamic model's result for one piece of shaft (a segment cut at stations). */
@@ -271,7 +270,6 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
       c,
       chain.shaftInertia,
       chain.drives.flatMap((d) => d.assumptions),
-      chain.pieces.map((p) => p.piece),
     ),
     notes: [...runningChecks(chain, c.speed), ...solve.notes, ...chain.drives.flatMap((d) => d.warnings)],
   };
@@ -311,12 +309,11 @@ function capitalise(s: string): string {
   return s.charAt(0).toUpperCase() + s.slice(1);
 }
 
-function assumptionsOf(c: Case, shaftInertia: boolean, drives: string[], pieces: readonly ShaftPiece[]): string[] {
+function assumptionsOf(c: Case, shaftInertia: boolean, drives: string[]): string[] {
   return [
     (c.analysis.dynamicPlasticity ?? DEFAULT_DYNAMIC_PLASTICITY)
       ? "The shaft is a chain of lumped inertias joined by torsional springs (k = G·J_p/L per element) that yield as the net section does, elastic–plastic at the shear yield of the criterion, with Masing's rule on reversals (analysis.dynamic_plasticity: true); parts count at their station as J·ratio², and gears and couplings are rigid."
       : 'The shaft is a chain of lumped inertias joined by elastic torsional springs (k = G·J_p/L per element); parts count at their station as J·ratio², and gears and couplings are rigid.',
-    ...((c.analysis.dynamicPlasticity ?? DEFAULT_DYNAMIC_PLASTICITY) ? keyedSeatNotes(c, pieces) : []),
     shaftInertia ? "The shaft's own inertia is lumped half onto each end of every element." : "The shaft's own inertia is left out (analysis.shaft_inertia: false).",
     `Damping is stiffness-proportional, ${(100 * c.analysis.dampingRatio).toPrecision(2)} % of critical in each side's lowest mode${c.analysis.dampingRatio === DEFAULT_DAMPING_RATIO ? ' (the default, a small value typical of steel shafting: material damping of steel is a fraction of a percent, and it is taken low so that the peak and the ringing are not understated)' : ''}${ownDamping(c)}; the dashpots take energy but the torques reported are the elastic ones. Each dashpot follows its element's tangent stiffness, so a section that flows plastically is damped as little as it is stiff.`,
     c.stop.duration > 0

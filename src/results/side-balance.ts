@@ -53,9 +53,8 @@ export function keyedSeatNotes(c: Case, pieces: readonly ShaftPiece[]): string[]
     if (n >= 1) return [];
     const stations = c.stations.filter((s) => s.key && keysOnPiece(c, p).includes(s.key)).map((s) => `"${s.name}"`);
     const seg = p.segment.label ? `"${p.segment.label}"` : `segment ${p.segment.index + 1}`;
-    return [
-      `The keyed seat under ${stations.join(' and ')} (${seg}, ${Number((p.start * 1000).toPrecision(4))} to ${Number((p.end * 1000).toPrecision(4))} mm) yields and flows on its net section, the keyseat's depth removed: ${Number((100 * n).toPrecision(3))} % of the gross section's fully plastic torque, and its yield onset lowered by the same factor (Nadai's sand-heap analogy); its elastic stress stays the gross section's with kt.`,
-    ];
+    const share = `${Number((100 * n).toPrecision(3))} %`;
+    return [`The keyed seat under ${stations.join(' and ')} (${seg}) yields on its net section: ${share} of the gross fully plastic torque and yield onset (sand heap).`];
   });
 }
 
