@@ -84,6 +84,8 @@ export interface Segment {
   coupling?: Coupling;
   /** Backlash in this segment (a gear mesh's or a coupling's play), rad: no torque across the gap (`backlash:`). */
   backlash?: number;
+  /** The shaft's own material damping in this segment, fraction of critical (`damping_ratio:`); absent: `Analysis.dampingRatio`. */
+  dampingRatio?: number;
 }
 
 /** A shaft coupling from its data sheet: a spring in series with the segment's own shaft. */
@@ -94,6 +96,12 @@ export interface Coupling {
   ratedTorque: number;
   /** The most torque it may take now and then (the maker's maximum or peak torque), N·m; undefined: not given. */
   peakTorque?: number;
+  /**
+   * Its damping as a fraction of critical, from its data sheet (`damping_ratio:`); absent:
+   * `Analysis.dampingRatio`. What it means in the dynamic model: see `elementDampers`
+   * (src/results/element-damping.ts).
+   */
+  dampingRatio?: number;
 }
 
 export interface Station {

@@ -25,6 +25,7 @@ export function readShaft(r: CaseReader, caseMaterials: Record<string, Material>
     const label = r.string([...path, 'label']);
     const protection = readProtection(r, path);
     const coupling = readCoupling(r, [...path, 'coupling']);
+    const damping = readDampingRatio(r, [...path, 'damping_ratio'], 'the material damping of this segment\'s shaft, such as "0.5 %" or 0.005');
     const backlash = r.quantity([...path, 'backlash'], 'angle', {
       positive: true,
       example: 'the play at this shaft, measured by rocking it with the other side held (dial gauge on a radius: arc ÷ radius), such as "0.5 deg"',
@@ -63,6 +64,7 @@ export function readShaft(r: CaseReader, caseMaterials: Record<string, Material>
       ...protection,
       ...(coupling ? { coupling } : {}),
       ...(backlash ? { backlash: backlash.value } : {}),
+      ...(damping !== undefined ? { dampingRatio: damping } : {}),
     });
     position += length.value;
   }
@@ -81,8 +83,12 @@ function readProtection(r: CaseReader, path: (string | number)[]): Pick<Segment,
 }
 
 /**
- * A segment's `coupling: { stiffness, rated_torque, peak_torque }` from the coupling's data sheet;
- * no stiffness: a rigid coupling, checked for its rating only.
+ * A segment's `coupling: { stiffness, rated_torque, peak_torque, damping_ratio }` from the
+ * coupling's data sheet; no stiffness: a rigid coupling, checked for its rating only. The damping is
+ * read as a ratio ζ of critical. Makers of elastomeric couplings often give the relative damping
+ * ψ = ΔW/W_el instead, the energy one cycle dissipates over the elastic energy at its amplitude
+ * (DIN 740-2; from memory, verify); for a viscous damper at resonance ΔW = π·c·ω·A² = 2πζ·k·A² and
+ * W_el = ½k·A², so ψ = 4πζ and ζ = ψ/(4π) (derived here), which the template and the example say.
  */
 function readCoupling(r: CaseReader, path: (string | number)[]): Segment['coupling'] {
   if (!r.map(path, COUPLING_KEYS, { example: 'a mapping such as { stiffness: 120 kN*m/rad, rated_torque: 4 kN*m, peak_torque: 8 kN*m }' })) return undefined;
@@ -100,8 +106,32 @@ function readCoupling(r: CaseReader, path: (string | number)[]): Segment['coupli
     );
     return undefined;
   }
+  const damping = readDampingRatio(
+    r,
+    [...path, 'damping_ratio'],
+    'the coupling\'s damping ratio from its data sheet, such as "8 %" or 0.08 (a relative damping ψ on the sheet: ψ/(4π), so ψ = 1 gives 0.08)',
+  );
   if (!rated) return undefined;
-  return { ratedTorque: rated.value, ...(stiffness ? { stiffness: stiffness.value } : {}), ...(peak ? { peakTorque: peak.value } : {}) };
+  return {
+    ratedTorque: rated.value,
+    ...(stiffness ? { stiffness: stiffness.value } : {}),
+    ...(peak ? { peakTorque: peak.value } : {}),
+    ...(damping !== undefined ? { dampingRatio: damping } : {}),
+  };
+}
+
+/**
+ * A damping ratio (fraction of critical) of one element: 0 up to, not including, 1 (critical).
+ * Undefined when absent or refused.
+ */
+function readDampingRatio(r: CaseReader, path: (string | number)[], example: string): number | undefined {
+  const q = r.quantity(path, 'fraction', { nonNegative: true, limit: { min: 1e-6, max: 1e3, text: '0.0001 % up' }, example });
+  if (!q) return undefined;
+  if (q.value >= 1) {
+    r.fail('E_RANGE', path, `${q.value} is not below 1 (critical damping); give ${example}`);
+    return undefined;
+  }
+  return q.value;
 }
 
 /**

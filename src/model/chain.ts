@@ -30,6 +30,12 @@ export interface ChainElement {
   side: SideName;
   /** The segment whose flexible coupling is in series in this element (its stiffness is in `stiffness`). */
   coupling?: Segment;
+  /**
+   * The springs in series that make up the element: each piece's length of shaft and each
+   * coupling, with its compliance, rad/(N·m) (they sum to 1/`stiffness`). The dampers are taken
+   * from these (src/results/element-damping.ts).
+   */
+  springs: ChainSpring[];
   /** A gap in this element from its segment's `backlash`, rad. */
   backlash?: { gap: number; segment: Segment };
   /**
@@ -48,6 +54,14 @@ export interface ChainHold {
   node: number;
   station: string;
   kind: 'backstop' | 'self-locking gearbox';
+}
+
+/** One spring of an element: a length of a segment's shaft, or a segment's coupling. */
+export interface ChainSpring {
+  kind: 'shaft' | 'coupling';
+  segment: Segment;
+  /** rad/(N·m). */
+  compliance: number;
 }
 
 /** A piece of shaft (a segment cut at stations) inside the chain, with its side. */
@@ -119,8 +133,19 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
         const seg = p.piece.segment;
         // A coupling's spring goes in series on the middle element of its piece.
         const kc = j === Math.floor((n - 1) / 2) ? seg.coupling?.stiffness : undefined;
-        const C = compliance(b - a, G(p.piece), seg.diameter, seg.bore) + (kc ? 1 / kc : 0);
-        elements.push({ start: a, end: b, stiffness: 1 / C, inertia: shaftInertia(rho(seg), b - a, seg.diameter, seg.bore), pieces: [i], side: p.side, ...(kc ? { coupling: seg } : {}) });
+        const springs: ChainSpring[] = [{ kind: 'shaft', segment: seg, compliance: compliance(b - a, G(p.piece), seg.diameter, seg.bore) }];
+        if (kc) springs.push({ kind: 'coupling', segment: seg, compliance: 1 / kc });
+        const C = springs.reduce((s, x) => s + x.compliance, 0);
+        elements.push({
+          start: a,
+          end: b,
+          stiffness: 1 / C,
+          inertia: shaftInertia(rho(seg), b - a, seg.diameter, seg.bore),
+          pieces: [i],
+          side: p.side,
+          springs,
+          ...(kc ? { coupling: seg } : {}),
+        });
         positions.push(b);
       }
     });
@@ -129,15 +154,15 @@ export function buildChain(c: Case, model: ShaftModel, opts: ChainOptions): Chai
     positions.push(...at);
     for (let k = 0; k + 1 < at.length; k++) {
       const inRun = pieces.flatMap((p, i) => (p.piece.start >= at[k] - EPS && p.piece.end <= at[k + 1] + EPS ? [i] : []));
-      const C = inRun.reduce(
-        (s, i) =>
-          s +
-          compliance(pieces[i].piece.end - pieces[i].piece.start, G(pieces[i].piece), pieces[i].piece.segment.diameter, pieces[i].piece.segment.bore) +
-          (pieces[i].piece.segment.coupling?.stiffness ? 1 / pieces[i].piece.segment.coupling!.stiffness! : 0),
-        0,
-      );
+      const springs: ChainSpring[] = inRun.flatMap((i) => {
+        const p = pieces[i].piece;
+        const kc = p.segment.coupling?.stiffness;
+        const shaft: ChainSpring = { kind: 'shaft', segment: p.segment, compliance: compliance(p.end - p.start, G(p), p.segment.diameter, p.segment.bore) };
+        return kc ? [shaft, { kind: 'coupling' as const, segment: p.segment, compliance: 1 / kc }] : [shaft];
+      });
+      const C = springs.reduce((s, x) => s + x.compliance, 0);
       const coupled = inRun.map((i) => pieces[i].piece.segment).find((g) => g.coupling?.stiffness);
-      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])), ...(coupled ? { coupling: coupled } : {}) });
+      elements.push({ start: at[k], end: at[k + 1], stiffness: 1 / C, inertia: 0, pieces: inRun, side: sideOf(0.5 * (at[k] + at[k + 1])), springs, ...(coupled ? { coupling: coupled } : {}) });
     }
   }
   placeDevices(elements, pieces);

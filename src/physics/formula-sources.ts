@@ -147,4 +147,14 @@ export const FORMULA_SOURCES: readonly FormulaSource[] = [
     source: "Lewis equation: Shigley's Mechanical Engineering Design, 9th ed., Sec. 14-1, Eq. (14-3) and Table 14-2 (from memory; equation numbers: verify)",
     only: 'gear teeth',
   },
+  {
+    what: 'Fully plastic torque of a keyed seat (net section, sand heap)',
+    formula: 'T_P = 2τ_Y·∫φ dA',
+    source: 'Nadai, Theory of Flow and Fracture of Solids, vol. 1, 1950 (from memory, confident)',
+  },
+  {
+    what: 'Damping per element of the dynamic model',
+    formula: 'c_i = (2ζ_i/ω₁)·k_i; ζ = ψ/(4π)',
+    source: 'Clough & Penzien, Dynamics of Structures, Sec. 12-4; DIN 740-2 (from memory)',
+  },
 ];

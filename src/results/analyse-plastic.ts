@@ -4,7 +4,7 @@ import type { SideResult } from '../physics/energy-method.ts';
 import { energyPerLength, plasticTorque, torqueAtTwistRate, yieldTorque, yieldTwistRate } from '../physics/plastic/plastic-torsion.ts';
 import type { MostStrained, PlasticPieceResult, PlasticResult, PlasticSideResult, PlasticVerdict } from './plastic-result.ts';
 import type { BalanceState } from '../physics/plastic/plastic-balance.ts';
-import { sideBalance, type SideBalance } from './side-balance.ts';
+import { keyedSeatNotes, sideBalance, type SideBalance } from './side-balance.ts';
 
 /** Points on the loading path drawn for the most strained piece. */
 const CURVE_POINTS = 80;
@@ -33,6 +33,10 @@ export function analysePlastic(c: Case, model: { sides: Side[] }, elastic: reado
       : 'Past yield the material is elastic–perfectly plastic: the shear stress stays at shear yield (no strain hardening), so the torque is capped at the fully plastic torque and the twist is on the high side.',
     'Stress-concentration factors (kt) are not applied to the net-section plastic behaviour of ductile material: local yielding relieves them under a single overload. They matter for fatigue and for brittle material, where they are applied.',
     "The torque–twist law is quasi-static (no strain-rate effect); the shaft unloads elastically to its permanent twist; the shaft's own inertia is left out, as in the elastic energy method.",
+    ...keyedSeatNotes(
+      c,
+      model.sides.flatMap((s) => s.pieces),
+    ),
   ];
   const brittleNotes: string[] = [];
   for (const s of sides) {

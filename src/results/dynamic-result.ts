@@ -15,6 +15,7 @@ import { yieldPath, type YieldPath } from './yield-path.ts';
 import { runningChecks } from './running-checks.ts';
 import { slipOutcomes, type PinOutcome, type SlipOutcome } from './dynamic-slips.ts';
 import { solveDynamics, type DynamicSolve } from './dynamic-solve.ts';
+import { dynamicDamping, type DynamicDamping } from './dynamic-damping.ts';
 
 /** The dynamic model's result for one piece of shaft (a segment cut at stations). */
 export interface DynamicPiece {
@@ -127,6 +128,8 @@ export interface DynamicResult {
   plasticWork: number;
   /** Energy books, J: final − initial = motor + boundary − damping − slip − released. */
   energy: { initial: number; final: number; motorWork: number; boundaryWork: number; dampingWork: number; slipWork: number; released: number };
+  /** Which damper took `energy.dampingWork`, and whether the response still rings at the window's end. */
+  damping: DynamicDamping;
   histories: DynamicHistories;
   /** The torque–twist path of the piece with the largest permanent twist, when one took any. */
   yieldPath?: YieldPath;
@@ -158,7 +161,7 @@ export function firstBrokenPiece(d: Pick<DynamicResult, 'pieces'>): DynamicPiece
 /** Runs the dynamic model on a case and gathers what the views show. Pure: no I/O, no clock. */
 export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideResult[]): DynamicResult {
   const solve = solveDynamics(c, model);
-  const { chain, modes, run, piecePeak, pieceTime } = solve.final;
+  const { chain, modes, run, piecePeak, pieceTime, pieceElement } = solve.final;
   const damage = dynamicPieceDamage(
     chain,
     run.laws,
@@ -260,6 +263,7 @@ export function dynamicResult(c: Case, model: ShaftModel, energy: readonly SideR
     fractured: damage.some((d) => d.broken),
     plasticWork: plasticLaws.reduce((w, l) => w + l.dissipated - l.released, 0),
     energy: run.energy,
+    damping: dynamicDamping(c, chain, run, modes, piecePeak, pieceElement),
     histories: dynamicHistories(chain, solve.final, slips),
     ...optional(
       'yieldPath',
@@ -329,6 +333,19 @@ export function dynamicPeakMetrics(c: Case, model: ShaftModel): { yieldRatio: nu
   return { yieldRatio, maxShearStress, peakTorque: Math.max(...piecePeak) };
 }
 
+/** The elements with a damping of their own, in words for the assumptions ("" where none has). */
+function ownDamping(c: Case): string {
+  const name = (s: Segment) => (s.label ? `"${s.label}"` : `segment ${s.index + 1}`);
+  const pct = (z: number) => `${Number((100 * z).toPrecision(2))} %`;
+  const own = c.shaft.segments.flatMap((s) => [
+    ...(s.coupling?.dampingRatio !== undefined ? [`the coupling in ${name(s)} ${pct(s.coupling.dampingRatio)}`] : []),
+    ...(s.dampingRatio !== undefined ? [`the shaft in ${name(s)} ${pct(s.dampingRatio)}`] : []),
+  ]);
+  return own.length === 0
+    ? ''
+    : `, except where the case gives an element its own (${own.join(', ')}): each spring of an element (a length of shaft, a coupling) has a dashpot c = (2ζ/ω₁)·k of its own ratio, and in series they act as one dashpot k_e²·Σ(2ζ_i/ω₁)/k_i across the element`;
+}
+
 function optional<K extends string, V>(key: K, value: V | undefined): Partial<Record<K, V>> {
   return value === undefined ? {} : ({ [key]: value } as Record<K, V>);
 }
@@ -338,12 +355,14 @@ function capitalise(s: string): string {
 }
 
 function assumptionsOf(c: Case, shaftInertia: boolean, drives: string[]): string[] {
+  // A coupling given a stiffness is a spring in series; one without is rigid, as gears are (no mesh stiffness).
+  const rigid = c.shaft.segments.some((s) => s.coupling?.stiffness) ? 'gears and couplings given no stiffness are rigid' : 'gears and couplings are rigid';
   return [
     (c.analysis.dynamicPlasticity ?? DEFAULT_DYNAMIC_PLASTICITY)
-      ? "The shaft is a chain of lumped inertias joined by torsional springs (k = G·J_p/L per element) that yield as the net section does, elastic–plastic at the shear yield of the criterion, with Masing's rule on reversals (analysis.dynamic_plasticity: true); parts count at their station as J·ratio², and gears and couplings are rigid."
-      : 'The shaft is a chain of lumped inertias joined by elastic torsional springs (k = G·J_p/L per element); parts count at their station as J·ratio², and gears and couplings are rigid.',
+      ? `The shaft is a chain of lumped inertias joined by torsional springs (k = G·J_p/L per element) that yield as the net section does, elastic–plastic at the shear yield of the criterion, with Masing's rule on reversals (analysis.dynamic_plasticity: true); parts count at their station as J·ratio², and ${rigid}.`
+      : `The shaft is a chain of lumped inertias joined by elastic torsional springs (k = G·J_p/L per element); parts count at their station as J·ratio², and ${rigid}.`,
     shaftInertia ? "The shaft's own inertia is lumped half onto each end of every element." : "The shaft's own inertia is left out (analysis.shaft_inertia: false).",
-    `Damping is stiffness-proportional, ${(100 * c.analysis.dampingRatio).toPrecision(2)} % of critical in each side's lowest mode${c.analysis.dampingRatio === DEFAULT_DAMPING_RATIO ? ' (the default, a small value typical of steel shafting: material damping of steel is a fraction of a percent, and it is taken low so that the peak and the ringing are not understated)' : ''}; the dashpots take energy but the torques reported are the elastic ones. Each dashpot follows its element's tangent stiffness, so a section that flows plastically is damped as little as it is stiff.`,
+    `Damping is stiffness-proportional, ${(100 * c.analysis.dampingRatio).toPrecision(2)} % of critical in each side's lowest mode${c.analysis.dampingRatio === DEFAULT_DAMPING_RATIO ? ' (the default, a small value typical of steel shafting: material damping of steel is a fraction of a percent, and it is taken low so that the peak and the ringing are not understated)' : ''}${ownDamping(c)}; the dashpots take energy but the torques reported are the elastic ones. Each dashpot follows its element's tangent stiffness, so a section that flows plastically is damped as little as it is stiff.`,
     c.stop.duration > 0
       ? `The stop station's speed falls linearly to zero over ${(c.stop.duration * 1000).toPrecision(3)} ms, then stays at zero.`
       : "The stop station's speed drops to zero at once and stays there.",

@@ -4,6 +4,7 @@ import { sideModes, type SideMode } from '../model/chain-modes.ts';
 import type { ShaftModel, SideName } from '../model/shaft-model.ts';
 import { integrateChain, type IntegrationResult } from '../physics/integrator/integrate-chain.ts';
 import { jamWithFit } from './fit-at-stop.ts';
+import { leastDampingRatio } from './element-damping.ts';
 import { shaftElementLaw } from './shaft-element-law.ts';
 import { systemOf } from './system-of-chain.ts';
 
@@ -103,10 +104,10 @@ function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boo
   const lowest: Partial<Record<SideName, number>> = {};
   for (const m of modes) lowest[m.side] ??= m.omega;
   const plastic = c.analysis.dynamicPlasticity ?? DEFAULT_DYNAMIC_PLASTICITY;
-  const sys = systemOf(chain, c.speed, c.stop, c.analysis.dampingRatio, lowest, plastic ? (el, twist) => shaftElementLaw(c, chain, el, twist) : undefined);
+  const sys = systemOf(chain, c.speed, c.stop, c, lowest, plastic ? (el, twist) => shaftElementLaw(c, chain, el, twist) : undefined);
   const omega1 = Math.min(...modes.map((m) => m.omega));
   const duration = c.analysis.duration ?? defaultDuration(c, chain, omega1);
-  const steps = stepFor(modes, c.stop.duration, c.analysis.dampingRatio);
+  const steps = stepFor(modes, c.stop.duration, leastDampingRatio(c, chain.elements));
   let h = steps.regular;
   if (duration / h > MAX_STEPS) {
     h = duration / MAX_STEPS;

@@ -6,7 +6,7 @@ import { SeriesBackbone, type SeriesPiece } from '../physics/plastic/series-back
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import type { TorqueLaw } from '../physics/torque-law.ts';
 import { shearStress } from '../physics/torsion.ts';
-import { segmentLaw } from './side-balance.ts';
+import { pieceLaw } from './side-balance.ts';
 
 /**
  * The law of a plain shaft element of the chain when its shaft may yield and break, from the
@@ -30,7 +30,7 @@ export function shaftElementLaw(c: Case, chain: Chain, el: ChainElement, initial
       brittleTorque = Math.min(brittleTorque, brittleFractureShear(m, seg.kt) / shearStress(1, seg.diameter, seg.bore));
       continue;
     }
-    const law = segmentLaw(c, seg);
+    const law = pieceLaw(c, p);
     if (!law) return undefined;
     const fs = fractureShearStrain(m);
     parts.push({ law, length, fractureTwistRate: fs ? fs.value / law.outerRadius : Infinity });

@@ -1,5 +1,7 @@
 import type { Case, Segment } from '../case/case.ts';
-import type { Side } from '../model/shaft-model.ts';
+import { keysOnPiece } from '../model/hub-seat.ts';
+import type { ShaftPiece, Side } from '../model/shaft-model.ts';
+import { keyseatDepth, keyseatPlasticRatio } from '../physics/plastic/keyseat-section.ts';
 import { brittleFractureShear, fractureShearStrain, isBrittle } from '../physics/fracture.ts';
 import { PlasticBalance, type BalancePiece } from '../physics/plastic/plastic-balance.ts';
 import type { TorsionLaw } from '../physics/plastic/plastic-torsion.ts';
@@ -18,6 +20,42 @@ export function segmentLaw(c: Case, seg: Segment): TorsionLaw | undefined {
   const tauY = shearYield(m.yieldStrength, c.analysis.criterion);
   const slope = c.analysis.hardening === 'linear' ? linearHardeningModulus(m, tauY / m.yieldStrength) : undefined;
   return { outerRadius: seg.diameter / 2, innerRadius: seg.bore / 2, shearModulus: m.shearModulus!, shearYield: tauY, hardeningModulus: slope ?? 0 };
+}
+
+/**
+ * The law of one piece of shaft: its segment's (`segmentLaw`), on the net section of a keyed seat
+ * where a station's key sits on the piece (`keysOnPiece`): the shear yield scaled by the net
+ * section's fully plastic torque over the gross one's (`keyseatPlasticRatio`, Nadai's sand heap), so
+ * the fully plastic torque is the net section's, the yield onset falls by the same factor (a little
+ * below τ_Y·J_net/c: on the safe side), and the elastic rigidity stays the gross section's (the
+ * keyseat is short against the shaft, and the elastic stress at it is the kt check's). The deepest
+ * keyseat governs where two keys share a piece.
+ */
+export function pieceLaw(c: Case, piece: ShaftPiece): TorsionLaw | undefined {
+  const law = segmentLaw(c, piece.segment);
+  const n = keyedSeatRatio(c, piece);
+  return law && n < 1 ? { ...law, shearYield: law.shearYield * n } : law;
+}
+
+/** The net section's fully plastic torque over the gross one's at a piece: 1 without a key. */
+export function keyedSeatRatio(c: Case, piece: ShaftPiece): number {
+  const seg = piece.segment;
+  return Math.min(1, ...keysOnPiece(c, piece).map((k) => keyseatPlasticRatio({ diameter: seg.diameter, bore: seg.bore, width: k.width, depth: keyseatDepth(k) })));
+}
+
+/**
+ * One sentence per keyed piece for the assumptions: which seat, and how much of the gross section's
+ * fully plastic torque its net section keeps. Empty without keys.
+ */
+export function keyedSeatNotes(c: Case, pieces: readonly ShaftPiece[]): string[] {
+  return pieces.flatMap((p) => {
+    const n = keyedSeatRatio(c, p);
+    if (n >= 1) return [];
+    const stations = c.stations.filter((s) => s.key && keysOnPiece(c, p).includes(s.key)).map((s) => `"${s.name}"`);
+    const seg = p.segment.label ? `"${p.segment.label}"` : `segment ${p.segment.index + 1}`;
+    const share = `${Number((100 * n).toPrecision(3))} %`;
+    return [`The keyed seat under ${stations.join(' and ')} (${seg}) yields on its net section: ${share} of the gross fully plastic torque and yield onset (sand heap).`];
+  });
 }
 
 /** What the balance needs to know about a piece beyond its law, for the results and the report. */
@@ -69,7 +107,7 @@ export function sideBalance(side: Side, c: Case, sideInertia: number): SideBalan
       const law: TorsionLaw = { outerRadius: c2, innerRadius: seg.bore / 2, shearModulus: g, shearYield: Infinity, hardeningModulus: 0 };
       return { length: p.end - p.start, law, fractureTwistRate: tauF / (g * c2) };
     }
-    const law = segmentLaw(c, seg)!;
+    const law = pieceLaw(c, p)!;
     const h = law.hardeningModulus;
     if (c.analysis.hardening === 'linear' && h === 0) {
       warnings.push(`Material ${m.key} has no tensile strength above its yield or no elongation, so segment ${seg.index + 1} is taken as perfectly plastic.`);

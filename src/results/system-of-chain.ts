@@ -1,3 +1,4 @@
+import type { Case } from '../case/case.ts';
 import type { Chain, ChainElement } from '../model/chain.ts';
 import type { SideName } from '../model/shaft-model.ts';
 import type { ChainSystem } from '../physics/integrator/chain-system.ts';
@@ -5,20 +6,23 @@ import { BacklashLaw } from '../physics/backlash-law.ts';
 import { ShearPinLaw } from '../physics/shear-pin-law.ts';
 import { SlipLaw } from '../physics/slip-law.ts';
 import { ElasticLaw, type TorqueLaw } from '../physics/torque-law.ts';
+import { elementDashpot } from './element-damping.ts';
 
 /**
  * The numeric system the integrator takes, from a chain: one law per element (elastic shaft, or
  * the law `shaftLaw` gives a plain shaft element — yielding, breaking —, a limiter's slip, a pin's parting), stiffness-proportional damping c = β·k with β = 2ζ/ω₁ per side
  * so that each side's lowest mode has the damping ratio ζ (Rayleigh damping with the mass term
- * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident; the stepper
- * scales each dashpot by its law's tangent over its elastic stiffness, `ChainStepper.dashpot`), and the twist
+ * zero; Clough & Penzien, Dynamics of Structures, Sec. 12-4; from memory, confident), each spring
+ * of an element (shaft, coupling) with its own ζ where the case gives one (`elementDashpot`,
+ * src/results/element-damping.ts; the stepper scales each dashpot by its law's tangent over its
+ * elastic stiffness, `ChainStepper.dashpot`), and the twist
  * of the running torque, which flows from each drive to the stop.
  */
 export function systemOf(
   chain: Chain,
   speed: number,
   stop: { duration: number; torqueCapacity?: number },
-  dampingRatio: number,
+  c: Case,
   lowest: Partial<Record<SideName, number>>,
   shaftLaw?: (el: ChainElement, initialTwist: number) => TorqueLaw | undefined,
 ): ChainSystem {
@@ -42,10 +46,7 @@ export function systemOf(
     if (torque[e] === 0) initialTwist[e] = sense > 0 ? lo : hi;
     return { lo, hi };
   });
-  const damping = Float64Array.from(chain.elements, (el) => {
-    const w = lowest[el.side];
-    return w ? ((2 * dampingRatio) / w) * el.stiffness : 0;
-  });
+  const damping = Float64Array.from(chain.elements, (el) => elementDashpot(c, el, lowest[el.side]));
   const laws: TorqueLaw[] = chain.elements.map((el, e) => {
     if (el.device?.kind === 'torque limiter' || el.device?.kind === 'hub fit') return new SlipLaw(el.stiffness, el.device.torque, initialTwist[e], damping[e]);
     if (el.device?.kind === 'shear pin') return new ShearPinLaw(el.stiffness, el.device.torque);

@@ -165,6 +165,30 @@ const CHECK: Record<string, Json> = {
     peak_torque_Nm: num('Peak torque, N·m.'),
     duration_s: num('The simulated window, s.'),
     elements: { type: 'integer', description: 'Shaft elements.' },
+    damping: open('Which damper took the energy the model dissipated over the window, and whether it still rings at the end.', {
+      dissipated_J: num('Energy all the dampers dissipated over the window, J.'),
+      dampers: list(
+        'Each damper, the largest energy first.',
+        open('One damper.', {
+          kind: { type: 'string', enum: ['coupling', 'shaft'], description: "A coupling's damping, or the shaft's material damping." },
+          segment: orNull({
+            type: 'integer',
+            description: "The segment (index from 0): a coupling's, or a shaft segment with its own damping_ratio; null: the shaft's material damping of every other segment.",
+          }),
+          damping_ratio: num('Its damping ratio, fraction of critical.'),
+          energy_J: num('Energy it dissipated over the window, J.'),
+          share: num('Its share of what all the dampers dissipated.'),
+        }),
+      ),
+      ringing: orNull(
+        open("The most loaded piece's torque: half-swing over the first lowest period after its peak and over the window's last period.", {
+          first_cycle_Nm: num('Half-swing over the first period after the peak, N·m.'),
+          last_cycle_Nm: num("Half-swing over the window's last period, N·m."),
+          ratio: num('Last over first.'),
+          rings_on: { type: 'boolean', description: 'It still rings at about constant amplitude at the end of the window (the ratio at least 0.7).' },
+        }),
+      ),
+    }),
   }),
   keys: list(
     "Each station's key at the torque it carried: shear and bearing against its strengths, the torque that shears it.",

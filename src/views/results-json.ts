@@ -87,6 +87,27 @@ function dynamicJson(d: DynamicResult): Record<string, unknown> {
     backlash: d.gaps.map((g) => ({ segment: g.segment.index, label: g.segment.label ?? null, gap_rad: g.gap, contacts: g.contacts })),
     holds: d.holds.map((h) => ({ station: h.station, kind: h.kind, peak_torque_Nm: h.peakTorque, first_held_s: h.firstHeld ?? null })),
     protection: d.protection.map((p) => ({ station: p.station, torque_limit_Nm: p.torqueLimit ?? null, trip_after_s: p.tripAfter ?? null, tripped_at_s: p.trippedAt ?? null })),
+    damping: {
+      dissipated_J: d.damping.total,
+      dampers: d.damping.dampers.map((x) => ({
+        kind: x.kind,
+        segment: x.segment?.index ?? null,
+        label: x.segment?.label ?? null,
+        damping_ratio: x.dampingRatio,
+        energy_J: x.energy,
+        share: x.share,
+      })),
+      ringing: d.damping.ringing
+        ? {
+            from_m: d.pieces[d.damping.ringing.piece].piece.start,
+            to_m: d.pieces[d.damping.ringing.piece].piece.end,
+            first_cycle_Nm: d.damping.ringing.firstCycle,
+            last_cycle_Nm: d.damping.ringing.lastCycle,
+            ratio: d.damping.ringing.ratio,
+            rings_on: d.damping.ringing.ringsOn,
+          }
+        : null,
+    },
   };
 }
 

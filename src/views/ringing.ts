@@ -1,4 +1,5 @@
 import type { Results } from '../results/results.ts';
+import { damperName } from './damping-words.ts';
 import { sig } from './display-units.ts';
 
 /**
@@ -34,5 +35,10 @@ export function ringingSentence(r: Results, ringing: readonly { name: string; am
   if (ringing.length === 0) return '';
   const d = r.dynamic;
   const which = ringing.map((s) => `${s.name} (about ±${s.amplitude})`).join('; ');
-  return ` Rings on at about constant amplitude to the end of the ${sig(d.duration * 1000)} ms window: ${which}. The model's only damping is ${sig(100 * d.dampingRatio, 2)} % of critical in each side's lowest mode (stiffness-proportional); the motor's losses and trip, friction and the driven material are not modelled, so the ringing after the peak is the model's, not a prediction of what the machine did.`;
+  const ratios = new Set(d.damping.dampers.map((x) => x.dampingRatio));
+  const damping =
+    ratios.size <= 1
+      ? `${sig(100 * (d.damping.dampers[0]?.dampingRatio ?? d.dampingRatio), 2)} % of critical in each side's lowest mode (stiffness-proportional)`
+      : `stiffness-proportional, each element's own: ${d.damping.dampers.map((x) => `${damperName(x)} ${sig(100 * x.dampingRatio, 2)} %`).join(', ')} of critical`;
+  return ` Rings on at about constant amplitude to the end of the ${sig(d.duration * 1000)} ms window: ${which}. The model's only damping is ${damping}; the motor's losses and trip, friction and the driven material are not modelled, so the ringing after the peak is the model's, not a prediction of what the machine did.`;
 }

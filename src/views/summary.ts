@@ -3,6 +3,7 @@ import type { PieceResult } from '../physics/energy-method.ts';
 import type { Investigation } from '../finding/investigation.ts';
 import type { Results } from '../results/results.ts';
 import { findingLines } from './finding-words.ts';
+import { dampingSentence, ringingWords } from './damping-words.ts';
 import { dynamicPastYieldLines } from './dynamic-past-yield.ts';
 import { elasticDynamicPeak, whyTheModelsDiffer } from './model-comparison.ts';
 import { show, sig } from './display-units.ts';
@@ -64,6 +65,7 @@ export function dynamicLines(r: Results, role: string): string[] {
   for (const p of d.pins) {
     out.push(`  ${p.element} (${show(p.shearTorque, 'torque', u)}) ${p.partedAt === undefined ? 'held' : `parted at ${sig(p.partedAt * 1000)} ms`}`);
   }
+  for (const line of [dampingSentence(r), ringingWords(r)]) if (line) out.push(`  ${line}`);
   return out;
 }
 

@@ -36,4 +36,23 @@ describe("a segment's coupling: stiffness, rated_torque, peak_torque", () => {
     const t = text('{ rated_torque: 4 kN*m }', '  - { name: jam, at: 0 mm }\n  - { name: mid, at: 250 mm }\n  - { name: disc, at: 500 mm, parts: [{ shape: inertia, inertia: 2 kg*m^2 }] }');
     expect(problems(t)).toMatch(/shaft\.segments\[0\]\.coupling: station "mid" lies inside this segment/);
   });
+
+  it("reads the coupling's damping_ratio as a fraction (a percentage too), and a segment's own", () => {
+    const c = parseCase(text('{ stiffness: 120 kN*m/rad, rated_torque: 4 kN*m, damping_ratio: 8 % }'));
+    expect(c.shaft.segments[0].coupling!.dampingRatio).toBeCloseTo(0.08, 12);
+    expect(c.shaft.segments[0].dampingRatio).toBeUndefined();
+    const own = parseCase(text('{ rated_torque: 4 kN*m, damping_ratio: 0.1 }').replace('diameter: 40 mm,', 'diameter: 40 mm, damping_ratio: 0.004,'));
+    expect(own.shaft.segments[0].dampingRatio).toBe(0.004);
+    expect(own.shaft.segments[0].coupling!.dampingRatio).toBe(0.1);
+  });
+
+  it('a damping ratio at or above critical is refused with its line and a right value', () => {
+    const t = text('{ rated_torque: 4 kN*m, damping_ratio: 1.2 }');
+    expect(problems(t)).toMatch(
+      new RegExp(
+        `case\\.yaml:${lineOf(t, 'coupling')}:\\d+ shaft\\.segments\\[0\\]\\.coupling\\.damping_ratio: 1\\.2 is not below 1 \\(critical damping\\); give the coupling's damping ratio from its data sheet, such as "8 %"`,
+      ),
+    );
+    expect(problems(text('{ rated_torque: 4 kN*m }').replace('diameter: 40 mm,', 'diameter: 40 mm, damping_ratio: -1 %,'))).toMatch(/shaft\.segments\[0\]\.damping_ratio: .*0\.5 %/);
+  });
 });

@@ -101,7 +101,7 @@ describe('renderReport', () => {
       ),
     );
     expect(box('sample')).toMatch(
-      /\*\*Observed, against the model\*\* .*\n\n- Permanent twist drive sheave – rotor: measured 4°, the model gives 8\.9° at the recorded 420 rpm: less than the recorded speed explains; a stop from 296\.1 rpm would leave it\.\n- Fracture: none found; agrees with the model\./,
+      /\*\*Observed, against the model\*\* .*\n\n- Permanent twist drive sheave – rotor: measured 4°, the model gives 9\.98° at the recorded 420 rpm: less than the recorded speed explains; a stop from 279\.6 rpm would leave it\.\n- Fracture: none found; agrees with the model\./,
     );
     expect(box('sample')).toMatch(/\*\*Disposition: REPLACE THE SHAFT\.\*\* Not fit to return/);
     // The remedy is resize's pick (for the granulator a combination: every option alone has a flag), with its figure.

@@ -81,6 +81,8 @@ export class ChainStepper {
   /** Kinetic energy taken out where a one-way node is caught at standstill (its speed set to exactly 0 at the located event), J. */
   holdWork = 0;
   dampingWork = 0;
+  /** The dashpot work of each element, J (sums to `dampingWork`): which damper took the energy. */
+  readonly elementDampingWork: Float64Array;
   motorWork = 0;
   boundaryWork = 0;
   jamWork = 0;
@@ -114,6 +116,7 @@ export class ChainStepper {
     this.nonAffine = sys.laws.flatMap((l, e) => (l.affine ? [] : [e]));
     this.plain = new Uint8Array(sys.laws.length);
     this.cEff = new Float64Array(Math.max(n - 1, 1));
+    this.elementDampingWork = new Float64Array(Math.max(n - 1, 1));
     this.P = sys.stop.node;
     this.motion = new StopMotion(sys.speed, sys.stop.duration);
     this.holdNode = Int32Array.from(sys.holds ?? []);
@@ -330,9 +333,12 @@ export class ChainStepper {
   commit(): void {
     const { m, laws, sys, dphi, hT: h, P, cEff, plain, theta, thetaT, tq, kt } = this;
     let damp = 0;
+    const byElement = this.elementDampingWork;
     for (let e = 0; e < m; e++) {
       const d = thetaT[e] - theta[e];
-      damp += cEff[e] * d * d;
+      const w = cEff[e] * d * d;
+      damp += w;
+      byElement[e] += w / h;
     }
     this.dampingWork += damp / h;
     for (let j = 0; j < this.drives.length; j++) {

@@ -55,6 +55,11 @@ export interface IntegrationResult {
   /** Largest torque the shaft put on a soft jam, N·m (0 for a jam that holds any torque). */
   peakJamTorque: number;
   events: ChainEvent[];
+  /**
+   * Each element's damping work over the window, J: its dashpot's, and the dashpot work its law
+   * books itself (a slipping limiter's spring relaxing). Sums to `energy.dampingWork`.
+   */
+  elementDampingWork: Float64Array;
   /** Energy books over the window, J: final − initial = motor + boundary − damping − slip − released. */
   energy: { initial: number; final: number; motorWork: number; boundaryWork: number; dampingWork: number; slipWork: number; released: number };
 }
@@ -210,6 +215,7 @@ export function integrateChain(sys: ChainSystem, opts: IntegrationOptions): Inte
     jam: sys.stop.torqueCapacity === undefined ? undefined : { slipWork: st.jamWork, slipAngle: st.jamSlipAngle, slippingAtEnd: st.jam !== 0 },
     peakJamTorque: rec.peakJam,
     events,
+    elementDampingWork: Float64Array.from(st.laws, (l, e) => st.elementDampingWork[e] + (l.dampingWork ?? 0)),
     energy: {
       initial: E0,
       final: chainEnergy(st),

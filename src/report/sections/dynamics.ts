@@ -1,6 +1,7 @@
 import type { Results } from '../../results/results.ts';
 import type { DynamicResult } from '../../results/dynamic-result.ts';
 import { show, sig } from '../../views/display-units.ts';
+import { dampingSentence, ringingWords } from '../../views/damping-words.ts';
 import { showSlipAngle } from '../../views/slip-angle.ts';
 import { escapeMarkdown } from '../markdown-text.ts';
 import type { ReportSection } from '../report-context.ts';
@@ -89,6 +90,11 @@ export function renderDynamicsDetails(r: Results): string {
   out.push(
     `- Numerics: trapezoidal rule with a step of ${sig(d.timeStep * 1e6)} µs (finer through the stop and after each event), ${d.steps} steps; ${refinementText(d)} The energy books close to ${sig(Math.abs(balance) / Math.max(e.initial, 1e-300), 2)} of the energy at the start.`,
   );
+  // Which damper took the energy where there are several, and that it still rings where it does:
+  // one item beside the numerics (the report is held to its page budget; check says both always).
+  const dd = d.damping;
+  const damping = [dd.dampers.length > 1 ? dampingSentence(r) : undefined, dd.ringing?.ringsOn ? ringingWords(r) : undefined].filter((x): x is string => x !== undefined);
+  if (damping.length > 0) out.push(`- ${escapeMarkdown(damping.join(' '))}`);
   for (const n of d.notes) out.push(`- ${n}`);
   return out.join('\n') + '\n';
 }

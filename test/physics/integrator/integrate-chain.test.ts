@@ -93,6 +93,21 @@ describe('integrateChain: the properties of the scheme', () => {
     );
     expect(Math.abs(books(r)) / r.energy.initial).toBeLessThan(1e-9);
     expect(r.energy.dampingWork).toBeGreaterThan(0);
+    // Each element's dashpot work is booked on its own, and they add up to the total.
+    expect(r.elementDampingWork[0]).toBeGreaterThan(0);
+    expect(r.elementDampingWork[1]).toBeGreaterThan(0);
+    expect(r.elementDampingWork[0] + r.elementDampingWork[1]).toBeCloseTo(r.energy.dampingWork, 9);
+  });
+
+  it("one mass on one damped spring: over a full ring-down the dashpot's work equals the energy the stop left, ½Jω0²", () => {
+    // c = 2ζ√(kJ) at ζ = 5 %; 30 natural periods leave e^(−4π·0.05·30) ≈ 6e-9 of the energy.
+    const J = 1;
+    const k = 1e4;
+    const c = 2 * 0.05 * Math.sqrt(k * J);
+    const Tn = (2 * Math.PI) / Math.sqrt(k / J);
+    const r = integrateChain(chain({ J: [0, J], k: [k], c: [c], speed: 10 }), { duration: 30 * Tn, timeStep: Tn / 120 });
+    expect(Math.abs(r.elementDampingWork[0] / (0.5 * J * 10 ** 2) - 1)).toBeLessThan(1e-6);
+    expect(r.elementDampingWork[0]).toBe(r.energy.dampingWork);
   });
 
   it('follows a three-mass chain with a ramped stop, damping and a motor curve as odex does at tight tolerance', () => {

@@ -101,7 +101,7 @@ describe('honest figures', () => {
   it("a time history that rings on to the end of its window says so, with the model's damping", () => {
     const r = fixture('sample').results;
     const f = dynamicSpeedsFigure(r);
-    expect(f.caption).toMatch(/Rings on at about constant amplitude to the end of the 231 ms window: drive sheave \(about ±\d+ rpm\)\. The model's only damping is 0\.5 % of critical/);
+    expect(f.caption).toMatch(/Rings on at about constant amplitude to the end of the 231 ms window: drive sheave \(about ±[\d.]+ rpm\)\. The model's only damping is 0\.5 % of critical/);
     // The rule itself: a steady sine rings on, a decayed one does not, a still one does not.
     const n = 400;
     const sine = Array.from({ length: n }, (_, i) => 50 * Math.sin(i / 3));
