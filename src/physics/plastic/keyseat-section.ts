@@ -39,13 +39,16 @@ const ANGULAR = 128;
 export function keyseatPlasticRatio(s: KeyseatSection): number {
   if (!(s.width > 0 && s.depth > 0)) return 1;
   // The ratio depends on the proportions only; a Monte Carlo run that varies the diameter by its
-  // tolerance asks for nearly the same ones thousands of times, so they are kept (to 6 digits,
-  // far inside the integration's own 1e-4).
-  const key = [s.bore, s.width, s.depth].map((x) => (x / s.diameter).toPrecision(6)).join(':');
+  // tolerance asks for nearly the same ones thousands of times. They are taken to 4 digits (a
+  // change of 1 in the 4th digit moves the ratio by some 1e-5, inside the integration's own 1e-4)
+  // and the section of those rounded proportions is integrated, so the value is a function of the
+  // rounded proportions alone, whatever was asked before, and is kept.
+  const [bore, width, depth] = [s.bore, s.width, s.depth].map((x) => Number((x / s.diameter).toPrecision(4)));
+  const key = `${bore}:${width}:${depth}`;
   const known = KNOWN.get(key);
   if (known !== undefined) return known;
   if (KNOWN.size >= MAX_KNOWN) KNOWN.clear();
-  const ratio = integrate(s);
+  const ratio = integrate({ diameter: 1, bore, width, depth });
   KNOWN.set(key, ratio);
   return ratio;
 }
