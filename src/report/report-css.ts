@@ -3,7 +3,8 @@
  * (no page size is forced, so the printer's paper is used). On paper the first page (the title and
  * the incident finding, set a little smaller) is a page of its own, the sections of the body follow
  * one another without a page break each (no near-empty pages), the appendices start on a fresh
- * page, and no figure, photo, table row, checklist item or quoted finding is cut in two.
+ * page, no figure, photo, table row, checklist item or quoted finding is cut in two, and the case
+ * file's own text is left to the zip and the screen.
  */
 export const REPORT_CSS = `
 :root { color-scheme: light; --ink: #1b1f24; --muted: #5b6470; --rule: #d0d5db; --accent: #1f4e8c; }
@@ -52,7 +53,7 @@ a { color: var(--accent); }
   .first-page table { margin: .4rem 0 0; font-size: 8.6pt; }
   .first-page td, .first-page th { padding: .3rem .45rem; }
   .first-appendix { break-before: page; }
-  .appendix { font-size: 8.6pt; line-height: 1.3; }
+  .appendix { font-size: 8.4pt; line-height: 1.28; }
   .appendix li { margin: .1rem 0; }
   .appendix .figure svg { max-width: 135mm; }
   .appendix pre { font-size: 6.8pt; line-height: 1.25; }
@@ -65,5 +66,9 @@ a { color: var(--accent); }
   pre { font-size: 7.5pt; }
   img.photo { max-height: 120mm; }
   a { color: inherit; text-decoration: none; }
+  /* The case file's text (a page or more) is left off paper: the zip beside the report holds the
+     file, the traceability table its SHA-256, report.html its text. */
+  section:has(> h2#appendix-inputs-as-given) p:has(+ pre), section:has(> h2#appendix-inputs-as-given) pre { display: none; }
+  section:has(> h2#appendix-inputs-as-given)::after { display: block; margin-top: .4rem; font-style: italic; content: "On paper the case file's text is left out: the zip beside this report holds the file (its SHA-256 above), and report.html shows it."; }
 }
 `;
