@@ -127,14 +127,15 @@ export class PlasticBalance {
       }
       if (phi < best.phi) best = { phi, piece: i };
     });
-    return { energy: Number.isFinite(best.phi) ? this.stateAt(best.phi).energy : Infinity, piece: best.piece, twistRate: best.phi };
+    // The energy alone (`energyAt`, the state's energy to the last digit), not a whole state: a sample past yield asks for it.
+    return { energy: Number.isFinite(best.phi) ? this.energyAt(best.phi) : Infinity, piece: best.piece, twistRate: best.phi };
   }
 
   /** Energy at which the first of the pieces `among` (indices) starts to yield, J; Infinity if none ever does. */
   yieldOnsetEnergy(among: readonly number[]): number {
     const ty = Math.min(...among.map((i) => yieldTorque(this.pieces[i].law)));
     if (!(ty < this.torqueLimit())) return Infinity;
-    return this.stateAt(this.twistRateAtTorque(ty)).energy;
+    return this.energyAt(this.twistRateAtTorque(ty));
   }
 
   /** The side's compliance Σ L/(G·J_p), rad/(N·m), and the strain energy at which its first piece yields, J (kept: the Monte Carlo asks per sample). */
