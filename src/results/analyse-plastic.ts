@@ -116,6 +116,20 @@ export function sideEndStateOnly(b: SideBalance, energy: number): BalanceState {
   return state.pieces.some((p) => p.fractured) ? sideEndState(b, energy).state : state;
 }
 
+/**
+ * The side's end-state torque and permanent twist (`sideEndStateOnly` read through
+ * `sidePermanentTwist`), without building the state while the side stays elastic and unbroken,
+ * as most Monte Carlo samples do; otherwise from the state itself. The same numbers either way.
+ */
+export function sideEndSummary(b: SideBalance, energy: number): { torque: number; permanentTwist: number } {
+  if (energy <= b.balance.elasticLimitEnergy()) {
+    const s = b.balance.summaryForEnergy(energy);
+    if (!s.fractured) return s;
+  }
+  const state = sideEndStateOnly(b, energy);
+  return { torque: state.torque, permanentTwist: sidePermanentTwist(state) };
+}
+
 /** The permanent twist of a side's run at its end state, rad: 0 where a piece breaks (the run is in two; its unbroken pieces keep theirs). */
 export function sidePermanentTwist(state: { pieces: readonly { permanentTwist: number; fractured: boolean }[] }): number {
   return state.pieces.some((p) => p.fractured) ? 0 : state.pieces.reduce((s, p) => s + p.permanentTwist, 0);

@@ -5,7 +5,7 @@ import { PlasticBalance } from '../physics/plastic/plastic-balance.ts';
 import { speedForPermanentTwist, type ReadBackSide } from '../physics/read-back.ts';
 import { verdictShearStrength } from '../physics/shear-strength.ts';
 import { compliance, shearStress, torqueForEnergy } from '../physics/torsion.ts';
-import { sideEndStateOnly, sidePermanentTwist } from '../results/analyse-plastic.ts';
+import { sideEndSummary } from '../results/analyse-plastic.ts';
 import { balancePiece } from '../results/side-balance.ts';
 import { sampleCopy, type UncertainInput } from './inputs.ts';
 import type { Metrics } from './monte-carlo.ts';
@@ -20,7 +20,7 @@ const EPS = 1e-9;
  * each sample sets in place (`UncertainInput.set`); a sample then runs only the arithmetic that
  * moves with the values: the energy method, the balance past yield, the read-back. The formulas
  * and their order are those of the single run (`energyMethodSide`, `sideBalance`,
- * `sideEndStateOnly`), so every sample's numbers are the ones the single run gives for its case
+ * `sideEndSummary`), so every sample's numbers are the ones the single run gives for its case
  * (test/uncertainty/sample-plan.test.ts holds them to the engine built case by case).
  *
  * `readBack` false: the speeds behind each measured twist are not sought (where the read-back
@@ -75,10 +75,10 @@ export function planSamples(c: Case, inputs: readonly UncertainInput[], readBack
       }
       // The balance past yield (`sideBalance` without the words the results show).
       const balance = new PlasticBalance(side.pieces.map((p) => balancePiece(w, p)));
-      const state = sideEndStateOnly({ balance, facts: [], inertia, warnings: [] }, energy);
-      peakTorque = Math.max(peakTorque, state.torque);
-      permanentTwist = Math.max(permanentTwist, sidePermanentTwist(state));
-      readBackSides.push({ balance, inertia });
+      const end = sideEndSummary({ balance, facts: [], inertia, warnings: [] }, energy);
+      peakTorque = Math.max(peakTorque, end.torque);
+      permanentTwist = Math.max(permanentTwist, end.permanentTwist);
+      if (readBack) readBackSides.push({ balance, inertia });
     }
     if (!readBack) return { yieldRatio, maxShearStress, peakTorque, permanentTwist };
     const speedsForMeasured = w.observed.permanentTwist.map((m, k) => {

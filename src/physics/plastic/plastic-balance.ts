@@ -98,6 +98,26 @@ export class PlasticBalance {
     return bracketedRoot((phi) => f(phi) - energy, hi === bound ? lo : 0, hi, 1e-14 * hi);
   }
 
+  /**
+   * What the Monte Carlo reads of the state that has absorbed `energy`: its torque, the permanent
+   * twist summed over the pieces, and whether any piece reached its fracture twist rate.
+   * `stateForEnergy(energy)` without building the state: the same functions in the same order, so
+   * the same numbers (test/physics/plastic/plastic-balance.test.ts holds them to the state's).
+   */
+  summaryForEnergy(energy: number): { torque: number; permanentTwist: number; fractured: boolean } {
+    const phi = this.twistRateForEnergy(energy);
+    const torque = torqueAtTwistRate(this.pieces[this.weakest].law, phi);
+    let permanentTwist = 0;
+    let fractured = false;
+    for (let i = 0; i < this.pieces.length; i++) {
+      const p = this.pieces[i];
+      const rate = this.sameAsWeakest[i] ? phi : twistRateAtTorque(p.law, torque);
+      permanentTwist += residualTwistRate(p.law, rate) * p.length;
+      if (rate >= p.fractureTwistRate) fractured = true;
+    }
+    return { torque, permanentTwist, fractured };
+  }
+
   /** The state that has absorbed `energy`, J. */
   stateForEnergy(energy: number): BalanceState {
     return this.stateAt(this.twistRateForEnergy(energy));
@@ -146,8 +166,12 @@ export class PlasticBalance {
 
   private elasticLimit(): { compliance: number; energy: number } {
     if (this.elastic) return this.elastic;
-    const compliance = this.pieces.reduce((s, p) => s + p.length / rigidity(p.law), 0);
-    const ty = Math.min(...this.pieces.map((p) => yieldTorque(p.law)));
+    let compliance = 0;
+    let ty = Infinity;
+    for (const p of this.pieces) {
+      compliance += p.length / rigidity(p.law);
+      ty = Math.min(ty, yieldTorque(p.law));
+    }
     this.elastic = { compliance, energy: Number.isFinite(ty) ? 0.5 * ty * ty * compliance : Infinity };
     return this.elastic;
   }

@@ -186,3 +186,21 @@ describe('PlasticBalance.energyAt', () => {
     );
   });
 });
+
+describe('PlasticBalance.summaryForEnergy', () => {
+  it("is the state's torque, summed permanent twist and fracture, elastic and past yield, with and without a fracture limit (property)", () => {
+    // Independent calculation: the state itself (`stateForEnergy`), read piece by piece.
+    const pieces = (fracture: number) => [piece(0.4, law(0.03, 0, 79.3e9, 300e6), fracture), piece(0.25, law(0.02, 0, 79.3e9, 300e6), fracture), piece(0.1, law(0.025, 0.01, 79.3e9, 300e6, 2e9))];
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 5e4, noNaN: true }), fc.constantFrom(Infinity, 0.5, 2), (energy, fracture) => {
+        const b = new PlasticBalance(pieces(fracture));
+        const state = b.stateForEnergy(energy);
+        const s = b.summaryForEnergy(energy);
+        expect(s.torque).toBe(state.torque);
+        expect(s.permanentTwist).toBe(state.pieces.reduce((sum, p) => sum + p.permanentTwist, 0));
+        expect(s.fractured).toBe(state.pieces.some((p) => p.fractured));
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
