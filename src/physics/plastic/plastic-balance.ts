@@ -118,6 +118,21 @@ export class PlasticBalance {
     return { torque, permanentTwist, fractured };
   }
 
+  /**
+   * The permanent twist of the pieces `among` (indices) when the weakest piece twists at rate φ,
+   * added to `start` one piece at a time in their order, rad: `stateAt(φ)`'s pieces read without
+   * building the state (the read-back's root asks for it at every step).
+   */
+  permanentTwistAt(phi: number, among: readonly number[], start = 0): number {
+    const torque = torqueAtTwistRate(this.pieces[this.weakest].law, phi);
+    let sum = start;
+    for (const i of among) {
+      const p = this.pieces[i];
+      sum += residualTwistRate(p.law, this.sameAsWeakest[i] ? phi : twistRateAtTorque(p.law, torque)) * p.length;
+    }
+    return sum;
+  }
+
   /** The state that has absorbed `energy`, J. */
   stateForEnergy(energy: number): BalanceState {
     return this.stateAt(this.twistRateForEnergy(energy));

@@ -204,3 +204,17 @@ describe('PlasticBalance.summaryForEnergy', () => {
     );
   });
 });
+
+describe('PlasticBalance.permanentTwistAt', () => {
+  it("is the state's permanent twist of the pieces asked for, added in their order, at every twist rate (property)", () => {
+    // Independent calculation: the state itself (`stateAt`), its pieces summed one by one.
+    const b = new PlasticBalance([piece(0.4, law(0.03, 0, 79.3e9, 300e6)), piece(0.25, law(0.02, 0, 79.3e9, 300e6)), piece(0.1, law(0.025, 0.01, 79.3e9, 300e6, 2e9))]);
+    fc.assert(
+      fc.property(fc.double({ min: 1e-6, max: 5, noNaN: true }), fc.subarray([0, 1, 2], { minLength: 1 }), fc.double({ min: 0, max: 1, noNaN: true }), (phi, among, start) => {
+        const pieces = b.stateAt(phi).pieces;
+        expect(b.permanentTwistAt(phi, among, start)).toBe(among.reduce((sum, i) => sum + pieces[i].permanentTwist, start));
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
