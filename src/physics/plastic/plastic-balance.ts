@@ -48,13 +48,18 @@ export class PlasticBalance {
 
   constructor(readonly pieces: readonly BalancePiece[]) {
     if (pieces.length === 0) throw new RangeError('PlasticBalance: a side needs at least one piece');
+    // Each piece's fully plastic torque once (the Monte Carlo builds a balance per sample).
     let w = 0;
-    pieces.forEach((p, i) => {
-      if (plasticTorque(p.law) < plasticTorque(pieces[w].law)) w = i;
-    });
+    let weakestTorque = plasticTorque(pieces[0].law);
+    for (let i = 1; i < pieces.length; i++) {
+      const t = plasticTorque(pieces[i].law);
+      if (t < weakestTorque) [w, weakestTorque] = [i, t];
+    }
     this.weakest = w;
+    this.weakestPlasticTorque = weakestTorque;
     this.sameAsWeakest = pieces.map((p) => sameLaw(p.law, pieces[w].law));
   }
+  private readonly weakestPlasticTorque: number;
 
   /** The state when the weakest piece twists at rate φ (rad/m). */
   stateAt(phi: number): BalanceState {
@@ -195,7 +200,7 @@ export class PlasticBalance {
   /** The most torque the side can carry, N·m: the weakest piece's fully plastic torque, or Infinity when it hardens. */
   torqueLimit(): number {
     const w = this.pieces[this.weakest].law;
-    return w.hardeningModulus === 0 ? plasticTorque(w) : Infinity;
+    return w.hardeningModulus === 0 ? this.weakestPlasticTorque : Infinity;
   }
 }
 
