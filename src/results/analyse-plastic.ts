@@ -3,7 +3,7 @@ import type { Side } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
 import { energyPerLength, plasticTorque, torqueAtTwistRate, yieldTorque, yieldTwistRate } from '../physics/plastic/plastic-torsion.ts';
 import type { MostStrained, PlasticPieceResult, PlasticResult, PlasticSideResult, PlasticVerdict } from './plastic-result.ts';
-import type { BalanceState } from '../physics/plastic/plastic-balance.ts';
+import type { BalanceState, PlasticBalance } from '../physics/plastic/plastic-balance.ts';
 import { sideBalance, type SideBalance } from './side-balance.ts';
 
 /** Points on the loading path drawn for the most strained piece. */
@@ -121,12 +121,13 @@ export function sideEndStateOnly(b: SideBalance, energy: number): BalanceState {
  * `sidePermanentTwist`), without building the state while the side stays elastic and unbroken,
  * as most Monte Carlo samples do; otherwise from the state itself. The same numbers either way.
  */
-export function sideEndSummary(b: SideBalance, energy: number): { torque: number; permanentTwist: number } {
-  if (energy <= b.balance.elasticLimitEnergy()) {
-    const s = b.balance.summaryForEnergy(energy);
+export function sideEndSummary(balance: PlasticBalance, energy: number): { torque: number; permanentTwist: number } {
+  if (energy <= balance.elasticLimitEnergy()) {
+    const s = balance.summaryForEnergy(energy);
     if (!s.fractured) return s;
   }
-  const state = sideEndStateOnly(b, energy);
+  // The end state reads the balance alone, not the side's facts, inertia or warnings.
+  const state = sideEndStateOnly({ balance, facts: [], inertia: NaN, warnings: [] }, energy);
   return { torque: state.torque, permanentTwist: sidePermanentTwist(state) };
 }
 

@@ -75,7 +75,7 @@ export function planSamples(c: Case, inputs: readonly UncertainInput[], readBack
       }
       // The balance past yield (`sideBalance` without the words the results show).
       const balance = new PlasticBalance(side.pieces.map((p) => balancePiece(w, p)));
-      const end = sideEndSummary({ balance, facts: [], inertia, warnings: [] }, energy);
+      const end = sideEndSummary(balance, energy);
       peakTorque = Math.max(peakTorque, end.torque);
       permanentTwist = Math.max(permanentTwist, end.permanentTwist);
       if (readBack) readBackSides.push({ balance, inertia });
