@@ -118,17 +118,20 @@ export function sideEndStateOnly(b: SideBalance, energy: number): BalanceState {
 
 /**
  * The side's end-state torque and permanent twist (`sideEndStateOnly` read through
- * `sidePermanentTwist`), without building the state while the side stays elastic and unbroken,
- * as most Monte Carlo samples do; otherwise from the state itself. The same numbers either way.
+ * `sidePermanentTwist`) without building the state, as the Monte Carlo's samples read it: while
+ * the side stays elastic and unbroken, in closed form; otherwise by `sideEndState`'s rule (the
+ * state at the break when the energy reaches the fracture limit, where the run is in two and keeps
+ * no twist; else the state that absorbs the energy). The same numbers either way.
  */
 export function sideEndSummary(balance: PlasticBalance, energy: number): { torque: number; permanentTwist: number } {
   if (energy <= balance.elasticLimitEnergy()) {
     const s = balance.summaryForEnergy(energy);
     if (!s.fractured) return s;
   }
-  // The end state reads the balance alone, not the side's facts, inertia or warnings.
-  const state = sideEndStateOnly({ balance, facts: [], inertia: NaN, warnings: [] }, energy);
-  return { torque: state.torque, permanentTwist: sidePermanentTwist(state) };
+  const limit = balance.fractureLimit();
+  if (energy >= limit.energy) return { torque: balance.torqueAt(limit.twistRate), permanentTwist: 0 };
+  const s = balance.summaryForEnergy(energy);
+  return { torque: s.torque, permanentTwist: s.fractured ? 0 : s.permanentTwist };
 }
 
 /** The permanent twist of a side's run at its end state, rad: 0 where a piece breaks (the run is in two; its unbroken pieces keep theirs). */

@@ -143,6 +143,11 @@ export class PlasticBalance {
     return this.stateAt(this.twistRateForEnergy(energy));
   }
 
+  /** The torque the side carries when the weakest piece twists at rate φ, N·m (`stateAt(φ).torque`). */
+  torqueAt(phi: number): number {
+    return torqueAtTwistRate(this.pieces[this.weakest].law, phi);
+  }
+
   /** The weakest piece's twist rate at which the side carries torque T; Infinity if it never does. */
   twistRateAtTorque(torque: number): number {
     return twistRateAtTorque(this.pieces[this.weakest].law, torque);
