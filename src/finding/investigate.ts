@@ -1,6 +1,6 @@
 import type { Case } from '../case/case.ts';
 import type { Metrics } from '../uncertainty/monte-carlo.ts';
-import { sampleMetrics, sampleMetricsOf } from '../uncertainty/sample-engine.ts';
+import { sampleEngine } from '../uncertainty/sample-engine.ts';
 import { runDynamicUncertainty, runUncertainty } from '../uncertainty/uncertainty.ts';
 import { judgeByInterval } from '../results/twist-findings.ts';
 import { analyseCase } from '../results/analyse-case.ts';
@@ -56,7 +56,7 @@ export function investigate(c: Case, opts: InvestigateOptions = {}): Investigati
   if (!u.wanted || samples === 0) return withFinding(results);
   const settings = { samples, seed: opts.seed ?? u.seed, strengthScatter: u.strengthScatter };
   // Where the twist read-back stands on the dynamic model, the sampler's own read-back is not shown (below): not sought.
-  const engine = results.pastYieldBasis === 'dynamic model' ? (k: Case) => sampleMetricsOf(k, false) : sampleMetrics;
+  const engine = sampleEngine(results.pastYieldBasis !== 'dynamic model');
   const uncertainty = runUncertainty(c, engine, settings);
   if (results.verdictBasis === 'dynamic model' && u.dynamicSamples > 0) {
     const elements = results.dynamic.elementTarget;

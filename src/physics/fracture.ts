@@ -35,19 +35,18 @@ export function fractureStrainFromReductionOfArea(ra: number): number {
  * which leaves out the necking strain. Undefined for a material with none of these.
  */
 export function fractureShearStrain(m: Material): FractureStrain | undefined {
-  if (m.fractureStrain !== undefined) return { value: m.fractureStrain, basis: `fracture shear strain given for ${m.key}` };
-  if (m.reductionOfArea !== undefined) {
-    return {
-      value: fractureStrainFromReductionOfArea(m.reductionOfArea),
-      basis: `√3·ln(1/(1 − RA)) from reduction of area ${(100 * m.reductionOfArea).toPrecision(3)} % (${m.source})`,
-    };
-  }
-  if (m.elongation !== undefined) {
-    return {
-      value: Math.sqrt(3) * Math.log(1 + m.elongation),
-      basis: `√3·ln(1 + e) from elongation ${(100 * m.elongation).toPrecision(3)} %, a low estimate because it leaves out necking (no reduction of area known)`,
-    };
-  }
+  const value = fractureShearStrainValue(m);
+  if (value === undefined) return undefined;
+  if (m.fractureStrain !== undefined) return { value, basis: `fracture shear strain given for ${m.key}` };
+  if (m.reductionOfArea !== undefined) return { value, basis: `√3·ln(1/(1 − RA)) from reduction of area ${(100 * m.reductionOfArea).toPrecision(3)} % (${m.source})` };
+  return { value, basis: `√3·ln(1 + e) from elongation ${(100 * m.elongation!).toPrecision(3)} %, a low estimate because it leaves out necking (no reduction of area known)` };
+}
+
+/** The value of `fractureShearStrain` without its basis (the Monte Carlo's samples need no words). */
+export function fractureShearStrainValue(m: Material): number | undefined {
+  if (m.fractureStrain !== undefined) return m.fractureStrain;
+  if (m.reductionOfArea !== undefined) return fractureStrainFromReductionOfArea(m.reductionOfArea);
+  if (m.elongation !== undefined) return Math.sqrt(3) * Math.log(1 + m.elongation);
   return undefined;
 }
 

@@ -26,8 +26,7 @@ export function permanentTwistAtSpeed(sides: readonly ReadBackSide[], speed: num
   let sum = 0;
   for (const s of sides) {
     if (s.between.length === 0) continue;
-    const state = s.balance.stateForEnergy(0.5 * s.inertia * speed ** 2);
-    for (const i of s.between) sum += state.pieces[i].permanentTwist;
+    sum = s.balance.permanentTwistAt(s.balance.twistRateForEnergy(0.5 * s.inertia * speed ** 2), s.between, sum);
   }
   return sum;
 }
@@ -67,16 +66,11 @@ export function speedForPermanentTwist(sides: readonly ReadBackSide[], twist: nu
  * state that leaves `twist`, then the speed whose energy ½·J·ω² is that state's energy.
  */
 function oneSideSpeed(s: ReadBackSide, twist: number): number | undefined {
-  const f = (phi: number) => {
-    const state = s.balance.stateAt(phi);
-    let sum = 0;
-    for (const i of s.between) sum += state.pieces[i].permanentTwist;
-    return sum;
-  };
+  const f = (phi: number) => s.balance.permanentTwistAt(phi, s.between);
   const start = Math.sqrt((2 * s.balance.yieldOnsetEnergy(s.between)) / s.inertia);
   const phi0 = s.balance.twistRateForEnergy(0.5 * s.inertia * start ** 2);
   const hi = growUntil(f, twist, Math.max(phi0, 1e-12), 64);
   if (hi === undefined) return undefined;
   const phi = bracketedRoot((p) => f(p) - twist, phi0, hi, 1e-14 * hi);
-  return Math.sqrt((2 * s.balance.stateAt(phi).energy) / s.inertia);
+  return Math.sqrt((2 * s.balance.energyAt(phi)) / s.inertia);
 }

@@ -3,7 +3,7 @@ import type { Side } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
 import { energyPerLength, plasticTorque, torqueAtTwistRate, yieldTorque, yieldTwistRate } from '../physics/plastic/plastic-torsion.ts';
 import type { MostStrained, PlasticPieceResult, PlasticResult, PlasticSideResult, PlasticVerdict } from './plastic-result.ts';
-import type { BalanceState } from '../physics/plastic/plastic-balance.ts';
+import type { BalanceState, PlasticBalance } from '../physics/plastic/plastic-balance.ts';
 import { keyedSeatNotes, sideBalance, type SideBalance } from './side-balance.ts';
 
 /** Points on the loading path drawn for the most strained piece. */
@@ -118,6 +118,24 @@ export function sideEndStateOnly(b: SideBalance, energy: number): BalanceState {
   if (energy > b.balance.elasticLimitEnergy()) return sideEndState(b, energy).state;
   const state = b.balance.stateForEnergy(energy);
   return state.pieces.some((p) => p.fractured) ? sideEndState(b, energy).state : state;
+}
+
+/**
+ * The side's end-state torque and permanent twist (`sideEndStateOnly` read through
+ * `sidePermanentTwist`) without building the state, as the Monte Carlo's samples read it: while
+ * the side stays elastic and unbroken, in closed form; otherwise by `sideEndState`'s rule (the
+ * state at the break when the energy reaches the fracture limit, where the run is in two and keeps
+ * no twist; else the state that absorbs the energy). The same numbers either way.
+ */
+export function sideEndSummary(balance: PlasticBalance, energy: number): { torque: number; permanentTwist: number } {
+  if (energy <= balance.elasticLimitEnergy()) {
+    const s = balance.summaryForEnergy(energy);
+    if (!s.fractured) return s;
+  }
+  const limit = balance.fractureLimit();
+  if (energy >= limit.energy) return { torque: balance.torqueAt(limit.twistRate), permanentTwist: 0 };
+  const s = balance.summaryForEnergy(energy);
+  return { torque: s.torque, permanentTwist: s.fractured ? 0 : s.permanentTwist };
 }
 
 /** The permanent twist of a side's run at its end state, rad: 0 where a piece breaks (the run is in two; its unbroken pieces keep theirs). */

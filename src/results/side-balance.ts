@@ -2,7 +2,7 @@ import type { Case, Segment } from '../case/case.ts';
 import { keysOnPiece } from '../model/hub-seat.ts';
 import type { ShaftPiece, Side } from '../model/shaft-model.ts';
 import { keyseatDepth, keyseatPlasticRatio } from '../physics/plastic/keyseat-section.ts';
-import { brittleFractureShear, fractureShearStrain, isBrittle } from '../physics/fracture.ts';
+import { brittleFractureShear, fractureShearStrain, fractureShearStrainValue, isBrittle } from '../physics/fracture.ts';
 import { PlasticBalance, type BalancePiece } from '../physics/plastic/plastic-balance.ts';
 import type { TorsionLaw } from '../physics/plastic/plastic-torsion.ts';
 import { shearYield } from '../physics/shear-strength.ts';
@@ -82,40 +82,47 @@ export interface SideBalance {
 }
 
 /**
- * Builds each piece's torque–twist law from its segment and material: ductile pieces yield at
- * the case criterion's shear yield (no K_t: net-section behaviour), with linear hardening when
+ * A piece's torque–twist law and fracture twist rate for the energy balance: ductile pieces yield
+ * at the case criterion's shear yield (no K_t: net-section behaviour; a keyed seat's net section,
+ * `pieceLaw`), with linear hardening when
  * the case asks for it; brittle pieces stay elastic up to their fracture stress (K_t applied).
  */
+export function balancePiece(c: Case, p: ShaftPiece): BalancePiece {
+  const seg = p.segment;
+  const m = c.materials[seg.material];
+  const g = m.shearModulus!;
+  const c2 = seg.diameter / 2;
+  if (isBrittle(m)) {
+    const law: TorsionLaw = { outerRadius: c2, innerRadius: seg.bore / 2, shearModulus: g, shearYield: Infinity, hardeningModulus: 0 };
+    return { length: p.end - p.start, law, fractureTwistRate: brittleFractureShear(m, seg.kt) / (g * c2) };
+  }
+  const fs = fractureShearStrainValue(m);
+  return { length: p.end - p.start, law: pieceLaw(c, p)!, fractureTwistRate: fs !== undefined ? fs / c2 : Infinity };
+}
+
+/** Builds the side's balance from its pieces' laws (`balancePiece`), with what the results say about each piece's material. */
 export function sideBalance(side: Side, c: Case, sideInertia: number): SideBalance {
   const warnings: string[] = [];
-  const facts: PieceMaterialFacts[] = [];
-  const inputs: BalancePiece[] = side.pieces.map((p) => {
+  const inputs = side.pieces.map((p) => balancePiece(c, p));
+  const facts = side.pieces.map((p, i): PieceMaterialFacts => {
     const seg = p.segment;
     const m = c.materials[seg.material];
-    const g = m.shearModulus!;
-    const c2 = seg.diameter / 2;
-    const brittle = isBrittle(m);
-    if (brittle) {
-      const tauF = brittleFractureShear(m, seg.kt);
-      facts.push({
+    if (isBrittle(m)) {
+      return {
         material: m.key,
-        brittle,
-        fractureStrain: tauF / g,
+        brittle: true,
+        fractureStrain: brittleFractureShear(m, seg.kt) / m.shearModulus!,
         fractureStrainBasis: `brittle (elongation below 5 %): breaks when K_t·τ reaches the tensile strength, at an elastic outer-fibre strain of S_ut/(K_t·G)`,
         hardeningModulus: 0,
-      });
-      const law: TorsionLaw = { outerRadius: c2, innerRadius: seg.bore / 2, shearModulus: g, shearYield: Infinity, hardeningModulus: 0 };
-      return { length: p.end - p.start, law, fractureTwistRate: tauF / (g * c2) };
+      };
     }
-    const law = pieceLaw(c, p)!;
-    const h = law.hardeningModulus;
+    const h = inputs[i].law.hardeningModulus;
     if (c.analysis.hardening === 'linear' && h === 0) {
       warnings.push(`Material ${m.key} has no tensile strength above its yield or no elongation, so segment ${seg.index + 1} is taken as perfectly plastic.`);
     }
     const fs = fractureShearStrain(m);
     if (!fs) warnings.push(`Material ${m.key} has no reduction of area, elongation or fracture_strain, so no fracture check is made for segment ${seg.index + 1}.`);
-    facts.push({ material: m.key, brittle, fractureStrain: fs?.value, fractureStrainBasis: fs?.basis ?? 'unknown', hardeningModulus: h });
-    return { length: p.end - p.start, law, fractureTwistRate: fs ? fs.value / c2 : Infinity };
+    return { material: m.key, brittle: false, fractureStrain: fs?.value, fractureStrainBasis: fs?.basis ?? 'unknown', hardeningModulus: h };
   });
   return { balance: new PlasticBalance(inputs), facts, inertia: sideInertia, warnings: [...new Set(warnings)] };
 }

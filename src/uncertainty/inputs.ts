@@ -24,6 +24,8 @@ export interface UncertainInput {
   basis: SpreadBasis;
   /** A new case with this input set to `value`; the input case is not changed. */
   apply: (c: Case, value: number) => Case;
+  /** Sets this input to `value` in `c` itself (a `sampleCopy`, made once for many samples). */
+  set: (c: Case, value: number) => void;
 }
 
 /** z of the 5th percentile of the standard normal. */
@@ -47,9 +49,31 @@ const MEASURED = /^observed\.permanent_twist\[(\d+)\]\.angle$/;
 const MATERIAL = /^materials\.(.+)\.(shear_modulus|yield_strength|tensile_strength|density)$/;
 const MATERIAL_PROPS = { shear_modulus: 'shearModulus', yield_strength: 'yieldStrength', tensile_strength: 'tensileStrength', density: 'density' } as const;
 
-/** The setter for a field path, or undefined when the Monte Carlo does not vary that field. */
-function setterFor(c: Case, path: string): { nominal: number; apply: UncertainInput['apply'] } | undefined {
-  if (path === 'speed') return { nominal: c.speed, apply: (k, v) => ({ ...k, speed: v }) };
+/**
+ * A copy of the case whose drawn fields can be set in place: the speed, segments, parts, materials
+ * and measured twists are copied, the rest is shared. The Monte Carlo makes one per case and sets
+ * every drawn input in it for each sample (`UncertainInput.set`), rather than a case per input.
+ */
+export function sampleCopy(c: Case): Case {
+  return {
+    ...c,
+    shaft: { ...c.shaft, segments: c.shaft.segments.map((s) => ({ ...s })) },
+    stations: c.stations.map((s) => ({ ...s, parts: s.parts.map((p) => ({ ...p, dimensions: { ...p.dimensions } })) })),
+    materials: Object.fromEntries(Object.entries(c.materials).map(([k, m]) => [k, { ...m }])),
+    observed: { ...c.observed, permanentTwist: c.observed.permanentTwist.map((t) => ({ ...t })) },
+  };
+}
+
+/** The in-place setter for a field path, or undefined when the Monte Carlo does not vary that field. */
+function setterFor(c: Case, path: string): { nominal: number; set: UncertainInput['set'] } | undefined {
+  if (path === 'speed') {
+    return {
+      nominal: c.speed,
+      set: (k, v) => {
+        k.speed = v;
+      },
+    };
+  }
   let m = SEGMENT.exec(path);
   if (m) {
     const index = Number(m[1]);
@@ -58,7 +82,9 @@ function setterFor(c: Case, path: string): { nominal: number; apply: UncertainIn
     if (!seg) return undefined;
     return {
       nominal: seg[field],
-      apply: (k, v) => ({ ...k, shaft: { segments: k.shaft.segments.map((s) => (s.index === index ? { ...s, [field]: v } : s)) } }),
+      set: (k, v) => {
+        for (const s of k.shaft.segments) if (s.index === index) s[field] = v;
+      },
     };
   }
   m = PART.exec(path);
@@ -68,34 +94,24 @@ function setterFor(c: Case, path: string): { nominal: number; apply: UncertainIn
     if (!part || part.dimensions[field] === undefined) return undefined;
     return {
       nominal: part.dimensions[field],
-      apply: (k, v) => ({
-        ...k,
-        stations: k.stations.map((s, i) =>
-          i !== si
-            ? s
-            : {
-                ...s,
-                parts: s.parts.map((p, j) => {
-                  if (j !== pi) return p;
-                  const dimensions = { ...p.dimensions, [field]: v };
-                  return { ...p, dimensions, inertia: partInertia(p.shape, dimensions) };
-                }),
-              },
-        ),
-      }),
+      set: (k, v) => {
+        const p = k.stations[si].parts[pi];
+        p.dimensions[field] = v;
+        // The inertia follows its dimensions, as the case reader computed it.
+        p.inertia = partInertia(p.shape, p.dimensions);
+      },
     };
   }
   m = MEASURED.exec(path);
   if (m) {
-    const k = Number(m[1]);
-    const t = c.observed.permanentTwist[k];
+    const i = Number(m[1]);
+    const t = c.observed.permanentTwist[i];
     if (!t) return undefined;
     return {
       nominal: t.angle,
-      apply: (kase, v) => ({
-        ...kase,
-        observed: { ...kase.observed, permanentTwist: kase.observed.permanentTwist.map((x, i) => (i === k ? { ...x, angle: v } : x)) },
-      }),
+      set: (k, v) => {
+        k.observed.permanentTwist[i].angle = v;
+      },
     };
   }
   m = MATERIAL.exec(path);
@@ -104,9 +120,26 @@ function setterFor(c: Case, path: string): { nominal: number; apply: UncertainIn
     const prop = MATERIAL_PROPS[field];
     const mat = c.materials[key];
     if (!mat || mat[prop] === undefined) return undefined;
-    return { nominal: mat[prop]!, apply: (k, v) => ({ ...k, materials: { ...k.materials, [key]: { ...k.materials[key], [prop]: v } } }) };
+    return {
+      nominal: mat[prop]!,
+      set: (k, v) => {
+        k.materials[key][prop] = v;
+      },
+    };
   }
   return undefined;
+}
+
+/** An input with its setter, and `apply` on a copy of the case. */
+function withApply(s: { nominal: number; set: UncertainInput['set'] }): { nominal: number; set: UncertainInput['set']; apply: UncertainInput['apply'] } {
+  return {
+    ...s,
+    apply: (k, v) => {
+      const w = sampleCopy(k);
+      s.set(w, v);
+      return w;
+    },
+  };
 }
 
 /**
@@ -123,7 +156,7 @@ export function uncertainInputs(c: Case, strengthScatter: number): { inputs: Unc
       notVaried.push(path);
       continue;
     }
-    inputs.push({ path, ...s, basis: 'band', spread: { kind: 'normal', mean: s.nominal, sd: sdOfTolerance(tol, s.nominal) } });
+    inputs.push({ path, ...withApply(s), basis: 'band', spread: { kind: 'normal', mean: s.nominal, sd: sdOfTolerance(tol, s.nominal) } });
   }
   if (strengthScatter > 0) {
     const shaftMaterials = new Set(c.shaft.segments.map((s) => s.material));
@@ -133,7 +166,7 @@ export function uncertainInputs(c: Case, strengthScatter: number): { inputs: Unc
       const mat = c.materials[key];
       const s = setterFor(c, path)!;
       const basis = mat.strengthBasis ?? 'typical';
-      inputs.push({ path, ...s, basis, spread: strengthSpread(mat.yieldStrength!, basis, strengthScatter) });
+      inputs.push({ path, ...withApply(s), basis, spread: strengthSpread(mat.yieldStrength!, basis, strengthScatter) });
     }
   }
   return { inputs, notVaried };

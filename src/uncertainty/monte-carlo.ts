@@ -1,5 +1,5 @@
 import type { Case } from '../case/case.ts';
-import type { UncertainInput } from './inputs.ts';
+import { sampleCopy, type UncertainInput } from './inputs.ts';
 import { normalSource, seededRandom } from './random.ts';
 
 /** The numbers a Monte Carlo sample keeps from one run of the engine. */
@@ -13,8 +13,25 @@ export interface Metrics {
   speedsForMeasured?: (number | undefined)[];
 }
 
-/** One run of the engine on a case: the same function the single run uses. */
-export type Engine = (c: Case) => Metrics;
+/**
+ * One run of the engine on a case: the same function the single run uses. An engine may carry a
+ * `plan`: set up once for a case and its drawn inputs, it runs a sample from the drawn values (in
+ * the inputs' order) and gives the numbers the engine gives for the case with those values set.
+ * Without one, each sample's values are set in one copy of the case (`sampleCopy`).
+ */
+export type Engine = ((c: Case) => Metrics) & { plan?: SamplePlanner };
+
+/** An engine set up once per case for many samples (`Engine.plan`). */
+export type SamplePlanner = (c: Case, inputs: readonly UncertainInput[]) => (values: Float64Array) => Metrics;
+
+/** Case by case: all of a sample's drawn values set in one copy of the case, then the engine on it. */
+function caseByCase(engine: (c: Case) => Metrics): SamplePlanner {
+  return (c, inputs) => (values) => {
+    const k = sampleCopy(c);
+    for (let i = 0; i < inputs.length; i++) inputs[i].set(k, values[i]);
+    return engine(k);
+  };
+}
 
 /** The sampled metrics, one array per metric, one entry per sample. */
 export interface Samples {
@@ -45,15 +62,18 @@ export function monteCarlo(c: Case, inputs: readonly UncertainInput[], engine: E
     permanentTwist: undefined,
     speedsForMeasured: [],
   };
+  const run = (engine.plan ?? caseByCase(engine))(c, inputs);
+  // Drawn in the inputs' order, sample after sample, from one stream: the same seed gives the same draws whatever the engine.
+  const values = new Float64Array(inputs.length);
   for (let i = 0; i < samples; i++) {
-    let k = c;
-    for (const input of inputs) {
+    for (let j = 0; j < inputs.length; j++) {
+      const input = inputs[j];
       const floor = 0.01 * input.nominal;
       let v = input.spread.mean + input.spread.sd * z();
       for (let tries = 0; floor > 0 && v < floor && tries < MAX_REDRAWS; tries++) v = input.spread.mean + input.spread.sd * z();
-      k = input.apply(k, Math.max(v, floor));
+      values[j] = Math.max(v, floor);
     }
-    const m = engine(k);
+    const m = run(values);
     onProgress?.(i + 1, samples);
     out.yieldRatio[i] = m.yieldRatio;
     out.maxShearStress[i] = m.maxShearStress;

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildShaftModel } from '../../src/model/shaft-model.ts';
-import { sideEndState, sideEndStateOnly } from '../../src/results/analyse-plastic.ts';
+import { sideEndState, sideEndStateOnly, sideEndSummary, sidePermanentTwist } from '../../src/results/analyse-plastic.ts';
+import { PlasticBalance } from '../../src/physics/plastic/plastic-balance.ts';
 import { sideBalance } from '../../src/results/side-balance.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { ep5Case } from '../data/ep5-case.ts';
@@ -141,6 +142,37 @@ describe('the end state without the fracture limit (the Monte Carlo sample engin
         lean.pieces.forEach((p, i) => expect(Math.abs(p.twist - full.pieces[i].twist)).toBeLessThan(1e-9 * (1 + Math.abs(full.pieces[i].twist))));
       }),
       { numRuns: 60 },
+    );
+  });
+});
+
+describe('the end state summary (the Monte Carlo reads torque and permanent twist alone)', () => {
+  it("is the end state's torque and permanent twist to the last digit, elastic, past yield and past the break, on one and on several pieces (property)", () => {
+    // Independent calculation: the end state itself (`sideEndStateOnly`) read through `sidePermanentTwist`.
+    const law = (c2: number, c1: number, tauY: number, h = 0) => ({ outerRadius: c2, innerRadius: c1, shearModulus: 79.3e9, shearYield: tauY, hardeningModulus: h });
+    const balances = [
+      new PlasticBalance([{ length: 0.5, law: law(0.02, 0, 306e6), fractureTwistRate: 2.5 }]),
+      new PlasticBalance([
+        { length: 0.4, law: law(0.03, 0, 300e6), fractureTwistRate: 1.5 },
+        { length: 0.25, law: law(0.02, 0, 300e6), fractureTwistRate: 3 },
+        { length: 0.1, law: law(0.025, 0.01, 300e6, 2e9), fractureTwistRate: Infinity },
+      ]),
+      // A brittle piece (elastic to its fracture rate) in series with a ductile one.
+      new PlasticBalance([
+        { length: 0.3, law: law(0.03, 0, Infinity), fractureTwistRate: 0.08 },
+        { length: 0.2, law: law(0.02, 0, 300e6), fractureTwistRate: 2 },
+      ]),
+    ];
+    fc.assert(
+      fc.property(fc.constantFrom(...balances), fc.double({ min: 0, max: 3, noNaN: true }), (balance, share) => {
+        const finite = balance.fractureLimit().energy;
+        const energy = share * (Number.isFinite(finite) ? finite : 10 * balance.elasticLimitEnergy());
+        const state = sideEndStateOnly({ balance, facts: [], inertia: 1, warnings: [] }, energy);
+        const s = sideEndSummary(balance, energy);
+        expect(s.torque).toBe(state.torque);
+        expect(s.permanentTwist).toBe(sidePermanentTwist(state));
+      }),
+      { numRuns: 150 },
     );
   });
 });

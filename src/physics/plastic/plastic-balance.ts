@@ -48,13 +48,18 @@ export class PlasticBalance {
 
   constructor(readonly pieces: readonly BalancePiece[]) {
     if (pieces.length === 0) throw new RangeError('PlasticBalance: a side needs at least one piece');
+    // Each piece's fully plastic torque once (the Monte Carlo builds a balance per sample).
     let w = 0;
-    pieces.forEach((p, i) => {
-      if (plasticTorque(p.law) < plasticTorque(pieces[w].law)) w = i;
-    });
+    let weakestTorque = plasticTorque(pieces[0].law);
+    for (let i = 1; i < pieces.length; i++) {
+      const t = plasticTorque(pieces[i].law);
+      if (t < weakestTorque) [w, weakestTorque] = [i, t];
+    }
     this.weakest = w;
+    this.weakestPlasticTorque = weakestTorque;
     this.sameAsWeakest = pieces.map((p) => sameLaw(p.law, pieces[w].law));
   }
+  private readonly weakestPlasticTorque: number;
 
   /** The state when the weakest piece twists at rate φ (rad/m). */
   stateAt(phi: number): BalanceState {
@@ -98,9 +103,49 @@ export class PlasticBalance {
     return bracketedRoot((phi) => f(phi) - energy, hi === bound ? lo : 0, hi, 1e-14 * hi);
   }
 
+  /**
+   * What the Monte Carlo reads of the state that has absorbed `energy`: its torque, the permanent
+   * twist summed over the pieces, and whether any piece reached its fracture twist rate.
+   * `stateForEnergy(energy)` without building the state: the same functions in the same order, so
+   * the same numbers (test/physics/plastic/plastic-balance.test.ts holds them to the state's).
+   */
+  summaryForEnergy(energy: number): { torque: number; permanentTwist: number; fractured: boolean } {
+    const phi = this.twistRateForEnergy(energy);
+    const torque = torqueAtTwistRate(this.pieces[this.weakest].law, phi);
+    let permanentTwist = 0;
+    let fractured = false;
+    for (let i = 0; i < this.pieces.length; i++) {
+      const p = this.pieces[i];
+      const rate = this.sameAsWeakest[i] ? phi : twistRateAtTorque(p.law, torque);
+      permanentTwist += residualTwistRate(p.law, rate) * p.length;
+      if (rate >= p.fractureTwistRate) fractured = true;
+    }
+    return { torque, permanentTwist, fractured };
+  }
+
+  /**
+   * The permanent twist of the pieces `among` (indices) when the weakest piece twists at rate φ,
+   * added to `start` one piece at a time in their order, rad: `stateAt(φ)`'s pieces read without
+   * building the state (the read-back's root asks for it at every step).
+   */
+  permanentTwistAt(phi: number, among: readonly number[], start = 0): number {
+    const torque = torqueAtTwistRate(this.pieces[this.weakest].law, phi);
+    let sum = start;
+    for (const i of among) {
+      const p = this.pieces[i];
+      sum += residualTwistRate(p.law, this.sameAsWeakest[i] ? phi : twistRateAtTorque(p.law, torque)) * p.length;
+    }
+    return sum;
+  }
+
   /** The state that has absorbed `energy`, J. */
   stateForEnergy(energy: number): BalanceState {
     return this.stateAt(this.twistRateForEnergy(energy));
+  }
+
+  /** The torque the side carries when the weakest piece twists at rate φ, N·m (`stateAt(φ).torque`). */
+  torqueAt(phi: number): number {
+    return torqueAtTwistRate(this.pieces[this.weakest].law, phi);
   }
 
   /** The weakest piece's twist rate at which the side carries torque T; Infinity if it never does. */
@@ -127,14 +172,15 @@ export class PlasticBalance {
       }
       if (phi < best.phi) best = { phi, piece: i };
     });
-    return { energy: Number.isFinite(best.phi) ? this.stateAt(best.phi).energy : Infinity, piece: best.piece, twistRate: best.phi };
+    // The energy alone (`energyAt`, the state's energy to the last digit), not a whole state: a sample past yield asks for it.
+    return { energy: Number.isFinite(best.phi) ? this.energyAt(best.phi) : Infinity, piece: best.piece, twistRate: best.phi };
   }
 
   /** Energy at which the first of the pieces `among` (indices) starts to yield, J; Infinity if none ever does. */
   yieldOnsetEnergy(among: readonly number[]): number {
     const ty = Math.min(...among.map((i) => yieldTorque(this.pieces[i].law)));
     if (!(ty < this.torqueLimit())) return Infinity;
-    return this.stateAt(this.twistRateAtTorque(ty)).energy;
+    return this.energyAt(this.twistRateAtTorque(ty));
   }
 
   /** The side's compliance Σ L/(G·J_p), rad/(N·m), and the strain energy at which its first piece yields, J (kept: the Monte Carlo asks per sample). */
@@ -145,8 +191,12 @@ export class PlasticBalance {
 
   private elasticLimit(): { compliance: number; energy: number } {
     if (this.elastic) return this.elastic;
-    const compliance = this.pieces.reduce((s, p) => s + p.length / rigidity(p.law), 0);
-    const ty = Math.min(...this.pieces.map((p) => yieldTorque(p.law)));
+    let compliance = 0;
+    let ty = Infinity;
+    for (const p of this.pieces) {
+      compliance += p.length / rigidity(p.law);
+      ty = Math.min(ty, yieldTorque(p.law));
+    }
     this.elastic = { compliance, energy: Number.isFinite(ty) ? 0.5 * ty * ty * compliance : Infinity };
     return this.elastic;
   }
@@ -155,7 +205,7 @@ export class PlasticBalance {
   /** The most torque the side can carry, N·m: the weakest piece's fully plastic torque, or Infinity when it hardens. */
   torqueLimit(): number {
     const w = this.pieces[this.weakest].law;
-    return w.hardeningModulus === 0 ? plasticTorque(w) : Infinity;
+    return w.hardeningModulus === 0 ? this.weakestPlasticTorque : Infinity;
   }
 }
 

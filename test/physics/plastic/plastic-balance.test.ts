@@ -186,3 +186,35 @@ describe('PlasticBalance.energyAt', () => {
     );
   });
 });
+
+describe('PlasticBalance.summaryForEnergy', () => {
+  it("is the state's torque, summed permanent twist and fracture, elastic and past yield, with and without a fracture limit (property)", () => {
+    // Independent calculation: the state itself (`stateForEnergy`), read piece by piece.
+    const pieces = (fracture: number) => [piece(0.4, law(0.03, 0, 79.3e9, 300e6), fracture), piece(0.25, law(0.02, 0, 79.3e9, 300e6), fracture), piece(0.1, law(0.025, 0.01, 79.3e9, 300e6, 2e9))];
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 5e4, noNaN: true }), fc.constantFrom(Infinity, 0.5, 2), (energy, fracture) => {
+        const b = new PlasticBalance(pieces(fracture));
+        const state = b.stateForEnergy(energy);
+        const s = b.summaryForEnergy(energy);
+        expect(s.torque).toBe(state.torque);
+        expect(s.permanentTwist).toBe(state.pieces.reduce((sum, p) => sum + p.permanentTwist, 0));
+        expect(s.fractured).toBe(state.pieces.some((p) => p.fractured));
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
+
+describe('PlasticBalance.permanentTwistAt', () => {
+  it("is the state's permanent twist of the pieces asked for, added in their order, at every twist rate (property)", () => {
+    // Independent calculation: the state itself (`stateAt`), its pieces summed one by one.
+    const b = new PlasticBalance([piece(0.4, law(0.03, 0, 79.3e9, 300e6)), piece(0.25, law(0.02, 0, 79.3e9, 300e6)), piece(0.1, law(0.025, 0.01, 79.3e9, 300e6, 2e9))]);
+    fc.assert(
+      fc.property(fc.double({ min: 1e-6, max: 5, noNaN: true }), fc.subarray([0, 1, 2], { minLength: 1 }), fc.double({ min: 0, max: 1, noNaN: true }), (phi, among, start) => {
+        const pieces = b.stateAt(phi).pieces;
+        expect(b.permanentTwistAt(phi, among, start)).toBe(among.reduce((sum, i) => sum + pieces[i].permanentTwist, start));
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
