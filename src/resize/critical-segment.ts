@@ -68,7 +68,8 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
   let hi = present;
   if (excess(present) > 0) for (let i = 0; i < 60 && excess(hi) > 0; i++) hi *= 2;
   else for (let i = 0; i < 60 && excess(lo) <= 0; i++) lo /= 2;
-  const ownDiameter = bisect(excess, lo, hi);
+  // To a part in a million: shown to 4 figures and then rounded up to a stock size.
+  const ownDiameter = bisect(excess, lo, hi, 1e-6);
   const atOwn = checkAt(ownDiameter);
   const othersAtOwn = othersYieldRatio(atOwn, side, segment.index);
   const fits = othersAtOwn <= target * (1 + 1e-9);
@@ -76,11 +77,14 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
 
   const from = 0.8 * Math.min(present, ownDiameter);
   const to = 1.25 * Math.max(present, ownDiameter);
-  const sweep = Array.from({ length: SWEEP_POINTS + 1 }, (_, i) => {
-    const diameter = from + ((to - from) * i) / SWEEP_POINTS;
-    const run = runAt(diameter);
-    return { diameter, sideYieldRatio: sideYieldRatio(run, side), segmentYieldRatio: segmentYieldRatio(run, side, segment.index)! };
-  });
+  // The figure's sweep (an energy-method rerun a point) is run only where the figure is drawn.
+  let sweep: CriticalSegmentOption['sweep'] | undefined;
+  const sweepOnce = () =>
+    (sweep ??= Array.from({ length: SWEEP_POINTS + 1 }, (_, i) => {
+      const diameter = from + ((to - from) * i) / SWEEP_POINTS;
+      const run = runAt(diameter);
+      return { diameter, sideYieldRatio: sideYieldRatio(run, side), segmentYieldRatio: segmentYieldRatio(run, side, segment.index)! };
+    }));
 
   const option: CriticalSegmentOption = {
     side,
@@ -89,7 +93,9 @@ export function criticalSegment(c: Case, r: Results, designFactor: number): Crit
     ownDiameter,
     othersAtOwn,
     verdict,
-    sweep,
+    get sweep() {
+      return sweepOnce();
+    },
     stockSizes: stockSizesBetween(from, to, c.units),
   };
   if (fits) {

@@ -28,7 +28,9 @@ describe('resize the critical segment only', () => {
     expect(o.segment.index).toBe(0);
     // Checked by independent reruns of the engine at the answer and just below it:
     const at = analyseCase(withDiameters(c, new Map([[0, o.diameter!]])));
-    expect(rel(segmentYieldRatio(at, 'A', 0)!, 1 / 1.5)).toBeLessThan(1e-8);
+    // The search stops at a part in a million of the diameter (shown to 4 figures, then rounded up
+    // to stock); the stress goes as about d⁻³, so the ratio is within a few parts in a million.
+    expect(rel(segmentYieldRatio(at, 'A', 0)!, 1 / 1.5)).toBeLessThan(1e-5);
     expect(othersYieldRatio(at, 'A', 0)).toBeLessThanOrEqual(1 / 1.5);
     const below = analyseCase(withDiameters(c, new Map([[0, o.diameter! * 0.999]])));
     expect(segmentYieldRatio(below, 'A', 0)!).toBeGreaterThan(1 / 1.5);
