@@ -3,7 +3,7 @@ import type { Side } from '../model/shaft-model.ts';
 import type { SideResult } from '../physics/energy-method.ts';
 import { energyPerLength, plasticTorque, torqueAtTwistRate, yieldTorque, yieldTwistRate } from '../physics/plastic/plastic-torsion.ts';
 import type { MostStrained, PlasticPieceResult, PlasticResult, PlasticSideResult, PlasticVerdict } from './plastic-result.ts';
-import type { BalanceState, PlasticBalance } from '../physics/plastic/plastic-balance.ts';
+import type { PlasticBalance } from '../physics/plastic/plastic-balance.ts';
 import { keyedSeatNotes, sideBalance, type SideBalance } from './side-balance.ts';
 
 /** Points on the loading path drawn for the most strained piece. */
@@ -108,20 +108,7 @@ export function sideEndState(b: SideBalance, energy: number) {
 }
 
 /**
- * The same end state without the fracture limit while the side is elastic unless it breaks there
- * (a brittle piece): the state that absorbs `energy` has a piece at its fracture twist rate exactly
- * when that energy reaches the limit (the energy grows with the twist rate of every piece), so the
- * limit is sought only then. For the Monte Carlo's samples, most of which stay elastic.
- */
-export function sideEndStateOnly(b: SideBalance, energy: number): BalanceState {
-  // Past the elastic limit the fracture limit is cheaper than the root it may make needless.
-  if (energy > b.balance.elasticLimitEnergy()) return sideEndState(b, energy).state;
-  const state = b.balance.stateForEnergy(energy);
-  return state.pieces.some((p) => p.fractured) ? sideEndState(b, energy).state : state;
-}
-
-/**
- * The side's end-state torque and permanent twist (`sideEndStateOnly` read through
+ * The side's end-state torque and permanent twist (`sideEndState`'s state read through
  * `sidePermanentTwist`) without building the state, as the Monte Carlo's samples read it: while
  * the side stays elastic and unbroken, in closed form; otherwise by `sideEndState`'s rule (the
  * state at the break when the energy reaches the fracture limit, where the run is in two and keeps

@@ -2,8 +2,9 @@ import type { Case } from '../../src/case/case.ts';
 import { buildShaftModel } from '../../src/model/shaft-model.ts';
 import { energyMethodSide } from '../../src/physics/energy-method.ts';
 import { speedForPermanentTwist, type ReadBackSide } from '../../src/physics/read-back.ts';
-import { sideEndStateOnly, sidePermanentTwist } from '../../src/results/analyse-plastic.ts';
-import { sideBalance } from '../../src/results/side-balance.ts';
+import type { BalanceState } from '../../src/physics/plastic/plastic-balance.ts';
+import { sideEndState, sidePermanentTwist } from '../../src/results/analyse-plastic.ts';
+import { sideBalance, type SideBalance } from '../../src/results/side-balance.ts';
 import type { Metrics } from '../../src/uncertainty/monte-carlo.ts';
 
 const EPS = 1e-9;
@@ -45,4 +46,17 @@ export function referenceSampleMetrics(c: Case, readBack: boolean): Metrics {
     return sides.some((s) => s.between.length > 0) ? speedForPermanentTwist(sides, m.angle) : undefined;
   });
   return { yieldRatio, maxShearStress, peakTorque, permanentTwist, speedsForMeasured };
+}
+
+/**
+ * The same end state without the fracture limit while the side is elastic unless it breaks there
+ * (a brittle piece): the state that absorbs `energy` has a piece at its fracture twist rate exactly
+ * when that energy reaches the limit (the energy grows with the twist rate of every piece), so the
+ * limit is sought only then. The sampler's end state before the per-case plan (`sideEndSummary` now), kept as its reference.
+ */
+export function sideEndStateOnly(b: SideBalance, energy: number): BalanceState {
+  // Past the elastic limit the fracture limit is cheaper than the root it may make needless.
+  if (energy > b.balance.elasticLimitEnergy()) return sideEndState(b, energy).state;
+  const state = b.balance.stateForEnergy(energy);
+  return state.pieces.some((p) => p.fractured) ? sideEndState(b, energy).state : state;
 }

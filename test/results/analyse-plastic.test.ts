@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildShaftModel } from '../../src/model/shaft-model.ts';
-import { sideEndState, sideEndStateOnly, sideEndSummary, sidePermanentTwist } from '../../src/results/analyse-plastic.ts';
+import { sideEndState, sideEndSummary, sidePermanentTwist } from '../../src/results/analyse-plastic.ts';
+import { sideEndStateOnly } from '../helpers/reference-sample-engine.ts';
 import { PlasticBalance } from '../../src/physics/plastic/plastic-balance.ts';
 import { sideBalance } from '../../src/results/side-balance.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
