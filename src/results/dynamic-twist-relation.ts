@@ -5,7 +5,7 @@ import { yieldTorque } from '../physics/plastic/plastic-torsion.ts';
 import { bracketedRoot } from '../physics/root-find.ts';
 import { dynamicPieceDamage } from './dynamic-piece-damage.ts';
 import { solveDynamics } from './dynamic-solve.ts';
-import { segmentLaw, sideBalance } from './side-balance.ts';
+import { pieceLaw, sideBalance } from './side-balance.ts';
 import { balanceTwistRelation, type TwistRelation } from './twist-findings.ts';
 
 /** What a piece of shaft carried and kept in one run of the dynamic model. */
@@ -20,12 +20,15 @@ export interface RecordedPiece {
 interface Run {
   twist: number;
   broken: boolean;
-  /** Largest peak torque over first-yield torque among the pieces between the positions (net section, no kt). */
+  /** Largest peak torque over first-yield torque among the pieces between the positions (net section, a keyed seat's own, no kt). */
   margin: number;
 }
 
-/** Points of the figure's curve: each is one run of the dynamic model. */
-const CURVE_POINTS = 12;
+/**
+ * The figure's curve goes through the runs the read-back made and adds one wherever two lie more
+ * than a ninth of its top speed apart (each is one run of the dynamic model; `curveSpeeds`).
+ */
+const CURVE_POINTS = 9;
 /** Relative width in speed to which the inversions are carried (speeds are shown to 4 figures). */
 const SPEED_TOLERANCE = 1e-5;
 /** The onset of yield is found to this share of its speed (it sets the figure's range and the zero-twist reading, shown to 4 figures). */
@@ -69,13 +72,18 @@ export function dynamicTwistRelation(
   if (involved.length === 0) return undefined;
   const inertia = involved.reduce((a, b) => a + b, 0);
   const fixed: Case = { ...c, analysis: { ...c.analysis, elements: elementTarget, dynamicPlasticity: true } };
-  const yieldTorqueOf = new Map<ShaftPiece['segment'], number>();
+  // Each piece's own first yield, as its elements' law has it: a keyed seat's net section yields
+  // below its segment's gross one (`pieceLaw`). With the gross one the margin would stay short of 1
+  // where the seat already yields, and the onset's root would be a step, not a crossing.
+  // Each run builds its own chain: pieces are known by where they lie.
+  const yieldTorqueOf = new Map<string, number>();
   const pieceYield = (p: ShaftPiece) => {
-    let t = yieldTorqueOf.get(p.segment);
+    const key = `${p.start} ${p.end}`;
+    let t = yieldTorqueOf.get(key);
     if (t === undefined) {
-      const law = segmentLaw(c, p.segment);
+      const law = pieceLaw(c, p);
       t = law ? yieldTorque(law) : Infinity;
-      yieldTorqueOf.set(p.segment, t);
+      yieldTorqueOf.set(key, t);
     }
     return t;
   };
@@ -195,5 +203,6 @@ export function dynamicTwistRelation(
     // Asked where no speed was found: the runs made while looking went as far as the search does.
     breaksBefore: (t) => bracket(t) === undefined && [...runs.values()].some((r) => r.broken),
     curvePoints: CURVE_POINTS,
+    knownSpeeds: () => [...runs.keys()],
   };
 }

@@ -133,8 +133,35 @@ export interface TwistRelation {
   energyAt(speed: number): number;
   /** Whether the model predicts fracture after a stop from speed ω. */
   breaksAt(speed: number): boolean;
-  /** Points of the curve kept for the figure. */
+  /** The curve's widest step in speed is its top speed over this. */
   curvePoints: number;
+  /** Speeds the relation has already been evaluated at (a costly model's runs), which the curve takes before adding its own. */
+  knownSpeeds?(): number[];
+}
+
+/**
+ * The speeds of the figure's curve, up to `top`: every speed in `must` and `known` (points already
+ * paid for) in range, and evenly spaced points added wherever two neighbours lie more than
+ * top/points apart above the onset. From standstill to the onset the twist is none, so no points
+ * are added there. For a model whose every point is a full run this puts the curve through the
+ * runs its read-back already made and adds only what the gaps need.
+ */
+export function curveSpeeds(top: number, points: number, onset: number, must: readonly number[], known: readonly number[]): number[] {
+  const step = top / points;
+  const base = [...new Set([0, top, ...must, ...known, ...(Number.isFinite(onset) && onset < top ? [onset] : [])].filter((w) => w >= 0 && w <= top))].sort((a, b) => a - b);
+  const out: number[] = [];
+  base.forEach((w, i) => {
+    if (i > 0) {
+      const from = base[i - 1];
+      const gap = w - from;
+      if (w > onset && gap > step * (1 + 1e-9)) {
+        const k = Math.ceil(gap / step - 1e-9);
+        for (let j = 1; j < k; j++) out.push(from + (gap * j) / k);
+      }
+    }
+    out.push(w);
+  });
+  return out;
 }
 
 /**
@@ -177,14 +204,10 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
     else if (high !== undefined && high < band.low) finding = 'less';
     else finding = 'consistent';
     const top = 1.3 * Math.max(c.speed, band.high, Number.isFinite(onset) ? onset : 0, speed ?? 0);
-    const n = rel.curvePoints;
-    const speeds = [...Array.from({ length: n + 1 }, (_, i) => (top * i) / n), c.speed, ...(speed === undefined ? [] : [speed]), ...(Number.isFinite(onset) && onset < top ? [onset] : [])].sort(
-      (a, b) => a - b,
-    );
     let curve: TwistFinding['curve'] | undefined;
     return {
       ...base,
-      loadedShaft: speeds.length > 0,
+      loadedShaft: true,
       model: rel.model,
       predicted: rel.permanentAt(c.speed),
       yieldOnsetSpeed: onset,
@@ -196,7 +219,11 @@ export function readTwistBack(c: Case, relation: (x1: number, x2: number) => Twi
       finding,
       meaning: finding === 'unexplained' && rel.breaksBefore(m.angle) ? PAST_FRACTURE : meaningOf(finding, rel.model, strengthBasis),
       get curve() {
-        curve ??= speeds.map((w) => ({ speed: w, permanentTwist: rel.permanentAt(w) }));
+        // Built where a figure reads it: the points the relation has not run yet cost a run each.
+        curve ??= curveSpeeds(top, rel.curvePoints, onset, [c.speed, ...(speed === undefined ? [] : [speed])], rel.knownSpeeds?.() ?? []).map((w) => ({
+          speed: w,
+          permanentTwist: rel.permanentAt(w),
+        }));
         return curve;
       },
     };

@@ -7,6 +7,7 @@ import { analyseCase } from '../../src/results/analyse-case.ts';
 import { dynamicTwistRelation } from '../../src/results/dynamic-twist-relation.ts';
 import { analysePlastic } from '../../src/results/analyse-plastic.ts';
 import { balanceTwistRelation } from '../../src/results/twist-findings.ts';
+import { keyedSeatRatio } from '../../src/results/side-balance.ts';
 
 const rpm = (n: number) => (n * 2 * Math.PI) / 60;
 const rel = (a: number, b: number) => Math.abs(a / b - 1);
@@ -73,6 +74,22 @@ describe('dynamicTwistRelation: the speed → permanent twist relation through t
     // which is the energy balance's closed-form onset.
     const { dynamic, balance } = relations(ep5('300 rpm'));
     expect(rel(dynamic.onset(), balance.onset())).toBeLessThan(1e-3);
+  });
+
+  it("a keyed seat: the onset is where the seat's net section first yields, n·T_Y/√(J·k), found in a few runs", () => {
+    // In series on a massless shaft every piece carries the same torque, so first yield is at the
+    // weakest piece's: the keyed seat's, whose yield onset is its net section's share n of the gross
+    // one (Nadai's sand heap, \`keyedSeatRatio\`; held to a fine grid in keyed-seat.test.ts). The
+    // plain shaft's onset is the closed form above, so the keyed one is n times it.
+    const keyed = ep5('300 rpm').replace('{ name: disc, at: 0 mm,', '{ name: disc, at: 0 mm, key: { width: 12 mm, height: 8 mm, length: 60 mm, material: aisi-1045-cd },');
+    const plain = relations(ep5('300 rpm')).balance.onset();
+    const { c, dynamic } = relations(keyed);
+    const model = buildShaftModel(c);
+    const n = Math.min(...model.sides.flatMap((s) => s.pieces.map((p) => keyedSeatRatio(c, p))));
+    expect(n).toBeLessThan(0.95);
+    expect(rel(dynamic.onset(), n * plain)).toBeLessThan(1e-3);
+    // The yield margin crosses 1 there (not a step at the first measurable twist): Brent's method takes a few runs.
+    expect(dynamic.knownSpeeds!().length).toBeLessThanOrEqual(7);
   });
 
   it("takes the case's own run at the recorded speed from the base solution (no rerun) and finds the same twist as a rerun does", () => {

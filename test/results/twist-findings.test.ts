@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { investigate } from '../../src/finding/investigate.ts';
-import { DEFAULT_SPEED_BAND, readTwistBack, type TwistRelation } from '../../src/results/twist-findings.ts';
+import { curveSpeeds, DEFAULT_SPEED_BAND, readTwistBack, type TwistRelation } from '../../src/results/twist-findings.ts';
 import { ep5Case } from '../data/ep5-case.ts';
 
 const rpm = (n: number) => (n * 2 * Math.PI) / 60;
@@ -203,5 +203,27 @@ describe('the words of a "less" finding follow the material\'s strength basis', 
     expect(f.strengthBasis).toBe('case');
     expect(f.meaning).toMatch(/the strength given in the case/);
     expect(f.meaning).not.toMatch(/published minimum/);
+  });
+});
+
+describe("curveSpeeds: the figure's speeds go through the runs already made", () => {
+  it('keeps every known and required speed in range, adds points only where a gap above the onset is wider than top/points', () => {
+    const known = [0, 5.5, 8.35, 8.39, 11, 17.6, 28.9, 29.28, 43.98, 80];
+    const s = curveSpeeds(63, 9, 8.39, [44, 29.28], known);
+    for (const w of [...known.filter((w) => w <= 63), 44, 63]) expect(s).toContain(w);
+    expect(s).not.toContain(80);
+    for (let i = 1; i < s.length; i++) {
+      expect(s[i]).toBeGreaterThan(s[i - 1]);
+      if (s[i] > 8.39) expect(s[i] - s[i - 1]).toBeLessThanOrEqual(63 / 9 + 1e-9);
+    }
+    // Below the onset nothing is added (the twist is none there): only the known speeds.
+    expect(s.filter((w) => w < 8.39)).toEqual([0, 5.5, 8.35]);
+    // 11 given in range (9 known, 44 and the top 63); added: 17.6→28.9 one, 29.28→43.98 two (14.7 > 2·7), 44→63 two.
+    expect(s.length).toBe(11 + 1 + 2 + 2);
+  });
+
+  it('with nothing known is an even grid from the onset up, of at most `points` steps', () => {
+    const s = curveSpeeds(12, 12, 0, [], []);
+    expect(s).toEqual(Array.from({ length: 13 }, (_, i) => i));
   });
 });
