@@ -297,7 +297,7 @@ function shaftElementName(chain: Chain, e: number): string {
 
 /** Each piece's peak torque with the shaft elements elastic, the same chain (element count) otherwise, N·m. */
 function elasticPeaks(c: Case, model: ShaftModel, target: number): number[] {
-  return solveDynamics({ ...c, analysis: { ...c.analysis, dynamicPlasticity: false, elements: target } }, model).final.piecePeak;
+  return solveDynamics({ ...c, analysis: { ...c.analysis, dynamicPlasticity: false, elements: target } }, model, { histories: false }).final.piecePeak;
 }
 
 /** The peaks the elastic check stands on: the run's own, or, where it yielded or broke, the same chain's with its elements elastic (`DynamicPiece.elasticPeakTorque`). */
@@ -320,7 +320,7 @@ function pieceStress(c: Case, piece: ShaftPiece, peakTorque: number): { shearStr
  * `dynamicResult`, without what only the views read (histories, events, mode convergence).
  */
 export function dynamicPeakMetrics(c: Case, model: ShaftModel): { yieldRatio: number; maxShearStress: number; peakTorque: number } {
-  const solve = solveDynamics(c, model);
+  const solve = solveDynamics(c, model, { histories: false });
   const { chain, run, piecePeak } = solve.final;
   const elasticPeak = elasticPeaksOf(c, model, solve, dynamicPieceDamage(chain, run.laws));
   let yieldRatio = -Infinity;

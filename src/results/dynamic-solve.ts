@@ -33,6 +33,16 @@ export interface DynamicSolve {
   notes: string[];
 }
 
+/** What a solution may leave out. */
+export interface SolveOptions {
+  /**
+   * false: no sampled time histories (\`IntegrationResult.history\` is empty), for a rerun that
+   * reads only peaks and what the laws kept (the read-back's trial speeds, the elastic peaks, a
+   * Monte Carlo sample): the peaks are taken at every step either way.
+   */
+  histories?: boolean;
+}
+
 /** Refinement stops when no piece's peak torque moves by more than this share of the largest. */
 export const REFINE_TOLERANCE = 0.005;
 /** Steps per period of the lowest mode. */
@@ -53,7 +63,7 @@ const MAX_DEFAULT_DURATION = 2;
  * peak torque of every piece changes by less than 0.5 % (bounded by a work budget), or at the
  * case's fixed `analysis.elements`; without shaft inertia, the one chain of stations.
  */
-export function solveDynamics(asGiven: Case, model: ShaftModel): DynamicSolve {
+export function solveDynamics(asGiven: Case, model: ShaftModel, opts: SolveOptions = {}): DynamicSolve {
   const c = jamWithFit(asGiven);
   const notes: string[] = [];
   let shaftInertiaOn = c.analysis.shaftInertia;
@@ -69,7 +79,7 @@ export function solveDynamics(asGiven: Case, model: ShaftModel): DynamicSolve {
   let lastChange = Infinity;
   let work = 0;
   for (let target = fixed ?? pieceCount; ; target *= 2) {
-    const sol = solveOnce(c, model, target, shaftInertiaOn, notes);
+    const sol = solveOnce(c, model, target, shaftInertiaOn, notes, opts.histories ?? true);
     work += sol.run.steps * sol.chain.elements.length;
     refinement.push({ elements: sol.chain.elements.length, peakTorque: Math.max(...sol.piecePeak) });
     if (prev) {
@@ -92,7 +102,7 @@ export function solveDynamics(asGiven: Case, model: ShaftModel): DynamicSolve {
   return { final: prev!, target: prevTarget, refinement, converged, lastChange: Number.isFinite(lastChange) ? lastChange : 0, notes: [...new Set(notes)] };
 }
 
-function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boolean, notes: string[]): ChainSolution {
+function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boolean, notes: string[], histories: boolean): ChainSolution {
   const chain = buildChain(c, model, { elements: target, shaftInertia });
   const P = chain.stopNode;
   if (c.stop.torqueCapacity !== undefined && !(chain.nodes[P].inertia > 0)) {
@@ -121,7 +131,14 @@ function solveOnce(c: Case, model: ShaftModel, target: number, shaftInertia: boo
     steps.fine = fineSpan / MAX_STEPS;
     notes.push(`The stop's ramp of ${c.stop.duration.toPrecision(3)} s is long for the highest energetic mode, so its time step was widened to ${(steps.fine * 1e6).toPrecision(3)} µs.`);
   }
-  const run = integrateChain(sys, { duration, timeStep: h, fineStep: steps.fine, fineUntil: c.stop.duration + steps.settle, fineAfterEvent: steps.afterEvent });
+  const run = integrateChain(sys, {
+    duration,
+    timeStep: h,
+    fineStep: steps.fine,
+    fineUntil: c.stop.duration + steps.settle,
+    fineAfterEvent: steps.afterEvent,
+    ...(histories ? {} : { samples: 0 }),
+  });
   const piecePeak = chain.pieces.map(() => 0);
   const pieceTime = chain.pieces.map(() => 0);
   const pieceElement = chain.pieces.map(() => -1);

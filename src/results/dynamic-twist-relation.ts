@@ -106,7 +106,7 @@ export function dynamicTwistRelation(
     if (hit) return hit;
     let out: Run = { twist: 0, broken: false, margin: 0 };
     if (w > 0) {
-      const sol = solveDynamics({ ...fixed, speed: w }, model).final;
+      const sol = solveDynamics({ ...fixed, speed: w }, model, { histories: false }).final;
       const damage = dynamicPieceDamage(sol.chain, sol.run.laws);
       out = summary(sol.chain.pieces.map((p, i) => ({ piece: p.piece, permanentTwist: damage[i].permanentTwist, broken: damage[i].broken, peakTorque: sol.piecePeak[i] })));
     }

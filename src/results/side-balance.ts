@@ -1,4 +1,4 @@
-import type { Case, Segment } from '../case/case.ts';
+import type { Case, Segment, ShaftKey } from '../case/case.ts';
 import { keysOnPiece } from '../model/hub-seat.ts';
 import type { ShaftPiece, Side } from '../model/shaft-model.ts';
 import { keyseatDepth, keyseatPlasticRatio } from '../physics/plastic/keyseat-section.ts';
@@ -31,16 +31,16 @@ export function segmentLaw(c: Case, seg: Segment): TorsionLaw | undefined {
  * keyseat is short against the shaft, and the elastic stress at it is the kt check's). The deepest
  * keyseat governs where two keys share a piece.
  */
-export function pieceLaw(c: Case, piece: ShaftPiece): TorsionLaw | undefined {
+export function pieceLaw(c: Case, piece: ShaftPiece, keys: readonly ShaftKey[] = keysOnPiece(c, piece)): TorsionLaw | undefined {
   const law = segmentLaw(c, piece.segment);
-  const n = keyedSeatRatio(c, piece);
+  const n = keyedSeatRatio(c, piece, keys);
   return law && n < 1 ? { ...law, shearYield: law.shearYield * n } : law;
 }
 
-/** The net section's fully plastic torque over the gross one's at a piece: 1 without a key. */
-export function keyedSeatRatio(c: Case, piece: ShaftPiece): number {
+/** The net section's fully plastic torque over the gross one's at a piece: 1 without a key. `keys`: the piece's (`keysOnPiece`), where the caller has them already. */
+export function keyedSeatRatio(c: Case, piece: ShaftPiece, keys: readonly ShaftKey[] = keysOnPiece(c, piece)): number {
   const seg = piece.segment;
-  return Math.min(1, ...keysOnPiece(c, piece).map((k) => keyseatPlasticRatio({ diameter: seg.diameter, bore: seg.bore, width: k.width, depth: keyseatDepth(k) })));
+  return Math.min(1, ...keys.map((k) => keyseatPlasticRatio({ diameter: seg.diameter, bore: seg.bore, width: k.width, depth: keyseatDepth(k) })));
 }
 
 /**
@@ -87,7 +87,7 @@ export interface SideBalance {
  * `pieceLaw`), with linear hardening when
  * the case asks for it; brittle pieces stay elastic up to their fracture stress (K_t applied).
  */
-export function balancePiece(c: Case, p: ShaftPiece): BalancePiece {
+export function balancePiece(c: Case, p: ShaftPiece, keys?: readonly ShaftKey[]): BalancePiece {
   const seg = p.segment;
   const m = c.materials[seg.material];
   const g = m.shearModulus!;
@@ -97,7 +97,7 @@ export function balancePiece(c: Case, p: ShaftPiece): BalancePiece {
     return { length: p.end - p.start, law, fractureTwistRate: brittleFractureShear(m, seg.kt) / (g * c2) };
   }
   const fs = fractureShearStrainValue(m);
-  return { length: p.end - p.start, law: pieceLaw(c, p)!, fractureTwistRate: fs !== undefined ? fs / c2 : Infinity };
+  return { length: p.end - p.start, law: pieceLaw(c, p, keys)!, fractureTwistRate: fs !== undefined ? fs / c2 : Infinity };
 }
 
 /** Builds the side's balance from its pieces' laws (`balancePiece`), with what the results say about each piece's material. */

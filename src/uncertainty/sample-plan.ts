@@ -1,4 +1,5 @@
 import type { Case } from '../case/case.ts';
+import { keysOnPiece } from '../model/hub-seat.ts';
 import { buildShaftModel } from '../model/shaft-model.ts';
 import { kineticEnergy, reflectedInertia } from '../physics/inertia.ts';
 import { PlasticBalance } from '../physics/plastic/plastic-balance.ts';
@@ -33,6 +34,8 @@ export function planSamples(c: Case, inputs: readonly UncertainInput[], readBack
   const sides = model.sides.map((side) => ({
     pieces: side.pieces,
     parts: side.stations.flatMap((s) => s.parts),
+    // Which keys sit on each piece (positions never move; the keys are the copy's, set in place).
+    keys: side.pieces.map((p) => keysOnPiece(w, p)),
   }));
   // For each measured twist, per side, the pieces between its stations (positions never move).
   const between = w.observed.permanentTwist.map((m) => {
@@ -74,7 +77,7 @@ export function planSamples(c: Case, inputs: readonly UncertainInput[], readBack
         maxShearStress = Math.max(maxShearStress, tau);
       }
       // The balance past yield (`sideBalance` without the words the results show).
-      const balance = new PlasticBalance(side.pieces.map((p) => balancePiece(w, p)));
+      const balance = new PlasticBalance(side.pieces.map((p, j) => balancePiece(w, p, side.keys[j])));
       const end = sideEndSummary(balance, energy);
       peakTorque = Math.max(peakTorque, end.torque);
       permanentTwist = Math.max(permanentTwist, end.permanentTwist);

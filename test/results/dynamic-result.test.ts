@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../src/case/parse-case.ts';
 import { analyseCase } from '../../src/results/analyse-case.ts';
 import { dynamicPeakMetrics } from '../../src/results/dynamic-result.ts';
+import { solveDynamics } from '../../src/results/dynamic-solve.ts';
 import { buildShaftModel } from '../../src/model/shaft-model.ts';
 import { polarMoment } from '../../src/physics/torsion.ts';
 import { odexSlip } from '../physics/integrator/chain-fixtures.ts';
@@ -205,5 +206,23 @@ describe('dynamicPeakMetrics: the peaks a Monte Carlo sample keeps', () => {
       expect(d.yieldRatio >= 1).toBe(yields);
       expect(dynamicPeakMetrics(c, buildShaftModel(c))).toEqual({ yieldRatio: d.yieldRatio, maxShearStress: d.maxShearStress, peakTorque: d.peakTorque });
     }
+  });
+});
+
+describe('solveDynamics without histories', () => {
+  it('a rerun that keeps no sampled history has the same peaks, steps, events and laws to the last digit', () => {
+    // The peaks are taken at every step, not at the history's samples; a holding jam with a limiter
+    // slipping and its elements elastic–plastic (shaft inertia on) exercises events and plastic laws.
+    const c = parseCase(limiterCase('2500 N*m', 'analysis: { damping_ratio: 0.02 }'));
+    const model = buildShaftModel(c);
+    const full = solveDynamics(c, model).final;
+    const bare = solveDynamics(c, model, { histories: false }).final;
+    expect(full.run.history.time.length).toBeGreaterThan(100);
+    expect(bare.run.history.time.length).toBe(0);
+    expect(bare.piecePeak).toEqual(full.piecePeak);
+    expect(bare.pieceTime).toEqual(full.pieceTime);
+    expect(bare.run.steps).toBe(full.run.steps);
+    expect(bare.run.events).toEqual(full.run.events);
+    expect(bare.run.energy).toEqual(full.run.energy);
   });
 });

@@ -19,7 +19,7 @@ export interface IntegrationOptions {
   fineStep?: number;
   fineUntil?: number;
   fineAfterEvent?: number;
-  /** Samples kept for the histories (default 400). */
+  /** Samples kept for the histories (default 400; 0 keeps none, for a run whose peaks alone are read). */
   samples?: number;
 }
 
