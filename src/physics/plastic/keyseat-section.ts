@@ -43,18 +43,48 @@ export function keyseatPlasticRatio(s: KeyseatSection): number {
   // change of 1 in the 4th digit moves the ratio by some 1e-5, inside the integration's own 1e-4)
   // and the section of those rounded proportions is integrated, so the value is a function of the
   // rounded proportions alone, whatever was asked before, and is kept.
-  const [bore, width, depth] = [s.bore, s.width, s.depth].map((x) => Number((x / s.diameter).toPrecision(4)));
-  const key = `${bore}:${width}:${depth}`;
+  const bore = fourFigures(s.bore / s.diameter);
+  const width = fourFigures(s.width / s.diameter);
+  const depth = fourFigures(s.depth / s.diameter);
+  // One number for the three: each code is below 2·10⁵, so three in base 2·10⁵ stay below 2⁵³ (exact).
+  const key = (bore.code * CODE_BASE + width.code) * CODE_BASE + depth.code;
   const known = KNOWN.get(key);
   if (known !== undefined) return known;
   if (KNOWN.size >= MAX_KNOWN) KNOWN.clear();
-  const ratio = integrate({ diameter: 1, bore, width, depth });
+  const ratio = integrate({ diameter: 1, bore: bore.value, width: width.value, depth: depth.value });
   KNOWN.set(key, ratio);
   return ratio;
 }
 
-const KNOWN = new Map<string, number>();
+const KNOWN = new Map<number, number>();
 const MAX_KNOWN = 4096;
+const CODE_BASE = 200_000;
+
+/**
+ * x ≥ 0 to 4 significant figures, m·10^k with m a whole number 1000–9999: its value (the double
+ * nearest m·10^k, as \`Number(x.toPrecision(4))\` reads it; one correctly rounded product or
+ * quotient of exact numbers gives that double) and a code 20·m + k + 10 that names it (k within
+ * −13…6, which any proportion of a shaft section is). Without strings: a Monte Carlo run asks
+ * thousands of times.
+ */
+export function fourFigures(x: number): { value: number; code: number } {
+  if (!(x > 0)) return { value: 0, code: 0 };
+  let k = Math.floor(Math.log10(x)) - 3;
+  const scaled = (p: number) => (p >= 0 ? x / 10 ** p : x * 10 ** -p);
+  let s = scaled(k);
+  // Math.log10 may miss the decade by one next to a power of ten.
+  if (s >= 10000) s = scaled(++k);
+  else if (s < 1000) s = scaled(--k);
+  // Within rounding of a tie the scaled product cannot tell which way the exact value lies:
+  // there, and there only, the decimal conversion decides.
+  let m = Math.abs(s - Math.floor(s) - 0.5) < 1e-7 ? Math.round(Number(x.toPrecision(4)) / 10 ** k) : Math.round(s);
+  if (m === 10000) {
+    m = 1000;
+    k += 1;
+  }
+  const value = k >= 0 ? m * 10 ** k : m / 10 ** -k;
+  return { value, code: 20 * m + Math.max(-10, Math.min(9, k + 3)) + 10 };
+}
 
 function integrate(s: KeyseatSection): number {
   const R = s.diameter / 2;

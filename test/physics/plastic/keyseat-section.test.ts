@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { keyseatDepth, keyseatPlasticRatio } from '../../../src/physics/plastic/keyseat-section.ts';
+import { fourFigures, keyseatDepth, keyseatPlasticRatio } from '../../../src/physics/plastic/keyseat-section.ts';
 
 /**
  * Independent of the program: the fully plastic torque T_P = 2τ_Y·∫φ dA + 2τ_Y·φ_i·A_bore with the
@@ -78,5 +78,22 @@ describe('keyseatPlasticRatio: the net section of a keyed seat, fully plastic', 
   it('the keyseat is h − the hub depth deep, else half the key (the h/2 rule)', () => {
     expect(keyseatDepth({ height: 0.009, hubDepth: 0.0035 })).toBeCloseTo(0.0055, 12);
     expect(keyseatDepth({ height: 0.01 })).toBe(0.005);
+  });
+});
+
+describe('fourFigures: the proportions rounded without strings', () => {
+  it('gives the double Number(x.toPrecision(4)) reads, and one code per rounded value (property)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e-9, max: 9.9, noNaN: true }), fc.double({ min: 1e-9, max: 9.9, noNaN: true }), (x, y) => {
+        const a = fourFigures(x);
+        const b = fourFigures(y);
+        expect(a.value).toBe(Number(x.toPrecision(4)));
+        expect(a.code === b.code).toBe(a.value === b.value);
+      }),
+      { numRuns: 2000 },
+    );
+    // Ties and the ends of a decade.
+    for (const x of [0.1, 0.09999, 0.099995, 1, 0.5, 0.12345, 9.9995]) expect(fourFigures(x).value).toBe(Number(x.toPrecision(4)));
+    expect(fourFigures(0)).toEqual({ value: 0, code: 0 });
   });
 });
